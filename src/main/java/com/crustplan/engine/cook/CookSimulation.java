@@ -1,0 +1,578 @@
+package com.crustplan.engine.cook;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import com.crustplan.engine.browning.BrowningKinetics;
+import com.crustplan.engine.browning.Caramelisation;
+import com.crustplan.engine.browning.WaterActivityFactor;
+import com.crustplan.engine.colour.ColourPath;
+import com.crustplan.engine.food.Composition;
+import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.heat.FaceExchange;
+import com.crustplan.engine.heat.FaceFlux;
+import com.crustplan.engine.heat.FaceSchedule;
+import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.layers.Grid;
+import com.crustplan.engine.layers.Layers;
+import com.crustplan.engine.layers.Tridiagonal;
+import com.crustplan.engine.properties.FoodComponent;
+import com.crustplan.engine.properties.ThermalProperties;
+import com.crustplan.engine.water.GabIsotherm;
+import com.crustplan.engine.water.MoistureDiffusivity;
+import com.crustplan.engine.water.WaterVapour;
+
+/**
+ * One cook of one surface in one heat setup: marches heat and moisture through the thickness with
+ * backward-Euler steps and integrates browning at both faces until the target colour (and a little
+ * past it) or the horizon.
+ * <p>
+ * Each step: (1) properties from composition, temperature and moisture (Choi &amp; Okos); (2) heat
+ * conduction with the faces' exchange linearised about the last temperature, latent heat of evaporation
+ * included; (3) local boiling — a node holding water cannot be hotter than where aw·p_sat(T) = 1 atm, the
+ * excess enthalpy boils water off instead; (4) moisture diffusion with the face's evaporation implicit in
+ * moisture; (5) browning at each face from its temperature and water activity. A run owns all its arrays:
+ * make a new simulation per run, never share one between threads.
+ */
+public final class CookSimulation implements Layers {
+
+	/** Residual moisture a node keeps, kg/kg d.b.: bone-dry is outside the isotherm fits. */
+	private static final double MIN_MOISTURE = 1e-3;
+
+	/** The reference water activity for caramelisation: a dry crust, like the Maillard fits. */
+	private static final double CARAMEL_REFERENCE_AW = 0.4;
+
+	private final Surface surface;
+
+	private final FoodCategory category;
+
+	private final FaceSchedule schedule;
+
+	private final HeatSetup setup;
+
+	private final CookSettings settings;
+
+	private final Grid grid;
+
+	private final GabIsotherm isotherm;
+
+	private final BrowningKinetics kinetics;
+
+	private final ColourPath path;
+
+	private final int n;
+
+	private final double[] dryFractions;
+
+	private final double[] massFractions = new double[FoodComponent.values().length];
+
+	private final double[] props = new double[3];
+
+	// state
+	private final double[] temperature;
+
+	private final double[] moisture;
+
+	private final double[] dryMass;
+
+	private final double[] volume;
+
+	private final double[] film = new double[2];
+
+	private final double[] extent = new double[2];
+
+	private final double[] boilingFlux = new double[2];
+
+	private double time;
+
+	// per-step scratch
+	private final double[] capacity;
+
+	private final double[] conductivity;
+
+	private final double[] lower;
+
+	private final double[] diag;
+
+	private final double[] upper;
+
+	private final double[] rhs;
+
+	private final double[] solution;
+
+	private final double[] faceSlopeJ = new double[2];
+
+	private final double[] faceJ = new double[2];
+
+	private final double[] boiled = new double[2];
+
+	private final double[] heatFluxAtStart = new double[2];
+
+	private final double[] heatSlope = new double[2];
+
+	private final double[] evapPredicted = new double[2];
+
+	private final double[] evapSlope = new double[2];
+
+	private final double[] moistureBefore;
+
+	private final Tridiagonal solver;
+
+	private final FaceFlux flux = new FaceFlux();
+
+	// ledger
+	private double heatIn;
+
+	private double vapourOut;
+
+	private double evaporated;
+
+	// browning factors fixed for the run
+	private final double maillardFactor;
+
+	private final double caramelFactor;
+
+	private final double ph;
+
+	private CookSimulation(Surface surface, HeatSetup setup, CookSettings settings) {
+		this.surface = surface;
+		this.category = surface.category();
+		this.setup = setup;
+		this.schedule = setup.schedule();
+		this.settings = settings;
+		this.n = settings.nodes();
+		this.grid = new Grid(surface.thicknessMm() / 1000, n, Grid.DEFAULT_CLUSTERING);
+		this.isotherm = category.isotherm();
+		this.kinetics = category.browning();
+		this.path = category.colourPath();
+		Composition c = surface.composition();
+		this.dryFractions = c.dryMatterFractions();
+		this.ph = surface.ph();
+		this.maillardFactor = kinetics.phFactor(ph) * kinetics.reactantFactor(c.reducingSugarPct(), c.proteinPct());
+		this.caramelFactor = Caramelisation.sucroseFactor(c.sucrosePct());
+
+		temperature = new double[n];
+		moisture = new double[n];
+		dryMass = new double[n];
+		volume = new double[n];
+		capacity = new double[n];
+		conductivity = new double[n];
+		lower = new double[n];
+		diag = new double[n];
+		upper = new double[n];
+		rhs = new double[n];
+		solution = new double[n];
+		solver = new Tridiagonal(n);
+		moistureBefore = new double[n];
+
+		double t0 = surface.initialTemperatureC() + 273.15;
+		double x0 = c.moistureDryBasis();
+		fillMassFractions(x0);
+		double matrixVolume = ThermalProperties.specificVolume(massFractions, surface.initialTemperatureC());
+		double bulkDensity = (1 - category.initialPorosity().value()) / matrixVolume;
+		for (int i = 0; i < n; i++) {
+			temperature[i] = t0;
+			moisture[i] = x0;
+			volume[i] = grid.width(i);
+			dryMass[i] = bulkDensity * volume[i] / (1 + x0);
+		}
+		film[0] = surface.surfaceWaterGPerM2() / 1000;
+		film[1] = film[0];
+	}
+
+	/** Runs a cook to the target (and a little past it) or to the horizon. */
+	public static CookResult run(Surface surface, HeatSetup setup, Target target, CookSettings settings) {
+		double targetExtent = target.extentFor(surface.category());
+		return new CookSimulation(surface, setup, settings).march(targetExtent);
+	}
+
+	public static CookResult run(Surface surface, HeatSetup setup, Target target) {
+		return run(surface, setup, target, CookSettings.defaults());
+	}
+
+	private CookResult march(double targetExtent) {
+		List<Sample> series = settings.recordSeries() ? new ArrayList<>() : List.of();
+		double dt = settings.timeStepS();
+		double stopAt = settings.horizonS();
+		double nextOutput = 0;
+		double reachedAt = Double.NaN;
+		double coreAtTarget = Double.NaN;
+		double maxSurface = temperature[0];
+		boolean everDry = false;
+		if (settings.recordSeries()) {
+			series.add(sample());
+			nextOutput = settings.outputIntervalS();
+		}
+		double core = core();
+		while (time < stopAt - 1e-9) {
+			double step = Math.min(dt, stopAt - time);
+			double before = extent[0];
+			double coreBefore = core;
+			step(step);
+			core = core();
+			maxSurface = Math.max(maxSurface, temperature[0]);
+			everDry |= film[0] <= 0 && waterActivity(0) < 0.95;
+			if (Double.isNaN(reachedAt) && extent[0] >= targetExtent) {
+				double f = (targetExtent - before) / (extent[0] - before);
+				reachedAt = time - step + f * step;
+				coreAtTarget = coreBefore + f * (core - coreBefore);
+				stopAt = Math.min(settings.horizonS(),
+						Math.max(reachedAt * (1 + settings.runPastTargetFraction()), reachedAt + dt));
+			}
+			if (settings.recordSeries() && time >= nextOutput - 1e-9) {
+				series.add(sample());
+				nextOutput += settings.outputIntervalS();
+			}
+		}
+		if (settings.recordSeries() && series.get(series.size() - 1).timeS() < time - 1e-9) {
+			series.add(sample());
+		}
+		Outcome outcome = outcome(reachedAt, maxSurface, everDry);
+		String explanation = outcome == Outcome.REACHED ? outcome.explanation() : explain(outcome, maxSurface);
+		List<String> assumptions = new ArrayList<>(setup.assumptions());
+		assumptions.addAll(surfaceAssumptions());
+		return new CookResult(outcome, explanation, reachedAt, targetExtent, path.colourAt(targetExtent), ph,
+				coreAtTarget - 273.15, Double.NaN, Double.NaN, maxSurface - 273.15, extent[0], time, series, assumptions,
+				new EnergyLedger(heatIn, vapourOut, evaporated),
+				new CookResult.FinalState(positions(), temperature, moisture, dryMass, film));
+	}
+
+	private double[] positions() {
+		double[] p = new double[n];
+		for (int i = 0; i < n; i++) {
+			p[i] = grid.position(i);
+		}
+		return p;
+	}
+
+	private Outcome outcome(double reachedAt, double maxSurfaceK, boolean everDry) {
+		if (!Double.isNaN(reachedAt)) {
+			return Outcome.REACHED;
+		}
+		if (maillardFactor <= 0 && caramelFactor <= 0) {
+			return Outcome.NO_REACTANTS;
+		}
+		if (!everDry || maxSurfaceK < 378.15) {
+			return Outcome.WET_PLATEAU;
+		}
+		// below ≈ 130 °C even a dry surface browns an order of magnitude slower than at 150 °C (Ea ≈ 64 kJ/mol)
+		if (maxSurfaceK < 403.15) {
+			return Outcome.TOO_COOL;
+		}
+		return Outcome.TOO_SLOW;
+	}
+
+	private String explain(Outcome outcome, double maxSurfaceK) {
+		return String.format("%s Highest surface temperature %.0f °C; browning extent %.2f after %.0f min.",
+				outcome.explanation(), maxSurfaceK - 273.15, extent[0], time / 60);
+	}
+
+	private List<String> surfaceAssumptions() {
+		List<String> a = new ArrayList<>();
+		a.add(String.format("The whole %.0f mm thickness has the surface's composition; heat and water move only through the thickness (a slab).",
+				surface.thicknessMm()));
+		a.add(String.format("pH %.2f at the surface%s (buffer capacity %.0f mmol/(pH·kg)).", ph,
+				surface.bicarbonateGPerKg() > 0 || surface.acidGPerKg() > 0 ? " after the additions" : "",
+				category.bufferCapacity().value()));
+		a.add("Browning kinetics, sorption isotherm and colour path of the category " + category.label() + ".");
+		if (surface.composition().sucrosePct() > 0) {
+			a.add("Sucrose browns only by caramelisation (it is not a reducing sugar); its inversion is not modelled.");
+		}
+		return a;
+	}
+
+	// ---------------------------------------------------------------- one step
+
+	private void fillMassFractions(double x) {
+		double dry = 1 / (1 + x);
+		massFractions[0] = x * dry;
+		for (int j = 0; j < dryFractions.length; j++) {
+			massFractions[j + 1] = dryFractions[j] * dry;
+		}
+	}
+
+	private int faceNode(int face) {
+		return face == 0 ? 0 : n - 1;
+	}
+
+	private void step(double dt) {
+		double now = time;
+		// (1) properties
+		for (int i = 0; i < n; i++) {
+			double tc = temperature[i] - 273.15;
+			fillMassFractions(moisture[i]);
+			ThermalProperties.evaluate(massFractions, tc, props);
+			double mass = dryMass[i] * (1 + moisture[i]);
+			double porosity = Math.max(0, Math.min(0.95, 1 - mass * props[2] / volume[i]));
+			capacity[i] = mass * props[0];
+			conductivity[i] = porosity > 0
+					? Math.pow(props[1], 1 - porosity) * Math.pow(ThermalProperties.AIR_CONDUCTIVITY, porosity) : props[1];
+		}
+		for (int face = 0; face < 2; face++) {
+			int i = faceNode(face);
+			capacity[i] += film[face] * FoodComponent.WATER.specificHeat(temperature[i] - 273.15);
+		}
+		// (2) heat conduction, faces linearised
+		for (int i = 0; i < n; i++) {
+			lower[i] = 0;
+			upper[i] = 0;
+			diag[i] = capacity[i] / dt;
+			rhs[i] = capacity[i] / dt * temperature[i];
+		}
+		for (int i = 0; i < n - 1; i++) {
+			double d = grid.spacing(i);
+			double g = 1 / (0.5 * d / conductivity[i] + 0.5 * d / conductivity[i + 1]);
+			diag[i] += g;
+			diag[i + 1] += g;
+			upper[i] = -g;
+			lower[i + 1] = -g;
+		}
+		for (int face = 0; face < 2; face++) {
+			int i = faceNode(face);
+			FaceExchange exchange = schedule.at(face, now);
+			double aw = film[face] > 0 ? 1 : isotherm.waterActivity(moisture[i]);
+			exchange.evaluate(temperature[i], aw, boilingFlux[face], flux);
+			double latent = WaterVapour.latentHeat(temperature[i]);
+			double a = -(flux.heatFluxSlope - latent * flux.evaporationSlopeT);
+			diag[i] += a;
+			rhs[i] += flux.heatFlux - latent * flux.evaporation + a * temperature[i];
+			// remember the linearisation for the ledger and the moisture step
+			faceJ[face] = flux.evaporation;
+			faceSlopeJ[face] = flux.evaporationSlopeT;
+			heatFluxAtStart[face] = flux.heatFlux;
+			heatSlope[face] = flux.heatFluxSlope;
+		}
+		solver.solve(lower, diag, upper, rhs, solution);
+		for (int face = 0; face < 2; face++) {
+			int i = faceNode(face);
+			double dT = solution[i] - temperature[i];
+			heatIn += (heatFluxAtStart[face] + heatSlope[face] * dT) * dt;
+			faceJ[face] += faceSlopeJ[face] * dT;
+		}
+		System.arraycopy(solution, 0, temperature, 0, n);
+
+		// face evaporation or condensation through the standing water
+		for (int face = 0; face < 2; face++) {
+			int i = faceNode(face);
+			double m = faceJ[face] * dt;
+			if (film[face] > 0 || m < 0) {
+				double fromFilm = Math.min(film[face], m);
+				film[face] -= fromFilm;
+				account(fromFilm, temperature[i]);
+				faceJ[face] = (m - fromFilm) / dt; // what the film could not supply comes from the node
+				if (faceJ[face] > 0) {
+					double take = Math.min(faceJ[face] * dt, (moisture[i] - MIN_MOISTURE) * dryMass[i]);
+					moisture[i] -= take / dryMass[i];
+					account(take, temperature[i]);
+				}
+				faceJ[face] = 0;
+			}
+		}
+
+		// (3) local boiling
+		boiled[0] = 0;
+		boiled[1] = 0;
+		for (int i = 0; i < n; i++) {
+			if (temperature[i] > 373.0) {
+				boil(i, dt);
+			}
+		}
+		boilingFlux[0] = boiled[0] / dt;
+		boilingFlux[1] = boiled[1] / dt;
+
+		// (4) moisture diffusion, face evaporation implicit in moisture
+		moistureStep(dt);
+
+		// (5) browning at both faces
+		for (int face = 0; face < 2; face++) {
+			int i = faceNode(face);
+			double aw = film[face] > 0 ? 1 : isotherm.waterActivity(moisture[i]);
+			double t = temperature[i];
+			double k = kinetics.rate().at(t) * WaterActivityFactor.relative(aw, kinetics.referenceWaterActivity().value())
+					* maillardFactor
+					+ Caramelisation.RATE.at(t) * caramelFactor * WaterActivityFactor.relative(aw, CARAMEL_REFERENCE_AW);
+			extent[face] = 1 - (1 - extent[face]) * Math.exp(-k * dt);
+		}
+		time = now + dt;
+	}
+
+	/** Vapour leaving (or, negative, condensing) at temperature t. */
+	private void account(double massKgPerM2, double t) {
+		vapourOut += massKgPerM2 * (WaterVapour.latentHeat(t) + WaterVapour.liquidEnthalpy(t));
+		evaporated += massKgPerM2;
+	}
+
+	private void boil(int i, double dt) {
+		int face = i == 0 ? 0 : i == n - 1 ? 1 : -1;
+		int half = grid.position(i) < 0.5 * grid.thickness() ? 0 : 1;
+		double c = capacity[i];
+		if (face >= 0 && film[face] > 0) {
+			double tb = WaterVapour.boilingTemperatureK(1.0);
+			if (temperature[i] <= tb) {
+				return;
+			}
+			double latent = WaterVapour.latentHeat(tb);
+			double m = Math.min(film[face], c * (temperature[i] - tb) / latent);
+			film[face] -= m;
+			temperature[i] -= m * latent / c;
+			account(m, tb);
+			boiled[half] += m;
+			if (film[face] > 0) {
+				return;
+			}
+		}
+		double water = (moisture[i] - MIN_MOISTURE) * dryMass[i];
+		if (water <= 0 || temperature[i] <= boilingPoint(moisture[i])) {
+			return;
+		}
+		double latent = WaterVapour.latentHeat(temperature[i]);
+		// find the boiled mass m at which the node sits exactly at the boiling point of what is left
+		double lo = 0;
+		double hi = Math.min(water, c * (temperature[i] - 373.0) / latent);
+		if (residual(i, hi, c, latent) > 0) {
+			lo = hi; // even this much leaves it above the boiling point: all of it goes
+		}
+		else {
+			for (int it = 0; it < 30 && hi - lo > 1e-9 * (1 + hi); it++) {
+				double mid = 0.5 * (lo + hi);
+				if (residual(i, mid, c, latent) > 0) {
+					lo = mid;
+				}
+				else {
+					hi = mid;
+				}
+			}
+		}
+		double m = lo;
+		temperature[i] -= m * latent / c;
+		moisture[i] -= m / dryMass[i];
+		account(m, temperature[i]);
+		boiled[half] += m;
+	}
+
+	private double residual(int i, double m, double c, double latent) {
+		double t = temperature[i] - m * latent / c;
+		return t - boilingPoint(moisture[i] - m / dryMass[i]);
+	}
+
+	private double boilingPoint(double x) {
+		return WaterVapour.boilingTemperatureK(isotherm.waterActivity(x));
+	}
+
+	private void moistureStep(double dt) {
+		for (int i = 0; i < n; i++) {
+			lower[i] = 0;
+			upper[i] = 0;
+			diag[i] = dryMass[i] / dt;
+			rhs[i] = dryMass[i] / dt * moisture[i];
+		}
+		for (int i = 0; i < n - 1; i++) {
+			double d = grid.spacing(i);
+			double dryDensity = 0.5 * (dryMass[i] / volume[i] + dryMass[i + 1] / volume[i + 1]);
+			double g = dryDensity * MoistureDiffusivity.at(0.5 * (temperature[i] + temperature[i + 1])) / d;
+			diag[i] += g;
+			diag[i + 1] += g;
+			upper[i] = -g;
+			lower[i + 1] = -g;
+		}
+		// evaporation from a bare face into gas: J(X) ≈ J* + s·(X − X*), s = dJ/daw · daw/dX
+		for (int face = 0; face < 2; face++) {
+			int i = faceNode(face);
+			FaceExchange exchange = schedule.at(face, time);
+			if (film[face] > 0) {
+				continue;
+			}
+			double x = moisture[i];
+			double aw = isotherm.waterActivity(x);
+			exchange.evaluate(temperature[i], aw, boilingFlux[face], flux);
+			double j = flux.evaporation;
+			double dx = 1e-4 + 1e-3 * x;
+			double s = flux.evaporationSlopeAw * (isotherm.waterActivity(x + dx) - aw) / dx;
+			evapPredicted[face] = j;
+			evapSlope[face] = s;
+			diag[i] += s;
+			rhs[i] -= j - s * x;
+		}
+		double[] before = moistureBefore;
+		System.arraycopy(moisture, 0, before, 0, n);
+		solver.solve(lower, diag, upper, rhs, solution);
+		System.arraycopy(solution, 0, moisture, 0, n);
+		for (int face = 0; face < 2; face++) {
+			int i = faceNode(face);
+			if (film[face] > 0) {
+				continue;
+			}
+			double j = evapPredicted[face] + evapSlope[face] * (moisture[i] - before[i]);
+			if (moisture[i] < MIN_MOISTURE) {
+				j -= dryMass[i] * (MIN_MOISTURE - moisture[i]) / dt;
+				moisture[i] = MIN_MOISTURE;
+			}
+			// the latent heat of what actually left is drawn from the face node
+			double latent = WaterVapour.latentHeat(temperature[i]);
+			temperature[i] -= latent * j * dt / capacity[i];
+			account(j * dt, temperature[i]);
+			evapPredicted[face] = 0;
+			evapSlope[face] = 0;
+		}
+		for (int i = 0; i < n; i++) {
+			if (moisture[i] < MIN_MOISTURE) {
+				moisture[i] = MIN_MOISTURE;
+			}
+		}
+	}
+
+
+	// ---------------------------------------------------------------- outputs
+
+	private double core() {
+		return grid.interpolate(temperature, 0.5 * grid.thickness());
+	}
+
+	private Sample sample() {
+		return new Sample(time, temperature[0] - 273.15, temperature[n - 1] - 273.15, core() - 273.15,
+				film[0] > 0 ? 1 : isotherm.waterActivity(moisture[0]), moisture[0], film[0] * 1000, extent[0],
+				path.colourAt(extent[0]), Double.NaN, Double.NaN);
+	}
+
+	// ---------------------------------------------------------------- Layers view
+
+	@Override
+	public Grid grid() {
+		return grid;
+	}
+
+	@Override
+	public int size() {
+		return n;
+	}
+
+	@Override
+	public double temperatureK(int i) {
+		return temperature[i];
+	}
+
+	@Override
+	public double moisture(int i) {
+		return moisture[i];
+	}
+
+	@Override
+	public double waterActivity(int i) {
+		if ((i == 0 && film[0] > 0) || (i == n - 1 && film[1] > 0)) {
+			return 1;
+		}
+		return isotherm.waterActivity(moisture[i]);
+	}
+
+	@Override
+	public double dryMass(int i) {
+		return dryMass[i];
+	}
+
+	@Override
+	public double timeS() {
+		return time;
+	}
+
+}

@@ -1,0 +1,33 @@
+package com.crustplan.engine.heat;
+
+/**
+ * A face pressed on a hot pan through a thin fat film: q = h_c(T_pan − Ts). Vapour cannot leave into
+ * gas here; water at the face boils off at the local boiling point instead (handled by the stepper).
+ */
+final class ContactExchange implements FaceExchange {
+
+	private final double panK;
+
+	private final double contact;
+
+	private final String description;
+
+	ContactExchange(double panK, double contactWPerM2K, String description) {
+		this.panK = panK;
+		this.contact = contactWPerM2K;
+		this.description = description;
+	}
+
+	@Override
+	public void evaluate(double surfaceK, double waterActivity, double boilingFlux, FaceFlux out) {
+		out.clear();
+		out.heatFlux = contact * (panK - surfaceK);
+		out.heatFluxSlope = -contact;
+	}
+
+	@Override
+	public String describe() {
+		return description;
+	}
+
+}

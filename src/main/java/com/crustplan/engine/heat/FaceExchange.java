@@ -1,0 +1,17 @@
+package com.crustplan.engine.heat;
+
+/** The boundary condition of one face of the food at one moment. */
+public interface FaceExchange {
+
+	/**
+	 * @param surfaceK face temperature
+	 * @param waterActivity of the face (1 while standing water covers it)
+	 * @param boilingFlux water boiling off behind this face in the last step, kg/(m²·s), which stirs a
+	 * fryer's oil
+	 */
+	void evaluate(double surfaceK, double waterActivity, double boilingFlux, FaceFlux out);
+
+	/** A short description for the result's assumptions. */
+	String describe();
+
+}

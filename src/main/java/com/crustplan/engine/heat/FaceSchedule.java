@@ -1,0 +1,58 @@
+package com.crustplan.engine.heat;
+
+/** Which boundary condition each face sees at a time (a pan or grill flip swaps the faces). */
+public interface FaceSchedule {
+
+	FaceExchange at(int face, double timeS);
+
+	/** True if the face is the heated one at this time (for reporting the browned face). */
+	boolean heated(int face, double timeS);
+
+	/** Flip-free setups in which both faces see the same heat. */
+	boolean symmetric();
+
+	/** A schedule that swaps a heated and an open exchange every {@code flipEverySeconds} (0: never). */
+	static FaceSchedule flipping(FaceExchange heated, FaceExchange open, double flipEverySeconds) {
+		return new FaceSchedule() {
+			private boolean down(int face, double t) {
+				boolean flipped = flipEverySeconds > 0 && ((long) Math.floor(t / flipEverySeconds)) % 2 == 1;
+				return (face == 0) != flipped;
+			}
+
+			@Override
+			public FaceExchange at(int face, double timeS) {
+				return down(face, timeS) ? heated : open;
+			}
+
+			@Override
+			public boolean heated(int face, double timeS) {
+				return down(face, timeS);
+			}
+
+			@Override
+			public boolean symmetric() {
+				return false;
+			}
+		};
+	}
+
+	static FaceSchedule both(FaceExchange exchange) {
+		return new FaceSchedule() {
+			@Override
+			public FaceExchange at(int face, double timeS) {
+				return exchange;
+			}
+
+			@Override
+			public boolean heated(int face, double timeS) {
+				return true;
+			}
+
+			@Override
+			public boolean symmetric() {
+				return true;
+			}
+		};
+	}
+
+}

@@ -1,0 +1,69 @@
+package com.crustplan.engine.heat;
+
+import com.crustplan.engine.model.Parameter;
+import com.crustplan.engine.water.Atmosphere;
+import com.crustplan.engine.water.WaterVapour;
+
+/**
+ * A face open to gas (oven air, steam, kitchen air, or under a radiant heater): convection, grey-body
+ * radiation to surroundings at {@code radiantK}, and evaporation J = h_m(aw·ρv,sat(Ts) − ρv,gas) with h_m
+ * from the Chilton–Colburn analogy h/h_m = ρ·cp·Le^(2/3) in its vapour-density form (Incropera,
+ * Fundamentals of Heat and Mass Transfer, §6.7).
+ */
+public final class GasExchange implements FaceExchange {
+
+	public static final Parameter LEWIS_NUMBER = Parameter.derived("Le", "Lewis number of water vapour in air", 0.85, "–",
+			"α/D_AB with D_AB = 0.26e-4 m²/s at 298 K (Incropera, Table A.8)");
+
+	private final Atmosphere gas;
+
+	private final double convection;
+
+	private final double radiantK;
+
+	private final double emissivity;
+
+	private final double gasVapourDensity;
+
+	private final String description;
+
+	public GasExchange(Atmosphere gas, double convectionWPerM2K, double radiantK, String description) {
+		this.gas = gas;
+		this.convection = convectionWPerM2K;
+		this.radiantK = radiantK;
+		this.emissivity = Radiation.FOOD_EMISSIVITY.value();
+		this.gasVapourDensity = gas.vapourDensity();
+		this.description = description;
+	}
+
+	@Override
+	public void evaluate(double surfaceK, double waterActivity, double boilingFlux, FaceFlux out) {
+		double ta = gas.temperatureK();
+		double ts3 = surfaceK * surfaceK * surfaceK;
+		double tr2 = radiantK * radiantK;
+		out.heatFlux = convection * (ta - surfaceK) + emissivity * Radiation.SIGMA * (tr2 * tr2 - ts3 * surfaceK);
+		out.heatFluxSlope = -convection - 4 * emissivity * Radiation.SIGMA * ts3;
+		double film = 0.5 * (ta + surfaceK);
+		double hm = massTransferCoefficient(film);
+		double rhoSat = WaterVapour.saturatedVapourDensity(surfaceK);
+		double rhoSatUp = WaterVapour.saturatedVapourDensity(surfaceK + 0.05);
+		out.evaporation = hm * (waterActivity * rhoSat - gasVapourDensity);
+		out.evaporationSlopeT = hm * waterActivity * (rhoSatUp - rhoSat) / 0.05;
+		out.evaporationSlopeAw = hm * rhoSat;
+	}
+
+	/** h_m = h / (ρ·cp·Le^(2/3)), m/s. */
+	public double massTransferCoefficient(double filmK) {
+		return convection / (gas.density(filmK) * gas.specificHeat() * Math.pow(LEWIS_NUMBER.value(), 2.0 / 3.0));
+	}
+
+	public Atmosphere gas() {
+		return gas;
+	}
+
+	@Override
+	public String describe() {
+		return description;
+	}
+
+}

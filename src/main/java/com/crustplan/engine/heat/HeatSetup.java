@@ -1,0 +1,256 @@
+package com.crustplan.engine.heat;
+
+import java.util.List;
+
+import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.model.Parameter;
+import com.crustplan.engine.water.Atmosphere;
+
+/** How heat reaches the food: one of four modes, each a record of what a cook sets. */
+public sealed interface HeatSetup
+		permits HeatSetup.PanContact, HeatSetup.Oven, HeatSetup.RadiantGrill, HeatSetup.DeepFryer {
+
+	Parameter KITCHEN_AIR_C = Parameter.commonPractice("T_room", "kitchen air temperature", 25, "°C", "common practice");
+
+	Parameter NATURAL_CONVECTION = Parameter.commonPractice("h_nat", "natural convection to still kitchen air", 10,
+			"W/(m²·K)", "free convection from a small horizontal surface, 5–15 W/m²K (Incropera ch. 9; common practice)");
+
+	Parameter CONTACT_WITH_FAT = Parameter.assumption("h_c,fat", "pan–food contact through a fat film", 300, "W/(m²·K)",
+			"lower end of 250–650 W/m²K measured on a pressed contact grill (Zorrilla & Singh ~2000): an unpressed item in a skillet sees less");
+
+	Parameter CONTACT_DRY = Parameter.assumption("h_c,dry", "pan–food contact without fat", 150, "W/(m²·K)",
+			"about half the fat-film value: air gaps where the food does not lie flat (assumption)");
+
+	Parameter OVEN_STILL = Parameter.fromMemory("h_still", "convection in a still (deck or conventional) oven", 18,
+			"W/(m²·K)", "10–25 W/m²K (Sakin et al. 2009, J Food Eng 94:344; Carson et al. 2006, J Food Eng 72:293; values from memory)");
+
+	Parameter OVEN_FAN = Parameter.fromMemory("h_fan", "convection in a fan oven", 40, "W/(m²·K)",
+			"20–60 W/m²K (Sakin et al. 2009; Carson et al. 2006; values from memory)");
+
+	Parameter GRILL_VIEW = Parameter.assumption("F", "share of the food's view taken by the heater", 0.5, "–",
+			"a salamander element above a plate, a typical geometry (assumption); gives ≈ 37 kW/m² at 800 °C, within measured grill fluxes up to 54 kW/m²");
+
+	Parameter OIL_QUIET = Parameter.published("h_oil", "oil-side coefficient without boiling", 280, "W/(m²·K)",
+			"250–300 W/m²K (Hubbard & Farkas 1999; Mir-Bel, Oria & Salvador 2012, J Food Eng 113:167)");
+
+	Parameter OIL_BUBBLING = Parameter.published("h_oil,boil", "oil-side coefficient with vigorous bubbling", 900, "W/(m²·K)",
+			"800–1100 W/m²K, peaks to 2000 (Hubbard & Farkas 1999; Mir-Bel, Oria & Salvador 2012)");
+
+	Parameter OVEN_WALL_EMISSIVITY = Parameter.secondary("ε_wall", "oven walls radiate at the air temperature", 0.9, "–",
+			"75–80 % of an industrial oven's flux is radiant (Baik et al. 1999, J Food Sci 64:688)");
+
+	FaceSchedule schedule();
+
+	/** A key for the mode, used in the API and pages. */
+	String mode();
+
+	/** The set temperature a cook reads on the dial, °C. */
+	double temperatureC();
+
+	List<String> assumptions();
+
+	static List<Parameter> parameters() {
+		return List.of(KITCHEN_AIR_C, NATURAL_CONVECTION, CONTACT_WITH_FAT, CONTACT_DRY, OVEN_STILL, OVEN_FAN, GRILL_VIEW,
+				OIL_QUIET, OIL_BUBBLING, OVEN_WALL_EMISSIVITY, Radiation.FOOD_EMISSIVITY, GasExchange.LEWIS_NUMBER);
+	}
+
+	private static double kelvin(double c) {
+		return c + 273.15;
+	}
+
+	private static void range(String field, double v, double min, double max, String why) {
+		if (!Double.isFinite(v) || v < min || v > max) {
+			throw new InvalidInputException(field, String.format("must be from %.0f to %.0f %s", min, max, why));
+		}
+	}
+
+	private static GasExchange kitchenAir() {
+		double room = kelvin(KITCHEN_AIR_C.value());
+		return new GasExchange(Atmosphere.kitchen(room), NATURAL_CONVECTION.value(), room, "open to kitchen air");
+	}
+
+	/** A pan or griddle: the face down lies on the pan, the face up loses heat and water to kitchen air. */
+	record PanContact(double panTemperatureC, boolean fatFilm, double flipEverySeconds) implements HeatSetup {
+
+		public PanContact {
+			range("temperatureC", panTemperatureC, 100, 320, "°C for a pan surface");
+			range("flipEverySeconds", flipEverySeconds, 0, 3600, "s (0 for no flip)");
+			if (flipEverySeconds > 0 && flipEverySeconds < 10) {
+				throw new InvalidInputException("flipEverySeconds", "must be 0 (no flip) or at least 10 s");
+			}
+		}
+
+		@Override
+		public FaceSchedule schedule() {
+			double h = fatFilm ? CONTACT_WITH_FAT.value() : CONTACT_DRY.value();
+			return FaceSchedule.flipping(new ContactExchange(kelvin(panTemperatureC), h,
+					String.format("on the pan at %.0f °C, contact %.0f W/m²K", panTemperatureC, h)), kitchenAir(),
+					flipEverySeconds);
+		}
+
+		@Override
+		public String mode() {
+			return "pan";
+		}
+
+		@Override
+		public double temperatureC() {
+			return panTemperatureC;
+		}
+
+		@Override
+		public List<String> assumptions() {
+			return List.of(String.format("Pan surface held at %.0f °C (a heavy pan on a steady flame).", panTemperatureC),
+					"Contact through the " + (fatFilm ? "fat film" : "dry pan") + " taken as "
+							+ (fatFilm ? CONTACT_WITH_FAT : CONTACT_DRY).value() + " W/m²K; pressing the food raises it.",
+					flipEverySeconds > 0 ? String.format("Turned every %.0f s.", flipEverySeconds) : "Not turned.",
+					"The upper face loses heat and water to kitchen air at 25 °C.");
+		}
+
+	}
+
+	/**
+	 * An oven: both faces in air at the set temperature, walls radiating at it; {@code steamPct} is the
+	 * share of steam in the oven atmosphere by volume (0 to 100 %: dry kitchen air is about 1.6 %).
+	 */
+	record Oven(double airTemperatureC, boolean fan, double steamPct) implements HeatSetup {
+
+		public Oven {
+			range("temperatureC", airTemperatureC, 50, 320, "°C for an oven");
+			range("steamPct", steamPct, 0, 100, "% steam by volume");
+		}
+
+		/** Relative humidity taken at the oven temperature, converted to a steam share (capped at 100 %). */
+		public static Oven withRelativeHumidity(double airTemperatureC, boolean fan, double relativeHumidityPct) {
+			range("relativeHumidityPct", relativeHumidityPct, 0, 100, "%");
+			range("temperatureC", airTemperatureC, 50, 320, "°C for an oven");
+			Atmosphere a = Atmosphere.fromRelativeHumidity(kelvin(airTemperatureC), relativeHumidityPct / 100);
+			return new Oven(airTemperatureC, fan, Math.max(Atmosphere.KITCHEN_STEAM_FRACTION, a.steamVolumeFraction()) * 100);
+		}
+
+		public Atmosphere atmosphere() {
+			return new Atmosphere(kelvin(airTemperatureC), Math.max(steamPct / 100, 0));
+		}
+
+		@Override
+		public FaceSchedule schedule() {
+			double h = fan ? OVEN_FAN.value() : OVEN_STILL.value();
+			return FaceSchedule.both(new GasExchange(atmosphere(), h, kelvin(airTemperatureC),
+					String.format("%s oven at %.0f °C, %.0f %% steam", fan ? "fan" : "still", airTemperatureC, steamPct)));
+		}
+
+		@Override
+		public String mode() {
+			return "oven";
+		}
+
+		@Override
+		public double temperatureC() {
+			return airTemperatureC;
+		}
+
+		@Override
+		public List<String> assumptions() {
+			return List.of(String.format("%s oven: convection %.0f W/m²K; walls radiate at the air temperature.",
+					fan ? "Fan" : "Still", (fan ? OVEN_FAN : OVEN_STILL).value()),
+					String.format("Oven atmosphere %.1f %% steam by volume (wet-bulb %.0f °C).", steamPct,
+							WetBulb.temperatureC(atmosphere(), h())),
+					"Both faces see the same heat (on a rack, not on a tray).");
+		}
+
+		private double h() {
+			return fan ? OVEN_FAN.value() : OVEN_STILL.value();
+		}
+
+	}
+
+	/** A radiant grill (salamander, broiler) above the food; the lower face rests in kitchen air. */
+	record RadiantGrill(double heaterTemperatureC, double flipEverySeconds) implements HeatSetup {
+
+		public RadiantGrill {
+			range("temperatureC", heaterTemperatureC, 300, 1200, "°C for a radiant element");
+			range("flipEverySeconds", flipEverySeconds, 0, 3600, "s (0 for no flip)");
+			if (flipEverySeconds > 0 && flipEverySeconds < 10) {
+				throw new InvalidInputException("flipEverySeconds", "must be 0 (no flip) or at least 10 s");
+			}
+		}
+
+		/** The heater temperature that delivers {@code kwPerM2} to a food surface at 25 °C. */
+		public static RadiantGrill fromHeatFlux(double kwPerM2, double flipEverySeconds) {
+			range("heatFluxKwPerM2", kwPerM2, 2, 80, "kW/m²");
+			double room = kelvin(KITCHEN_AIR_C.value());
+			double t4 = kwPerM2 * 1000 / (Radiation.FOOD_EMISSIVITY.value() * Radiation.SIGMA * GRILL_VIEW.value())
+					+ Math.pow(room, 4);
+			return new RadiantGrill(Math.pow(t4, 0.25) - 273.15, flipEverySeconds);
+		}
+
+		/** Radiant flux absorbed by a face at 25 °C, kW/m². */
+		public double heatFluxAtRoomKwPerM2() {
+			double room = kelvin(KITCHEN_AIR_C.value());
+			return Radiation.FOOD_EMISSIVITY.value() * Radiation.SIGMA * GRILL_VIEW.value()
+					* (Math.pow(kelvin(heaterTemperatureC), 4) - Math.pow(room, 4)) / 1000;
+		}
+
+		@Override
+		public FaceSchedule schedule() {
+			double room = kelvin(KITCHEN_AIR_C.value());
+			double f = GRILL_VIEW.value();
+			double radiant = Math.pow(f * Math.pow(kelvin(heaterTemperatureC), 4) + (1 - f) * Math.pow(room, 4), 0.25);
+			GasExchange underHeater = new GasExchange(Atmosphere.kitchen(room), NATURAL_CONVECTION.value(), radiant,
+					String.format("under a radiant element at %.0f °C", heaterTemperatureC));
+			return FaceSchedule.flipping(underHeater, kitchenAir(), flipEverySeconds);
+		}
+
+		@Override
+		public String mode() {
+			return "grill";
+		}
+
+		@Override
+		public double temperatureC() {
+			return heaterTemperatureC;
+		}
+
+		@Override
+		public List<String> assumptions() {
+			return List.of(String.format("Element at %.0f °C filling %.0f %% of the food's view: %.0f kW/m² on a cold surface.",
+					heaterTemperatureC, GRILL_VIEW.value() * 100, heatFluxAtRoomKwPerM2()),
+					flipEverySeconds > 0 ? String.format("Turned every %.0f s.", flipEverySeconds) : "Not turned.",
+					"The lower face rests in kitchen air.");
+		}
+
+	}
+
+	/** A deep fryer: both faces in oil at the set temperature. */
+	record DeepFryer(double oilTemperatureC) implements HeatSetup {
+
+		public DeepFryer {
+			range("temperatureC", oilTemperatureC, 120, 200, "°C for frying oil (above 200 °C oil smokes and may ignite)");
+		}
+
+		@Override
+		public FaceSchedule schedule() {
+			return FaceSchedule.both(new OilExchange(kelvin(oilTemperatureC), OIL_QUIET.value(), OIL_BUBBLING.value()));
+		}
+
+		@Override
+		public String mode() {
+			return "fryer";
+		}
+
+		@Override
+		public double temperatureC() {
+			return oilTemperatureC;
+		}
+
+		@Override
+		public List<String> assumptions() {
+			return List.of(String.format("Oil held at %.0f °C (a fryer that recovers its temperature).", oilTemperatureC),
+					String.format("Oil-side coefficient %.0f W/m²K, up to %.0f W/m²K while water boils off vigorously.",
+							OIL_QUIET.value(), OIL_BUBBLING.value()),
+					"Oil taken up by the crust is not modelled.");
+		}
+
+	}
+
+}
