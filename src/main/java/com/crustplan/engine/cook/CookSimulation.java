@@ -15,6 +15,7 @@ import com.crustplan.engine.heat.FaceFlux;
 import com.crustplan.engine.heat.FaceSchedule;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.layers.Grid;
+import com.crustplan.engine.layers.HeatConduction;
 import com.crustplan.engine.layers.Layers;
 import com.crustplan.engine.layers.Tridiagonal;
 import com.crustplan.engine.properties.FoodComponent;
@@ -117,6 +118,14 @@ public final class CookSimulation implements Layers {
 
 	private final double[] moistureBefore;
 
+	private final double[] faceSlope = new double[2];
+
+	private final double[] faceSource = new double[2];
+
+	private final double[] faceTemperatureBefore = new double[2];
+
+	private final HeatConduction conduction;
+
 	private final Tridiagonal solver;
 
 	private final FaceFlux flux = new FaceFlux();
@@ -165,6 +174,7 @@ public final class CookSimulation implements Layers {
 		solution = new double[n];
 		solver = new Tridiagonal(n);
 		moistureBefore = new double[n];
+		conduction = new HeatConduction(grid);
 
 		double t0 = surface.initialTemperatureC() + 273.15;
 		double x0 = c.moistureDryBasis();
@@ -313,44 +323,29 @@ public final class CookSimulation implements Layers {
 			int i = faceNode(face);
 			capacity[i] += film[face] * FoodComponent.WATER.specificHeat(temperature[i] - 273.15);
 		}
-		// (2) heat conduction, faces linearised
-		for (int i = 0; i < n; i++) {
-			lower[i] = 0;
-			upper[i] = 0;
-			diag[i] = capacity[i] / dt;
-			rhs[i] = capacity[i] / dt * temperature[i];
-		}
-		for (int i = 0; i < n - 1; i++) {
-			double d = grid.spacing(i);
-			double g = 1 / (0.5 * d / conductivity[i] + 0.5 * d / conductivity[i + 1]);
-			diag[i] += g;
-			diag[i + 1] += g;
-			upper[i] = -g;
-			lower[i + 1] = -g;
-		}
+		// (2) heat conduction, faces linearised: q = q* + q'(T − T*) − h_fg(J* + J'(T − T*)) = b − a·T
 		for (int face = 0; face < 2; face++) {
 			int i = faceNode(face);
 			FaceExchange exchange = schedule.at(face, now);
 			double aw = film[face] > 0 ? 1 : isotherm.waterActivity(moisture[i]);
 			exchange.evaluate(temperature[i], aw, boilingFlux[face], flux);
 			double latent = WaterVapour.latentHeat(temperature[i]);
-			double a = -(flux.heatFluxSlope - latent * flux.evaporationSlopeT);
-			diag[i] += a;
-			rhs[i] += flux.heatFlux - latent * flux.evaporation + a * temperature[i];
+			faceSlope[face] = -(flux.heatFluxSlope - latent * flux.evaporationSlopeT);
+			faceSource[face] = flux.heatFlux - latent * flux.evaporation + faceSlope[face] * temperature[i];
 			// remember the linearisation for the ledger and the moisture step
 			faceJ[face] = flux.evaporation;
 			faceSlopeJ[face] = flux.evaporationSlopeT;
 			heatFluxAtStart[face] = flux.heatFlux;
 			heatSlope[face] = flux.heatFluxSlope;
+			faceTemperatureBefore[face] = temperature[i];
 		}
-		solver.solve(lower, diag, upper, rhs, solution);
+		conduction.step(temperature, capacity, conductivity, dt, faceSlope[0], faceSource[0], faceSlope[1],
+				faceSource[1]);
 		for (int face = 0; face < 2; face++) {
-			int i = faceNode(face);
-			double dT = solution[i] - temperature[i];
+			double dT = temperature[faceNode(face)] - faceTemperatureBefore[face];
 			heatIn += (heatFluxAtStart[face] + heatSlope[face] * dT) * dt;
 			faceJ[face] += faceSlopeJ[face] * dT;
 		}
-		System.arraycopy(solution, 0, temperature, 0, n);
 
 		// face evaporation or condensation through the standing water
 		for (int face = 0; face < 2; face++) {
