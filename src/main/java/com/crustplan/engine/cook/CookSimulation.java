@@ -403,7 +403,7 @@ public final class CookSimulation implements Layers {
 		int half = grid.position(i) < 0.5 * grid.thickness() ? 0 : 1;
 		double c = capacity[i];
 		if (face >= 0 && film[face] > 0) {
-			double tb = WaterVapour.boilingTemperatureK(1.0);
+			double tb = WaterVapour.boilingTemperatureKFast(1.0);
 			if (temperature[i] <= tb) {
 				return;
 			}
@@ -422,23 +422,23 @@ public final class CookSimulation implements Layers {
 			return;
 		}
 		double latent = WaterVapour.latentHeat(temperature[i]);
-		// find the boiled mass m at which the node sits exactly at the boiling point of what is left
-		double lo = 0;
-		double hi = Math.min(water, c * (temperature[i] - 373.0) / latent);
-		if (residual(i, hi, c, latent) > 0) {
-			lo = hi; // even this much leaves it above the boiling point: all of it goes
-		}
-		else {
-			for (int it = 0; it < 30 && hi - lo > 1e-9 * (1 + hi); it++) {
-				double mid = 0.5 * (lo + hi);
-				if (residual(i, mid, c, latent) > 0) {
-					lo = mid;
-				}
-				else {
-					hi = mid;
-				}
+		// the boiled mass m at which the node sits exactly at the boiling point of the water it keeps:
+		// secant iterations from "boil as if aw stayed put", kept inside [0, water]
+		double m0 = 0;
+		double r0 = residual(i, m0, c, latent);
+		double m1 = Math.min(water, c * r0 / latent);
+		double r1 = residual(i, m1, c, latent);
+		for (int it = 0; it < 12 && Math.abs(r1) > 1e-4 && r1 != r0; it++) {
+			double m2 = m1 - r1 * (m1 - m0) / (r1 - r0);
+			m0 = m1;
+			r0 = r1;
+			m1 = Math.max(0, Math.min(water, m2));
+			r1 = residual(i, m1, c, latent);
+			if (m1 == water && r1 > 0) {
+				break; // even all of it leaves the node above its boiling point
 			}
 		}
+		double lo = m1;
 		double m = lo;
 		temperature[i] -= m * latent / c;
 		moisture[i] -= m / dryMass[i];
@@ -452,7 +452,7 @@ public final class CookSimulation implements Layers {
 	}
 
 	private double boilingPoint(double x) {
-		return WaterVapour.boilingTemperatureK(isotherm.waterActivity(x));
+		return WaterVapour.boilingTemperatureKFast(isotherm.waterActivity(x));
 	}
 
 	private void moistureStep(double dt) {
