@@ -1,0 +1,80 @@
+package com.crustplan.bench;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.Function;
+
+import com.crustplan.engine.cook.CookResult;
+import com.crustplan.engine.cook.CookSettings;
+
+/**
+ * Grid and time-step convergence of the full CookSimulation (heat, moisture, local boiling, browning)
+ * for the two everyday plans: time to target and core temperature at target for 13/25/49 nodes and
+ * 2/1/0.5/0.25 s steps, against a reference refined 4× in both (97 nodes, 0.125 s), with an 8× run
+ * (193 nodes, 0.0625 s) to show how far the reference itself is from converged.
+ * <p>
+ * Run: {@code mvn -o -Pbench test-compile exec:exec -Dbench.main=com.crustplan.bench.ConvergenceTable}
+ */
+public final class ConvergenceTable {
+
+	static final int[] NODES = { 13, 25, 49 };
+
+	static final double[] STEPS_S = { 2, 1, 0.5, 0.25 };
+
+	static final int REFERENCE_NODES = 4 * (CookSettings.DEFAULT_NODES - 1) + 1;
+
+	static final double REFERENCE_STEP_S = CookSettings.DEFAULT_TIME_STEP_S / 4;
+
+	record Row(int nodes, double stepS, double timeToTargetS, double coreAtTargetC, double errorS, double errorPct,
+			double coreErrorK) {
+	}
+
+	record Plan(String name, Function<CookSettings, CookResult> run) {
+	}
+
+	static final Plan STEAK = new Plan("steak 25 mm, oiled pan 220 °C, not turned, to 'browned'", Plans::steak);
+
+	static final Plan CHIPS = new Plan("chips 10 mm, fryer 175 °C, to 'golden'", Plans::chips);
+
+	private ConvergenceTable() {
+	}
+
+	static CookResult run(Plan plan, int nodes, double dt) {
+		return plan.run().apply(CookSettings.defaults().withNodes(nodes).withTimeStepS(dt).withRecordSeries(false));
+	}
+
+	static Row row(CookResult r, int nodes, double dt, CookResult ref) {
+		double err = r.timeToTargetS() - ref.timeToTargetS();
+		return new Row(nodes, dt, r.timeToTargetS(), r.coreTemperatureAtTargetC(), err, 100 * err / ref.timeToTargetS(),
+				r.coreTemperatureAtTargetC() - ref.coreTemperatureAtTargetC());
+	}
+
+	static List<Row> table(Plan plan) {
+		CookResult ref = run(plan, REFERENCE_NODES, REFERENCE_STEP_S);
+		List<Row> rows = new ArrayList<>();
+		for (int nodes : NODES) {
+			for (double dt : STEPS_S) {
+				rows.add(row(run(plan, nodes, dt), nodes, dt, ref));
+			}
+		}
+		rows.add(row(ref, REFERENCE_NODES, REFERENCE_STEP_S, ref));
+		rows.add(row(run(plan, 2 * REFERENCE_NODES - 1, REFERENCE_STEP_S / 2), 2 * REFERENCE_NODES - 1,
+				REFERENCE_STEP_S / 2, ref));
+		return rows;
+	}
+
+	public static void main(String[] args) {
+		for (Plan plan : List.of(STEAK, CHIPS)) {
+			System.out.printf(Locale.ROOT, "%n%s; reference %d nodes, %.4g s%n", plan.name(), REFERENCE_NODES,
+					REFERENCE_STEP_S);
+			System.out.printf(Locale.ROOT, "| nodes | step s | time to target s | error s | error %% | core at target °C | core error K |%n");
+			System.out.printf(Locale.ROOT, "|---:|---:|---:|---:|---:|---:|---:|%n");
+			for (Row r : table(plan)) {
+				System.out.printf(Locale.ROOT, "| %d | %.4g | %.2f | %+.2f | %+.2f | %.2f | %+.2f |%n", r.nodes(), r.stepS(),
+						r.timeToTargetS(), r.errorS(), r.errorPct(), r.coreAtTargetC(), r.coreErrorK());
+			}
+		}
+	}
+
+}
