@@ -79,6 +79,9 @@ public final class CookSimulation implements Layers {
 
 	private final double[] volume;
 
+	/** Dry matter per volume of each node, kg/m³: both fixed for the run, so kept rather than divided each step. */
+	private final double[] dryDensity;
+
 	private final double[] film = new double[2];
 
 	private final double[] extent = new double[2];
@@ -144,6 +147,14 @@ public final class CookSimulation implements Layers {
 
 	private final double ph;
 
+	// boiling point of free water (aw = 1) and the moisture above which water is free: most boiling nodes
+	// hold free water, and their boiling point then needs no isotherm
+	private final double freeWaterMoisture;
+
+	private final double freeWaterBoilingK = WaterVapour.boilingTemperatureKFast(1.0);
+
+	private static final double LN_AIR_CONDUCTIVITY = Math.log(ThermalProperties.AIR_CONDUCTIVITY);
+
 	private CookSimulation(Surface surface, HeatSetup setup, CookSettings settings) {
 		this.surface = surface;
 		this.category = surface.category();
@@ -153,6 +164,7 @@ public final class CookSimulation implements Layers {
 		this.n = settings.nodes();
 		this.grid = new Grid(surface.thicknessMm() / 1000, n, Grid.DEFAULT_CLUSTERING);
 		this.isotherm = category.isotherm();
+		this.freeWaterMoisture = isotherm.freeWaterMoisture();
 		this.kinetics = category.browning();
 		this.path = category.colourPath();
 		Composition c = surface.composition();
@@ -165,6 +177,7 @@ public final class CookSimulation implements Layers {
 		moisture = new double[n];
 		dryMass = new double[n];
 		volume = new double[n];
+		dryDensity = new double[n];
 		capacity = new double[n];
 		conductivity = new double[n];
 		lower = new double[n];
@@ -186,6 +199,7 @@ public final class CookSimulation implements Layers {
 			moisture[i] = x0;
 			volume[i] = grid.width(i);
 			dryMass[i] = bulkDensity * volume[i] / (1 + x0);
+			dryDensity[i] = dryMass[i] / volume[i];
 		}
 		film[0] = surface.surfaceWaterGPerM2() / 1000;
 		film[1] = film[0];
@@ -316,8 +330,9 @@ public final class CookSimulation implements Layers {
 			double mass = dryMass[i] * (1 + moisture[i]);
 			double porosity = Math.max(0, Math.min(0.95, 1 - mass * props[2] / volume[i]));
 			capacity[i] = mass * props[0];
+			// k^(1−ε)·k_air^ε = k·exp(ε·(ln k_air − ln k)): one exp and one log instead of two pow
 			conductivity[i] = porosity > 0
-					? Math.pow(props[1], 1 - porosity) * Math.pow(ThermalProperties.AIR_CONDUCTIVITY, porosity) : props[1];
+					? props[1] * Math.exp(porosity * (LN_AIR_CONDUCTIVITY - Math.log(props[1]))) : props[1];
 		}
 		for (int face = 0; face < 2; face++) {
 			int i = faceNode(face);
@@ -418,14 +433,18 @@ public final class CookSimulation implements Layers {
 			}
 		}
 		double water = (moisture[i] - MIN_MOISTURE) * dryMass[i];
-		if (water <= 0 || temperature[i] <= boilingPoint(moisture[i])) {
+		if (water <= 0) {
+			return;
+		}
+		double excess = temperature[i] - boilingPoint(moisture[i]);
+		if (excess <= 0) {
 			return;
 		}
 		double latent = WaterVapour.latentHeat(temperature[i]);
 		// the boiled mass m at which the node sits exactly at the boiling point of the water it keeps:
 		// secant iterations from "boil as if aw stayed put", kept inside [0, water]
 		double m0 = 0;
-		double r0 = residual(i, m0, c, latent);
+		double r0 = excess; // residual(i, 0, c, latent)
 		double m1 = Math.min(water, c * r0 / latent);
 		double r1 = residual(i, m1, c, latent);
 		for (int it = 0; it < 12 && Math.abs(r1) > 1e-4 && r1 != r0; it++) {
@@ -452,6 +471,9 @@ public final class CookSimulation implements Layers {
 	}
 
 	private double boilingPoint(double x) {
+		if (x >= freeWaterMoisture) {
+			return freeWaterBoilingK; // aw = 1: the isotherm would return exactly 1
+		}
 		return WaterVapour.boilingTemperatureKFast(isotherm.waterActivity(x));
 	}
 
@@ -464,8 +486,8 @@ public final class CookSimulation implements Layers {
 		}
 		for (int i = 0; i < n - 1; i++) {
 			double d = grid.spacing(i);
-			double dryDensity = 0.5 * (dryMass[i] / volume[i] + dryMass[i + 1] / volume[i + 1]);
-			double g = dryDensity * MoistureDiffusivity.at(0.5 * (temperature[i] + temperature[i + 1])) / d;
+			double meanDryDensity = 0.5 * (dryDensity[i] + dryDensity[i + 1]);
+			double g = meanDryDensity * MoistureDiffusivity.at(0.5 * (temperature[i] + temperature[i + 1])) / d;
 			diag[i] += g;
 			diag[i + 1] += g;
 			upper[i] = -g;

@@ -20,6 +20,9 @@ public final class HeatConduction {
 
 	private final Tridiagonal solver;
 
+	/** d/2 of each interface, fixed for the run. */
+	private final double[] halfSpacing;
+
 	public HeatConduction(Grid grid) {
 		this.grid = grid;
 		int n = grid.size();
@@ -28,6 +31,10 @@ public final class HeatConduction {
 		upper = new double[n];
 		rhs = new double[n];
 		solver = new Tridiagonal(n);
+		halfSpacing = new double[n - 1];
+		for (int i = 0; i < n - 1; i++) {
+			halfSpacing[i] = 0.5 * grid.spacing(i);
+		}
 	}
 
 	/**
@@ -43,12 +50,15 @@ public final class HeatConduction {
 		for (int i = 0; i < n; i++) {
 			lower[i] = 0;
 			upper[i] = 0;
-			diag[i] = capacity[i] / dt;
-			rhs[i] = capacity[i] / dt * temperature[i];
+			double c = capacity[i] / dt;
+			diag[i] = c;
+			rhs[i] = c * temperature[i];
 		}
 		for (int i = 0; i < n - 1; i++) {
-			double d = grid.spacing(i);
-			double g = 1 / (0.5 * d / conductivity[i] + 0.5 * d / conductivity[i + 1]);
+			// 1/(d/2k_i + d/2k_j) written with one division: k_i·k_j / ((d/2)(k_i + k_j))
+			double ki = conductivity[i];
+			double kj = conductivity[i + 1];
+			double g = ki * kj / (halfSpacing[i] * (ki + kj));
 			diag[i] += g;
 			diag[i + 1] += g;
 			upper[i] = -g;
