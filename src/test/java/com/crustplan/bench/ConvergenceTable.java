@@ -64,16 +64,53 @@ public final class ConvergenceTable {
 		return rows;
 	}
 
+	/** Time to target along a sequence of settings, with successive differences and the observed order. */
+	static void sequence(Plan plan, String title, int[] nodes, double[] steps) {
+		System.out.printf(Locale.ROOT, "%n%s%n| nodes | step s | time to target s | change s | observed order |%n|---:|---:|---:|---:|---:|%n",
+				title);
+		double previous = Double.NaN;
+		double previousChange = Double.NaN;
+		for (int k = 0; k < nodes.length; k++) {
+			double t = run(plan, nodes[k], steps[k]).timeToTargetS();
+			double change = t - previous;
+			// halving the step (and the spacing, on the diagonal) divides the change by 2^p
+			double order = Math.log(previousChange / change) / Math.log(2);
+			System.out.printf(Locale.ROOT, "| %d | %.5g | %.2f | %s | %s |%n", nodes[k], steps[k], t,
+					Double.isNaN(change) ? "" : String.format(Locale.ROOT, "%+.2f", change),
+					Double.isNaN(order) ? "" : String.format(Locale.ROOT, "%.2f", order));
+			previousChange = change;
+			previous = t;
+		}
+	}
+
 	public static void main(String[] args) {
 		for (Plan plan : List.of(STEAK, CHIPS)) {
-			System.out.printf(Locale.ROOT, "%n%s; reference %d nodes, %.4g s%n", plan.name(), REFERENCE_NODES,
-					REFERENCE_STEP_S);
+			System.out.printf(Locale.ROOT, "%n## %s%n%ngrid x step, against the 4x refined reference (%d nodes, %.4g s)%n", plan.name(),
+					REFERENCE_NODES, REFERENCE_STEP_S);
 			System.out.printf(Locale.ROOT, "| nodes | step s | time to target s | error s | error %% | core at target °C | core error K |%n");
 			System.out.printf(Locale.ROOT, "|---:|---:|---:|---:|---:|---:|---:|%n");
 			for (Row r : table(plan)) {
 				System.out.printf(Locale.ROOT, "| %d | %.4g | %.2f | %+.2f | %+.2f | %.2f | %+.2f |%n", r.nodes(), r.stepS(),
 						r.timeToTargetS(), r.errorS(), r.errorPct(), r.coreAtTargetC(), r.coreErrorK());
 			}
+			int[] n25 = new int[8];
+			double[] halving = new double[8];
+			for (int k = 0; k < 8; k++) {
+				n25[k] = CookSettings.DEFAULT_NODES;
+				halving[k] = 1.0 / (1 << k);
+			}
+			sequence(plan, "the step alone, 25 nodes", n25, halving);
+			int[] diagonalNodes = new int[6];
+			double[] diagonalSteps = new double[6];
+			for (int k = 0; k < 6; k++) {
+				diagonalNodes[k] = 12 * (1 << k) + 1;
+				diagonalSteps[k] = 1.0 / (1 << k);
+			}
+			sequence(plan, "grid and step refined together", diagonalNodes, diagonalSteps);
+			int[] gridNodes = { 7, 13, 25, 49, 97, 193 };
+			double[] fine = new double[gridNodes.length];
+			java.util.Arrays.fill(fine, 1.0 / 32);
+			sequence(plan, "the grid alone, step 1/32 s", gridNodes, fine);
 		}
 	}
 
