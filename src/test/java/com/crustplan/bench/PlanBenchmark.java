@@ -1,5 +1,8 @@
 package com.crustplan.bench;
 
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
 
 import org.openjdk.jmh.annotations.Benchmark;
@@ -8,6 +11,10 @@ import org.openjdk.jmh.annotations.Fork;
 import org.openjdk.jmh.annotations.Measurement;
 import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
+import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 
 import com.crustplan.engine.cook.CookResult;
@@ -23,9 +30,25 @@ import com.crustplan.engine.cook.CookSettings;
 @Warmup(iterations = 3, time = 1)
 @Measurement(iterations = 5, time = 1)
 @Fork(1)
+@State(Scope.Benchmark)
 public class PlanBenchmark {
 
 	private static final CookSettings DEFAULTS = CookSettings.defaults();
+
+	/** A map needs only the time to target: it can stop there instead of running on by a quarter. */
+	private static final CookSettings STOP_AT_TARGET = DEFAULTS.withRecordSeries(false).withRunPastTargetFraction(0);
+
+	private ExecutorService pool;
+
+	@Setup
+	public void startPool() {
+		pool = Executors.newFixedThreadPool(2);
+	}
+
+	@TearDown
+	public void stopPool() {
+		pool.shutdownNow();
+	}
 
 	@Benchmark
 	public CookResult steakPan220Browned() {
@@ -41,6 +64,28 @@ public class PlanBenchmark {
 	@Benchmark
 	public double[] fryerMap30RunsNoSeries() {
 		return Plans.fryerMapTimesToTarget();
+	}
+
+	/** The same map stopping at each target (the times to target are the same). */
+	@Benchmark
+	public double[] fryerMap30RunsStopAtTarget() {
+		return Plans.fryerMapTimesToTarget(STOP_AT_TARGET);
+	}
+
+	/** The same map stopping at each target, the 30 runs spread over two threads (the machine's two cores). */
+	@Benchmark
+	public double[] fryerMap30RunsStopAtTargetTwoThreads() throws Exception {
+		@SuppressWarnings("unchecked")
+		Future<Double>[] parts = new Future[Plans.MAP_POINTS];
+		for (int i = 0; i < Plans.MAP_POINTS; i++) {
+			int point = i;
+			parts[i] = pool.submit(() -> Plans.mapPoint(point, STOP_AT_TARGET));
+		}
+		double[] times = new double[Plans.MAP_POINTS];
+		for (int i = 0; i < Plans.MAP_POINTS; i++) {
+			times[i] = parts[i].get();
+		}
+		return times;
 	}
 
 }

@@ -52,13 +52,19 @@ final class Plans {
 	 * the fryer temperatures, summaries only (no series), as a map computes them.
 	 */
 	static double[] fryerMapTimesToTarget() {
-		CookSettings summary = CookSettings.defaults().withRecordSeries(false);
+		return fryerMapTimesToTarget(CookSettings.defaults().withRecordSeries(false));
+	}
+
+	static double[] fryerMapTimesToTarget(CookSettings summary) {
 		double[] times = new double[MAP_POINTS];
 		for (int i = 0; i < MAP_POINTS; i++) {
-			times[i] = CookSimulation.run(CHIPS, new HeatSetup.DeepFryer(mapTemperatureC(i)), GOLDEN, summary)
-				.timeToTargetS();
+			times[i] = mapPoint(i, summary);
 		}
 		return times;
+	}
+
+	static double mapPoint(int i, CookSettings summary) {
+		return CookSimulation.run(CHIPS, new HeatSetup.DeepFryer(mapTemperatureC(i)), GOLDEN, summary).timeToTargetS();
 	}
 
 }
