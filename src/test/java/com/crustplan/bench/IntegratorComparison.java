@@ -9,7 +9,7 @@ import java.util.Locale;
  * HeatConduction step) at several steps and Dormand–Prince 5(4) at several tolerances, on the same
  * 25-node grid and the same equations ({@link OvenSlab}), each against a reference on the 4× refined grid
  * (97 nodes, integrated to 1e-7 K tolerance, so its time error is far below anything measured). The
- * timings printed here are a rough mean of repeated runs; the figures for the README come from
+ * timings printed here are a rough median of repeated runs; the figures for the README come from
  * {@link IntegratorBenchmark}.
  * <p>
  * Run: {@code mvn -o -Pbench test-compile exec:exec -Dbench.main=com.crustplan.bench.IntegratorComparison}
@@ -135,21 +135,23 @@ public final class IntegratorComparison {
 		return null;
 	}
 
-	/** Mean wall time of one run in ms: a rough figure (warm-up, then about half a second of runs). */
+	/**
+	 * Median wall time of one run in ms over about half a second of runs after a warm-up: a rough figure;
+	 * the median rather than the mean because the machine is shared.
+	 */
 	private static double time(Runnable run) {
 		for (int i = 0; i < 5; i++) {
 			run.run();
 		}
-		int reps = 0;
+		List<Long> runs = new ArrayList<>();
 		long start = System.nanoTime();
-		long elapsed;
-		do {
+		while (System.nanoTime() - start < 500_000_000L) {
+			long t0 = System.nanoTime();
 			run.run();
-			reps++;
-			elapsed = System.nanoTime() - start;
+			runs.add(System.nanoTime() - t0);
 		}
-		while (elapsed < 500_000_000L);
-		return elapsed / 1e6 / reps;
+		runs.sort(null);
+		return runs.get(runs.size() / 2) / 1e6;
 	}
 
 	public static void main(String[] args) {
