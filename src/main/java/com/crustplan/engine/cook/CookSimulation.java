@@ -465,7 +465,8 @@ public final class CookSimulation implements Layers {
 		for (int i = 0; i < n - 1; i++) {
 			double d = grid.spacing(i);
 			double dryDensity = 0.5 * (dryMass[i] / volume[i] + dryMass[i + 1] / volume[i + 1]);
-			double g = dryDensity * MoistureDiffusivity.at(0.5 * (temperature[i] + temperature[i + 1])) / d;
+			double g = dryDensity * MoistureDiffusivity.at(0.5 * (temperature[i] + temperature[i + 1]),
+					0.5 * (moisture[i] + moisture[i + 1])) / d;
 			diag[i] += g;
 			diag[i + 1] += g;
 			upper[i] = -g;

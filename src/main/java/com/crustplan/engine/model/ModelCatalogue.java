@@ -86,9 +86,9 @@ public final class ModelCatalogue {
 						+ "instead. This gives the 100 °C plateau against a pan or in oil, an evaporation front that recedes into the food, "
 						+ "crust temperatures that climb as aw falls, and wet cores that stay near 100 °C.",
 				List.of()));
-		eq.add(new Equation("Moisture diffusion", "ρ_d·∂X/∂t = ∂/∂x(ρ_d·D·∂X/∂x);  D = D_ref·exp(−Ea/R·(1/T − 1/353.15 K))",
+		eq.add(new Equation("Moisture diffusion", "ρ_d·∂X/∂t = ∂/∂x(ρ_d·D·∂X/∂x);  D = D_ref·exp(−Ea/R·(1/T − 1/353.15 K))·X²/(X² + X_c²)",
 				"X in kg water per kg dry matter; vapour leaves through the faces.",
-				List.of(MoistureDiffusivity.REFERENCE, MoistureDiffusivity.ACTIVATION_ENERGY)));
+				List.of(MoistureDiffusivity.REFERENCE, MoistureDiffusivity.ACTIVATION_ENERGY, MoistureDiffusivity.CRUST_MOISTURE)));
 		for (FoodCategory c : FoodCategory.values()) {
 			eq.add(new Equation("Sorption isotherm: " + c.label(), "X = Xm·C·K·aw / ((1 − K·aw)(1 − K·aw + C·K·aw))  (GAB)",
 					"Water activity of each layer from its moisture, inverted by the positive root of the GAB quadratic; above X(aw = 1) the water is free.",
