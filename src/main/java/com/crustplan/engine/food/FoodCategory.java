@@ -50,7 +50,7 @@ public enum FoodCategory {
 			Isotherms.MEAT,
 			new BrowningKinetics(new ArrheniusRate(
 					Parameter.commonPractice("k0", "pre-exponential factor, poultry skin browning", 3.5e5, "1/s",
-							"calibrated so skin-on chicken in a 200 °C fan oven is golden in 25–35 min (common practice)"),
+							"calibrated so skin-on chicken in a 200 °C fan oven is golden in 20–30 min (common practice)"),
 					Isotherms.ZANONI_EA),
 					Parameter.assumption("aw,ref", "water activity at which the rate is referenced", 0.4, "–", "dry crust"),
 					Parameter.secondary("pH,ref", "typical pH of poultry", 6.0, "–", "poultry 5.7–6.0 (quoted in food pH tables)"),
