@@ -44,6 +44,8 @@ public final class CookSimulation implements Layers {
 	/** The reference water activity for caramelisation: a dry crust, like the Maillard fits. */
 	private static final double CARAMEL_REFERENCE_AW = 0.4;
 
+	private static final double LOG_GAS_CONDUCTIVITY = Math.log(ThermalProperties.AIR_CONDUCTIVITY);
+
 	private final Surface surface;
 
 	private final FoodCategory category;
@@ -316,8 +318,9 @@ public final class CookSimulation implements Layers {
 			double mass = dryMass[i] * (1 + moisture[i]);
 			double porosity = Math.max(0, Math.min(0.95, 1 - mass * props[2] / volume[i]));
 			capacity[i] = mass * props[0];
-			conductivity[i] = porosity > 0
-					? Math.pow(props[1], 1 - porosity) * Math.pow(ThermalProperties.AIR_CONDUCTIVITY, porosity) : props[1];
+			// geometric-mean rule k_m^(1−ε)·k_gas^ε, written with one exp
+			conductivity[i] = porosity > 0 ? Math.exp((1 - porosity) * Math.log(props[1]) + porosity * LOG_GAS_CONDUCTIVITY)
+					: props[1];
 		}
 		for (int face = 0; face < 2; face++) {
 			int i = faceNode(face);
