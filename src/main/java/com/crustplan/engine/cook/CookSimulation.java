@@ -128,6 +128,10 @@ public final class CookSimulation implements Layers {
 
 	private final HeatConduction conduction;
 
+	private final double[] waterConductance;
+
+	private final double[] heatGain;
+
 	private final Tridiagonal solver;
 
 	private final FaceFlux flux = new FaceFlux();
@@ -177,6 +181,8 @@ public final class CookSimulation implements Layers {
 		solver = new Tridiagonal(n);
 		moistureBefore = new double[n];
 		conduction = new HeatConduction(grid);
+		waterConductance = new double[n];
+		heatGain = new double[n];
 
 		double t0 = surface.initialTemperatureC() + 273.15;
 		double x0 = c.moistureDryBasis();
@@ -470,33 +476,36 @@ public final class CookSimulation implements Layers {
 			double dryDensity = 0.5 * (dryMass[i] / volume[i] + dryMass[i + 1] / volume[i + 1]);
 			double g = dryDensity * MoistureDiffusivity.at(0.5 * (temperature[i] + temperature[i + 1]),
 					0.5 * (moisture[i] + moisture[i + 1])) / d;
+			waterConductance[i] = g;
 			diag[i] += g;
 			diag[i + 1] += g;
 			upper[i] = -g;
 			lower[i + 1] = -g;
 		}
-		// evaporation from a bare face into gas: J(X) ≈ J* + s·(X − X*), s = dJ/daw · daw/dX
+		// evaporation from a bare face into gas: J(X) ≈ J* + s·(X − X*), s = dJ/daw · daw/dX, where J* is
+		// what the heat step already drew latent heat for
 		for (int face = 0; face < 2; face++) {
 			int i = faceNode(face);
-			FaceExchange exchange = schedule.at(face, time);
 			if (film[face] > 0) {
 				continue;
 			}
+			FaceExchange exchange = schedule.at(face, time);
 			double x = moisture[i];
 			double aw = isotherm.waterActivity(x);
 			exchange.evaluate(temperature[i], aw, boilingFlux[face], flux);
-			double j = flux.evaporation;
+			double j = faceJ[face];
 			double dx = 1e-4 + 1e-3 * x;
-			double s = flux.evaporationSlopeAw * (isotherm.waterActivity(x + dx) - aw) / dx;
+			double slope = flux.evaporationSlopeAw * (isotherm.waterActivity(x + dx) - aw) / dx;
 			evapPredicted[face] = j;
-			evapSlope[face] = s;
-			diag[i] += s;
-			rhs[i] -= j - s * x;
+			evapSlope[face] = slope;
+			diag[i] += slope;
+			rhs[i] -= j - slope * x;
 		}
 		double[] before = moistureBefore;
 		System.arraycopy(moisture, 0, before, 0, n);
 		solver.solve(lower, diag, upper, rhs, solution);
 		System.arraycopy(solution, 0, moisture, 0, n);
+		carryEnthalpyWithWater(dt);
 		for (int face = 0; face < 2; face++) {
 			int i = faceNode(face);
 			if (film[face] > 0) {
@@ -507,9 +516,9 @@ public final class CookSimulation implements Layers {
 				j -= dryMass[i] * (MIN_MOISTURE - moisture[i]) / dt;
 				moisture[i] = MIN_MOISTURE;
 			}
-			// the latent heat of what actually left is drawn from the face node
+			// the heat step drew latent heat for J*; the face node pays for the difference
 			double latent = WaterVapour.latentHeat(temperature[i]);
-			temperature[i] -= latent * j * dt / capacity[i];
+			temperature[i] -= latent * (j - evapPredicted[face]) * dt / capacity[i];
 			account(j * dt, temperature[i]);
 			evapPredicted[face] = 0;
 			evapSlope[face] = 0;
@@ -521,6 +530,30 @@ public final class CookSimulation implements Layers {
 		}
 	}
 
+
+	/**
+	 * Water diffusing into a layer arrives at the temperature of the layer it left: mix its sensible
+	 * heat in, so moisture transport neither makes nor loses energy.
+	 */
+	private void carryEnthalpyWithWater(double dt) {
+		for (int i = 0; i < n; i++) {
+			heatGain[i] = 0;
+		}
+		for (int i = 0; i < n - 1; i++) {
+			double m = waterConductance[i] * (moisture[i] - moisture[i + 1]) * dt; // kg/m² from i to i+1
+			if (m > 0) {
+				heatGain[i + 1] += m * (temperature[i] - temperature[i + 1]);
+			}
+			else {
+				heatGain[i] += -m * (temperature[i + 1] - temperature[i]);
+			}
+		}
+		for (int i = 0; i < n; i++) {
+			if (heatGain[i] != 0) {
+				temperature[i] += heatGain[i] * FoodComponent.WATER.specificHeat(temperature[i] - 273.15) / capacity[i];
+			}
+		}
+	}
 
 	// ---------------------------------------------------------------- outputs
 
