@@ -49,7 +49,7 @@ public enum FoodCategory {
 			Parameter.assumption("ε0", "initial gas fraction of skin", 0, "–", "skin treated as pore-free"),
 			Isotherms.MEAT,
 			new BrowningKinetics(new ArrheniusRate(
-					Parameter.commonPractice("k0", "pre-exponential factor, poultry skin browning", 3.5e5, "1/s",
+					Parameter.commonPractice("k0", "pre-exponential factor, poultry skin browning", 1.5e5, "1/s",
 							"calibrated so skin-on chicken in a 200 °C fan oven is golden in 20–30 min (common practice)"),
 					Isotherms.ZANONI_EA),
 					Parameter.assumption("aw,ref", "water activity at which the rate is referenced", 0.4, "–", "dry crust"),
