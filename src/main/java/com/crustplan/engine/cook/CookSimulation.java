@@ -44,6 +44,8 @@ public final class CookSimulation implements Layers {
 	/** The reference water activity for caramelisation: a dry crust, like the Maillard fits. */
 	private static final double CARAMEL_REFERENCE_AW = 0.4;
 
+	private static final double FREE_WATER_BOILING_K = WaterVapour.boilingTemperatureKFast(1.0);
+
 	private static final double LOG_GAS_CONDUCTIVITY = Math.log(ThermalProperties.AIR_CONDUCTIVITY);
 
 	private final Surface surface;
@@ -59,6 +61,7 @@ public final class CookSimulation implements Layers {
 	private final Grid grid;
 
 	private final GabIsotherm isotherm;
+
 
 	private final BrowningKinetics kinetics;
 
@@ -120,6 +123,7 @@ public final class CookSimulation implements Layers {
 
 	private final double[] moistureBefore;
 
+
 	private final double[] faceSlope = new double[2];
 
 	private final double[] faceSource = new double[2];
@@ -127,6 +131,14 @@ public final class CookSimulation implements Layers {
 	private final double[] faceTemperatureBefore = new double[2];
 
 	private final HeatConduction conduction;
+
+	private final boolean[] pinned;
+
+	private final double[] solvedTemperature;
+
+	private final boolean[] ranDry;
+
+	private final double[] pinnedTemperature;
 
 	private final double[] waterConductance;
 
@@ -181,6 +193,10 @@ public final class CookSimulation implements Layers {
 		solver = new Tridiagonal(n);
 		moistureBefore = new double[n];
 		conduction = new HeatConduction(grid);
+		pinned = new boolean[n];
+		solvedTemperature = new double[n];
+		ranDry = new boolean[n];
+		pinnedTemperature = new double[n];
 		waterConductance = new double[n];
 		heatGain = new double[n];
 
@@ -213,18 +229,19 @@ public final class CookSimulation implements Layers {
 		List<Sample> series = settings.recordSeries() ? new ArrayList<>() : List.of();
 		double dt = settings.timeStepS();
 		double stopAt = settings.horizonS();
-		double nextOutput = 0;
+		double nextOutput = settings.recordSeries() ? settings.outputIntervalS() : Double.POSITIVE_INFINITY;
+		double nextChange = schedule.nextChangeAfter(0);
 		double reachedAt = Double.NaN;
 		double coreAtTarget = Double.NaN;
 		double maxSurface = temperature[0];
 		boolean everDry = false;
 		if (settings.recordSeries()) {
 			series.add(sample());
-			nextOutput = settings.outputIntervalS();
 		}
 		double core = core();
 		while (time < stopAt - 1e-9) {
-			double step = Math.min(dt, stopAt - time);
+			// land exactly on output times, flips and the end
+			double step = Math.min(dt, Math.min(stopAt, Math.min(nextOutput, nextChange)) - time);
 			double before = extent[0];
 			double coreBefore = core;
 			step(step);
@@ -236,11 +253,14 @@ public final class CookSimulation implements Layers {
 				reachedAt = time - step + f * step;
 				coreAtTarget = coreBefore + f * (core - coreBefore);
 				stopAt = Math.min(settings.horizonS(),
-						Math.max(reachedAt * (1 + settings.runPastTargetFraction()), reachedAt + dt));
+						Math.max(reachedAt * (1 + settings.runPastTargetFraction()), reachedAt + settings.timeStepS()));
 			}
-			if (settings.recordSeries() && time >= nextOutput - 1e-9) {
+			if (time >= nextOutput - 1e-9) {
 				series.add(sample());
 				nextOutput += settings.outputIntervalS();
+			}
+			if (time >= nextChange - 1e-9) {
+				nextChange = schedule.nextChangeAfter(time + 1e-9);
 			}
 		}
 		if (settings.recordSeries() && series.get(series.size() - 1).timeS() < time - 1e-9) {
@@ -348,10 +368,12 @@ public final class CookSimulation implements Layers {
 			heatSlope[face] = flux.heatFluxSlope;
 			faceTemperatureBefore[face] = temperature[i];
 		}
-		conduction.step(temperature, capacity, conductivity, dt, faceSlope[0], faceSource[0], faceSlope[1],
+		conduction.assemble(temperature, capacity, conductivity, dt, faceSlope[0], faceSource[0], faceSlope[1],
 				faceSource[1]);
+		solveWithBoiling(dt);
 		for (int face = 0; face < 2; face++) {
-			double dT = temperature[faceNode(face)] - faceTemperatureBefore[face];
+			// the face fluxes as the solve had them (a layer that ran dry is warmed only afterwards)
+			double dT = solvedTemperature[faceNode(face)] - faceTemperatureBefore[face];
 			heatIn += (heatFluxAtStart[face] + heatSlope[face] * dT) * dt;
 			faceJ[face] += faceSlopeJ[face] * dT;
 		}
@@ -374,14 +396,6 @@ public final class CookSimulation implements Layers {
 			}
 		}
 
-		// (3) local boiling
-		boiled[0] = 0;
-		boiled[1] = 0;
-		for (int i = 0; i < n; i++) {
-			if (temperature[i] > 373.0) {
-				boil(i, dt);
-			}
-		}
 		boilingFlux[0] = boiled[0] / dt;
 		boilingFlux[1] = boiled[1] / dt;
 
@@ -407,57 +421,106 @@ public final class CookSimulation implements Layers {
 		evaporated += massKgPerM2;
 	}
 
-	private void boil(int i, double dt) {
-		int face = i == 0 ? 0 : i == n - 1 ? 1 : -1;
-		int half = grid.position(i) < 0.5 * grid.thickness() ? 0 : 1;
-		double c = capacity[i];
-		if (face >= 0 && film[face] > 0) {
-			double tb = WaterVapour.boilingTemperatureKFast(1.0);
-			if (temperature[i] <= tb) {
-				return;
-			}
-			double latent = WaterVapour.latentHeat(tb);
-			double m = Math.min(film[face], c * (temperature[i] - tb) / latent);
-			film[face] -= m;
-			temperature[i] -= m * latent / c;
-			account(m, tb);
-			boiled[half] += m;
-			if (film[face] > 0) {
-				return;
+	/**
+	 * (3) Local boiling, solved together with conduction: a layer holding water cannot be hotter than its
+	 * boiling point. Layers the plain solve would push above it are pinned there and solved again; the
+	 * heat each pinned layer receives beyond what it stores boils its water off (standing water first).
+	 */
+	private void solveWithBoiling(double dt) {
+		conduction.solve(solution, null, null);
+		boolean any = false;
+		for (int i = 0; i < n; i++) {
+			pinned[i] = false;
+			ranDry[i] = false;
+			if (solution[i] > FREE_WATER_BOILING_K - 0.5 && hasWater(i)) {
+				double tb = boilingPointOf(i);
+				if (solution[i] > tb) {
+					pinned[i] = true;
+					pinnedTemperature[i] = tb;
+					any = true;
+				}
 			}
 		}
-		double water = (moisture[i] - MIN_MOISTURE) * dryMass[i];
-		if (water <= 0 || temperature[i] <= boilingPoint(moisture[i])) {
+		boiled[0] = 0;
+		boiled[1] = 0;
+		if (!any) {
+			System.arraycopy(solution, 0, temperature, 0, n);
+			System.arraycopy(solution, 0, solvedTemperature, 0, n);
 			return;
 		}
-		double latent = WaterVapour.latentHeat(temperature[i]);
-		// the boiled mass m at which the node sits exactly at the boiling point of the water it keeps:
-		// secant iterations from "boil as if aw stayed put", kept inside [0, water]
-		double m0 = 0;
-		double r0 = residual(i, m0, c, latent);
-		double m1 = Math.min(water, c * r0 / latent);
-		double r1 = residual(i, m1, c, latent);
-		for (int it = 0; it < 12 && Math.abs(r1) > 1e-4 && r1 != r0; it++) {
-			double m2 = m1 - r1 * (m1 - m0) / (r1 - r0);
-			m0 = m1;
-			r0 = r1;
-			m1 = Math.max(0, Math.min(water, m2));
-			r1 = residual(i, m1, c, latent);
-			if (m1 == water && r1 > 0) {
-				break; // even all of it leaves the node above its boiling point
+		for (int pass = 0; pass < 2 * n; pass++) {
+			conduction.solve(solution, pinned, pinnedTemperature);
+			boolean changed = false;
+			for (int i = 0; i < n; i++) {
+				if (!pinned[i]) {
+					continue;
+				}
+				double surplus = conduction.surplus(i, solution);
+				if (surplus < 0) {
+					pinned[i] = false; // it loses heat at the boiling point: it is not boiling after all
+					changed = true;
+				}
+				else if (surplus * dt > availableWater(i) * WaterVapour.latentHeat(pinnedTemperature[i])) {
+					// it boils dry within the step: all its water goes, the rest of the heat moves on
+					pinned[i] = false;
+					ranDry[i] = true;
+					conduction.addSource(i, -availableWater(i) * WaterVapour.latentHeat(pinnedTemperature[i]) / dt);
+					changed = true;
+				}
+			}
+			if (!changed) {
+				break;
 			}
 		}
-		double lo = m1;
-		double m = lo;
-		temperature[i] -= m * latent / c;
-		moisture[i] -= m / dryMass[i];
-		account(m, temperature[i]);
-		boiled[half] += m;
+		for (int i = 0; i < n; i++) {
+			solvedTemperature[i] = solution[i];
+			double energy = pinned[i] ? conduction.surplus(i, solution) * dt
+					: ranDry[i] ? availableWater(i) * WaterVapour.latentHeat(pinnedTemperature[i]) : 0;
+			temperature[i] = solution[i];
+			if (energy > 0) {
+				boilOff(i, energy, pinnedTemperature[i]);
+			}
+		}
 	}
 
-	private double residual(int i, double m, double c, double latent) {
-		double t = temperature[i] - m * latent / c;
-		return t - boilingPoint(moisture[i] - m / dryMass[i]);
+	/** Water a layer can still boil off, kg/m²: standing water on its face and its own above the residue. */
+	private double availableWater(int i) {
+		double w = Math.max(0, (moisture[i] - MIN_MOISTURE) * dryMass[i]);
+		if (i == 0) {
+			w += film[0];
+		}
+		else if (i == n - 1) {
+			w += film[1];
+		}
+		return w;
+	}
+
+	private boolean hasWater(int i) {
+		return moisture[i] > MIN_MOISTURE || (i == 0 && film[0] > 0) || (i == n - 1 && film[1] > 0);
+	}
+
+	private double boilingPointOf(int i) {
+		if ((i == 0 && film[0] > 0) || (i == n - 1 && film[1] > 0)) {
+			return FREE_WATER_BOILING_K;
+		}
+		return boilingPoint(moisture[i]);
+	}
+
+	/** Boils {@code energy} (J/m²) worth of water off layer i at {@code boilingK}, standing water first. */
+	private void boilOff(int i, double energy, double boilingK) {
+		int face = i == 0 ? 0 : i == n - 1 ? 1 : -1;
+		int half = grid.position(i) < 0.5 * grid.thickness() ? 0 : 1;
+		double latent = WaterVapour.latentHeat(boilingK);
+		double m = Math.min(energy / latent, availableWater(i));
+		double left = m;
+		if (face >= 0 && film[face] > 0) {
+			double fromFilm = Math.min(film[face], left);
+			film[face] -= fromFilm;
+			left -= fromFilm;
+		}
+		moisture[i] = Math.max(MIN_MOISTURE, moisture[i] - left / dryMass[i]);
+		account(m, boilingK);
+		boiled[half] += m;
 	}
 
 	private double boilingPoint(double x) {

@@ -24,7 +24,7 @@ public enum FoodCategory {
 			Parameter.assumption("ε0", "initial gas fraction of whole muscle", 0, "–", "whole muscle has no pores"),
 			Isotherms.MEAT,
 			new BrowningKinetics(new ArrheniusRate(
-					Parameter.commonPractice("k0", "pre-exponential factor, meat surface browning", 3.0e5, "1/s",
+					Parameter.commonPractice("k0", "pre-exponential factor, meat surface browning", 2.0e5, "1/s",
 							"calibrated so a patted-dry 25 mm steak in a 220 °C oiled pan is browned in 3–4 min per side (common practice)"),
 					Isotherms.ZANONI_EA),
 					Parameter.assumption("aw,ref", "water activity at which the meat rate is referenced", 0.4, "–",
@@ -96,7 +96,7 @@ public enum FoodCategory {
 			Parameter.assumption("ε0", "initial gas fraction of raw potato", 0.01, "–", "raw tuber is nearly pore-free (from memory)"),
 			Isotherms.POTATO,
 			new BrowningKinetics(new ArrheniusRate(
-					Parameter.commonPractice("k0", "pre-exponential factor, potato surface browning", 2.4e5, "1/s",
+					Parameter.commonPractice("k0", "pre-exponential factor, potato surface browning", 1.5e5, "1/s",
 							"calibrated so 10 mm chips in 175 °C oil are golden in 7–9 min (common practice)"),
 					Isotherms.ZANONI_EA),
 					Parameter.assumption("aw,ref", "water activity at which the potato rate is referenced", 0.4, "–", "dry crust"),
@@ -169,7 +169,7 @@ public enum FoodCategory {
 			Parameter.assumption("ε0", "initial gas fraction", 0.02, "–", "from memory"),
 			Isotherms.POTATO,
 			new BrowningKinetics(new ArrheniusRate(
-					Parameter.commonPractice("k0", "pre-exponential factor (potato kinetics borrowed)", 2.4e5, "1/s",
+					Parameter.commonPractice("k0", "pre-exponential factor (potato kinetics borrowed)", 1.5e5, "1/s",
 							"potato value; vegetables differ mainly by their sugar, which the reactant factor carries"),
 					Isotherms.ZANONI_EA),
 					Parameter.assumption("aw,ref", "water activity at which the rate is referenced", 0.4, "–", "dry crust"),
