@@ -10,15 +10,18 @@ import com.crustplan.engine.cook.CookSettings;
 
 /**
  * Grid and time-step convergence of the full CookSimulation (heat, moisture, local boiling, browning)
- * for the two everyday plans: time to target and core temperature at target for 13/25/49 nodes and
- * 2/1/0.5/0.25 s steps, against a reference refined 4× in both (97 nodes, 0.125 s), with an 8× run
- * (193 nodes, 0.0625 s) to show how far the reference itself is from converged.
+ * for the two everyday plans: time to target and core temperature at target for half, the default and
+ * twice the default nodes and 2/1/0.5/0.25 s steps, against a reference refined 4× in both (4·(n − 1) + 1
+ * nodes, a quarter of the default step), with an 8× run to show how far the reference itself is from
+ * converged; then the step alone, the grid alone and both together, with the observed order.
  * <p>
  * Run: {@code mvn -o -Pbench test-compile exec:exec -Dbench.main=com.crustplan.bench.ConvergenceTable}
  */
 public final class ConvergenceTable {
 
-	static final int[] NODES = { 13, 25, 49 };
+	/** Half, the default and twice the default resolution (every coarser node kept on the finer grids). */
+	static final int[] NODES = { (CookSettings.DEFAULT_NODES - 1) / 2 + 1, CookSettings.DEFAULT_NODES,
+			2 * (CookSettings.DEFAULT_NODES - 1) + 1 };
 
 	static final double[] STEPS_S = { 2, 1, 0.5, 0.25 };
 
@@ -93,21 +96,24 @@ public final class ConvergenceTable {
 				System.out.printf(Locale.ROOT, "| %d | %.4g | %.2f | %+.2f | %+.2f | %.2f | %+.2f |%n", r.nodes(), r.stepS(),
 						r.timeToTargetS(), r.errorS(), r.errorPct(), r.coreAtTargetC(), r.coreErrorK());
 			}
-			int[] n25 = new int[8];
+			int[] atDefault = new int[8];
 			double[] halving = new double[8];
 			for (int k = 0; k < 8; k++) {
-				n25[k] = CookSettings.DEFAULT_NODES;
+				atDefault[k] = CookSettings.DEFAULT_NODES;
 				halving[k] = 1.0 / (1 << k);
 			}
-			sequence(plan, "the step alone, 25 nodes", n25, halving);
+			sequence(plan, "the step alone, default nodes", atDefault, halving);
 			int[] diagonalNodes = new int[6];
 			double[] diagonalSteps = new double[6];
 			for (int k = 0; k < 6; k++) {
-				diagonalNodes[k] = 12 * (1 << k) + 1;
+				diagonalNodes[k] = (CookSettings.DEFAULT_NODES - 1) / 2 * (1 << k) + 1;
 				diagonalSteps[k] = 1.0 / (1 << k);
 			}
 			sequence(plan, "grid and step refined together", diagonalNodes, diagonalSteps);
-			int[] gridNodes = { 7, 13, 25, 49, 97, 193 };
+			int[] gridNodes = new int[5];
+			for (int k = 0; k < gridNodes.length; k++) {
+				gridNodes[k] = (CookSettings.DEFAULT_NODES - 1) / 2 * (1 << k) + 1;
+			}
 			double[] fine = new double[gridNodes.length];
 			java.util.Arrays.fill(fine, 1.0 / 32);
 			sequence(plan, "the grid alone, step 1/32 s", gridNodes, fine);

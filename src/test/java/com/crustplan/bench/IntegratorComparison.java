@@ -4,11 +4,13 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
+import com.crustplan.engine.cook.CookSettings;
+
 /**
  * Prints the accuracy table of the side-by-side comparison: backward Euler (the engine's
  * HeatConduction step) at several steps and Dormand–Prince 5(4) at several tolerances, on the same
- * 25-node grid and the same equations ({@link OvenSlab}), each against a reference on the 4× refined grid
- * (97 nodes, integrated to 1e-7 K tolerance, so its time error is far below anything measured). The
+ * default grid (CookSettings.DEFAULT_NODES) and the same equations ({@link OvenSlab}), each against a reference on the 4× refined grid
+ * (4·(n − 1) + 1 nodes, integrated to 1e-7 K tolerance, so its time error is far below anything measured). The
  * timings printed here are a rough median of repeated runs; the figures for the README come from
  * {@link IntegratorBenchmark}.
  * <p>
@@ -22,7 +24,8 @@ public final class IntegratorComparison {
 	/** Profiles are compared every 20 s: every step tried below divides it. */
 	static final double SAMPLE_S = 20;
 
-	static final int NODES = 25;
+	/** The engine's default grid. */
+	static final int NODES = CookSettings.DEFAULT_NODES;
 
 	static final int REFINEMENT = 4;
 
@@ -103,7 +106,7 @@ public final class IntegratorComparison {
 		double[][] same = sameGridConverged(c);
 		OvenSlab slab = c.coarse();
 		List<Row> rows = new ArrayList<>();
-		rows.add(new Row("grid only (25 nodes, time-converged)", REFERENCE_TOLERANCE_K, maxError(same, ref, REFINEMENT), 0,
+		rows.add(new Row("grid only (time-converged)", REFERENCE_TOLERANCE_K, maxError(same, ref, REFINEMENT), 0,
 				0, Double.NaN));
 		for (double dt : STEPS_S) {
 			double[][] s = backwardEuler(c, slab, dt);
@@ -120,7 +123,7 @@ public final class IntegratorComparison {
 		}
 		// the literal 4× refined run of the engine's own scheme (4× the nodes, a quarter of the step)
 		double[][] be4 = backwardEuler(c, c.fine(), 0.125);
-		rows.add(new Row("check: backward Euler, 97 nodes, dt s", 0.125, maxError(be4, ref, 1), 0,
+		rows.add(new Row("check: backward Euler, 4x nodes, dt s", 0.125, maxError(be4, ref, 1), 0,
 				(int) Math.round(c.endS() / 0.125), Double.NaN));
 		return rows;
 	}

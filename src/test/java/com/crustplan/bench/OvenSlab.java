@@ -28,6 +28,8 @@ final class OvenSlab {
 	/** Stefan–Boltzmann constant, W/(m²·K⁴) (CODATA 2018, exact). */
 	static final double SIGMA = 5.670374419e-8;
 
+	private static final double LOG_AIR_CONDUCTIVITY = Math.log(ThermalProperties.AIR_CONDUCTIVITY);
+
 	final String name;
 
 	final Grid grid;
@@ -113,7 +115,7 @@ final class OvenSlab {
 			double porosity = Math.max(0, Math.min(0.95, 1 - nodeMass[i] * props[2] / volume[i]));
 			capacity[i] = nodeMass[i] * props[0];
 			conductivity[i] = porosity > 0
-					? Math.pow(props[1], 1 - porosity) * Math.pow(ThermalProperties.AIR_CONDUCTIVITY, porosity) : props[1];
+					? Math.exp((1 - porosity) * Math.log(props[1]) + porosity * LOG_AIR_CONDUCTIVITY) : props[1];
 		}
 	}
 

@@ -21,7 +21,7 @@ import com.crustplan.engine.cook.CookResult;
 import com.crustplan.engine.cook.CookSettings;
 
 /**
- * One plan at the default grid (25 nodes, 0.5 s), with the series a plan page charts, and the
+ * One plan at the default settings (CookSettings.defaults()), with the series a plan page charts, and the
  * 30-temperature fryer map. Goals (issue 6): a plan ≤ 2 ms median, the map ≤ 60 ms. Sampling mode gives
  * the median (p0.50) as well as the mean. Short runs: the machine's two cores are shared.
  */
@@ -58,6 +58,20 @@ public class PlanBenchmark {
 	@Benchmark
 	public CookResult chipsFryer175Golden() {
 		return Plans.chips(DEFAULTS);
+	}
+
+	/** Twice the nodes at twice the step: about the same work, closer to converged (see the convergence table). */
+	private static final CookSettings DOUBLE_GRID_DOUBLE_STEP = DEFAULTS.withNodes(2 * (CookSettings.DEFAULT_NODES - 1) + 1)
+		.withTimeStepS(2 * CookSettings.DEFAULT_TIME_STEP_S);
+
+	@Benchmark
+	public CookResult steakPan220BrownedDoubleGridDoubleStep() {
+		return Plans.steak(DOUBLE_GRID_DOUBLE_STEP);
+	}
+
+	@Benchmark
+	public CookResult chipsFryer175GoldenDoubleGridDoubleStep() {
+		return Plans.chips(DOUBLE_GRID_DOUBLE_STEP);
 	}
 
 	/** Named for what it is until the acrylamide RiskMap lands: 30 summary runs, 150–195 °C. */

@@ -26,9 +26,9 @@ class SlabIntegratorAccuracyTest {
 
 	@Test
 	void theEngineSchemeOnTheRefinedGridAgreesWithTheIndependentReference() {
-		// two different integrators (backward Euler at 0.125 s and Dormand–Prince at 1e-7 K) on the 97-node
+		// two different integrators (backward Euler at 0.125 s and Dormand–Prince at 1e-7 K) on the refined
 		// grid: they may differ only by backward Euler's own time error, ≈ 0.2 K·s⁻¹ × 0.125 s on this case
-		// (first-order constant from the 25-node table), so 0.05 K
+		// (first-order constant from the default-grid table), so 0.05 K
 		IntegratorComparison.Case c = IntegratorComparison.STEAK;
 		double[][] reference = IntegratorComparison.reference(c);
 		double[][] engine = IntegratorComparison.backwardEuler(c, c.fine(), 0.125);
@@ -38,7 +38,7 @@ class SlabIntegratorAccuracyTest {
 	@Test
 	void bothSolversReachHalfAKelvinOnTheDefaultGrid() {
 		// the accuracy level for the speed comparison: each solver has a setting within 0.5 K of the
-		// 4× refined reference on the 25-node grid, for a thick (steak) and a thin (chips) slab
+		// 4× refined reference on the default grid, for a thick (steak) and a thin (chips) slab
 		for (IntegratorComparison.Case c : List.of(IntegratorComparison.STEAK, IntegratorComparison.CHIPS)) {
 			List<IntegratorComparison.Row> rows = IntegratorComparison.table(c, false);
 			assertThat(IntegratorComparison.loosestWithin(rows, "backward", 0.5)).as(c.key()).isNotNull();
