@@ -21,17 +21,13 @@ public final class Tridiagonal {
 	 */
 	public void solve(double[] lower, double[] diag, double[] upper, double[] rhs, double[] x) {
 		int n = diag.length;
-		// one division per row: multiply by the pivot's reciprocal
-		double r = 1 / diag[0];
-		cPrime[0] = upper[0] * r;
-		dPrime[0] = rhs[0] * r;
-		for (int i = 1; i < n - 1; i++) {
-			r = 1 / (diag[i] - lower[i] * cPrime[i - 1]);
-			cPrime[i] = upper[i] * r;
-			dPrime[i] = (rhs[i] - lower[i] * dPrime[i - 1]) * r;
+		cPrime[0] = upper[0] / diag[0];
+		dPrime[0] = rhs[0] / diag[0];
+		for (int i = 1; i < n; i++) {
+			double m = diag[i] - lower[i] * cPrime[i - 1];
+			cPrime[i] = i < n - 1 ? upper[i] / m : 0;
+			dPrime[i] = (rhs[i] - lower[i] * dPrime[i - 1]) / m;
 		}
-		cPrime[n - 1] = 0;
-		dPrime[n - 1] = (rhs[n - 1] - lower[n - 1] * dPrime[n - 2]) / (diag[n - 1] - lower[n - 1] * cPrime[n - 2]);
 		x[n - 1] = dPrime[n - 1];
 		for (int i = n - 2; i >= 0; i--) {
 			x[i] = dPrime[i] - cPrime[i] * x[i + 1];
