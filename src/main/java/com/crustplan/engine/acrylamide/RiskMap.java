@@ -35,8 +35,11 @@ public record RiskMap(FoodCategory category, Product product, String mode, Strin
 		cautions = List.copyOf(cautions);
 	}
 
-	/** One set temperature: its cells over time and the time to the target (NaN if not reached). */
-	public record Row(double temperatureC, double targetTimeS, List<Cell> cells) {
+	/**
+	 * One set temperature: its cells over time, the time to the target and the portion's acrylamide there
+	 * (both NaN if the target is not reached within the map).
+	 */
+	public record Row(double temperatureC, double targetTimeS, double targetPortionUgPerKg, List<Cell> cells) {
 
 		public Row {
 			cells = List.copyOf(cells);
@@ -99,7 +102,8 @@ public record RiskMap(FoodCategory category, Product product, String mode, Strin
 						k < 0 ? "Unbrowned" : stages.get(k).label(), s.browningExtent(), s.crustAcrylamideUgPerKg(), portion,
 						benchmark == null ? AcrylamideZone.NO_BENCHMARK : benchmark.zoneOf(portion)));
 			}
-			rows.add(new Row(t, r.reached() ? r.timeToTargetS() : Double.NaN, cells));
+			rows.add(new Row(t, r.reached() ? r.timeToTargetS() : Double.NaN,
+					r.reached() ? r.portionAcrylamideAtTargetUgPerKg() : Double.NaN, cells));
 		}
 		return new RiskMap(category, product, template.mode(), target.describe(category), benchmark, timeStepS, rows,
 				AcrylamideCautions.ALL);
