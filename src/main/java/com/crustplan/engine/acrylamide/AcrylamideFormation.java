@@ -2,7 +2,6 @@ package com.crustplan.engine.acrylamide;
 
 import java.util.Arrays;
 
-import com.crustplan.engine.browning.ArrheniusRate;
 import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.layers.Grid;
@@ -39,13 +38,7 @@ public final class AcrylamideFormation {
 
 	private final double phFactor;
 
-	private final double formationOverR;
-
-	private final double eliminationOverR;
-
-	private final double invFormationRef;
-
-	private final double invEliminationRef;
+	private final RateTable rates;
 
 	private final double skipBelowK;
 
@@ -79,10 +72,7 @@ public final class AcrylamideFormation {
 			crustWeight[i] = Math.max(0, Math.min(1, (crustDepthM - left) / (right - left)));
 		}
 		phFactor = phFactor(surface.ph());
-		formationOverR = kinetics.formationActivationEnergy() / ArrheniusRate.GAS_CONSTANT;
-		eliminationOverR = kinetics.eliminationActivationEnergy() / ArrheniusRate.GAS_CONSTANT;
-		invFormationRef = 1 / AcrylamideModel.FORMATION_REFERENCE_K;
-		invEliminationRef = 1 / AcrylamideModel.ELIMINATION_REFERENCE_K;
+		rates = RateTable.of(kinetics);
 		skipBelowK = AcrylamideModel.SKIP_BELOW.value();
 		gateDry = AcrylamideModel.GATE_DRY.value();
 		gateWet = AcrylamideModel.GATE_WET.value();
@@ -134,11 +124,10 @@ public final class AcrylamideFormation {
 		for (int i = 0; i < n; i++) {
 			double t = layers.temperatureK(i);
 			if (t >= skipBelowK) {
-				double invT = 1 / t;
 				double g = gate(layers.waterActivity(i), gateDry, gateWet);
 				if (g > 0) {
 					// condensation, implicit in the limiting precursor so neither goes negative
-					double kc = kfRef * Math.exp(-formationOverR * (invT - invFormationRef)) * g;
+					double kc = kfRef * rates.formation(t) * g;
 					double a = asparagine[i];
 					double s = sugar[i];
 					double limiting = Math.min(a, s);
@@ -148,8 +137,10 @@ public final class AcrylamideFormation {
 					sugar[i] = s - used;
 					acrylamide[i] += yield * used;
 				}
-				double ke = keRef * Math.exp(-eliminationOverR * (invT - invEliminationRef));
-				acrylamide[i] /= 1 + ke * dt;
+				if (acrylamide[i] > 0) {
+					double ke = keRef * rates.elimination(t);
+					acrylamide[i] /= 1 + ke * dt;
+				}
 			}
 			double dm = layers.dryMass(i);
 			double w = dm * (1 + layers.moisture(i));

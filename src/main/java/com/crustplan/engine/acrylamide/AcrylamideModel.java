@@ -34,10 +34,10 @@ public final class AcrylamideModel {
 	public static final double ELIMINATION_REFERENCE_K = 453.15;
 
 	public static final Parameter FORMATION_RATE = Parameter.derived("k_f,ref",
-			"acrylamide formation rate constant at 170 °C, per mmol/kg d.m. of each precursor", 4.855e-7, "kg d.m./(mmol·s)",
+			"acrylamide formation rate constant at 170 °C, per mmol/kg d.m. of each precursor", 4.832e-7, "kg d.m./(mmol·s)",
 			"fitted to Pedreschi, Kaack & Granby 2006 (150 and 190 °C), blanched strips fried to 40 % moisture");
 
-	public static final Parameter FORMATION_EA = Parameter.derived("Ea,f", "activation energy of acrylamide formation", 1.3184e5,
+	public static final Parameter FORMATION_EA = Parameter.derived("Ea,f", "activation energy of acrylamide formation", 1.3151e5,
 			"J/mol", "fitted to Pedreschi, Kaack & Granby 2006 (150 and 190 °C)");
 
 	public static final Parameter ELIMINATION_RATE = Parameter.fromMemory("k_e,ref", "acrylamide elimination rate constant at 180 °C",
@@ -65,8 +65,8 @@ public final class AcrylamideModel {
 	public static final Parameter GATE_WET = Parameter.assumption("aw,wet", "water activity above which a layer forms none", 0.9,
 			"–", "a layer still holding nearly free water sits at its boiling point, ≈ 100–103 °C (assumption)");
 
-	public static final Parameter SKIP_BELOW = Parameter.assumption("T_min", "layers cooler than this are not integrated", 373.15,
-			"K", "at 100 °C formation is over 1000 times slower than at 170 °C with the fitted Ea (derived); saves time in the wet interior");
+	public static final Parameter SKIP_BELOW = Parameter.assumption("T_min", "layers cooler than this are not integrated", 378.15,
+			"K", "at 105 °C formation is about 500 times slower than at 170 °C with the fitted Ea (derived); skipping the wet interior, which boils at 100–103 °C, saves most of the work");
 
 	public static final Parameter CRUST_DEPTH = Parameter.commonPractice("d_crust", "depth of the crust layer reported", 1.0e-3,
 			"m", "the outer 1 mm of the face, about the thickness of a French fry's crust (common practice); half the thickness for thinner pieces");

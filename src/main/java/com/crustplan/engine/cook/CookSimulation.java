@@ -5,7 +5,6 @@ import java.util.List;
 import java.util.function.Consumer;
 
 import com.crustplan.engine.acrylamide.AcrylamideFormation;
-
 import com.crustplan.engine.browning.BrowningKinetics;
 import com.crustplan.engine.browning.Caramelisation;
 import com.crustplan.engine.browning.WaterActivityFactor;
@@ -414,6 +413,7 @@ public final class CookSimulation implements Layers {
 
 		// (4) moisture diffusion, face evaporation implicit in moisture
 		moistureStep(dt);
+		// (4b) acrylamide in every layer, from this step's temperature and water
 		acrylamide.step(this, dt);
 
 		// (5) browning at both faces

@@ -157,6 +157,20 @@ class AcrylamideFormationTest {
 	}
 
 	@Test
+	void rateTableMatchesTheArrheniusLaw() {
+		// the tabulated factors against exp(−Ea/R·(1/T − 1/T_ref)) computed directly: linear interpolation over
+		// 0.05 K errs by (Ea/RT²·0.05 K)²/8 < 1e-5 relative at 105 °C
+		RateTable table = RateTable.DEFAULT;
+		for (double t = 378.2; t < 720; t += 0.737) {
+			assertEquals(table.formationDirect(t), table.formation(t), 1e-5 * table.formationDirect(t), "T " + t);
+			assertEquals(table.eliminationDirect(t), table.elimination(t), 1e-5 * table.eliminationDirect(t), "T " + t);
+		}
+		double e = AcrylamideKinetics.DEFAULT.formationActivationEnergy();
+		double ratio = Math.exp(-e / 8.314462618 * (1 / 463.15 - 1 / 443.15));
+		assertEquals(ratio, table.formation(463.15), 1e-5 * ratio, "190 °C relative to 170 °C");
+	}
+
+	@Test
 	void sectionListsEquationsParametersAndLimits() {
 		var section = AcrylamideFormation.section();
 		assertTrue(section.equations().size() >= 4);
