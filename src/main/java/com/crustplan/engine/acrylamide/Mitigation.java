@@ -5,7 +5,8 @@ import com.crustplan.engine.model.Evidence;
 /**
  * One change a cook can make, computed by running the model again: portion acrylamide (µg/kg as eaten)
  * and cooking time before and after. {@code applicable} false with a reason where the change does not
- * apply or its run does not reach the target.
+ * apply or its run does not reach the target; an applicable change may carry a note in {@code reason}
+ * (for example when the model finds no gain).
  * <p>
  * Changes of cooking ({@link Basis#SAME_COLOUR}) compare both cooks at the target colour. Changes of the
  * raw material ({@link Basis#SAME_TIME}: soaking, blanching, enzyme, acid, storage) compare both cooks

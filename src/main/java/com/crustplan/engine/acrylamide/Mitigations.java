@@ -143,8 +143,15 @@ public final class Mitigations {
 					Mitigation.Basis.SAME_COLOUR, "The setting is already at the lowest temperature this heat mode allows.");
 		}
 		CookResult r = CookSimulation.run(b.surface(), cooler, b.target(), b.settings());
-		return sameColour(b, "LOWER_TEMPERATURE", title, change, step.source(), step.evidence(), r,
+		Mitigation m = sameColour(b, "LOWER_TEMPERATURE", title, change, step.source(), step.evidence(), r,
 				String.format("At %.0f °C the target colour is not reached within the time allowed.", lower));
+		if (m.applicable() && m.effectUgPerKg() >= 0) {
+			// an honest null result: the slower formation is offset by a longer cook that dries more of the piece
+			return new Mitigation(m.code(), m.title(), m.change(), m.source(), m.evidence(), true,
+					"No gain at the same colour for this piece: the longer cook dries more of it, which offsets the slower formation. Frying below 175 °C is still the rule for potato products.",
+					m.basis(), m.beforeUgPerKg(), m.afterUgPerKg(), m.beforeMinutes(), m.afterMinutes(), m.afterAtSameColourUgPerKg());
+		}
+		return m;
 	}
 
 	private static Mitigation lighterTarget(Baseline b) {

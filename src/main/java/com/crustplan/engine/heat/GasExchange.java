@@ -25,6 +25,10 @@ public final class GasExchange implements FaceExchange {
 
 	private final double gasVapourDensity;
 
+	private final double gasSpecificHeat;
+
+	private final double lewisFactor = Math.pow(LEWIS_NUMBER.value(), 2.0 / 3.0);
+
 	private final String description;
 
 	public GasExchange(Atmosphere gas, double convectionWPerM2K, double radiantK, String description) {
@@ -33,6 +37,7 @@ public final class GasExchange implements FaceExchange {
 		this.radiantK = radiantK;
 		this.emissivity = Radiation.FOOD_EMISSIVITY.value();
 		this.gasVapourDensity = gas.vapourDensity();
+		this.gasSpecificHeat = gas.specificHeat();
 		this.description = description;
 	}
 
@@ -54,7 +59,7 @@ public final class GasExchange implements FaceExchange {
 
 	/** h_m = h / (ρ·cp·Le^(2/3)), m/s. */
 	public double massTransferCoefficient(double filmK) {
-		return convection / (gas.density(filmK) * gas.specificHeat() * Math.pow(LEWIS_NUMBER.value(), 2.0 / 3.0));
+		return convection / (gas.density(filmK) * gasSpecificHeat * lewisFactor);
 	}
 
 	public Atmosphere gas() {

@@ -31,13 +31,16 @@ class AcrylamideMitigationsTest {
 	}
 
 	@Test
-	void everyMitigationReducesAcrylamide() {
+	void lighterColourAndRawMaterialMeasuresReduceAcrylamide() {
+		// Annex II measures: lighter colour, soaking, blanching, asparaginase, acid, storage above 6 °C
 		assertEquals(List.of("LOWER_TEMPERATURE", "LIGHTER_TARGET", "SOAK", "BLANCH", "ASPARAGINASE", "ACID_DIP", "WARM_STORAGE")
 			.stream().sorted().toList(), byCode.keySet().stream().sorted().toList());
 		for (Mitigation m : byCode.values()) {
 			assertTrue(m.applicable(), m.code() + ": " + m.reason());
-			assertTrue(m.effectUgPerKg() < 0, () -> m.code() + ": " + m.beforeUgPerKg() + " → " + m.afterUgPerKg());
 			assertFalse(m.source().isBlank(), m.code());
+			if (!m.code().equals("LOWER_TEMPERATURE")) {
+				assertTrue(m.effectUgPerKg() < 0, () -> m.code() + ": " + m.beforeUgPerKg() + " → " + m.afterUgPerKg());
+			}
 		}
 	}
 
@@ -47,7 +50,18 @@ class AcrylamideMitigationsTest {
 		assertEquals(Mitigation.Basis.SAME_COLOUR, m.basis());
 		assertTrue(m.change().contains("170 °C"), "180 °C oil steps down to 170 °C, below the 175 °C measure");
 		assertTrue(m.effectMinutes() > 0);
+		assertTrue(m.effectUgPerKg() < 0 || m.reason().startsWith("No gain"), "a null result says so");
 		assertTrue(byCode.get("LIGHTER_TARGET").effectMinutes() < 0, "a lighter colour is reached sooner");
+	}
+
+	@Test
+	void lowerTemperatureHelpsThickChipsFriedHot() {
+		// Annex II: fry below 175 °C. For thick-cut chips (14 mm) fried golden at 190 °C the model finds less
+		// acrylamide at 170 °C for the same colour (for thinner fries it finds about none: see the note)
+		Mitigation m = Mitigations.compute(Surface.defaults(FoodCategory.POTATO).withThicknessMm(14), Product.FRENCH_FRIES,
+				new HeatSetup.DeepFryer(190), Target.stage("golden"), CookSettings.defaults())
+			.stream().filter(x -> x.code().equals("LOWER_TEMPERATURE")).findFirst().orElseThrow();
+		assertTrue(m.effectUgPerKg() < 0, () -> m.beforeUgPerKg() + " → " + m.afterUgPerKg());
 	}
 
 	@Test
