@@ -30,6 +30,11 @@ public record AcrylamideEstimate(double crustUgPerKg, double portionUgPerKg, boo
 		return Optional.ofNullable(benchmarkOrNull);
 	}
 
+	/** The benchmark in µg/kg, or null where the regulation sets none. */
+	public Double benchmarkUgPerKgOrNull() {
+		return benchmarkOrNull == null ? null : benchmarkOrNull.microgramsPerKg();
+	}
+
 	/** The estimate for a finished run of the engine. */
 	public static AcrylamideEstimate of(Surface surface, Product product, HeatSetup setup, Target target, CookResult result) {
 		if (product.category() != surface.category()) {

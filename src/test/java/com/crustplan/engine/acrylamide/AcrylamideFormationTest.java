@@ -177,6 +177,14 @@ class AcrylamideFormationTest {
 		assertTrue(section.equations().stream().anyMatch(e -> e.parameters().contains(AcrylamideModel.FORMATION_RATE)));
 		assertTrue(section.limits().size() >= 3);
 		assertTrue(AcrylamideModel.FORMATION_RATE.source().contains("Pedreschi, Kaack & Granby 2006 (150 and 190 °C)"));
+		// every constant of the model, the warnings and the mitigations is listed on the model page, with a source
+		var listed = section.equations().stream().flatMap(e -> e.parameters().stream()).toList();
+		for (var p : AcrylamideModel.parameters()) {
+			assertTrue(listed.contains(p), p.symbol());
+		}
+		assertTrue(listed.containsAll(Mitigations.parameters()));
+		assertTrue(listed.contains(AcrylamideWarnings.MAX_FRYING_C));
+		assertTrue(listed.stream().noneMatch(p -> p.source().isBlank()));
 	}
 
 }
