@@ -116,7 +116,9 @@ public final class AcrylamideModel {
 						"Oil taken up in frying is not counted: it would dilute the figure by roughly its share of the mass.",
 						"Sugars used up by other amino acids and by caramelisation are not subtracted, so sugar depletion is underestimated in dark crusts.",
 						"Ammonium raising agents (which raise acrylamide strongly) and bicarbonate's reported reduction in gingerbread (Amrein et al. 2004) are not modelled; only the pH effect is.",
-						"A strip or crisp is treated as a slab of the given thickness; the fit is consistent with that convention (8 mm strips as an 8 mm slab)."));
+						"A strip or crisp is treated as a slab of the given thickness; the fit is consistent with that convention (8 mm strips as an 8 mm slab).",
+						"A real strip browns on four long faces, a slab on two: the fitted formation rate absorbs that difference, so true slabs (crisps, biscuits, bread crust) are likely over-estimated, thin crisps by a factor of several.",
+						"Raw-material changes (soaking, blanching, enzyme, acid) are compared after the same cooking time, as the published reductions were measured; cooked on to the same colour, sugar removal gains much less in the model because browning slows too."));
 	}
 
 }

@@ -14,6 +14,8 @@ import com.crustplan.engine.cook.Target;
  * basis), acrylamide 135 / 327 / 564 µg/kg at 150 / 170 / 190 °C. Fitted on 150 and 190 °C, 170 °C
  * held out. Run {@link #main} after any change to the heat and moisture model and copy the printed
  * constants into {@link AcrylamideModel}; the tests check that the recorded constants still fit.
+ * From the project directory: {@code mvn -o -q test-compile} then
+ * {@code java -cp target/classes:target/test-classes com.crustplan.engine.acrylamide.PedreschiFit}.
  * <p>
  * The strip is run as an 8 mm slab, the convention a cook uses when entering chips by their thickness.
  * Blanched composition: the category's frying potato (0.40 % reducing sugar, 3000 mg/kg asparagine) with
