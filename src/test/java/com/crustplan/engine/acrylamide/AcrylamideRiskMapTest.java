@@ -84,6 +84,17 @@ class AcrylamideRiskMapTest {
 	}
 
 	@Test
+	void rowsChangeOnlyTheTemperatureOfTheHeatMode() {
+		assertEquals(new HeatSetup.Oven(180, true, 20), HeatSetups.withTemperature(new HeatSetup.Oven(220, true, 20), 180));
+		assertEquals(new HeatSetup.PanContact(160, false, 45), HeatSetups.withTemperature(new HeatSetup.PanContact(200, false, 45), 160));
+		assertEquals(new HeatSetup.RadiantGrill(600, 0), HeatSetups.withTemperature(new HeatSetup.RadiantGrill(800, 0), 600));
+		assertEquals(new HeatSetup.DeepFryer(165), HeatSetups.withTemperature(new HeatSetup.DeepFryer(180), 165));
+		// a row outside the mode's range is refused with the field named
+		assertEquals("temperatureC", assertThrows(InvalidInputException.class,
+				() -> HeatSetups.withTemperature(new HeatSetup.DeepFryer(180), 230)).field());
+	}
+
+	@Test
 	void refusesMapsTooLargeOrForAnotherCategory() {
 		InvalidInputException e = assertThrows(InvalidInputException.class, () -> RiskMap.compute(CHIPS, Product.FRENCH_FRIES,
 				new HeatSetup.DeepFryer(175), GOLDEN, new double[] { 170 }, 1, 3600, CookSettings.defaults()));
