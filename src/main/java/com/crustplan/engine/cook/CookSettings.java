@@ -7,7 +7,7 @@ package com.crustplan.engine.cook;
 public record CookSettings(int nodes, double timeStepS, double outputIntervalS, double horizonS,
 		double runPastTargetFraction, boolean recordSeries) {
 
-	public static final int DEFAULT_NODES = 25;
+	public static final int DEFAULT_NODES = 31;
 
 	public static final double DEFAULT_TIME_STEP_S = 0.5;
 

@@ -46,6 +46,14 @@ public final class CookSimulation implements Layers {
 	/** The reference water activity for caramelisation: a dry crust, like the Maillard fits. */
 	private static final double CARAMEL_REFERENCE_AW = 0.4;
 
+	/** Faces are re-linearised until their temperature estimate moves less than this in a pass. */
+	private static final double FACE_LINEARISATION_K = 1.0;
+
+	private static final int MAX_FACE_PASSES = 4;
+
+	/** A face this wet gathers condensing steam as standing water rather than sorbing it. */
+	private static final double WET_FACE_AW = 0.99;
+
 	private static final double FREE_WATER_BOILING_K = WaterVapour.boilingTemperatureKFast(1.0);
 
 	private static final double LOG_GAS_CONDUCTIVITY = Math.log(ThermalProperties.AIR_CONDUCTIVITY);
@@ -130,7 +138,7 @@ public final class CookSimulation implements Layers {
 
 	private final double[] faceSource = new double[2];
 
-	private final double[] faceTemperatureBefore = new double[2];
+	private final double[] linearisedAt = new double[2];
 
 	private final HeatConduction conduction;
 
@@ -382,37 +390,50 @@ public final class CookSimulation implements Layers {
 			int i = faceNode(face);
 			capacity[i] += film[face] * FoodComponent.WATER.specificHeat(temperature[i] - 273.15);
 		}
-		// (2) heat conduction, faces linearised: q = q* + q'(T − T*) − h_fg(J* + J'(T − T*)) = b − a·T
+		// (2) heat conduction with local boiling; each face's exchange linearised about an estimate of its new
+		// temperature, q ≈ q* + q'(T − T*) − h_fg(J* + J'(T − T*)) = b − a·T, re-linearised while the estimate moves
 		for (int face = 0; face < 2; face++) {
-			int i = faceNode(face);
-			FaceExchange exchange = schedule.at(face, now);
-			double aw = film[face] > 0 ? 1 : isotherm.waterActivity(moisture[i]);
-			exchange.evaluate(temperature[i], aw, boilingFlux[face], flux);
-			double latent = WaterVapour.latentHeat(temperature[i]);
-			faceSlope[face] = -(flux.heatFluxSlope - latent * flux.evaporationSlopeT);
-			faceSource[face] = flux.heatFlux - latent * flux.evaporation + faceSlope[face] * temperature[i];
-			// remember the linearisation for the ledger and the moisture step
-			faceJ[face] = flux.evaporation;
-			faceSlopeJ[face] = flux.evaporationSlopeT;
-			heatFluxAtStart[face] = flux.heatFlux;
-			heatSlope[face] = flux.heatFluxSlope;
-			faceTemperatureBefore[face] = temperature[i];
+			linearisedAt[face] = temperature[faceNode(face)];
 		}
-		conduction.assemble(temperature, capacity, conductivity, dt, faceSlope[0], faceSource[0], faceSlope[1],
-				faceSource[1]);
-		solveWithBoiling(dt);
+		for (int pass = 0; pass < MAX_FACE_PASSES; pass++) {
+			for (int face = 0; face < 2; face++) {
+				int i = faceNode(face);
+				FaceExchange exchange = schedule.at(face, now);
+				double aw = film[face] > 0 ? 1 : isotherm.waterActivity(moisture[i]);
+				double t = linearisedAt[face];
+				exchange.evaluate(t, aw, boilingFlux[face], flux);
+				double latent = WaterVapour.latentHeat(t);
+				faceSlope[face] = -(flux.heatFluxSlope - latent * flux.evaporationSlopeT);
+				faceSource[face] = flux.heatFlux - latent * flux.evaporation + faceSlope[face] * t;
+				faceJ[face] = flux.evaporation;
+				faceSlopeJ[face] = flux.evaporationSlopeT;
+				heatFluxAtStart[face] = flux.heatFlux;
+				heatSlope[face] = flux.heatFluxSlope;
+			}
+			conduction.assemble(temperature, capacity, conductivity, dt, faceSlope[0], faceSource[0], faceSlope[1],
+					faceSource[1]);
+			solveWithBoiling(dt);
+			double moved = Math.max(Math.abs(solution[0] - linearisedAt[0]), Math.abs(solution[n - 1] - linearisedAt[1]));
+			if (moved < FACE_LINEARISATION_K) {
+				break;
+			}
+			linearisedAt[0] = solution[0];
+			linearisedAt[1] = solution[n - 1];
+		}
+		applyBoiling(dt);
 		for (int face = 0; face < 2; face++) {
 			// the face fluxes as the solve had them (a layer that ran dry is warmed only afterwards)
-			double dT = solvedTemperature[faceNode(face)] - faceTemperatureBefore[face];
+			double dT = solvedTemperature[faceNode(face)] - linearisedAt[face];
 			heatIn += (heatFluxAtStart[face] + heatSlope[face] * dT) * dt;
 			faceJ[face] += faceSlopeJ[face] * dT;
 		}
 
-		// face evaporation or condensation through the standing water
+		// evaporation from standing water, or steam condensing on a wet face into standing water; vapour a dry
+		// face takes up from the air is sorbed into the layer (moisture step)
 		for (int face = 0; face < 2; face++) {
 			int i = faceNode(face);
 			double m = faceJ[face] * dt;
-			if (film[face] > 0 || m < 0) {
+			if (film[face] > 0 || (m < 0 && isotherm.waterActivity(moisture[i]) >= WET_FACE_AW)) {
 				double fromFilm = Math.min(film[face], m);
 				film[face] -= fromFilm;
 				account(fromFilm, temperature[i]);
@@ -473,11 +494,7 @@ public final class CookSimulation implements Layers {
 				}
 			}
 		}
-		boiled[0] = 0;
-		boiled[1] = 0;
 		if (!any) {
-			System.arraycopy(solution, 0, temperature, 0, n);
-			System.arraycopy(solution, 0, solvedTemperature, 0, n);
 			return;
 		}
 		for (int pass = 0; pass < 2 * n; pass++) {
@@ -504,6 +521,12 @@ public final class CookSimulation implements Layers {
 				break;
 			}
 		}
+	}
+
+	/** Takes the solved temperatures and boils off what the pinned and dried-out layers shed. */
+	private void applyBoiling(double dt) {
+		boiled[0] = 0;
+		boiled[1] = 0;
 		for (int i = 0; i < n; i++) {
 			solvedTemperature[i] = solution[i];
 			double energy = pinned[i] ? conduction.surplus(i, solution) * dt

@@ -97,7 +97,7 @@ public enum FoodCategory {
 			Isotherms.POTATO,
 			new BrowningKinetics(new ArrheniusRate(
 					Parameter.commonPractice("k0", "pre-exponential factor, potato surface browning", 1.5e5, "1/s",
-							"calibrated so 10 mm chips in 175 °C oil are golden in 7–9 min (common practice)"),
+							"calibrated so 10 mm chips in 175 °C oil are golden in 6–8 min (common practice)"),
 					Isotherms.ZANONI_EA),
 					Parameter.assumption("aw,ref", "water activity at which the potato rate is referenced", 0.4, "–", "dry crust"),
 					Parameter.published("pH,ref", "typical pH of potato", 5.8, "–", "potato 5.4–6.1 (FDA, approximate pH of foods)"),
@@ -113,7 +113,7 @@ public enum FoodCategory {
 					BrowningStage.byLightness("brown", "Brown", 50))),
 
 	BREAD("bread", "Bread or dough",
-			new Composition(43, 9, 2, 1.5, 1, 39.5, 2.5, 1.5),
+			new Composition(43, 9, 2, 1.5, 0, 40.5, 2.5, 1.5),
 			// wheat flour 0.1–0.5 g/kg (from memory), diluted by the dough's water
 			150, 0, 30, 5.4, 22,
 			Parameter.assumption("β", "buffer capacity of bread dough", 20, "mmol H⁺/(pH·kg)", "not measured; low (from memory)"),

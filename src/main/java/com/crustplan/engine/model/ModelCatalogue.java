@@ -103,8 +103,8 @@ public final class ModelCatalogue {
 	private static ModelSection heat() {
 		List<Equation> eq = new ArrayList<>();
 		eq.add(new Equation("Open face (oven, kitchen air, under a grill)",
-				"q = h·(T_gas − Ts) + ε·σ·(T_rad⁴ − Ts⁴) − h_fg·J;  J = h_m·(aw·ρv,sat(Ts) − ρv,gas);  h/h_m = ρ·cp·Le^(2/3)",
-				"Convection, grey-body radiation and evaporation (Chilton–Colburn analogy, vapour-density form; Incropera §6.7). "
+				"q = h·(T_gas − Ts) + ε·σ·(T_rad⁴ − Ts⁴) − h_fg·J;  J = h_m·(aw·p_sat(Ts) − p_v)/(R_v·T_film);  h/h_m = ρ·cp·Le^(2/3)",
+				"Convection, grey-body radiation and evaporation (Chilton–Colburn analogy, vapour densities at the film temperature; Incropera §6.7). "
 						+ "J < 0 is steam condensing on a face below the dew point, which heats it fast.",
 				HeatSetup.parameters()));
 		eq.add(new Equation("Pan contact", "q = h_c·(T_pan − Ts)",

@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Arrays;
 
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 
 import com.crustplan.engine.food.FoodCategory;
@@ -84,34 +83,21 @@ class EnergyBalanceTest {
 	// ---------------------------------------------------------------- whole cooks, each mode
 
 	@Test
-	@Disabled("engine bug: CookSimulation.moistureStep moves water between nodes at different temperatures without "
-			+ "the enthalpy it carries, so water diffusing from the cool core into the hot crust warms up for free; "
-			+ "a 25 mm steak on a 220 °C pan turned every 60 s for 15 min: heat in − vapour out falls 3.4 % of the "
-			+ "heat in short of the enthalpy gained (−0.8 % once diffusion carries h_w(T) with the water)")
 	void shouldBalanceEnergyOverAWholePanSear() {
 		assertBalanced(Surface.defaults(FoodCategory.MEAT), new HeatSetup.PanContact(220, true, 60), 900);
 	}
 
 	@Test
-	@Disabled("engine bug: at a bare face open to gas the latent heat of evaporation is removed twice, once "
-			+ "in the linearised face flux of the conduction step and again in CookSimulation.moistureStep, while "
-			+ "the vapour is counted once; with the diffusion-enthalpy gap of the pan case, bread in a 220 °C fan "
-			+ "oven with 30 % steam for 30 min loses +29.2 % of the heat in without trace (+0.01 % with both fixed)")
 	void shouldBalanceEnergyOverAWholeSteamOvenBake() {
 		assertBalanced(Surface.defaults(FoodCategory.BREAD), new HeatSetup.Oven(220, true, 30), 1800);
 	}
 
 	@Test
-	@Disabled("engine bug: diffusion without the enthalpy the water carries (see the pan case); 10 mm chips in "
-			+ "175 °C oil for 15 min: −3.3 % of the heat in (−0.8 % once fixed)")
 	void shouldBalanceEnergyOverAWholeFry() {
 		assertBalanced(Surface.defaults(FoodCategory.POTATO), new HeatSetup.DeepFryer(175), 900);
 	}
 
 	@Test
-	@Disabled("engine bug: latent heat removed twice at the bare face open to gas, plus the diffusion-enthalpy gap "
-			+ "(see the oven and pan cases); fish under an 800 °C element for 5 min: +17.7 % of the heat in "
-			+ "(−0.6 % with both fixed)")
 	void shouldBalanceEnergyOverAWholeGrill() {
 		assertBalanced(Surface.defaults(FoodCategory.FISH), new HeatSetup.RadiantGrill(800, 0), 300);
 	}

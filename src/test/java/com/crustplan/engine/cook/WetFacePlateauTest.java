@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 
 import com.crustplan.engine.food.FoodCategory;
@@ -36,13 +35,12 @@ class WetFacePlateauTest {
 	@Test
 	void shouldHoldAWetFaceNearTheWetBulbInAnOven() {
 		// A fan oven at 200 °C with kitchen-air humidity, and one with 10 % steam; the food starts a little below
-		// each plateau (45 and 55 °C) so that the face settles within the first minute. The plateau must lie above the
+		// each plateau so that the face settles within the first minute. The plateau must lie above the
 		// convective wet bulb (the walls add radiation) by no more than a few kelvin, and within 1 K of the wet
 		// bulb with wall radiation (ε 0.9, walls at the air temperature) solved independently (WetBulbReference).
 		// 1 K allows for the little heat conducted into the food, which the steady balance leaves out.
-		double[][] cases = { { Atmosphere.KITCHEN_STEAM_FRACTION * 100, 45 }, { 10, 55 } };
-		for (double[] c : cases) {
-			double steamPct = c[0];
+		double[] cases = { Atmosphere.KITCHEN_STEAM_FRACTION * 100, 10 };
+		for (double steamPct : cases) {
 			HeatSetup.Oven oven = new HeatSetup.Oven(200, true, steamPct);
 			double h = HeatSetup.OVEN_FAN.value();
 			double convective = WetBulb.temperatureC(oven.atmosphere(), h);
@@ -50,7 +48,8 @@ class WetFacePlateauTest {
 			double humidityRatio = 0.621945 * y / (1 - y);
 			double radiative = WetBulbReference.vapourDensityWetBulbC(200, humidityRatio, h, 0.9, 200);
 			int counted = 0;
-			for (Sample s : run(WET_WARM_MEAT.withInitialTemperatureC(c[1]), oven, 900)) {
+			// start 3 K below the plateau so the food takes up little heat once the face has settled
+			for (Sample s : run(WET_WARM_MEAT.withInitialTemperatureC(Math.floor(radiative) - 3), oven, 900)) {
 				if (s.timeS() >= 60 && s.standingWaterGPerM2() > 0) {
 					double ts = s.surfaceTemperatureC();
 					assertTrue(ts > convective && ts < convective + 6, String.format(
@@ -83,10 +82,6 @@ class WetFacePlateauTest {
 	}
 
 	@Test
-	@Disabled("engine bug: latent heat counted twice at a bare face open to gas (CookSimulation: once in the "
-			+ "conduction step's face flux, again in moistureStep). When the standing water is gone the face "
-			+ "drops from its 47.9 °C plateau to 34.9 °C, 8.5 K below the 43.4 °C wet bulb, though the food behind "
-			+ "it is at 45 °C")
 	void shouldNotCoolBelowTheWetBulbWhenTheStandingWaterIsGone() {
 		// A face in 200 °C air, fed heat by the air, the walls and the warmer food behind it, cannot fall below
 		// the wet-bulb temperature of the air (psychrometrics: the wet bulb is the lowest temperature

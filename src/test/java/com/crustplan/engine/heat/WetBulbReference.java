@@ -9,8 +9,9 @@ public final class WetBulbReference {
 	}
 
 	/**
-	 * Wet face temperature, °C, from h(T∞ − T) + εσ(T_wall⁴ − T⁴) = h_fg·h_m·(ρv,sat(T) − ρv,∞), with the
-	 * vapour-density Chilton–Colburn analogy (Le = 0.85): an implementation independent of the engine's.
+	 * Wet face temperature, °C, from h(T∞ − T) + εσ(T_wall⁴ − T⁴) = h_fg·h_m·(p_sat(T) − p_v,∞)/(R_v·T_film),
+	 * the Chilton–Colburn analogy (Le = 0.85) in its vapour-density form with both densities at the film
+	 * temperature (Incropera §6.7): an implementation independent of the engine's.
 	 */
 	public static double vapourDensityWetBulbC(double gasC, double humidityRatio, double h, double emissivity, double wallC) {
 		double rv = 461.51805; // IAPWS R6-95
@@ -21,7 +22,7 @@ public final class WetBulbReference {
 		double y = humidityRatio / (0.621945 + humidityRatio);
 		double vapourMass = humidityRatio / (1 + humidityRatio);
 		double cp = (1 - vapourMass) * 1011 + vapourMass * 2010;
-		double rhoVapourGas = y * p / (rv * tg);
+		double vapourPressureGas = y * p;
 		double lo = 273.16;
 		double hi = Math.min(tg, 420);
 		for (int i = 0; i < 100; i++) {
@@ -30,7 +31,7 @@ public final class WetBulbReference {
 			double rho = p * (1 - y) / (ra * film) + p * y / (rv * film);
 			double hm = h / (rho * cp * Math.pow(0.85, 2.0 / 3.0));
 			double heat = h * (tg - t) + emissivity * 5.670374419e-8 * (Math.pow(tw, 4) - Math.pow(t, 4));
-			double latent = (2501e3 - 2.36e3 * (t - 273.15)) * hm * (SaturationPressure.pascal(t) / (rv * t) - rhoVapourGas);
+			double latent = (2501e3 - 2.36e3 * (t - 273.15)) * hm * (SaturationPressure.pascal(t) - vapourPressureGas) / (rv * film);
 			if (heat > latent) {
 				lo = t;
 			}

@@ -3,7 +3,6 @@ package com.crustplan.engine.heat;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 
 import com.crustplan.engine.water.Atmosphere;
@@ -51,11 +50,6 @@ class WetBulbTest {
 	}
 
 	@Test
-	@Disabled("engine bug: with the vapour-density driving force evaluated at two different temperatures, "
-			+ "GasExchange lets a face evaporate below the dew point (ρv,sat(T_dew) > ρv,∞ because T_dew < T∞). "
-			+ "WetBulb gives 68.64 °C at 200 °C and 30 % steam (dew point 69.40 °C) and 95.54 °C in pure steam at "
-			+ "200 °C, where a wet face must sit at 99.97 °C; a driving force in partial pressures, "
-			+ "J = h_m·(aw·p_sat(Ts) − p_v,∞)/(R_v·T_film), or the Stefan-flow log form keeps it at or above the dew point")
 	void shouldNeverPutTheWetBulbBelowTheDewPoint() {
 		// Psychrometrics: dew point ≤ wet bulb ≤ dry bulb (ASHRAE Handbook — Fundamentals, ch. 1); a wet surface
 		// in superheated steam at 1 atm sits at the saturation temperature during the constant-rate period
