@@ -3,6 +3,7 @@ package com.crustplan.engine.acrylamide;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.stream.IntStream;
 
 import com.crustplan.engine.cook.CookResult;
 import com.crustplan.engine.cook.CookSettings;
@@ -91,8 +92,9 @@ public record RiskMap(FoodCategory category, Product product, String mode, Strin
 		double[] stageExtent = stages.stream().mapToDouble(s -> s.extentOn(category.colourPath())).toArray();
 		BenchmarkLevel benchmark = product.benchmark().orElse(null);
 		CookSettings settings = settingsFor(base, timeStepS, maxTimeS);
-		List<Row> rows = new ArrayList<>(temperaturesC.length);
-		for (double t : temperaturesC) {
+		// rows are independent runs, each owning its simulation: compute them on all cores
+		List<Row> rows = IntStream.range(0, temperaturesC.length).parallel().mapToObj(j -> {
+			double t = temperaturesC[j];
 			CookResult r = CookSimulation.run(surface, HeatSetups.withTemperature(template, t), target, settings);
 			List<Cell> cells = new ArrayList<>(r.series().size());
 			for (Sample s : r.series()) {
@@ -102,9 +104,9 @@ public record RiskMap(FoodCategory category, Product product, String mode, Strin
 						k < 0 ? "Unbrowned" : stages.get(k).label(), s.browningExtent(), s.crustAcrylamideUgPerKg(), portion,
 						benchmark == null ? AcrylamideZone.NO_BENCHMARK : benchmark.zoneOf(portion)));
 			}
-			rows.add(new Row(t, r.reached() ? r.timeToTargetS() : Double.NaN,
-					r.reached() ? r.portionAcrylamideAtTargetUgPerKg() : Double.NaN, cells));
-		}
+			return new Row(t, r.reached() ? r.timeToTargetS() : Double.NaN,
+					r.reached() ? r.portionAcrylamideAtTargetUgPerKg() : Double.NaN, cells);
+		}).toList();
 		return new RiskMap(category, product, template.mode(), target.describe(category), benchmark, timeStepS, rows,
 				AcrylamideCautions.ALL);
 	}
