@@ -2,7 +2,9 @@ package com.crustplan.engine.cook;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Consumer;
 
+import com.crustplan.engine.acrylamide.AcrylamideFormation;
 import com.crustplan.engine.browning.BrowningKinetics;
 import com.crustplan.engine.browning.Caramelisation;
 import com.crustplan.engine.browning.WaterActivityFactor;
@@ -156,6 +158,12 @@ public final class CookSimulation implements Layers {
 
 	private final FaceFlux flux = new FaceFlux();
 
+	/** Acrylamide per layer, stepped after each moisture step. */
+	private final AcrylamideFormation acrylamide;
+
+	/** Optional view of the state after every step, for fitting tools and tests. */
+	private Consumer<? super Layers> afterEachStep;
+
 	// ledger
 	private double heatIn;
 
@@ -178,6 +186,7 @@ public final class CookSimulation implements Layers {
 		this.settings = settings;
 		this.n = settings.nodes();
 		this.grid = new Grid(surface.thicknessMm() / 1000, n, Grid.DEFAULT_CLUSTERING);
+		this.acrylamide = new AcrylamideFormation(surface, grid);
 		this.isotherm = category.isotherm();
 		this.kinetics = category.browning();
 		this.path = category.colourPath();
@@ -229,6 +238,18 @@ public final class CookSimulation implements Layers {
 		return new CookSimulation(surface, setup, settings).march(targetExtent);
 	}
 
+	/**
+	 * As {@link #run(Surface, HeatSetup, Target, CookSettings)}, handing the live state through the thickness
+	 * to {@code afterEachStep} after every time step (for fitting tools and tests; keep it cheap).
+	 */
+	public static CookResult run(Surface surface, HeatSetup setup, Target target, CookSettings settings,
+			Consumer<? super Layers> afterEachStep) {
+		double targetExtent = target.extentFor(surface.category());
+		CookSimulation simulation = new CookSimulation(surface, setup, settings);
+		simulation.afterEachStep = afterEachStep;
+		return simulation.march(targetExtent);
+	}
+
 	public static CookResult run(Surface surface, HeatSetup setup, Target target) {
 		return run(surface, setup, target, CookSettings.defaults());
 	}
@@ -241,6 +262,8 @@ public final class CookSimulation implements Layers {
 		double nextChange = schedule.nextChangeAfter(0);
 		double reachedAt = Double.NaN;
 		double coreAtTarget = Double.NaN;
+		double crustAtTarget = Double.NaN;
+		double portionAtTarget = Double.NaN;
 		double maxSurface = temperature[0];
 		boolean everDry = false;
 		if (settings.recordSeries()) {
@@ -252,7 +275,12 @@ public final class CookSimulation implements Layers {
 			double step = Math.min(dt, Math.min(stopAt, Math.min(nextOutput, nextChange)) - time);
 			double before = extent[0];
 			double coreBefore = core;
+			double crustBefore = acrylamide.crustUgPerKg();
+			double portionBefore = acrylamide.portionUgPerKg();
 			step(step);
+			if (afterEachStep != null) {
+				afterEachStep.accept(this);
+			}
 			core = core();
 			maxSurface = Math.max(maxSurface, temperature[0]);
 			everDry |= film[0] <= 0 && waterActivity(0) < 0.95;
@@ -260,6 +288,8 @@ public final class CookSimulation implements Layers {
 				double f = (targetExtent - before) / (extent[0] - before);
 				reachedAt = time - step + f * step;
 				coreAtTarget = coreBefore + f * (core - coreBefore);
+				crustAtTarget = crustBefore + f * (acrylamide.crustUgPerKg() - crustBefore);
+				portionAtTarget = portionBefore + f * (acrylamide.portionUgPerKg() - portionBefore);
 				stopAt = Math.min(settings.horizonS(),
 						Math.max(reachedAt * (1 + settings.runPastTargetFraction()), reachedAt + settings.timeStepS()));
 			}
@@ -279,7 +309,7 @@ public final class CookSimulation implements Layers {
 		List<String> assumptions = new ArrayList<>(setup.assumptions());
 		assumptions.addAll(surfaceAssumptions());
 		return new CookResult(outcome, explanation, reachedAt, targetExtent, path.colourAt(targetExtent), ph,
-				coreAtTarget - 273.15, Double.NaN, Double.NaN, maxSurface - 273.15, extent[0], time, series, assumptions,
+				coreAtTarget - 273.15, crustAtTarget, portionAtTarget, maxSurface - 273.15, extent[0], time, series, assumptions,
 				new EnergyLedger(heatIn, vapourOut, evaporated),
 				new CookResult.FinalState(positions(), temperature, moisture, dryMass, film));
 	}
@@ -422,6 +452,8 @@ public final class CookSimulation implements Layers {
 
 		// (4) moisture diffusion, face evaporation implicit in moisture
 		moistureStep(dt);
+		// (4b) acrylamide in every layer, from this step's temperature and water
+		acrylamide.step(this, dt);
 
 		// (5) browning at both faces
 		for (int face = 0; face < 2; face++) {
@@ -650,7 +682,7 @@ public final class CookSimulation implements Layers {
 	private Sample sample() {
 		return new Sample(time, temperature[0] - 273.15, temperature[n - 1] - 273.15, core() - 273.15,
 				film[0] > 0 ? 1 : isotherm.waterActivity(moisture[0]), moisture[0], film[0] * 1000, extent[0],
-				path.colourAt(extent[0]), Double.NaN, Double.NaN);
+				path.colourAt(extent[0]), acrylamide.crustUgPerKg(), acrylamide.portionUgPerKg());
 	}
 
 	// ---------------------------------------------------------------- Layers view

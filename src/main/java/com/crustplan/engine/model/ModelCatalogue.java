@@ -35,6 +35,7 @@ public final class ModelCatalogue {
 		s.add(browning());
 		s.add(acidity());
 		s.add(colour());
+		s.add(com.crustplan.engine.acrylamide.AcrylamideModel.section());
 		return List.copyOf(s);
 	}
 
