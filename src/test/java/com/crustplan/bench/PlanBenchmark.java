@@ -17,6 +17,8 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 
+import com.crustplan.engine.acrylamide.Product;
+import com.crustplan.engine.acrylamide.RiskMap;
 import com.crustplan.engine.cook.CookResult;
 import com.crustplan.engine.cook.CookSettings;
 
@@ -74,7 +76,25 @@ public class PlanBenchmark {
 		return Plans.chips(DOUBLE_GRID_DOUBLE_STEP);
 	}
 
-	/** Named for what it is until the acrylamide RiskMap lands: 30 summary runs, 150–195 °C. */
+	private static final double[] MAP_TEMPERATURES_C = new double[Plans.MAP_POINTS];
+
+	static {
+		for (int i = 0; i < Plans.MAP_POINTS; i++) {
+			MAP_TEMPERATURES_C[i] = Plans.mapTemperatureC(i);
+		}
+	}
+
+	/**
+	 * The acrylamide risk map as a plan page asks for it: chips, 30 fryer temperatures 150–195 °C, a column
+	 * every 30 s to 15 min (each row runs to the map's end and records every column; rows in parallel).
+	 */
+	@Benchmark
+	public RiskMap riskMapFries30Temperatures() {
+		return RiskMap.compute(Plans.CHIPS, Product.FRENCH_FRIES, Plans.FRYER_175, Plans.GOLDEN, MAP_TEMPERATURES_C, 30, 900,
+				DEFAULTS);
+	}
+
+	/** The map's engine cost alone, as before RiskMap landed: 30 summary runs to the target and a quarter past. */
 	@Benchmark
 	public double[] fryerMap30RunsNoSeries() {
 		return Plans.fryerMapTimesToTarget();
