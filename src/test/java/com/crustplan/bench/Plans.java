@@ -48,7 +48,7 @@ final class Plans {
 	}
 
 	/**
-	 * The risk map's cost until engine/acrylamide's map lands on this branch: 30 runs of the chips over
+	 * The engine part of a risk map without RiskMap's columns and acrylamide: 30 runs of the chips over
 	 * the fryer temperatures, summaries only (no series), as a map computes them.
 	 */
 	static double[] fryerMapTimesToTarget() {
