@@ -49,7 +49,7 @@ final class Plans {
 
 	/**
 	 * The engine part of a risk map without RiskMap's columns and acrylamide: 30 runs of the chips over
-	 * the fryer temperatures, summaries only (no series), as a map computes them.
+	 * the fryer temperatures, summaries only (no series), each stopping a quarter past its target.
 	 */
 	static double[] fryerMapTimesToTarget() {
 		return fryerMapTimesToTarget(CookSettings.defaults().withRecordSeries(false));
