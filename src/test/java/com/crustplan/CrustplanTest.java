@@ -19,6 +19,6 @@ import org.springframework.test.context.ActiveProfiles;
 @SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
 @AutoConfigureMockMvc
 @ActiveProfiles("test")
-@Import(SecurityMockMvc.class)
+@Import({ SecurityMockMvc.class, DemoData.class })
 public @interface CrustplanTest {
 }

@@ -23,6 +23,7 @@ import com.crustplan.setup.SetupService;
 import com.crustplan.surface.SavedSurface;
 import com.crustplan.surface.SurfaceForm;
 import com.crustplan.surface.SurfaceService;
+import com.crustplan.system.FormBinding;
 import com.crustplan.system.NotFoundException;
 import com.crustplan.system.TemperatureUnit;
 
@@ -57,7 +58,7 @@ class PlanController {
 		if (form.complete() && !result.hasErrors()) {
 			resolve(form, result).ifPresent(inputs -> compute(inputs, form, result, units, model));
 		}
-		return page(model, form);
+		return page(model, form, result);
 	}
 
 	@PostMapping("/plans")
@@ -74,15 +75,15 @@ class PlanController {
 			if (form.complete() && !result.hasFieldErrors("targetLightness") && !result.hasFieldErrors("horizonMinutes")) {
 				resolve(form, result).ifPresent(inputs -> compute(inputs, form, result, units, model));
 			}
-			return page(model, form);
+			return page(model, form, result);
 		}
 		Optional<Resolved> resolved = resolve(form, result);
 		if (resolved.isEmpty()) {
-			return page(model, form);
+			return page(model, form, result);
 		}
 		PlanReport report = compute(resolved.get(), form, result, units, model);
 		if (report == null) {
-			return page(model, form);
+			return page(model, form, result);
 		}
 		Resolved r = resolved.get();
 		SavedPlan plan = saved.save(form.name(), r.surfaceName(), r.setupName(), r.inputs(), report,
@@ -186,7 +187,8 @@ class PlanController {
 		model.addAttribute("chartJson", json.writeValueAsString(PlanCharts.data(report, units)));
 	}
 
-	private String page(Model model, PlanForm form) {
+	private String page(Model model, PlanForm form, BindingResult result) {
+		FormBinding.put(model, form, result);
 		model.addAttribute("surfaces", surfaces.all());
 		model.addAttribute("setups", setups.all());
 		model.addAttribute("categories", Arrays.asList(FoodCategory.values()));

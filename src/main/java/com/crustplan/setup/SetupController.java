@@ -16,6 +16,7 @@ import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 import com.crustplan.engine.food.InvalidInputException;
 import com.crustplan.system.EngineErrors;
+import com.crustplan.system.FormBinding;
 import com.crustplan.system.TemperatureUnit;
 
 @Controller
@@ -36,14 +37,14 @@ class SetupController {
 
 	@GetMapping("/new")
 	String newForm(@ModelAttribute("units") TemperatureUnit units, Model model) {
-		return form(model, SetupForm.blank(units), "/setups/new", "New heat setup", units);
+		return form(model, SetupForm.blank(units), null, "/setups/new", "New heat setup", units);
 	}
 
 	@PostMapping("/new")
 	String create(@Valid @ModelAttribute("form") SetupForm form, BindingResult result,
 			@ModelAttribute("units") TemperatureUnit units, Model model, RedirectAttributes redirect) {
 		if (!check(form, result)) {
-			return form(model, form, "/setups/new", "New heat setup", units);
+			return form(model, form, result, "/setups/new", "New heat setup", units);
 		}
 		SavedSetup saved = setups.create(form);
 		redirect.addFlashAttribute("message", "Setup “" + saved.getName() + "” saved.");
@@ -53,7 +54,7 @@ class SetupController {
 	@GetMapping("/{id}/edit")
 	String editForm(@PathVariable long id, @ModelAttribute("units") TemperatureUnit units, Model model) {
 		SavedSetup s = setups.get(id);
-		return form(model, SetupForm.of(s, units), "/setups/" + id + "/edit", "Edit " + s.getName(), units);
+		return form(model, SetupForm.of(s, units), null, "/setups/" + id + "/edit", "Edit " + s.getName(), units);
 	}
 
 	@PostMapping("/{id}/edit")
@@ -61,7 +62,7 @@ class SetupController {
 			@ModelAttribute("units") TemperatureUnit units, Model model, RedirectAttributes redirect) {
 		SavedSetup existing = setups.get(id);
 		if (!check(form, result)) {
-			return form(model, form, "/setups/" + id + "/edit", "Edit " + existing.getName(), units);
+			return form(model, form, result, "/setups/" + id + "/edit", "Edit " + existing.getName(), units);
 		}
 		setups.update(id, form);
 		redirect.addFlashAttribute("message", "Setup “" + form.name().trim() + "” updated.");
@@ -72,7 +73,7 @@ class SetupController {
 	String copyForm(@PathVariable long id, @ModelAttribute("units") TemperatureUnit units, Model model) {
 		SavedSetup s = setups.get(id);
 		String name = "Copy of " + s.getName();
-		return form(model, SetupForm.of(s, units).withName(name.length() > 80 ? name.substring(0, 80) : name),
+		return form(model, SetupForm.of(s, units).withName(name.length() > 80 ? name.substring(0, 80) : name), null,
 				"/setups/new", name, units);
 	}
 
@@ -104,8 +105,9 @@ class SetupController {
 		}
 	}
 
-	private static String form(Model model, SetupForm form, String action, String title, TemperatureUnit units) {
-		model.addAttribute("form", form.unit() == units ? form : form.inUnit(units));
+	private static String form(Model model, SetupForm form, BindingResult errors, String action, String title,
+			TemperatureUnit units) {
+		FormBinding.put(model, form.unit() == units ? form : form.inUnit(units), errors);
 		model.addAttribute("action", action);
 		model.addAttribute("title", title);
 		model.addAttribute("modes", Arrays.asList(HeatMode.values()));

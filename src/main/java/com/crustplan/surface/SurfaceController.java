@@ -22,6 +22,7 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.system.EngineErrors;
+import com.crustplan.system.FormBinding;
 import com.crustplan.system.JsonText;
 import com.crustplan.system.TemperatureUnit;
 
@@ -50,14 +51,14 @@ class SurfaceController {
 	String newForm(@RequestParam(name = "category", required = false) String category,
 			@ModelAttribute("units") TemperatureUnit units, Model model) {
 		FoodCategory c = FoodCategory.byKey(category == null ? "" : category).orElse(FoodCategory.MEAT);
-		return form(model, SurfaceForm.defaults(c, "", units), "/surfaces/new", "New surface", units);
+		return form(model, SurfaceForm.defaults(c, "", units), null, "/surfaces/new", "New surface", units);
 	}
 
 	@PostMapping("/new")
 	String create(@Valid @ModelAttribute("form") SurfaceForm form, BindingResult result,
 			@ModelAttribute("units") TemperatureUnit units, Model model, RedirectAttributes redirect) {
 		if (!check(form, result)) {
-			return form(model, form, "/surfaces/new", "New surface", units);
+			return form(model, form, result, "/surfaces/new", "New surface", units);
 		}
 		SavedSurface saved = surfaces.create(form);
 		redirect.addFlashAttribute("message", "Surface “" + saved.getName() + "” saved.");
@@ -75,7 +76,7 @@ class SurfaceController {
 	@GetMapping("/{id}/edit")
 	String editForm(@PathVariable long id, @ModelAttribute("units") TemperatureUnit units, Model model) {
 		SavedSurface s = surfaces.get(id);
-		return form(model, SurfaceForm.of(s, units), "/surfaces/" + id + "/edit", "Edit " + s.getName(), units);
+		return form(model, SurfaceForm.of(s, units), null, "/surfaces/" + id + "/edit", "Edit " + s.getName(), units);
 	}
 
 	@PostMapping("/{id}/edit")
@@ -83,7 +84,7 @@ class SurfaceController {
 			@ModelAttribute("units") TemperatureUnit units, Model model, RedirectAttributes redirect) {
 		SavedSurface existing = surfaces.get(id);
 		if (!check(form, result)) {
-			return form(model, form, "/surfaces/" + id + "/edit", "Edit " + existing.getName(), units);
+			return form(model, form, result, "/surfaces/" + id + "/edit", "Edit " + existing.getName(), units);
 		}
 		surfaces.update(id, form);
 		redirect.addFlashAttribute("message", "Surface “" + form.name().trim() + "” updated.");
@@ -95,7 +96,7 @@ class SurfaceController {
 		SavedSurface s = surfaces.get(id);
 		String name = ("Copy of " + s.getName());
 		SurfaceForm copy = SurfaceForm.of(s, units).withName(name.length() > 80 ? name.substring(0, 80) : name);
-		return form(model, copy, "/surfaces/new", "Copy of " + s.getName(), units);
+		return form(model, copy, null, "/surfaces/new", "Copy of " + s.getName(), units);
 	}
 
 	@GetMapping("/{id}/delete")
@@ -128,9 +129,10 @@ class SurfaceController {
 		}
 	}
 
-	private String form(Model model, SurfaceForm form, String action, String title, TemperatureUnit units) {
+	private String form(Model model, SurfaceForm form, BindingResult errors, String action, String title,
+			TemperatureUnit units) {
 		SurfaceForm shown = form.unit() == units ? form : form.inUnit(units);
-		model.addAttribute("form", shown);
+		FormBinding.put(model, shown, errors);
 		model.addAttribute("action", action);
 		model.addAttribute("title", title);
 		model.addAttribute("categories", Arrays.asList(FoodCategory.values()));

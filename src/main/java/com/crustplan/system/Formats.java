@@ -84,6 +84,14 @@ public class Formats {
 		return t == null ? "–" : DATE_TIME.format(t.atZone(java.time.ZoneId.systemDefault()));
 	}
 
+	/** A form input's value: up to 6 decimals, no trailing zeros, empty for none. */
+	public String plain(Object v) {
+		if (v instanceof Double d) {
+			return Double.isFinite(d) ? number(d, 6) : "";
+		}
+		return v == null ? "" : v.toString();
+	}
+
 	public String num(Double v, int digits) {
 		return v == null ? "–" : number(v, digits);
 	}

@@ -101,7 +101,7 @@ class PlanInBrowserTest {
 		assertThat(driver.findElements(By.cssSelector("tbody tr")).size()).isGreaterThanOrEqualTo(8);
 		Browser.screenshot(driver, "surfaces");
 		driver.get(url("/surfaces/new?category=potato"));
-		assertThat(driver.findElement(By.id("waterPct")).getDomProperty("value")).isEqualTo("79.0");
+		assertThat(driver.findElement(By.id("waterPct")).getDomProperty("value")).isEqualTo("79");
 		Browser.screenshot(driver, "surface-form");
 		driver.get(url("/setups"));
 		Browser.screenshot(driver, "setups");
