@@ -210,7 +210,6 @@ class SurfacePagesTest {
 		@Test
 		void shouldRejectTextNanAndInfinityAsNumbers() throws Exception {
 			for (String bad : new String[] { "abc", "NaN", "Infinity", "-Infinity", "1e999", "12abc", "0x10" }) {
-				System.out.println("BAD " + bad + " -> " + mvc.perform(potato("/surfaces/new", "fatPct", bad)).andReturn().getModelAndView().getModel().get("org.springframework.validation.BindingResult.form"));
 				mvc.perform(potato("/surfaces/new", "fatPct", bad))
 					.andExpect(status().isOk())
 					.andExpect(model().attributeHasFieldErrorCode("form", "fatPct", "typeMismatch"));
