@@ -49,6 +49,11 @@ public class SecurityConfig {
 			.permitAll()
 			.requestMatchers("/admin/**")
 			.hasRole(ADMIN)
+			// the pages that lead to a change are a chef's, like the change itself
+			.requestMatchers(HttpMethod.GET, "/surfaces/new", "/surfaces/*/edit", "/surfaces/*/copy",
+					"/surfaces/*/delete", "/setups/new", "/setups/*/edit", "/setups/*/copy", "/setups/*/delete",
+					"/plans/*/delete")
+			.hasRole(CHEF)
 			// recording test cooks is the one write a cook may do
 			.requestMatchers(HttpMethod.POST, "/test-cooks/**")
 			.hasRole(COOK)
