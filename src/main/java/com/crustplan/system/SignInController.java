@@ -23,8 +23,12 @@ class SignInController {
 
 	/** The page shown when a signed-in user's role does not allow a page. */
 	@org.springframework.web.bind.annotation.RequestMapping("/error/403")
-	String forbidden(jakarta.servlet.http.HttpServletResponse response) {
+	String forbidden(jakarta.servlet.http.HttpServletRequest request, jakarta.servlet.http.HttpServletResponse response,
+			Model model) {
 		response.setStatus(403);
+		// a form sent with a stale token is not a question of role: say what to do instead
+		Object denied = request.getAttribute(org.springframework.security.web.WebAttributes.ACCESS_DENIED_403);
+		model.addAttribute("staleForm", denied instanceof org.springframework.security.web.csrf.CsrfException);
 		return "error/403";
 	}
 
