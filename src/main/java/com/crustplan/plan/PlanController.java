@@ -101,12 +101,21 @@ class PlanController {
 	@GetMapping("/plans/{id}")
 	String show(@PathVariable long id, @ModelAttribute("units") TemperatureUnit units, Model model) {
 		SavedPlan plan = saved.get(id);
-		PlanInputs inputs = saved.inputs(plan);
-		PlanReport report = planner.plan(inputs.surface().toSurface(), inputs.setup().toHeatSetup(), inputs.target(),
-				inputs.horizonMinutes(), units);
 		model.addAttribute("saved", plan);
-		model.addAttribute("inputs", inputs);
-		addReport(model, report, units);
+		try {
+			PlanInputs inputs = saved.inputs(plan);
+			PlanReport report = planner.plan(inputs.surface().toSurface(), inputs.setup().toHeatSetup(),
+					inputs.target(), inputs.horizonMinutes(), units);
+			addReport(model, report, units);
+		}
+		catch (InvalidInputException e) {
+			// kept as saved; the model's limits changed since, so say which value and why
+			model.addAttribute("problem", "The model no longer accepts this plan's " + e.field() + ": " + e.reason()
+					+ ". The saved values are kept unchanged.");
+		}
+		catch (tools.jackson.core.JacksonException | NullPointerException e) {
+			model.addAttribute("problem", "The saved inputs of this plan cannot be read. They are kept unchanged.");
+		}
 		return "plan/show";
 	}
 

@@ -1,7 +1,6 @@
 package com.crustplan.system;
 
 import java.beans.PropertyEditorSupport;
-import java.util.Locale;
 
 import org.springframework.beans.propertyeditors.StringTrimmerEditor;
 import org.springframework.stereotype.Controller;
@@ -36,6 +35,13 @@ public class FormBinding {
 	void numbers(WebDataBinder binder) {
 		binder.registerCustomEditor(Double.class, new DecimalEditor());
 		binder.registerCustomEditor(String.class, new StringTrimmerEditor(false));
+		// a password is taken exactly as typed: sign-in compares it untrimmed
+		binder.registerCustomEditor(String.class, "password", new PropertyEditorSupport() {
+			@Override
+			public void setAsText(String text) {
+				setValue(text);
+			}
+		});
 	}
 
 	static final class DecimalEditor extends PropertyEditorSupport {
@@ -58,19 +64,6 @@ public class FormBinding {
 				throw new IllegalArgumentException("not a finite number");
 			}
 			setValue(v);
-		}
-
-		@Override
-		public String getAsText() {
-			Object v = getValue();
-			if (!(v instanceof Double d)) {
-				return "";
-			}
-			if (!Double.isFinite(d)) {
-				return "";
-			}
-			String s = String.format(Locale.ROOT, "%.6f", d).replaceAll("0+$", "").replaceAll("\\.$", "");
-			return s.equals("-0") ? "0" : s;
 		}
 
 	}

@@ -113,6 +113,26 @@ class PlanPagesTest {
 		mvc.perform(get("/plans/{id}", id)).andExpect(status().isNotFound());
 	}
 
+	@Test
+	void shouldShowASavedPlanTheModelNoLongerAcceptsWithoutFailing() throws Exception {
+		long unreadable = plans.save(new SavedPlan("Unreadable", "s", "t", "Golden", "{not json", true, 60.0, "chef"))
+			.getId();
+		mvc.perform(get("/plans/{id}", unreadable))
+			.andExpect(status().isOk())
+			.andExpect(content().string(containsString("cannot be read")));
+		MvcResult r = mvc.perform(post("/plans").with(csrf()).param("surfaceId", chips()).param("setupId", fryer())
+			.param("targetStage", "golden").param("name", "Soon too thick")).andReturn();
+		SavedPlan good = plans.findById(Long.parseLong(r.getResponse().getRedirectedUrl().replace("/plans/", "")))
+			.orElseThrow();
+		// the same inputs with a thickness beyond the model's 200 mm
+		String json = good.getInputsJson().replace("\"thicknessMm\":10.0", "\"thicknessMm\":500.0");
+		assertThat(json).contains("500.0");
+		long stale = plans.save(new SavedPlan("Too thick", "s", "t", "Golden", json, true, 60.0, "chef")).getId();
+		mvc.perform(get("/plans/{id}", stale))
+			.andExpect(status().isOk())
+			.andExpect(content().string(containsString("thicknessMm: must be a number from 0.5 to 200")));
+	}
+
 	@Nested
 	class BadInput {
 

@@ -53,10 +53,11 @@ class UserAdminTest {
 	@Test
 	void shouldCreateAUserWithAHashedPasswordAndNeverShowIt() throws Exception {
 		mvc.perform(post("/admin/users/new").with(csrf()).param("username", "sous").param("role", "CHEF")
-			.param("password", "a long kitchen passphrase").param("enabled", "true"))
+			.param("password", " a long kitchen passphrase ").param("enabled", "true"))
 			.andExpect(status().is3xxRedirection()).andExpect(redirectedUrl("/admin/users"));
 		UserAccount a = users.findByUsernameIgnoreCase("sous").orElseThrow();
-		assertThat(encoder.matches("a long kitchen passphrase", a.getPasswordHash())).isTrue();
+		// taken exactly as typed, spaces included
+		assertThat(encoder.matches(" a long kitchen passphrase ", a.getPasswordHash())).isTrue();
 		mvc.perform(get("/admin/users/{id}/edit", a.getId()))
 			.andExpect(status().isOk())
 			.andExpect(content().string(not(containsString("a long kitchen passphrase"))))
