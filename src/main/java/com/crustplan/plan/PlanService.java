@@ -34,12 +34,19 @@ public class PlanService {
 	/** Swatches in the strip: enough to see the colour change, few enough to read on a tablet. */
 	static final int SWATCHES = 10;
 
-	// FDA Food Code 2022, section 3-401.11 (A)(1)-(3): minimum internal temperatures and holding times.
+	// FDA Food Code 2022, section 3-401.11 (A)(1)-(3): minimum internal temperatures and holding times,
+	// with both of the code's own figures, so °F shows the code's number rather than a rounded conversion.
 	static final double FOOD_CODE_WHOLE_CUT_C = 63; // 145 °F for 15 s: meat, fish, eggs
+
+	static final double FOOD_CODE_WHOLE_CUT_F = 145;
 
 	static final double FOOD_CODE_COMMINUTED_C = 68; // 155 °F for 17 s: minced meat and fish
 
+	static final double FOOD_CODE_COMMINUTED_F = 155;
+
 	static final double FOOD_CODE_POULTRY_C = 74; // 165 °F for < 1 s: poultry, stuffed foods
+
+	static final double FOOD_CODE_POULTRY_F = 165;
 
 	/** Commission Regulation (EU) 2017/2158, Annex I: fry potato products at 160–175 °C. */
 	static final double EU_FRYING_MAX_C = 175;
@@ -71,14 +78,15 @@ public class PlanService {
 				w.add(new PlanWarning("core-below-food-code", String.format(Locale.ROOT,
 						"When the skin reaches the target colour the core is predicted at %s, below the %s poultry "
 								+ "needs (FDA Food Code 2022, 3-401.11): finish at a lower heat and probe it.",
-						u.format(core), u.format(FOOD_CODE_POULTRY_C))));
+						u.format(core), code(u, FOOD_CODE_POULTRY_C, FOOD_CODE_POULTRY_F))));
 			}
 			else if ((c == FoodCategory.MEAT || c == FoodCategory.FISH) && core < FOOD_CODE_WHOLE_CUT_C) {
 				w.add(new PlanWarning("core-below-food-code", String.format(Locale.ROOT,
 						"When the surface reaches the target colour the core is predicted at %s, below %s for 15 s "
 								+ "(FDA Food Code 2022, 3-401.11, whole cuts; %s for minced). Serve it undercooked "
 								+ "only where your food code allows it, with the advisory it requires.",
-						u.format(core), u.format(FOOD_CODE_WHOLE_CUT_C), u.format(FOOD_CODE_COMMINUTED_C))));
+						u.format(core), code(u, FOOD_CODE_WHOLE_CUT_C, FOOD_CODE_WHOLE_CUT_F),
+						code(u, FOOD_CODE_COMMINUTED_C, FOOD_CODE_COMMINUTED_F))));
 			}
 		}
 		if (setup instanceof HeatSetup.DeepFryer f && c == FoodCategory.POTATO && f.oilTemperatureC() > EU_FRYING_MAX_C) {
@@ -94,6 +102,11 @@ public class PlanService {
 					surface.ph())));
 		}
 		return w;
+	}
+
+	private static String code(TemperatureUnit u, double c, double f) {
+		return u == TemperatureUnit.FAHRENHEIT ? String.format(Locale.ROOT, "%.0f °F", f)
+				: String.format(Locale.ROOT, "%.0f °C", c);
 	}
 
 	private static List<String> cautions(Surface surface, HeatSetup setup) {

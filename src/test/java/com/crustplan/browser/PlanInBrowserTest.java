@@ -28,6 +28,9 @@ class PlanInBrowserTest {
 	@LocalServerPort
 	int port;
 
+	@org.springframework.beans.factory.annotation.Autowired
+	com.crustplan.DemoData demo;
+
 	WebDriver driver;
 
 	@BeforeEach
@@ -91,6 +94,26 @@ class PlanInBrowserTest {
 		driver.manage().window().setSize(new Dimension(1280, 2600));
 		Path shot = Browser.screenshot(driver, "plan-chips-fryer");
 		assertThat(Files.size(shot)).isGreaterThan(10_000);
+	}
+
+	@Test
+	void shouldSwitchToFahrenheitAndFitATablet() throws Exception {
+		signIn("chef", "chef-demo");
+		driver.manage().window().setSize(new Dimension(820, 1180));
+		driver.get(url("/plan?surfaceId=" + demo.surface("Sirloin steak, 30 mm, patted dry") + "&setupId="
+				+ demo.setup("Plancha, high") + "&targetStage=browned"));
+		driver.findElement(By.cssSelector("form.units button[value=F]")).click();
+		new WebDriverWait(driver, Duration.ofSeconds(20))
+			.until(d -> "true".equals(d.findElement(By.id("charts")).getDomAttribute("data-rendered")));
+		// the page came back to the same plan, now in °F
+		assertThat(driver.findElement(By.cssSelector(".summary .facts")).getText()).contains("°F");
+		assertThat(driver.findElement(By.id("charts")).getDomAttribute("data-plan")).contains("\"unit\":\"°F\"");
+		Object overflow = ((JavascriptExecutor) driver)
+			.executeScript("return document.documentElement.scrollWidth > window.innerWidth + 1;");
+		assertThat(overflow).as("no sideways scrolling on a tablet").isEqualTo(false);
+		driver.manage().window().setSize(new Dimension(820, 3400));
+		Browser.screenshot(driver, "plan-tablet-fahrenheit");
+		driver.findElement(By.cssSelector("form.units button[value=C]")).click();
 	}
 
 	@Test
