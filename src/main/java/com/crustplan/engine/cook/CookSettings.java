@@ -7,7 +7,7 @@ package com.crustplan.engine.cook;
 public record CookSettings(int nodes, double timeStepS, double outputIntervalS, double horizonS,
 		double runPastTargetFraction, boolean recordSeries) {
 
-	public static final int DEFAULT_NODES = 25;
+	public static final int DEFAULT_NODES = 31;
 
 	public static final double DEFAULT_TIME_STEP_S = 0.5;
 
@@ -39,8 +39,8 @@ public record CookSettings(int nodes, double timeStepS, double outputIntervalS, 
 	}
 
 	public static CookSettings defaults() {
-		return new CookSettings(DEFAULT_NODES, DEFAULT_TIME_STEP_S, DEFAULT_OUTPUT_INTERVAL_S, DEFAULT_HORIZON_S,
-				DEFAULT_RUN_PAST_TARGET, true);
+		return new CookSettings(DEFAULT_NODES, DEFAULT_TIME_STEP_S, DEFAULT_OUTPUT_INTERVAL_S,
+				DEFAULT_HORIZON_S, DEFAULT_RUN_PAST_TARGET, true);
 	}
 
 	public CookSettings withNodes(int n) {

@@ -2,7 +2,9 @@ package com.crustplan.engine.cook;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Consumer;
 
+import com.crustplan.engine.acrylamide.AcrylamideFormation;
 import com.crustplan.engine.browning.BrowningKinetics;
 import com.crustplan.engine.browning.Caramelisation;
 import com.crustplan.engine.browning.WaterActivityFactor;
@@ -15,6 +17,7 @@ import com.crustplan.engine.heat.FaceFlux;
 import com.crustplan.engine.heat.FaceSchedule;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.layers.Grid;
+import com.crustplan.engine.layers.HeatConduction;
 import com.crustplan.engine.layers.Layers;
 import com.crustplan.engine.layers.Tridiagonal;
 import com.crustplan.engine.properties.FoodComponent;
@@ -43,6 +46,18 @@ public final class CookSimulation implements Layers {
 	/** The reference water activity for caramelisation: a dry crust, like the Maillard fits. */
 	private static final double CARAMEL_REFERENCE_AW = 0.4;
 
+	/** Faces are re-linearised until their temperature estimate moves less than this in a pass. */
+	private static final double FACE_LINEARISATION_K = 1.0;
+
+	private static final int MAX_FACE_PASSES = 4;
+
+	/** A face this wet gathers condensing steam as standing water rather than sorbing it. */
+	private static final double WET_FACE_AW = 0.99;
+
+	private static final double FREE_WATER_BOILING_K = WaterVapour.boilingTemperatureKFast(1.0);
+
+	private static final double LOG_GAS_CONDUCTIVITY = Math.log(ThermalProperties.AIR_CONDUCTIVITY);
+
 	private final Surface surface;
 
 	private final FoodCategory category;
@@ -56,6 +71,7 @@ public final class CookSimulation implements Layers {
 	private final Grid grid;
 
 	private final GabIsotherm isotherm;
+
 
 	private final BrowningKinetics kinetics;
 
@@ -117,9 +133,36 @@ public final class CookSimulation implements Layers {
 
 	private final double[] moistureBefore;
 
+
+	private final double[] faceSlope = new double[2];
+
+	private final double[] faceSource = new double[2];
+
+	private final double[] linearisedAt = new double[2];
+
+	private final HeatConduction conduction;
+
+	private final boolean[] pinned;
+
+	private final double[] solvedTemperature;
+
+	private final boolean[] ranDry;
+
+	private final double[] pinnedTemperature;
+
+	private final double[] waterConductance;
+
+	private final double[] heatGain;
+
 	private final Tridiagonal solver;
 
 	private final FaceFlux flux = new FaceFlux();
+
+	/** Acrylamide per layer, stepped after each moisture step. */
+	private final AcrylamideFormation acrylamide;
+
+	/** Optional view of the state after every step, for fitting tools and tests. */
+	private Consumer<? super Layers> afterEachStep;
 
 	// ledger
 	private double heatIn;
@@ -143,6 +186,7 @@ public final class CookSimulation implements Layers {
 		this.settings = settings;
 		this.n = settings.nodes();
 		this.grid = new Grid(surface.thicknessMm() / 1000, n, Grid.DEFAULT_CLUSTERING);
+		this.acrylamide = new AcrylamideFormation(surface, grid);
 		this.isotherm = category.isotherm();
 		this.kinetics = category.browning();
 		this.path = category.colourPath();
@@ -165,6 +209,13 @@ public final class CookSimulation implements Layers {
 		solution = new double[n];
 		solver = new Tridiagonal(n);
 		moistureBefore = new double[n];
+		conduction = new HeatConduction(grid);
+		pinned = new boolean[n];
+		solvedTemperature = new double[n];
+		ranDry = new boolean[n];
+		pinnedTemperature = new double[n];
+		waterConductance = new double[n];
+		heatGain = new double[n];
 
 		double t0 = surface.initialTemperatureC() + 273.15;
 		double x0 = c.moistureDryBasis();
@@ -187,6 +238,18 @@ public final class CookSimulation implements Layers {
 		return new CookSimulation(surface, setup, settings).march(targetExtent);
 	}
 
+	/**
+	 * As {@link #run(Surface, HeatSetup, Target, CookSettings)}, handing the live state through the thickness
+	 * to {@code afterEachStep} after every time step (for fitting tools and tests; keep it cheap).
+	 */
+	public static CookResult run(Surface surface, HeatSetup setup, Target target, CookSettings settings,
+			Consumer<? super Layers> afterEachStep) {
+		double targetExtent = target.extentFor(surface.category());
+		CookSimulation simulation = new CookSimulation(surface, setup, settings);
+		simulation.afterEachStep = afterEachStep;
+		return simulation.march(targetExtent);
+	}
+
 	public static CookResult run(Surface surface, HeatSetup setup, Target target) {
 		return run(surface, setup, target, CookSettings.defaults());
 	}
@@ -195,21 +258,29 @@ public final class CookSimulation implements Layers {
 		List<Sample> series = settings.recordSeries() ? new ArrayList<>() : List.of();
 		double dt = settings.timeStepS();
 		double stopAt = settings.horizonS();
-		double nextOutput = 0;
+		double nextOutput = settings.recordSeries() ? settings.outputIntervalS() : Double.POSITIVE_INFINITY;
+		double nextChange = schedule.nextChangeAfter(0);
 		double reachedAt = Double.NaN;
 		double coreAtTarget = Double.NaN;
+		double crustAtTarget = Double.NaN;
+		double portionAtTarget = Double.NaN;
 		double maxSurface = temperature[0];
 		boolean everDry = false;
 		if (settings.recordSeries()) {
 			series.add(sample());
-			nextOutput = settings.outputIntervalS();
 		}
 		double core = core();
 		while (time < stopAt - 1e-9) {
-			double step = Math.min(dt, stopAt - time);
+			// land exactly on output times, flips and the end
+			double step = Math.min(dt, Math.min(stopAt, Math.min(nextOutput, nextChange)) - time);
 			double before = extent[0];
 			double coreBefore = core;
+			double crustBefore = acrylamide.crustUgPerKg();
+			double portionBefore = acrylamide.portionUgPerKg();
 			step(step);
+			if (afterEachStep != null) {
+				afterEachStep.accept(this);
+			}
 			core = core();
 			maxSurface = Math.max(maxSurface, temperature[0]);
 			everDry |= film[0] <= 0 && waterActivity(0) < 0.95;
@@ -217,12 +288,17 @@ public final class CookSimulation implements Layers {
 				double f = (targetExtent - before) / (extent[0] - before);
 				reachedAt = time - step + f * step;
 				coreAtTarget = coreBefore + f * (core - coreBefore);
+				crustAtTarget = crustBefore + f * (acrylamide.crustUgPerKg() - crustBefore);
+				portionAtTarget = portionBefore + f * (acrylamide.portionUgPerKg() - portionBefore);
 				stopAt = Math.min(settings.horizonS(),
-						Math.max(reachedAt * (1 + settings.runPastTargetFraction()), reachedAt + dt));
+						Math.max(reachedAt * (1 + settings.runPastTargetFraction()), reachedAt + settings.timeStepS()));
 			}
-			if (settings.recordSeries() && time >= nextOutput - 1e-9) {
+			if (time >= nextOutput - 1e-9) {
 				series.add(sample());
 				nextOutput += settings.outputIntervalS();
+			}
+			if (time >= nextChange - 1e-9) {
+				nextChange = schedule.nextChangeAfter(time + 1e-9);
 			}
 		}
 		if (settings.recordSeries() && series.get(series.size() - 1).timeS() < time - 1e-9) {
@@ -233,7 +309,7 @@ public final class CookSimulation implements Layers {
 		List<String> assumptions = new ArrayList<>(setup.assumptions());
 		assumptions.addAll(surfaceAssumptions());
 		return new CookResult(outcome, explanation, reachedAt, targetExtent, path.colourAt(targetExtent), ph,
-				coreAtTarget - 273.15, Double.NaN, Double.NaN, maxSurface - 273.15, extent[0], time, series, assumptions,
+				coreAtTarget - 273.15, crustAtTarget, portionAtTarget, maxSurface - 273.15, extent[0], time, series, assumptions,
 				new EnergyLedger(heatIn, vapourOut, evaporated),
 				new CookResult.FinalState(positions(), temperature, moisture, dryMass, film));
 	}
@@ -306,57 +382,58 @@ public final class CookSimulation implements Layers {
 			double mass = dryMass[i] * (1 + moisture[i]);
 			double porosity = Math.max(0, Math.min(0.95, 1 - mass * props[2] / volume[i]));
 			capacity[i] = mass * props[0];
-			conductivity[i] = porosity > 0
-					? Math.pow(props[1], 1 - porosity) * Math.pow(ThermalProperties.AIR_CONDUCTIVITY, porosity) : props[1];
+			// geometric-mean rule k_m^(1−ε)·k_gas^ε, written with one exp
+			conductivity[i] = porosity > 0 ? Math.exp((1 - porosity) * Math.log(props[1]) + porosity * LOG_GAS_CONDUCTIVITY)
+					: props[1];
 		}
 		for (int face = 0; face < 2; face++) {
 			int i = faceNode(face);
 			capacity[i] += film[face] * FoodComponent.WATER.specificHeat(temperature[i] - 273.15);
 		}
-		// (2) heat conduction, faces linearised
-		for (int i = 0; i < n; i++) {
-			lower[i] = 0;
-			upper[i] = 0;
-			diag[i] = capacity[i] / dt;
-			rhs[i] = capacity[i] / dt * temperature[i];
-		}
-		for (int i = 0; i < n - 1; i++) {
-			double d = grid.spacing(i);
-			double g = 1 / (0.5 * d / conductivity[i] + 0.5 * d / conductivity[i + 1]);
-			diag[i] += g;
-			diag[i + 1] += g;
-			upper[i] = -g;
-			lower[i + 1] = -g;
-		}
+		// (2) heat conduction with local boiling; each face's exchange linearised about an estimate of its new
+		// temperature, q ≈ q* + q'(T − T*) − h_fg(J* + J'(T − T*)) = b − a·T, re-linearised while the estimate moves
 		for (int face = 0; face < 2; face++) {
-			int i = faceNode(face);
-			FaceExchange exchange = schedule.at(face, now);
-			double aw = film[face] > 0 ? 1 : isotherm.waterActivity(moisture[i]);
-			exchange.evaluate(temperature[i], aw, boilingFlux[face], flux);
-			double latent = WaterVapour.latentHeat(temperature[i]);
-			double a = -(flux.heatFluxSlope - latent * flux.evaporationSlopeT);
-			diag[i] += a;
-			rhs[i] += flux.heatFlux - latent * flux.evaporation + a * temperature[i];
-			// remember the linearisation for the ledger and the moisture step
-			faceJ[face] = flux.evaporation;
-			faceSlopeJ[face] = flux.evaporationSlopeT;
-			heatFluxAtStart[face] = flux.heatFlux;
-			heatSlope[face] = flux.heatFluxSlope;
+			linearisedAt[face] = temperature[faceNode(face)];
 		}
-		solver.solve(lower, diag, upper, rhs, solution);
+		for (int pass = 0; pass < MAX_FACE_PASSES; pass++) {
+			for (int face = 0; face < 2; face++) {
+				int i = faceNode(face);
+				FaceExchange exchange = schedule.at(face, now);
+				double aw = film[face] > 0 ? 1 : isotherm.waterActivity(moisture[i]);
+				double t = linearisedAt[face];
+				exchange.evaluate(t, aw, boilingFlux[face], flux);
+				double latent = WaterVapour.latentHeat(t);
+				faceSlope[face] = -(flux.heatFluxSlope - latent * flux.evaporationSlopeT);
+				faceSource[face] = flux.heatFlux - latent * flux.evaporation + faceSlope[face] * t;
+				faceJ[face] = flux.evaporation;
+				faceSlopeJ[face] = flux.evaporationSlopeT;
+				heatFluxAtStart[face] = flux.heatFlux;
+				heatSlope[face] = flux.heatFluxSlope;
+			}
+			conduction.assemble(temperature, capacity, conductivity, dt, faceSlope[0], faceSource[0], faceSlope[1],
+					faceSource[1]);
+			solveWithBoiling(dt);
+			double moved = Math.max(Math.abs(solution[0] - linearisedAt[0]), Math.abs(solution[n - 1] - linearisedAt[1]));
+			if (moved < FACE_LINEARISATION_K) {
+				break;
+			}
+			linearisedAt[0] = solution[0];
+			linearisedAt[1] = solution[n - 1];
+		}
+		applyBoiling(dt);
 		for (int face = 0; face < 2; face++) {
-			int i = faceNode(face);
-			double dT = solution[i] - temperature[i];
+			// the face fluxes as the solve had them (a layer that ran dry is warmed only afterwards)
+			double dT = solvedTemperature[faceNode(face)] - linearisedAt[face];
 			heatIn += (heatFluxAtStart[face] + heatSlope[face] * dT) * dt;
 			faceJ[face] += faceSlopeJ[face] * dT;
 		}
-		System.arraycopy(solution, 0, temperature, 0, n);
 
-		// face evaporation or condensation through the standing water
+		// evaporation from standing water, or steam condensing on a wet face into standing water; vapour a dry
+		// face takes up from the air is sorbed into the layer (moisture step)
 		for (int face = 0; face < 2; face++) {
 			int i = faceNode(face);
 			double m = faceJ[face] * dt;
-			if (film[face] > 0 || m < 0) {
+			if (film[face] > 0 || (m < 0 && isotherm.waterActivity(moisture[i]) >= WET_FACE_AW)) {
 				double fromFilm = Math.min(film[face], m);
 				film[face] -= fromFilm;
 				account(fromFilm, temperature[i]);
@@ -370,19 +447,13 @@ public final class CookSimulation implements Layers {
 			}
 		}
 
-		// (3) local boiling
-		boiled[0] = 0;
-		boiled[1] = 0;
-		for (int i = 0; i < n; i++) {
-			if (temperature[i] > 373.0) {
-				boil(i, dt);
-			}
-		}
 		boilingFlux[0] = boiled[0] / dt;
 		boilingFlux[1] = boiled[1] / dt;
 
 		// (4) moisture diffusion, face evaporation implicit in moisture
 		moistureStep(dt);
+		// (4b) acrylamide in every layer, from this step's temperature and water
+		acrylamide.step(this, dt);
 
 		// (5) browning at both faces
 		for (int face = 0; face < 2; face++) {
@@ -403,61 +474,112 @@ public final class CookSimulation implements Layers {
 		evaporated += massKgPerM2;
 	}
 
-	private void boil(int i, double dt) {
-		int face = i == 0 ? 0 : i == n - 1 ? 1 : -1;
-		int half = grid.position(i) < 0.5 * grid.thickness() ? 0 : 1;
-		double c = capacity[i];
-		if (face >= 0 && film[face] > 0) {
-			double tb = WaterVapour.boilingTemperatureK(1.0);
-			if (temperature[i] <= tb) {
-				return;
-			}
-			double latent = WaterVapour.latentHeat(tb);
-			double m = Math.min(film[face], c * (temperature[i] - tb) / latent);
-			film[face] -= m;
-			temperature[i] -= m * latent / c;
-			account(m, tb);
-			boiled[half] += m;
-			if (film[face] > 0) {
-				return;
+	/**
+	 * (3) Local boiling, solved together with conduction: a layer holding water cannot be hotter than its
+	 * boiling point. Layers the plain solve would push above it are pinned there and solved again; the
+	 * heat each pinned layer receives beyond what it stores boils its water off (standing water first).
+	 */
+	private void solveWithBoiling(double dt) {
+		conduction.solve(solution, null, null);
+		boolean any = false;
+		for (int i = 0; i < n; i++) {
+			pinned[i] = false;
+			ranDry[i] = false;
+			if (solution[i] > FREE_WATER_BOILING_K - 0.5 && hasWater(i)) {
+				double tb = boilingPointOf(i);
+				if (solution[i] > tb) {
+					pinned[i] = true;
+					pinnedTemperature[i] = tb;
+					any = true;
+				}
 			}
 		}
-		double water = (moisture[i] - MIN_MOISTURE) * dryMass[i];
-		if (water <= 0 || temperature[i] <= boilingPoint(moisture[i])) {
+		if (!any) {
 			return;
 		}
-		double latent = WaterVapour.latentHeat(temperature[i]);
-		// find the boiled mass m at which the node sits exactly at the boiling point of what is left
-		double lo = 0;
-		double hi = Math.min(water, c * (temperature[i] - 373.0) / latent);
-		if (residual(i, hi, c, latent) > 0) {
-			lo = hi; // even this much leaves it above the boiling point: all of it goes
-		}
-		else {
-			for (int it = 0; it < 30 && hi - lo > 1e-9 * (1 + hi); it++) {
-				double mid = 0.5 * (lo + hi);
-				if (residual(i, mid, c, latent) > 0) {
-					lo = mid;
+		for (int pass = 0; pass < 2 * n; pass++) {
+			conduction.solve(solution, pinned, pinnedTemperature);
+			boolean changed = false;
+			for (int i = 0; i < n; i++) {
+				if (!pinned[i]) {
+					continue;
 				}
-				else {
-					hi = mid;
+				double surplus = conduction.surplus(i, solution);
+				if (surplus < 0) {
+					pinned[i] = false; // it loses heat at the boiling point: it is not boiling after all
+					changed = true;
+				}
+				else if (surplus * dt > availableWater(i) * WaterVapour.latentHeat(pinnedTemperature[i])) {
+					// it boils dry within the step: all its water goes, the rest of the heat moves on
+					pinned[i] = false;
+					ranDry[i] = true;
+					conduction.addSource(i, -availableWater(i) * WaterVapour.latentHeat(pinnedTemperature[i]) / dt);
+					changed = true;
 				}
 			}
+			if (!changed) {
+				break;
+			}
 		}
-		double m = lo;
-		temperature[i] -= m * latent / c;
-		moisture[i] -= m / dryMass[i];
-		account(m, temperature[i]);
+	}
+
+	/** Takes the solved temperatures and boils off what the pinned and dried-out layers shed. */
+	private void applyBoiling(double dt) {
+		boiled[0] = 0;
+		boiled[1] = 0;
+		for (int i = 0; i < n; i++) {
+			solvedTemperature[i] = solution[i];
+			double energy = pinned[i] ? conduction.surplus(i, solution) * dt
+					: ranDry[i] ? availableWater(i) * WaterVapour.latentHeat(pinnedTemperature[i]) : 0;
+			temperature[i] = solution[i];
+			if (energy > 0) {
+				boilOff(i, energy, pinnedTemperature[i]);
+			}
+		}
+	}
+
+	/** Water a layer can still boil off, kg/m²: standing water on its face and its own above the residue. */
+	private double availableWater(int i) {
+		double w = Math.max(0, (moisture[i] - MIN_MOISTURE) * dryMass[i]);
+		if (i == 0) {
+			w += film[0];
+		}
+		else if (i == n - 1) {
+			w += film[1];
+		}
+		return w;
+	}
+
+	private boolean hasWater(int i) {
+		return moisture[i] > MIN_MOISTURE || (i == 0 && film[0] > 0) || (i == n - 1 && film[1] > 0);
+	}
+
+	private double boilingPointOf(int i) {
+		if ((i == 0 && film[0] > 0) || (i == n - 1 && film[1] > 0)) {
+			return FREE_WATER_BOILING_K;
+		}
+		return boilingPoint(moisture[i]);
+	}
+
+	/** Boils {@code energy} (J/m²) worth of water off layer i at {@code boilingK}, standing water first. */
+	private void boilOff(int i, double energy, double boilingK) {
+		int face = i == 0 ? 0 : i == n - 1 ? 1 : -1;
+		int half = grid.position(i) < 0.5 * grid.thickness() ? 0 : 1;
+		double latent = WaterVapour.latentHeat(boilingK);
+		double m = Math.min(energy / latent, availableWater(i));
+		double left = m;
+		if (face >= 0 && film[face] > 0) {
+			double fromFilm = Math.min(film[face], left);
+			film[face] -= fromFilm;
+			left -= fromFilm;
+		}
+		moisture[i] = Math.max(MIN_MOISTURE, moisture[i] - left / dryMass[i]);
+		account(m, boilingK);
 		boiled[half] += m;
 	}
 
-	private double residual(int i, double m, double c, double latent) {
-		double t = temperature[i] - m * latent / c;
-		return t - boilingPoint(moisture[i] - m / dryMass[i]);
-	}
-
 	private double boilingPoint(double x) {
-		return WaterVapour.boilingTemperatureK(isotherm.waterActivity(x));
+		return WaterVapour.boilingTemperatureKFast(isotherm.waterActivity(x));
 	}
 
 	private void moistureStep(double dt) {
@@ -470,34 +592,38 @@ public final class CookSimulation implements Layers {
 		for (int i = 0; i < n - 1; i++) {
 			double d = grid.spacing(i);
 			double dryDensity = 0.5 * (dryMass[i] / volume[i] + dryMass[i + 1] / volume[i + 1]);
-			double g = dryDensity * MoistureDiffusivity.at(0.5 * (temperature[i] + temperature[i + 1])) / d;
+			double g = dryDensity * MoistureDiffusivity.at(0.5 * (temperature[i] + temperature[i + 1]),
+					0.5 * (moisture[i] + moisture[i + 1])) / d;
+			waterConductance[i] = g;
 			diag[i] += g;
 			diag[i + 1] += g;
 			upper[i] = -g;
 			lower[i + 1] = -g;
 		}
-		// evaporation from a bare face into gas: J(X) ≈ J* + s·(X − X*), s = dJ/daw · daw/dX
+		// evaporation from a bare face into gas: J(X) ≈ J* + s·(X − X*), s = dJ/daw · daw/dX, where J* is
+		// what the heat step already drew latent heat for
 		for (int face = 0; face < 2; face++) {
 			int i = faceNode(face);
-			FaceExchange exchange = schedule.at(face, time);
 			if (film[face] > 0) {
 				continue;
 			}
+			FaceExchange exchange = schedule.at(face, time);
 			double x = moisture[i];
 			double aw = isotherm.waterActivity(x);
 			exchange.evaluate(temperature[i], aw, boilingFlux[face], flux);
-			double j = flux.evaporation;
+			double j = faceJ[face];
 			double dx = 1e-4 + 1e-3 * x;
-			double s = flux.evaporationSlopeAw * (isotherm.waterActivity(x + dx) - aw) / dx;
+			double slope = flux.evaporationSlopeAw * (isotherm.waterActivity(x + dx) - aw) / dx;
 			evapPredicted[face] = j;
-			evapSlope[face] = s;
-			diag[i] += s;
-			rhs[i] -= j - s * x;
+			evapSlope[face] = slope;
+			diag[i] += slope;
+			rhs[i] -= j - slope * x;
 		}
 		double[] before = moistureBefore;
 		System.arraycopy(moisture, 0, before, 0, n);
 		solver.solve(lower, diag, upper, rhs, solution);
 		System.arraycopy(solution, 0, moisture, 0, n);
+		carryEnthalpyWithWater(dt);
 		for (int face = 0; face < 2; face++) {
 			int i = faceNode(face);
 			if (film[face] > 0) {
@@ -508,9 +634,9 @@ public final class CookSimulation implements Layers {
 				j -= dryMass[i] * (MIN_MOISTURE - moisture[i]) / dt;
 				moisture[i] = MIN_MOISTURE;
 			}
-			// the latent heat of what actually left is drawn from the face node
+			// the heat step drew latent heat for J*; the face node pays for the difference
 			double latent = WaterVapour.latentHeat(temperature[i]);
-			temperature[i] -= latent * j * dt / capacity[i];
+			temperature[i] -= latent * (j - evapPredicted[face]) * dt / capacity[i];
 			account(j * dt, temperature[i]);
 			evapPredicted[face] = 0;
 			evapSlope[face] = 0;
@@ -523,6 +649,30 @@ public final class CookSimulation implements Layers {
 	}
 
 
+	/**
+	 * Water diffusing into a layer arrives at the temperature of the layer it left: mix its sensible
+	 * heat in, so moisture transport neither makes nor loses energy.
+	 */
+	private void carryEnthalpyWithWater(double dt) {
+		for (int i = 0; i < n; i++) {
+			heatGain[i] = 0;
+		}
+		for (int i = 0; i < n - 1; i++) {
+			double m = waterConductance[i] * (moisture[i] - moisture[i + 1]) * dt; // kg/m² from i to i+1
+			if (m > 0) {
+				heatGain[i + 1] += m * (temperature[i] - temperature[i + 1]);
+			}
+			else {
+				heatGain[i] += -m * (temperature[i + 1] - temperature[i]);
+			}
+		}
+		for (int i = 0; i < n; i++) {
+			if (heatGain[i] != 0) {
+				temperature[i] += heatGain[i] * FoodComponent.WATER.specificHeat(temperature[i] - 273.15) / capacity[i];
+			}
+		}
+	}
+
 	// ---------------------------------------------------------------- outputs
 
 	private double core() {
@@ -532,7 +682,7 @@ public final class CookSimulation implements Layers {
 	private Sample sample() {
 		return new Sample(time, temperature[0] - 273.15, temperature[n - 1] - 273.15, core() - 273.15,
 				film[0] > 0 ? 1 : isotherm.waterActivity(moisture[0]), moisture[0], film[0] * 1000, extent[0],
-				path.colourAt(extent[0]), Double.NaN, Double.NaN);
+				path.colourAt(extent[0]), acrylamide.crustUgPerKg(), acrylamide.portionUgPerKg());
 	}
 
 	// ---------------------------------------------------------------- Layers view

@@ -24,7 +24,7 @@ public enum FoodCategory {
 			Parameter.assumption("ε0", "initial gas fraction of whole muscle", 0, "–", "whole muscle has no pores"),
 			Isotherms.MEAT,
 			new BrowningKinetics(new ArrheniusRate(
-					Parameter.commonPractice("k0", "pre-exponential factor, meat surface browning", 5.0e5, "1/s",
+					Parameter.commonPractice("k0", "pre-exponential factor, meat surface browning", 2.0e5, "1/s",
 							"calibrated so a patted-dry 25 mm steak in a 220 °C oiled pan is browned in 3–4 min per side (common practice)"),
 					Isotherms.ZANONI_EA),
 					Parameter.assumption("aw,ref", "water activity at which the meat rate is referenced", 0.4, "–",
@@ -49,8 +49,8 @@ public enum FoodCategory {
 			Parameter.assumption("ε0", "initial gas fraction of skin", 0, "–", "skin treated as pore-free"),
 			Isotherms.MEAT,
 			new BrowningKinetics(new ArrheniusRate(
-					Parameter.commonPractice("k0", "pre-exponential factor, poultry skin browning", 2.0e6, "1/s",
-							"calibrated so skin-on chicken in a 200 °C fan oven is golden in 25–35 min (common practice)"),
+					Parameter.commonPractice("k0", "pre-exponential factor, poultry skin browning", 1.5e5, "1/s",
+							"calibrated so skin-on chicken in a 200 °C fan oven is golden in 20–30 min (common practice)"),
 					Isotherms.ZANONI_EA),
 					Parameter.assumption("aw,ref", "water activity at which the rate is referenced", 0.4, "–", "dry crust"),
 					Parameter.secondary("pH,ref", "typical pH of poultry", 6.0, "–", "poultry 5.7–6.0 (quoted in food pH tables)"),
@@ -96,8 +96,8 @@ public enum FoodCategory {
 			Parameter.assumption("ε0", "initial gas fraction of raw potato", 0.01, "–", "raw tuber is nearly pore-free (from memory)"),
 			Isotherms.POTATO,
 			new BrowningKinetics(new ArrheniusRate(
-					Parameter.commonPractice("k0", "pre-exponential factor, potato surface browning", 1.6e5, "1/s",
-							"calibrated so 10 mm chips in 175 °C oil are golden in 5–7 min (common practice)"),
+					Parameter.commonPractice("k0", "pre-exponential factor, potato surface browning", 1.5e5, "1/s",
+							"calibrated so 10 mm chips in 175 °C oil are golden in 6–8 min (common practice)"),
 					Isotherms.ZANONI_EA),
 					Parameter.assumption("aw,ref", "water activity at which the potato rate is referenced", 0.4, "–", "dry crust"),
 					Parameter.published("pH,ref", "typical pH of potato", 5.8, "–", "potato 5.4–6.1 (FDA, approximate pH of foods)"),
@@ -113,7 +113,7 @@ public enum FoodCategory {
 					BrowningStage.byLightness("brown", "Brown", 50))),
 
 	BREAD("bread", "Bread or dough",
-			new Composition(43, 9, 2, 1.5, 1, 39.5, 2.5, 1.5),
+			new Composition(43, 9, 2, 1.5, 0, 40.5, 2.5, 1.5),
 			// wheat flour 0.1–0.5 g/kg (from memory), diluted by the dough's water
 			150, 0, 30, 5.4, 22,
 			Parameter.assumption("β", "buffer capacity of bread dough", 20, "mmol H⁺/(pH·kg)", "not measured; low (from memory)"),
@@ -169,7 +169,7 @@ public enum FoodCategory {
 			Parameter.assumption("ε0", "initial gas fraction", 0.02, "–", "from memory"),
 			Isotherms.POTATO,
 			new BrowningKinetics(new ArrheniusRate(
-					Parameter.commonPractice("k0", "pre-exponential factor (potato kinetics borrowed)", 1.6e5, "1/s",
+					Parameter.commonPractice("k0", "pre-exponential factor (potato kinetics borrowed)", 1.5e5, "1/s",
 							"potato value; vegetables differ mainly by their sugar, which the reactant factor carries"),
 					Isotherms.ZANONI_EA),
 					Parameter.assumption("aw,ref", "water activity at which the rate is referenced", 0.4, "–", "dry crust"),

@@ -8,6 +8,11 @@ public interface FaceSchedule {
 	/** True if the face is the heated one at this time (for reporting the browned face). */
 	boolean heated(int face, double timeS);
 
+	/** The next time after {@code timeS} at which the faces' conditions change (a flip); +∞ if never. */
+	default double nextChangeAfter(double timeS) {
+		return Double.POSITIVE_INFINITY;
+	}
+
 	/** Flip-free setups in which both faces see the same heat. */
 	boolean symmetric();
 
@@ -27,6 +32,12 @@ public interface FaceSchedule {
 			@Override
 			public boolean heated(int face, double timeS) {
 				return down(face, timeS);
+			}
+
+			@Override
+			public double nextChangeAfter(double timeS) {
+				return flipEverySeconds > 0 ? (Math.floor(timeS / flipEverySeconds) + 1) * flipEverySeconds
+						: Double.POSITIVE_INFINITY;
 			}
 
 			@Override

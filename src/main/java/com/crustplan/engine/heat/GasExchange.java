@@ -2,13 +2,14 @@ package com.crustplan.engine.heat;
 
 import com.crustplan.engine.model.Parameter;
 import com.crustplan.engine.water.Atmosphere;
+import com.crustplan.engine.water.SaturationPressure;
 import com.crustplan.engine.water.WaterVapour;
 
 /**
  * A face open to gas (oven air, steam, kitchen air, or under a radiant heater): convection, grey-body
- * radiation to surroundings at {@code radiantK}, and evaporation J = h_m(aw·ρv,sat(Ts) − ρv,gas) with h_m
- * from the Chilton–Colburn analogy h/h_m = ρ·cp·Le^(2/3) in its vapour-density form (Incropera,
- * Fundamentals of Heat and Mass Transfer, §6.7).
+ * radiation to surroundings at {@code radiantK}, and evaporation J = h_m·(aw·p_sat(Ts) − p_v)/(R_v·T_film)
+ * with h_m from the Chilton–Colburn analogy h/h_m = ρ·cp·Le^(2/3) (Incropera, Fundamentals of Heat and
+ * Mass Transfer, §6.7): the vapour-density form with both densities taken at the film temperature.
  */
 public final class GasExchange implements FaceExchange {
 
@@ -23,7 +24,11 @@ public final class GasExchange implements FaceExchange {
 
 	private final double emissivity;
 
-	private final double gasVapourDensity;
+	private final double gasVapourPressure;
+
+	private final double gasSpecificHeat;
+
+	private final double lewisFactor = Math.pow(LEWIS_NUMBER.value(), 2.0 / 3.0);
 
 	private final String description;
 
@@ -32,7 +37,8 @@ public final class GasExchange implements FaceExchange {
 		this.convection = convectionWPerM2K;
 		this.radiantK = radiantK;
 		this.emissivity = Radiation.FOOD_EMISSIVITY.value();
-		this.gasVapourDensity = gas.vapourDensity();
+		this.gasVapourPressure = gas.vapourPressurePa();
+		this.gasSpecificHeat = gas.specificHeat();
 		this.description = description;
 	}
 
@@ -44,17 +50,19 @@ public final class GasExchange implements FaceExchange {
 		out.heatFlux = convection * (ta - surfaceK) + emissivity * Radiation.SIGMA * (tr2 * tr2 - ts3 * surfaceK);
 		out.heatFluxSlope = -convection - 4 * emissivity * Radiation.SIGMA * ts3;
 		double film = 0.5 * (ta + surfaceK);
-		double hm = massTransferCoefficient(film);
-		double rhoSat = WaterVapour.saturatedVapourDensity(surfaceK);
-		double rhoSatUp = WaterVapour.saturatedVapourDensity(surfaceK + 0.05);
-		out.evaporation = hm * (waterActivity * rhoSat - gasVapourDensity);
-		out.evaporationSlopeT = hm * waterActivity * (rhoSatUp - rhoSat) / 0.05;
-		out.evaporationSlopeAw = hm * rhoSat;
+		// driving force in partial pressures over the film temperature, so a face below the dew point
+		// condenses and a wet face in pure steam settles at the boiling point
+		double perPascal = massTransferCoefficient(film) / (WaterVapour.GAS_CONSTANT.value() * film);
+		double pSat = SaturationPressure.pascal(surfaceK);
+		double pSatUp = SaturationPressure.pascal(surfaceK + 0.05);
+		out.evaporation = perPascal * (waterActivity * pSat - gasVapourPressure);
+		out.evaporationSlopeT = perPascal * waterActivity * (pSatUp - pSat) / 0.05;
+		out.evaporationSlopeAw = perPascal * pSat;
 	}
 
 	/** h_m = h / (ρ·cp·Le^(2/3)), m/s. */
 	public double massTransferCoefficient(double filmK) {
-		return convection / (gas.density(filmK) * gas.specificHeat() * Math.pow(LEWIS_NUMBER.value(), 2.0 / 3.0));
+		return convection / (gas.density(filmK) * gasSpecificHeat * lewisFactor);
 	}
 
 	public Atmosphere gas() {

@@ -71,8 +71,18 @@ public enum FoodComponent {
 	}
 
 	public String formulaText() {
-		return String.format("k = %.5g %+.5g·T %+.5g·T²;  ρ = %.5g %+.5g·T %+.5g·T²;  cp = %.5g %+.5g·T %+.5g·T²", k0,
-				k1, k2, rho0, rho1, rho2, cp0, cp1, cp2);
+		return "k = " + poly(k0, k1, k2) + ";  ρ = " + poly(rho0, rho1, rho2) + ";  cp = " + poly(cp0, cp1, cp2);
+	}
+
+	private static String poly(double a, double b, double c) {
+		StringBuilder s = new StringBuilder(String.format(java.util.Locale.ROOT, "%.5g", a));
+		if (b != 0) {
+			s.append(b < 0 ? " − " : " + ").append(String.format(java.util.Locale.ROOT, "%.5g", Math.abs(b))).append("·T");
+		}
+		if (c != 0) {
+			s.append(c < 0 ? " − " : " + ").append(String.format(java.util.Locale.ROOT, "%.5g", Math.abs(c))).append("·T²");
+		}
+		return s.toString();
 	}
 
 }
