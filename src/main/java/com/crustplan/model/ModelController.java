@@ -4,13 +4,15 @@ import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.web.bind.annotation.GetMapping;
 
-/** The model and its sources, generated from the constants the engine runs on. */
+import com.crustplan.engine.model.ModelCatalogue;
+
+/** The model and its sources, generated from the engine's own catalogue of equations and constants. */
 @Controller
 class ModelController {
 
 	@GetMapping("/model")
 	String model(Model model) {
-		model.addAttribute("sections", ModelSections.sections());
+		model.addAttribute("sections", ModelCatalogue.sections());
 		return "model/model";
 	}
 
