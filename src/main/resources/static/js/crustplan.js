@@ -20,6 +20,20 @@
       out.classList.toggle('error', r < -0.05);
     }
     parts.forEach(function (p) { form.elements[p].addEventListener('input', remainder); });
+    // offer only the products of the chosen category
+    var product = form.elements.product;
+    function products() {
+      if (!product) { return; }
+      var cat = form.elements.category.value;
+      Array.prototype.forEach.call(product.options, function (o) {
+        var on = !o.dataset.category || o.dataset.category === cat;
+        o.hidden = !on;
+        o.disabled = !on;
+        if (!on && o.selected) { product.value = ''; }
+      });
+    }
+    form.elements.category.addEventListener('change', products);
+    products();
     var defaults = JSON.parse(form.dataset.defaults || '{}');
     var fill = document.getElementById('fill-defaults');
     if (fill) {

@@ -73,11 +73,21 @@ class PlanApiController {
 				m.put("extent", s.extent());
 				stages.add(m);
 			}
+			List<Map<String, Object>> products = new ArrayList<>();
+			for (com.crustplan.engine.acrylamide.Product p : com.crustplan.engine.acrylamide.Product.of(c)) {
+				Map<String, Object> m = new LinkedHashMap<>();
+				m.put("key", p.key());
+				m.put("label", p.label());
+				m.put("benchmarkUgPerKg", p.benchmark().map(b -> b.microgramsPerKg()).orElse(null));
+				m.put("default", p == com.crustplan.engine.acrylamide.Product.defaultFor(c));
+				products.add(m);
+			}
 			Map<String, Object> cat = new LinkedHashMap<>();
 			cat.put("key", c.key());
 			cat.put("label", c.label());
 			cat.put("defaults", d);
 			cat.put("stages", stages);
+			cat.put("products", products);
 			out.add(cat);
 		}
 		return out;
@@ -86,8 +96,8 @@ class PlanApiController {
 	@PostMapping("/plans")
 	ResponseEntity<?> plan(@RequestBody(required = false) String body) {
 		PlanRequestReader.PlanRequest req = PlanRequestReader.read(body, json);
-		PlanReport r = planner.plan(req.surface(), req.setup(), req.target(), req.horizonMinutes(),
-				TemperatureUnit.CELSIUS);
+		PlanReport r = planner.plan(req.surface(), req.product(), req.setup(), req.target(), req.horizonMinutes(),
+				TemperatureUnit.CELSIUS, req.mitigations());
 		return ResponseEntity.ok(PlanResponse.of(r));
 	}
 
@@ -113,7 +123,20 @@ class PlanApiController {
 			.body(ApiError.of("server", "the plan could not be computed; the error is logged"));
 	}
 
-	record Acrylamide(Double crustUgPerKg, Double portionUgPerKg, Double benchmarkUgPerKg, String zone) {
+	record Acrylamide(Double crustUgPerKg, Double portionUgPerKg, Double benchmarkUgPerKg, String zone,
+			String product, String basis, List<Change> mitigations) {
+	}
+
+	/** One acrylamide-reducing change, as the engine computed it (µg/kg as eaten, minutes to target). */
+	record Change(String code, String title, String change, boolean applicable, String reason, String basis,
+			Double beforeUgPerKg, Double afterUgPerKg, Double beforeMinutes, Double afterMinutes, String source) {
+
+		static Change of(com.crustplan.engine.acrylamide.Mitigation m) {
+			return new Change(m.code(), m.title(), m.change(), m.applicable(), m.reason(), m.basis().meaning(),
+					PlanReport.finite(m.beforeUgPerKg()), PlanReport.finite(m.afterUgPerKg()),
+					PlanReport.finite(m.beforeMinutes()), PlanReport.finite(m.afterMinutes()), m.source());
+		}
+
 	}
 
 	record Series(List<Double> timeS, List<Double> surfaceTemperatureC, List<Double> coreTemperatureC,
@@ -142,7 +165,8 @@ class PlanApiController {
 			AcrylamideView a = r.acrylamide();
 			return new PlanResponse(r.reached(), r.result().explanation(), r.timeToTargetS(), r.surface().ph(),
 					r.coreTemperatureAtTargetC(), r.targetLabel(), r.targetHex(),
-					new Acrylamide(a.crustUgPerKg(), a.portionUgPerKg(), a.benchmarkUgPerKg(), a.zone()),
+					new Acrylamide(a.crustUgPerKg(), a.portionUgPerKg(), a.benchmarkUgPerKg(), a.zone(), a.product(),
+							a.basis(), a.mitigations().stream().map(Change::of).toList()),
 					new Series(t, surface, core, aw, lightness, hex), r.warnings(), r.cautions(),
 					r.result().assumptions());
 		}

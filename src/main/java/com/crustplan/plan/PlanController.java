@@ -104,8 +104,8 @@ class PlanController {
 		model.addAttribute("saved", plan);
 		try {
 			PlanInputs inputs = saved.inputs(plan);
-			PlanReport report = planner.plan(inputs.surface().toSurface(), inputs.setup().toHeatSetup(),
-					inputs.target(), inputs.horizonMinutes(), units);
+			PlanReport report = planner.plan(inputs.surface().toSurface(), inputs.surface().toProduct(),
+					inputs.setup().toHeatSetup(), inputs.target(), inputs.horizonMinutes(), units, true);
 			addReport(model, report, units);
 		}
 		catch (InvalidInputException e) {
@@ -168,8 +168,8 @@ class PlanController {
 	private PlanReport compute(PlanInputs inputs, PlanForm form, BindingResult result, TemperatureUnit units,
 			Model model) {
 		try {
-			PlanReport report = planner.plan(inputs.surface().toSurface(), inputs.setup().toHeatSetup(),
-					inputs.target(), inputs.horizonMinutes(), units);
+			PlanReport report = planner.plan(inputs.surface().toSurface(), inputs.surface().toProduct(),
+					inputs.setup().toHeatSetup(), inputs.target(), inputs.horizonMinutes(), units, true);
 			addReport(model, report, units);
 			return report;
 		}

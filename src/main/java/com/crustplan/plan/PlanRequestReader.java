@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
+import com.crustplan.engine.acrylamide.Product;
 import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
@@ -24,7 +25,8 @@ import tools.jackson.databind.json.JsonMapper;
  */
 final class PlanRequestReader {
 
-	record PlanRequest(Surface surface, HeatSetup setup, Target target, double horizonMinutes) {
+	record PlanRequest(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
+			boolean mitigations) {
 	}
 
 	/** Thrown with every field error found in one pass. */
@@ -79,6 +81,7 @@ final class PlanRequestReader {
 		JsonNode h = object(root, "heat");
 		JsonNode t = object(root, "target");
 		Double horizon = number(root, "horizonMinutes", "horizonMinutes");
+		Boolean mitigations = bool(root, "mitigations", "mitigations");
 
 		FoodCategory category = null;
 		if (s != null) {
@@ -94,13 +97,14 @@ final class PlanRequestReader {
 			}
 		}
 		Surface surface = category == null ? null : surface(s, category);
+		Product product = category == null ? null : product(s, category);
 		HeatSetup setup = h == null ? null : heat(h);
 		Target target = t == null ? null : target(t);
 		if (!errors.isEmpty()) {
 			throw new BadRequest(errors);
 		}
 		double horizonMinutes = horizon == null ? PlanService.DEFAULT_HORIZON_MINUTES : horizon;
-		return new PlanRequest(surface, setup, target, horizonMinutes);
+		return new PlanRequest(surface, product, setup, target, horizonMinutes, mitigations == null || mitigations);
 	}
 
 	private Surface surface(JsonNode s, FoodCategory c) {
@@ -129,6 +133,17 @@ final class PlanRequestReader {
 		}
 		catch (InvalidInputException e) {
 			error("surface." + e.field(), e.reason());
+			return null;
+		}
+	}
+
+	private Product product(JsonNode s, FoodCategory c) {
+		String key = text(s, "product", "surface.product");
+		try {
+			return Product.forSurface(c, key);
+		}
+		catch (InvalidInputException e) {
+			error("surface.product", e.reason());
 			return null;
 		}
 	}

@@ -7,6 +7,12 @@ import java.util.TreeSet;
 
 import org.springframework.stereotype.Service;
 
+import com.crustplan.engine.acrylamide.AcrylamideCautions;
+import com.crustplan.engine.acrylamide.AcrylamideEstimate;
+import com.crustplan.engine.acrylamide.AcrylamideWarning;
+import com.crustplan.engine.acrylamide.Mitigation;
+import com.crustplan.engine.acrylamide.Mitigations;
+import com.crustplan.engine.acrylamide.Product;
 import com.crustplan.engine.cook.CookResult;
 import com.crustplan.engine.cook.CookSettings;
 import com.crustplan.engine.cook.CookSimulation;
@@ -48,22 +54,38 @@ public class PlanService {
 
 	static final double FOOD_CODE_POULTRY_F = 165;
 
-	/** Commission Regulation (EU) 2017/2158, Annex I: fry potato products at 160–175 °C. */
-	static final double EU_FRYING_MAX_C = 175;
-
 	/** Above neutral, Maillard browning and acrylamide formation speed up (Martins, Jongen & van Boekel 2000, Trends Food Sci Technol 11:364). */
 	static final double ALKALINE_PH = 7;
 
+	/** A plan for the category's usual product, with the acrylamide changes worked out. */
 	public PlanReport plan(Surface surface, HeatSetup setup, Target target, double horizonMinutes,
 			TemperatureUnit unit) {
+		return plan(surface, Product.defaultFor(surface.category()), setup, target, horizonMinutes, unit, true);
+	}
+
+	/**
+	 * @param product what the surface is sold as (sets the acrylamide benchmark)
+	 * @param withMitigations whether to run the model again for each acrylamide-reducing change
+	 * (a few hundred milliseconds)
+	 */
+	public PlanReport plan(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
+			TemperatureUnit unit, boolean withMitigations) {
 		if (!Double.isFinite(horizonMinutes) || horizonMinutes < 1 || horizonMinutes > MAX_HORIZON_MINUTES) {
 			throw new InvalidInputException("horizonMinutes",
 					String.format(Locale.ROOT, "must be from 1 to %.0f minutes", MAX_HORIZON_MINUTES));
 		}
-		CookResult result = CookSimulation.run(surface, setup, target,
-				CookSettings.defaults().withHorizonS(horizonMinutes * 60));
-		return new PlanReport(surface, setup, target.describe(surface.category()), horizonMinutes, result,
-				warnings(surface, setup, result, unit), cautions(surface, setup), acrylamide(result), swatches(result));
+		CookSettings settings = CookSettings.defaults().withHorizonS(horizonMinutes * 60);
+		CookResult result = CookSimulation.run(surface, setup, target, settings);
+		AcrylamideEstimate estimate = AcrylamideEstimate.of(surface, product, setup, target, result);
+		List<Mitigation> mitigations = withMitigations
+				? Mitigations.compute(surface, product, setup, target, settings) : List.of();
+		List<PlanWarning> warnings = warnings(surface, setup, result, unit);
+		for (AcrylamideWarning a : estimate.warnings()) {
+			warnings.add(new PlanWarning(a.code().toLowerCase(Locale.ROOT).replace('_', '-'),
+					a.message() + " (" + a.basis() + ")"));
+		}
+		return new PlanReport(surface, setup, target.describe(surface.category()), horizonMinutes, result, warnings,
+				cautions(surface, setup), AcrylamideView.of(estimate, mitigations), swatches(result));
 	}
 
 	private static List<PlanWarning> warnings(Surface surface, HeatSetup setup, CookResult result, TemperatureUnit u) {
@@ -89,12 +111,6 @@ public class PlanService {
 						code(u, FOOD_CODE_COMMINUTED_C, FOOD_CODE_COMMINUTED_F))));
 			}
 		}
-		if (setup instanceof HeatSetup.DeepFryer f && c == FoodCategory.POTATO && f.oilTemperatureC() > EU_FRYING_MAX_C) {
-			w.add(new PlanWarning("frying-above-175", String.format(Locale.ROOT,
-					"Oil at %s is above the %s that Regulation (EU) 2017/2158 advises for potato products, "
-							+ "to keep acrylamide down.",
-					u.format(f.oilTemperatureC()), u.format(EU_FRYING_MAX_C))));
-		}
 		if (surface.ph() > ALKALINE_PH) {
 			w.add(new PlanWarning("alkaline-surface", String.format(Locale.ROOT,
 					"The additions bring the surface to pH %.1f: above neutral browning runs faster and, in "
@@ -111,8 +127,7 @@ public class PlanService {
 
 	private static List<String> cautions(Surface surface, HeatSetup setup) {
 		List<String> c = new ArrayList<>();
-		c.add("Acrylamide forms in browned starchy and sugary foods; IARC classes it as probably carcinogenic "
-				+ "to humans (Group 2A). Any figure here is a model estimate, not a laboratory measurement.");
+		c.add(AcrylamideCautions.CARCINOGEN + " " + AcrylamideCautions.ESTIMATE);
 		c.add("Check the core temperature with a calibrated probe thermometer: the predicted core temperature "
 				+ "is an estimate for a slab of even thickness.");
 		c.add("Follow your local food code and licensed practice. For reference, the FDA Food Code 2022, section "
@@ -129,21 +144,6 @@ public class PlanService {
 			c.add("Bicarbonate raises the surface pH: colour comes faster, so check earlier than usual.");
 		}
 		return c;
-	}
-
-	/** Acrylamide at the target (or at the end when it is not reached), where the engine gives an estimate. */
-	private static AcrylamideView acrylamide(CookResult result) {
-		double crust = result.crustAcrylamideAtTargetUgPerKg();
-		double portion = result.portionAcrylamideAtTargetUgPerKg();
-		if (!result.reached() && !result.series().isEmpty()) {
-			Sample last = result.series().get(result.series().size() - 1);
-			crust = last.crustAcrylamideUgPerKg();
-			portion = last.portionAcrylamideUgPerKg();
-		}
-		if (!Double.isFinite(crust) && !Double.isFinite(portion)) {
-			return AcrylamideView.NOT_AVAILABLE;
-		}
-		return new AcrylamideView(PlanReport.finite(crust), PlanReport.finite(portion), null, null);
 	}
 
 	/** Evenly spaced swatches over the run; the one nearest the target time is marked. */

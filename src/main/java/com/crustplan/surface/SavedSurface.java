@@ -10,6 +10,7 @@ import jakarta.persistence.Id;
 import jakarta.persistence.Table;
 import jakarta.persistence.Version;
 
+import com.crustplan.engine.acrylamide.Product;
 import com.crustplan.engine.food.FoodCategory;
 
 /** A surface the kitchen keeps (a cut, a dough, a batch of potatoes). Never handed to the engine. */
@@ -29,6 +30,10 @@ public class SavedSurface {
 
 	@Column(nullable = false, length = 32)
 	private String category;
+
+	/** Empty for the category's usual product. */
+	@Column(length = 32)
+	private String product;
 
 	@Column(name = "water_pct", nullable = false)
 	private double waterPct;
@@ -97,6 +102,7 @@ public class SavedSurface {
 	public void update(SurfaceForm f) {
 		name = f.name().trim();
 		category = FoodCategory.byKey(f.category()).map(FoodCategory::key).orElse(f.category());
+		product = f.product() == null || f.product().isBlank() ? null : f.toProduct().key();
 		waterPct = f.waterPct();
 		proteinPct = f.proteinPct();
 		fatPct = f.fatPct();
@@ -131,6 +137,22 @@ public class SavedSurface {
 
 	public String getCategory() {
 		return category;
+	}
+
+	public String getProduct() {
+		return product;
+	}
+
+	/** What it is sold as, for pages: the category's usual product when none was chosen. */
+	public String getProductLabel() {
+		return FoodCategory.byKey(category).map(c -> {
+			try {
+				return Product.forSurface(c, product).label();
+			}
+			catch (IllegalArgumentException e) {
+				return product;
+			}
+		}).orElse(product);
 	}
 
 	public double getWaterPct() {

@@ -17,6 +17,7 @@ import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
+import com.crustplan.engine.acrylamide.Product;
 import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.InvalidInputException;
@@ -120,6 +121,7 @@ class SurfaceController {
 		}
 		try {
 			form.toSurface();
+			form.toProduct();
 			return true;
 		}
 		catch (InvalidInputException e) {
@@ -136,6 +138,7 @@ class SurfaceController {
 		model.addAttribute("action", action);
 		model.addAttribute("title", title);
 		model.addAttribute("categories", Arrays.asList(FoodCategory.values()));
+		model.addAttribute("products", Arrays.asList(Product.values()));
 		model.addAttribute("derived", derived(shown));
 		model.addAttribute("defaultsJson", json.write(defaultsByKey(units)));
 		return FORM;

@@ -6,6 +6,7 @@ import jakarta.validation.constraints.NotBlank;
 import jakarta.validation.constraints.NotNull;
 import jakarta.validation.constraints.Size;
 
+import com.crustplan.engine.acrylamide.Product;
 import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.InvalidInputException;
@@ -20,6 +21,7 @@ import com.crustplan.system.TemperatureUnit;
 public record SurfaceForm(
 		@NotBlank(message = "give the surface a name") @Size(max = 80, message = "at most 80 characters") String name,
 		@NotBlank(message = "choose a category") String category,
+		@Size(max = 32, message = "choose from the list") String product,
 		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double waterPct,
 		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double proteinPct,
 		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double fatPct,
@@ -41,14 +43,14 @@ public record SurfaceForm(
 	/** A new form with the category's defaults. */
 	public static SurfaceForm defaults(FoodCategory c, String name, TemperatureUnit unit) {
 		Composition k = c.defaultComposition();
-		return new SurfaceForm(name, c.key(), k.waterPct(), k.proteinPct(), k.fatPct(), k.reducingSugarPct(),
+		return new SurfaceForm(name, c.key(), null, k.waterPct(), k.proteinPct(), k.fatPct(), k.reducingSugarPct(),
 				k.sucrosePct(), k.starchPct(), k.fibrePct(), k.ashPct(), c.defaultAsparagineMgPerKg(),
 				c.defaultSurfaceWaterGPerM2(), c.defaultThicknessMm(), null, 0.0, 0.0,
 				round1(unit.fromCelsius(c.defaultInitialTemperatureC())), unit.code(), null);
 	}
 
 	public static SurfaceForm of(SavedSurface s, TemperatureUnit unit) {
-		return new SurfaceForm(s.getName(), s.getCategory(), s.getWaterPct(), s.getProteinPct(), s.getFatPct(),
+		return new SurfaceForm(s.getName(), s.getCategory(), s.getProduct(), s.getWaterPct(), s.getProteinPct(), s.getFatPct(),
 				s.getReducingSugarPct(), s.getSucrosePct(), s.getStarchPct(), s.getFibrePct(), s.getAshPct(),
 				s.getAsparagineMgPerKg(), s.getSurfaceWaterGPerM2(), s.getThicknessMm(), s.getPh(),
 				s.getBicarbonateGPerKg(), s.getAcidGPerKg(), round1(unit.fromCelsius(s.getInitialTemperatureC())),
@@ -56,7 +58,7 @@ public record SurfaceForm(
 	}
 
 	public SurfaceForm withName(String newName) {
-		return new SurfaceForm(newName, category, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct,
+		return new SurfaceForm(newName, category, product, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct,
 				starchPct, fibrePct, ashPct, asparagineMgPerKg, surfaceWaterGPerM2, thicknessMm, ph, bicarbonateGPerKg,
 				acidGPerKg, initialTemperature, temperatureUnit, notes);
 	}
@@ -64,7 +66,7 @@ public record SurfaceForm(
 	/** The same form with temperatures in another unit (for re-rendering after a °C/°F switch). */
 	public SurfaceForm inUnit(TemperatureUnit unit) {
 		Double c = initialTemperatureC();
-		return new SurfaceForm(name, category, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct, starchPct,
+		return new SurfaceForm(name, category, product, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct, starchPct,
 				fibrePct, ashPct, asparagineMgPerKg, surfaceWaterGPerM2, thicknessMm, ph, bicarbonateGPerKg, acidGPerKg,
 				c == null ? null : round1(unit.fromCelsius(c)), unit.code(), notes);
 	}
@@ -91,6 +93,17 @@ public record SurfaceForm(
 				req("surfaceWaterGPerM2", surfaceWaterGPerM2), req("thicknessMm", thicknessMm), ph,
 				req("bicarbonateGPerKg", bicarbonateGPerKg), req("acidGPerKg", acidGPerKg),
 				req("initialTemperatureC", initialTemperatureC()));
+	}
+
+	/**
+	 * What the surface is sold as, which sets its acrylamide benchmark; empty means the category's
+	 * usual product. Throws {@link InvalidInputException} (field {@code product}) for a product of
+	 * another category.
+	 */
+	public Product toProduct() {
+		FoodCategory c = FoodCategory.byKey(category == null ? "" : category)
+			.orElseThrow(() -> new InvalidInputException("category", "is not a category Crustplan knows"));
+		return Product.forSurface(c, product);
 	}
 
 	/** The form field an engine field name belongs to; null for checks across fields. */

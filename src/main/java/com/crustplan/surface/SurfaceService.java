@@ -31,12 +31,14 @@ public class SurfaceService {
 	@Transactional
 	public SavedSurface create(SurfaceForm form) {
 		form.toSurface();
+		form.toProduct();
 		return surfaces.save(SavedSurface.from(form));
 	}
 
 	@Transactional
 	public SavedSurface update(long id, SurfaceForm form) {
 		form.toSurface();
+		form.toProduct();
 		SavedSurface s = surfaces.findById(id).orElseThrow(() -> new NotFoundException("Surface", id));
 		s.update(form);
 		return s;

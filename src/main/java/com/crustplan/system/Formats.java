@@ -92,6 +92,15 @@ public class Formats {
 		return v == null ? "" : v.toString();
 	}
 
+	/** A relative change as a signed percentage: −30 %, +5 %. */
+	public String signedPct(double relative) {
+		if (!Double.isFinite(relative)) {
+			return "–";
+		}
+		long p = Math.round(relative * 100);
+		return (p > 0 ? "+" : p < 0 ? "−" : "") + Math.abs(p) + " %";
+	}
+
 	public String num(Double v, int digits) {
 		return v == null ? "–" : number(v, digits);
 	}

@@ -60,6 +60,7 @@ class BadInputProperties {
 		Map<String, Map<String, String>> r = new LinkedHashMap<>();
 		Map<String, String> s = new LinkedHashMap<>();
 		s.put("category", "\"potato\"");
+		s.put("product", "\"french-fries\"");
 		s.put("waterPct", "78");
 		s.put("proteinPct", "2");
 		s.put("fatPct", "0.1");
@@ -191,7 +192,7 @@ class BadInputProperties {
 
 	@Provide
 	Arbitrary<String> surfaceFields() {
-		return Arbitraries.of("name", "category", "waterPct", "proteinPct", "fatPct", "reducingSugarPct", "sucrosePct",
+		return Arbitraries.of("name", "category", "product", "waterPct", "proteinPct", "fatPct", "reducingSugarPct", "sucrosePct",
 				"starchPct", "fibrePct", "ashPct", "asparagineMgPerKg", "surfaceWaterGPerM2", "thicknessMm", "ph",
 				"bicarbonateGPerKg", "acidGPerKg", "initialTemperature", "temperatureUnit", "notes");
 	}

@@ -67,7 +67,8 @@ class PlanApiTest {
 			.andExpect(jsonPath("$.pH").value(6.0))
 			.andExpect(jsonPath("$.series.timeS.length()").value(greaterThan(10)))
 			.andExpect(jsonPath("$.series.colorHex[0]").value(org.hamcrest.Matchers.matchesPattern("#[0-9a-fA-F]{6}")))
-			.andExpect(jsonPath("$.acrylamide.benchmarkUgPerKg").value(nullValue()))
+			// potato without a named product is benchmarked as French fries: 500 µg/kg (Reg. (EU) 2017/2158, Annex IV)
+			.andExpect(jsonPath("$.acrylamide.benchmarkUgPerKg").value(500.0))
 			.andExpect(jsonPath("$.assumptions.length()").value(greaterThan(0)))
 			.andExpect(jsonPath("$.cautions[*]", hasItem(containsString("Hot oil"))));
 	}
@@ -83,11 +84,34 @@ class PlanApiTest {
 	}
 
 	@Test
-	void shouldWarnWhenFryingPotatoAbove175() throws Exception {
+	void shouldWarnWhenFryingPotatoAt175OrAbove() throws Exception {
 		plan(CHIPS.replace("\"temperatureC\": 175", "\"temperatureC\": 190"))
 			.andExpect(status().isOk())
-			// Commission Regulation (EU) 2017/2158, Annex I: fry at 160–175 °C
-			.andExpect(jsonPath("$.warnings[*].code", hasItem("frying-above-175")));
+			// Commission Regulation (EU) 2017/2158, Annex II: fry potato products below 175 °C
+			.andExpect(jsonPath("$.warnings[*].code", hasItem("frying-at-175-or-above")));
+	}
+
+	@Test
+	void shouldEstimateAcrylamideAgainstTheFrenchFriesBenchmark() throws Exception {
+		plan(CHIPS.replace("\"category\": \"potato\"", "\"category\": \"potato\", \"product\": \"french-fries\""))
+			.andExpect(status().isOk())
+			// Commission Regulation (EU) 2017/2158, Annex IV: French fries (ready-to-eat) 500 µg/kg
+			.andExpect(jsonPath("$.acrylamide.benchmarkUgPerKg").value(500.0))
+			.andExpect(jsonPath("$.acrylamide.zone").value(org.hamcrest.Matchers.oneOf("low", "elevated", "high")))
+			.andExpect(jsonPath("$.acrylamide.portionUgPerKg").value(greaterThan(0.0)))
+			.andExpect(jsonPath("$.acrylamide.mitigations.length()").value(greaterThan(0)));
+	}
+
+	@Test
+	void shouldGiveNoBenchmarkForMeat() throws Exception {
+		plan("""
+				{ "surface": { "category": "meat" }, "heat": { "mode": "pan", "temperatureC": 220 },
+				  "target": { "stage": "browned" }, "mitigations": false }""")
+			.andExpect(status().isOk())
+			// the regulation sets no benchmark for meat
+			.andExpect(jsonPath("$.acrylamide.benchmarkUgPerKg").value(nullValue()))
+			.andExpect(jsonPath("$.acrylamide.zone").value(nullValue()))
+			.andExpect(jsonPath("$.acrylamide.mitigations.length()").value(0));
 	}
 
 	@Nested
@@ -121,6 +145,14 @@ class PlanApiTest {
 		void shouldRejectATemperatureOutsideWhatTheModeAllows(String mode, String t) throws Exception {
 			rejects(CHIPS.replace("\"mode\": \"fryer\", \"temperatureC\": 175",
 					"\"mode\": \"" + mode + "\", \"temperatureC\": " + t), "heat.temperatureC");
+		}
+
+		@Test
+		void shouldRejectAProductOfAnotherCategory() throws Exception {
+			rejects(CHIPS.replace("\"category\": \"potato\"", "\"category\": \"potato\", \"product\": \"biscuits\""),
+					"surface.product");
+			rejects(CHIPS.replace("\"category\": \"potato\"", "\"category\": \"potato\", \"product\": 7"),
+					"surface.product");
 		}
 
 		@Test

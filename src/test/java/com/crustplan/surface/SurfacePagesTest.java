@@ -50,6 +50,7 @@ class SurfacePagesTest {
 		java.util.Map<String, String> p = new java.util.LinkedHashMap<>();
 		p.put("name", "Test wedges");
 		p.put("category", "potato");
+		p.put("product", "");
 		p.put("waterPct", "79");
 		p.put("proteinPct", "2");
 		p.put("fatPct", "0.1");
@@ -224,6 +225,13 @@ class SurfacePagesTest {
 			mvc.perform(potato("/surfaces/new", "category", "unicorn"))
 				.andExpect(status().isOk())
 				.andExpect(model().attributeHasFieldErrors("form", "category"));
+		}
+
+		@Test
+		void shouldRejectAProductOfAnotherCategory() throws Exception {
+			mvc.perform(potato("/surfaces/new", "product", "biscuits"))
+				.andExpect(status().isOk())
+				.andExpect(model().attributeHasFieldErrors("form", "product"));
 		}
 
 		@Test

@@ -32,7 +32,7 @@ class EscapingTest {
 	@Test
 	void shouldShowAScriptTagInASurfaceNameAsText() throws Exception {
 		SurfaceForm f = SurfaceForm.defaults(FoodCategory.FISH, SCRIPT, TemperatureUnit.CELSIUS);
-		f = new SurfaceForm(f.name(), f.category(), f.waterPct(), f.proteinPct(), f.fatPct(), f.reducingSugarPct(),
+		f = new SurfaceForm(f.name(), f.category(), f.product(), f.waterPct(), f.proteinPct(), f.fatPct(), f.reducingSugarPct(),
 				f.sucrosePct(), f.starchPct(), f.fibrePct(), f.ashPct(), f.asparagineMgPerKg(), f.surfaceWaterGPerM2(),
 				f.thicknessMm(), f.ph(), f.bicarbonateGPerKg(), f.acidGPerKg(), f.initialTemperature(),
 				f.temperatureUnit(), "note " + SCRIPT);
