@@ -166,13 +166,23 @@ class CrashSafetyIT {
 		List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
 				"-Xmx512m", "-jar", jar.toString(), "--server.port=" + port, "--crustplan.demo.enabled=true",
 				"--spring.main.banner-mode=off"));
-		db.forEach((k, v) -> {
-			if (!k.startsWith("__")) {
-				cmd.add("--" + k + "=" + v);
-			}
-		});
+		ProcessBuilder pb = new ProcessBuilder(cmd);
+		if (TestDatabase.postgres()) {
+			// exactly as a kitchen group runs it: the postgres profile, connection from the environment
+			cmd.add("--spring.profiles.active=postgres");
+			pb.environment().put("CRUSTPLAN_DB_URL", (String) db.get("spring.datasource.url"));
+			pb.environment().put("CRUSTPLAN_DB_USER", (String) db.get("spring.datasource.username"));
+			pb.environment().put("CRUSTPLAN_DB_PASSWORD", (String) db.get("spring.datasource.password"));
+		}
+		else {
+			db.forEach((k, v) -> {
+				if (!k.startsWith("__")) {
+					cmd.add("--" + k + "=" + v);
+				}
+			});
+		}
 		Path log = Path.of("target", "crash-" + label + ".log");
-		Process p = new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(log.toFile()).start();
+		Process p = pb.redirectErrorStream(true).redirectOutput(log.toFile()).start();
 		HttpClient http = HttpClient.newHttpClient();
 		long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(120);
 		while (System.nanoTime() < deadline) {

@@ -24,11 +24,12 @@ import com.crustplan.system.TemperatureUnit;
  */
 class SaveSurvivesRestartTest {
 
+	/** Settings as command-line arguments: they outrank application.properties, as in production. */
 	static ConfigurableApplicationContext start(Map<String, Object> db) {
-		return new SpringApplicationBuilder(CrustplanApplication.class).properties(db)
-			.properties(Map.of("server.port", "0", "crustplan.demo.enabled", "false", "spring.main.banner-mode", "off",
-					"logging.level.root", "WARN"))
-			.run();
+		java.util.List<String> args = new java.util.ArrayList<>(java.util.List.of("--server.port=0",
+				"--crustplan.demo.enabled=false", "--spring.main.banner-mode=off", "--logging.level.root=WARN"));
+		db.forEach((k, v) -> args.add("--" + k + "=" + v));
+		return new SpringApplicationBuilder(CrustplanApplication.class).run(args.toArray(String[]::new));
 	}
 
 	@Test
@@ -45,6 +46,9 @@ class SaveSurvivesRestartTest {
 				.getId();
 		}
 		try (ConfigurableApplicationContext second = start(db)) {
+			// the database is the one asked for, not the default ./data file
+			String url = second.getEnvironment().getProperty("spring.datasource.url");
+			assertThat(url).isEqualTo(db.get("spring.datasource.url"));
 			SavedSurface s = second.getBean(SurfaceRepository.class).findById(surfaceId).orElseThrow();
 			assertThat(s.getName()).as("on %s", TestDatabase.describe()).isEqualTo(form.name());
 			// the bread category's typical water 43 % (the engine's default composition), stored exactly
