@@ -94,6 +94,7 @@ class KitchenWorkflowInBrowserTest {
 		waiting().until(d -> d.findElements(By.cssSelector(".flash")).size() > 0);
 		assertThat(driver.findElement(By.cssSelector(".flash")).getText()).contains("Shallot halves (browser test)");
 		assertThat(driver.findElement(By.tagName("h1")).getText()).isEqualTo("Shallot halves (browser test)");
+		Browser.screenshot(driver, "surface-show");
 
 		driver.findElement(By.linkText("Plan with this surface")).click();
 		new Select(driver.findElement(By.id("setupId"))).selectByContainsVisibleText("Cast-iron skillet");
@@ -107,6 +108,21 @@ class KitchenWorkflowInBrowserTest {
 		assertThat(driver.findElements(By.cssSelector("#swatches li"))).hasSizeGreaterThanOrEqualTo(5);
 		driver.manage().window().setSize(new Dimension(1280, 2600));
 		Browser.screenshot(driver, "plan-saved");
+	}
+
+	@Test
+	void shouldLetTheAdministratorManageUsers() throws Exception {
+		signIn("admin", "admin-test-passphrase");
+		driver.findElement(By.linkText("Users")).click();
+		assertThat(driver.findElement(By.tagName("h1")).getText()).isEqualTo("Users");
+		driver.findElement(By.linkText("New user")).click();
+		type("username", "pastry");
+		new Select(driver.findElement(By.id("role"))).selectByValue("COOK");
+		type("password", "croissant dough 24h");
+		driver.findElement(By.cssSelector("form.entry button[type=submit]")).click();
+		waiting().until(d -> d.findElements(By.cssSelector(".flash")).size() > 0);
+		assertThat(driver.findElement(By.cssSelector("tbody")).getText()).contains("pastry");
+		Browser.screenshot(driver, "admin-users");
 	}
 
 	@Test
