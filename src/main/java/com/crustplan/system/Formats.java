@@ -12,14 +12,6 @@ public class Formats {
 		return celsius == null ? "–" : unit.format(celsius);
 	}
 
-	/** A temperature in the cook's unit without the symbol, for form inputs. */
-	public String tempValue(Double celsius, TemperatureUnit unit) {
-		if (celsius == null || !Double.isFinite(celsius)) {
-			return "";
-		}
-		return number(unit.fromCelsius(celsius), 1);
-	}
-
 	/** Minutes and seconds the way a kitchen timer shows them. */
 	public static String duration(double seconds) {
 		if (!Double.isFinite(seconds)) {
