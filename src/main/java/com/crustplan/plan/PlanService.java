@@ -35,6 +35,7 @@ public class PlanService {
 	/** Longest plan: the engine's own limit of 6 h. */
 	public static final double MAX_HORIZON_MINUTES = CookSettings.MAX_HORIZON_S / 60;
 
+	/** An hour unless asked otherwise: longer than any sear, roast or fry in the demo kitchen (common practice). */
 	public static final double DEFAULT_HORIZON_MINUTES = 60;
 
 	/** Swatches in the strip: enough to see the colour change, few enough to read on a tablet. */
