@@ -1,0 +1,176 @@
+package com.crustplan.plan;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+import org.springframework.http.HttpStatus;
+import org.springframework.http.MediaType;
+import org.springframework.http.ResponseEntity;
+import org.springframework.web.bind.annotation.ExceptionHandler;
+import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.PostMapping;
+import org.springframework.web.bind.annotation.RequestBody;
+import org.springframework.web.bind.annotation.RequestMapping;
+import org.springframework.web.bind.annotation.RestController;
+
+import com.crustplan.engine.cook.Sample;
+import com.crustplan.engine.food.BrowningStage;
+import com.crustplan.engine.food.Composition;
+import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.system.TemperatureUnit;
+
+import com.fasterxml.jackson.annotation.JsonProperty;
+import tools.jackson.databind.json.JsonMapper;
+
+/** JSON API v1: categories with defaults, and computing a plan without saving it. All in °C and SI. */
+@RestController
+@RequestMapping(path = "/api/v1", produces = MediaType.APPLICATION_JSON_VALUE)
+class PlanApiController {
+
+	private static final Logger log = LoggerFactory.getLogger(PlanApiController.class);
+
+	private final PlanService planner;
+
+	private final JsonMapper json;
+
+	PlanApiController(PlanService planner, JsonMapper json) {
+		this.planner = planner;
+		this.json = json;
+	}
+
+	@GetMapping("/categories")
+	List<Map<String, Object>> categories() {
+		List<Map<String, Object>> out = new ArrayList<>();
+		for (FoodCategory c : FoodCategory.values()) {
+			Composition k = c.defaultComposition();
+			Map<String, Object> d = new LinkedHashMap<>();
+			d.put("waterPct", k.waterPct());
+			d.put("proteinPct", k.proteinPct());
+			d.put("fatPct", k.fatPct());
+			d.put("reducingSugarPct", k.reducingSugarPct());
+			d.put("sucrosePct", k.sucrosePct());
+			d.put("starchPct", k.starchPct());
+			d.put("fibrePct", k.fibrePct());
+			d.put("ashPct", k.ashPct());
+			d.put("asparagineMgPerKg", c.defaultAsparagineMgPerKg());
+			d.put("surfaceWaterGPerM2", c.defaultSurfaceWaterGPerM2());
+			d.put("thicknessMm", c.defaultThicknessMm());
+			d.put("pH", c.defaultPh());
+			d.put("bicarbonateGPerKg", 0.0);
+			d.put("acidGPerKg", 0.0);
+			d.put("initialTemperatureC", c.defaultInitialTemperatureC());
+			List<Map<String, Object>> stages = new ArrayList<>();
+			for (BrowningStage s : c.stages()) {
+				Map<String, Object> m = new LinkedHashMap<>();
+				m.put("key", s.key());
+				m.put("label", s.label());
+				m.put("lightness", s.lightness());
+				m.put("extent", s.extent());
+				stages.add(m);
+			}
+			List<Map<String, Object>> products = new ArrayList<>();
+			for (com.crustplan.engine.acrylamide.Product p : com.crustplan.engine.acrylamide.Product.of(c)) {
+				Map<String, Object> m = new LinkedHashMap<>();
+				m.put("key", p.key());
+				m.put("label", p.label());
+				m.put("benchmarkUgPerKg", p.benchmark().map(b -> b.microgramsPerKg()).orElse(null));
+				m.put("default", p == com.crustplan.engine.acrylamide.Product.defaultFor(c));
+				products.add(m);
+			}
+			Map<String, Object> cat = new LinkedHashMap<>();
+			cat.put("key", c.key());
+			cat.put("label", c.label());
+			cat.put("defaults", d);
+			cat.put("stages", stages);
+			cat.put("products", products);
+			out.add(cat);
+		}
+		return out;
+	}
+
+	@PostMapping("/plans")
+	ResponseEntity<?> plan(@RequestBody(required = false) String body) {
+		PlanRequestReader.PlanRequest req = PlanRequestReader.read(body, json);
+		PlanReport r = planner.plan(req.surface(), req.product(), req.setup(), req.target(), req.horizonMinutes(),
+				TemperatureUnit.CELSIUS, req.mitigations());
+		return ResponseEntity.ok(PlanResponse.of(r));
+	}
+
+	@ExceptionHandler(PlanRequestReader.BadRequest.class)
+	ResponseEntity<ApiError> badRequest(PlanRequestReader.BadRequest e) {
+		return ResponseEntity.badRequest().contentType(MediaType.APPLICATION_JSON).body(new ApiError(e.errors()));
+	}
+
+	/** The engine's own checks: the field gets the API's prefix where the engine did not give one. */
+	@ExceptionHandler(InvalidInputException.class)
+	ResponseEntity<ApiError> invalid(InvalidInputException e) {
+		String f = e.field();
+		String field = f.startsWith("target") || f.equals("horizonMinutes") || f.contains(".") ? f : "input." + f;
+		return ResponseEntity.badRequest().contentType(MediaType.APPLICATION_JSON).body(ApiError.of(field, e.reason()));
+	}
+
+	/** Anything else is our fault, not the caller's: logged, answered without internals. */
+	@ExceptionHandler(RuntimeException.class)
+	ResponseEntity<ApiError> unexpected(RuntimeException e) {
+		log.error("plan API failed", e);
+		return ResponseEntity.status(HttpStatus.INTERNAL_SERVER_ERROR)
+			.contentType(MediaType.APPLICATION_JSON)
+			.body(ApiError.of("server", "the plan could not be computed; the error is logged"));
+	}
+
+	record Acrylamide(Double crustUgPerKg, Double portionUgPerKg, Double benchmarkUgPerKg, String zone,
+			String product, String basis, List<Change> mitigations) {
+	}
+
+	/** One acrylamide-reducing change, as the engine computed it (µg/kg as eaten, minutes to target). */
+	record Change(String code, String title, String change, boolean applicable, String reason, String basis,
+			Double beforeUgPerKg, Double afterUgPerKg, Double beforeMinutes, Double afterMinutes, String source) {
+
+		static Change of(com.crustplan.engine.acrylamide.Mitigation m) {
+			return new Change(m.code(), m.title(), m.change(), m.applicable(), m.reason(), m.basis().meaning(),
+					PlanReport.finite(m.beforeUgPerKg()), PlanReport.finite(m.afterUgPerKg()),
+					PlanReport.finite(m.beforeMinutes()), PlanReport.finite(m.afterMinutes()), m.source());
+		}
+
+	}
+
+	record Series(List<Double> timeS, List<Double> surfaceTemperatureC, List<Double> coreTemperatureC,
+			List<Double> surfaceWaterActivity, List<Double> lightness, List<String> colorHex) {
+	}
+
+	record PlanResponse(boolean reached, String outcome, Double timeToTargetS, @JsonProperty("pH") double ph,
+			Double coreTemperatureAtTargetC, String target, String targetColorHex, Acrylamide acrylamide,
+			Series series, List<PlanWarning> warnings, List<String> cautions, List<String> assumptions) {
+
+		static PlanResponse of(PlanReport r) {
+			List<Double> t = new ArrayList<>();
+			List<Double> surface = new ArrayList<>();
+			List<Double> core = new ArrayList<>();
+			List<Double> aw = new ArrayList<>();
+			List<Double> lightness = new ArrayList<>();
+			List<String> hex = new ArrayList<>();
+			for (Sample s : r.result().series()) {
+				t.add(PlanReport.finite(s.timeS()));
+				surface.add(PlanReport.finite(s.surfaceTemperatureC()));
+				core.add(PlanReport.finite(s.coreTemperatureC()));
+				aw.add(PlanReport.finite(s.surfaceWaterActivity()));
+				lightness.add(PlanReport.finite(s.colour().lightness()));
+				hex.add(s.colourHex());
+			}
+			AcrylamideView a = r.acrylamide();
+			return new PlanResponse(r.reached(), r.result().explanation(), r.timeToTargetS(), r.surface().ph(),
+					r.coreTemperatureAtTargetC(), r.targetLabel(), r.targetHex(),
+					new Acrylamide(a.crustUgPerKg(), a.portionUgPerKg(), a.benchmarkUgPerKg(), a.zone(), a.product(),
+							a.basis(), a.mitigations().stream().map(Change::of).toList()),
+					new Series(t, surface, core, aw, lightness, hex), r.warnings(), r.cautions(),
+					r.result().assumptions());
+		}
+
+	}
+
+}

@@ -1,0 +1,57 @@
+package com.crustplan.plan;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import com.crustplan.engine.cook.Sample;
+import com.crustplan.system.TemperatureUnit;
+
+/** The series the plan page's charts draw, temperatures in the cook's unit, times in minutes. */
+final class PlanCharts {
+
+	private PlanCharts() {
+	}
+
+	static Map<String, Object> data(PlanReport report, TemperatureUnit unit) {
+		List<Double> t = new ArrayList<>();
+		List<Double> surface = new ArrayList<>();
+		List<Double> other = new ArrayList<>();
+		List<Double> core = new ArrayList<>();
+		List<Double> aw = new ArrayList<>();
+		List<Double> browning = new ArrayList<>();
+		List<Double> lightness = new ArrayList<>();
+		for (Sample s : report.result().series()) {
+			t.add(round(s.timeS() / 60, 3));
+			surface.add(round(unit.fromCelsius(s.surfaceTemperatureC()), 1));
+			other.add(round(unit.fromCelsius(s.otherFaceTemperatureC()), 1));
+			core.add(round(unit.fromCelsius(s.coreTemperatureC()), 1));
+			aw.add(round(s.surfaceWaterActivity(), 3));
+			browning.add(round(s.browningExtent() * 100, 2));
+			lightness.add(round(s.colour().lightness(), 1));
+		}
+		Map<String, Object> d = new LinkedHashMap<>();
+		d.put("unit", unit.symbol());
+		d.put("timeMin", t);
+		d.put("surfaceTemperature", surface);
+		d.put("otherFaceTemperature", other);
+		d.put("coreTemperature", core);
+		d.put("surfaceWaterActivity", aw);
+		d.put("browningPct", browning);
+		d.put("lightness", lightness);
+		d.put("targetBrowningPct", round(report.result().targetExtent() * 100, 2));
+		d.put("targetTimeMin", report.timeToTargetS() == null ? null : round(report.timeToTargetS() / 60, 3));
+		return d;
+	}
+
+	/** Nulls for NaN so the JSON stays valid and Chart.js leaves a gap. */
+	private static Double round(double v, int digits) {
+		if (!Double.isFinite(v)) {
+			return null;
+		}
+		double f = Math.pow(10, digits);
+		return Math.round(v * f) / f;
+	}
+
+}

@@ -1,0 +1,286 @@
+package com.crustplan.plan;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import com.crustplan.engine.acrylamide.Product;
+import com.crustplan.engine.cook.Target;
+import com.crustplan.engine.food.Composition;
+import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.setup.HeatMode;
+import com.crustplan.setup.HeatSettings;
+
+import tools.jackson.core.JacksonException;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+
+/**
+ * Reads a {@code POST /api/v1/plans} body into engine inputs, field by field, so that every kind of
+ * bad input (wrong type, NaN or Infinity, missing object, unknown mode) becomes a field error instead
+ * of a binding exception. Missing optional fields take the category's defaults.
+ */
+final class PlanRequestReader {
+
+	record PlanRequest(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
+			boolean mitigations) {
+	}
+
+	/** Thrown with every field error found in one pass. */
+	static final class BadRequest extends RuntimeException {
+
+		private final transient List<ApiError.FieldError> errors;
+
+		BadRequest(List<ApiError.FieldError> errors) {
+			super("bad plan request", null, false, false);
+			this.errors = List.copyOf(errors);
+		}
+
+		List<ApiError.FieldError> errors() {
+			return errors;
+		}
+
+	}
+
+	private final List<ApiError.FieldError> errors = new ArrayList<>();
+
+	private PlanRequestReader() {
+	}
+
+	static PlanRequest read(String body, JsonMapper json) {
+		if (body == null || body.isBlank()) {
+			throw new BadRequest(List.of(new ApiError.FieldError("body", "send a JSON object with surface, heat and target")));
+		}
+		JsonNode root;
+		try {
+			root = json.readTree(body);
+		}
+		catch (JacksonException e) {
+			throw new BadRequest(List.of(new ApiError.FieldError("body", "malformed JSON: " + shortMessage(e))));
+		}
+		return new PlanRequestReader().request(root);
+	}
+
+	private static String shortMessage(JacksonException e) {
+		String m = e.getOriginalMessage();
+		if (m == null) {
+			return "cannot be read";
+		}
+		m = m.replaceAll("[\\r\\n]+", " ");
+		return m.length() > 200 ? m.substring(0, 200) + "…" : m;
+	}
+
+	private PlanRequest request(JsonNode root) {
+		if (root == null || !root.isObject()) {
+			throw new BadRequest(List.of(new ApiError.FieldError("body", "must be a JSON object")));
+		}
+		JsonNode s = object(root, "surface");
+		JsonNode h = object(root, "heat");
+		JsonNode t = object(root, "target");
+		Double horizon = number(root, "horizonMinutes", "horizonMinutes");
+		Boolean mitigations = bool(root, "mitigations", "mitigations");
+
+		FoodCategory category = null;
+		if (s != null) {
+			String key = text(s, "category", "surface.category");
+			if (key != null) {
+				category = FoodCategory.byKey(key).orElse(null);
+				if (category == null) {
+					error("surface.category", "'" + key + "' is not a category; use one of " + categoryKeys());
+				}
+			}
+			else if (!hasError("surface.category")) {
+				error("surface.category", "is required; use one of " + categoryKeys());
+			}
+		}
+		Surface surface = category == null ? null : surface(s, category);
+		Product product = category == null ? null : product(s, category);
+		HeatSetup setup = h == null ? null : heat(h);
+		Target target = t == null ? null : target(t);
+		if (!errors.isEmpty()) {
+			throw new BadRequest(errors);
+		}
+		double horizonMinutes = horizon == null ? PlanService.DEFAULT_HORIZON_MINUTES : horizon;
+		return new PlanRequest(surface, product, setup, target, horizonMinutes, mitigations == null || mitigations);
+	}
+
+	private Surface surface(JsonNode s, FoodCategory c) {
+		Composition d = c.defaultComposition();
+		double water = or(number(s, "waterPct", "surface.waterPct"), d.waterPct());
+		double protein = or(number(s, "proteinPct", "surface.proteinPct"), d.proteinPct());
+		double fat = or(number(s, "fatPct", "surface.fatPct"), d.fatPct());
+		double reducing = or(number(s, "reducingSugarPct", "surface.reducingSugarPct"), d.reducingSugarPct());
+		double sucrose = or(number(s, "sucrosePct", "surface.sucrosePct"), d.sucrosePct());
+		double starch = or(number(s, "starchPct", "surface.starchPct"), d.starchPct());
+		double fibre = or(number(s, "fibrePct", "surface.fibrePct"), d.fibrePct());
+		double ash = or(number(s, "ashPct", "surface.ashPct"), d.ashPct());
+		double asparagine = or(number(s, "asparagineMgPerKg", "surface.asparagineMgPerKg"), c.defaultAsparagineMgPerKg());
+		double film = or(number(s, "surfaceWaterGPerM2", "surface.surfaceWaterGPerM2"), c.defaultSurfaceWaterGPerM2());
+		double thickness = or(number(s, "thicknessMm", "surface.thicknessMm"), c.defaultThicknessMm());
+		Double ph = number(s, "pH", "surface.pH");
+		double bicarbonate = or(number(s, "bicarbonateGPerKg", "surface.bicarbonateGPerKg"), 0);
+		double acid = or(number(s, "acidGPerKg", "surface.acidGPerKg"), 0);
+		double start = or(number(s, "initialTemperatureC", "surface.initialTemperatureC"), c.defaultInitialTemperatureC());
+		if (hasErrorUnder("surface.")) {
+			return null;
+		}
+		try {
+			return new Surface(c, new Composition(water, protein, fat, reducing, sucrose, starch, fibre, ash), asparagine,
+					film, thickness, ph, bicarbonate, acid, start);
+		}
+		catch (InvalidInputException e) {
+			error("surface." + e.field(), e.reason());
+			return null;
+		}
+	}
+
+	private Product product(JsonNode s, FoodCategory c) {
+		String key = text(s, "product", "surface.product");
+		try {
+			return Product.forSurface(c, key);
+		}
+		catch (InvalidInputException e) {
+			error("surface.product", e.reason());
+			return null;
+		}
+	}
+
+	private HeatSetup heat(JsonNode h) {
+		String modeKey = text(h, "mode", "heat.mode");
+		HeatMode mode = modeKey == null ? null : HeatMode.byKey(modeKey).orElse(null);
+		if (mode == null && !hasError("heat.mode")) {
+			error("heat.mode", modeKey == null ? "is required: pan, oven, grill or fryer"
+					: "'" + modeKey + "' is not a mode; use pan, oven, grill or fryer");
+		}
+		Double temperature = number(h, "temperatureC", "heat.temperatureC");
+		if (temperature == null && !hasError("heat.temperatureC")) {
+			error("heat.temperatureC", "is required");
+		}
+		Boolean fan = bool(h, "fan", "heat.fan");
+		Boolean fatFilm = bool(h, "fatFilm", "heat.fatFilm");
+		Double rh = number(h, "relativeHumidityPct", "heat.relativeHumidityPct");
+		Double flip = number(h, "flipEverySeconds", "heat.flipEverySeconds");
+		if (mode == null || hasErrorUnder("heat.")) {
+			return null;
+		}
+		try {
+			return HeatSettings.toHeatSetup(mode, temperature, fan, fatFilm, rh, flip);
+		}
+		catch (InvalidInputException e) {
+			error("heat." + e.field(), e.reason());
+			return null;
+		}
+	}
+
+	private Target target(JsonNode t) {
+		Double lightness = number(t, "lightness", "target.lightness");
+		String stage = text(t, "stage", "target.stage");
+		if (hasErrorUnder("target.")) {
+			return null;
+		}
+		try {
+			return PlanInputs.target(stage, lightness);
+		}
+		catch (InvalidInputException e) {
+			error("target", e.reason());
+			return null;
+		}
+	}
+
+	private JsonNode object(JsonNode parent, String name) {
+		JsonNode n = parent.get(name);
+		if (n == null || n.isNull()) {
+			error(name, "is required (a JSON object)");
+			return null;
+		}
+		if (!n.isObject()) {
+			error(name, "must be a JSON object");
+			return null;
+		}
+		return n;
+	}
+
+	/** A finite number, or null when absent; anything else is a field error. */
+	private Double number(JsonNode parent, String name, String field) {
+		JsonNode n = parent.get(name);
+		if (n == null || n.isNull()) {
+			return null;
+		}
+		if (n.isNumber()) {
+			double v = n.doubleValue();
+			if (!Double.isFinite(v)) {
+				error(field, "is too large a number");
+				return null;
+			}
+			return v;
+		}
+		if (n.isString()) {
+			String v = n.asString().trim().toLowerCase(Locale.ROOT);
+			if (v.contains("nan") || v.contains("inf")) {
+				error(field, "must be a finite number (NaN and Infinity are not allowed)");
+			}
+			else {
+				error(field, "must be a number, not text");
+			}
+			return null;
+		}
+		error(field, "must be a number");
+		return null;
+	}
+
+	private String text(JsonNode parent, String name, String field) {
+		JsonNode n = parent.get(name);
+		if (n == null || n.isNull()) {
+			return null;
+		}
+		if (!n.isString()) {
+			error(field, "must be text");
+			return null;
+		}
+		String v = n.asString().trim();
+		if (v.isEmpty()) {
+			return null;
+		}
+		if (v.length() > 80) {
+			error(field, "is too long (at most 80 characters)");
+			return null;
+		}
+		return v;
+	}
+
+	private Boolean bool(JsonNode parent, String name, String field) {
+		JsonNode n = parent.get(name);
+		if (n == null || n.isNull()) {
+			return null;
+		}
+		if (!n.isBoolean()) {
+			error(field, "must be true or false");
+			return null;
+		}
+		return n.booleanValue();
+	}
+
+	private static double or(Double v, double fallback) {
+		return v == null ? fallback : v;
+	}
+
+	private void error(String field, String message) {
+		errors.add(new ApiError.FieldError(field, message));
+	}
+
+	private boolean hasError(String field) {
+		return errors.stream().anyMatch(e -> e.field().equals(field));
+	}
+
+	private boolean hasErrorUnder(String prefix) {
+		return errors.stream().anyMatch(e -> e.field().startsWith(prefix));
+	}
+
+	private static List<String> categoryKeys() {
+		return java.util.Arrays.stream(FoodCategory.values()).map(FoodCategory::key).toList();
+	}
+
+}

@@ -1,0 +1,191 @@
+package com.crustplan.plan;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.TreeSet;
+
+import org.springframework.stereotype.Service;
+
+import com.crustplan.engine.acrylamide.AcrylamideCautions;
+import com.crustplan.engine.acrylamide.AcrylamideEstimate;
+import com.crustplan.engine.acrylamide.AcrylamideWarning;
+import com.crustplan.engine.acrylamide.Mitigation;
+import com.crustplan.engine.acrylamide.Mitigations;
+import com.crustplan.engine.acrylamide.Product;
+import com.crustplan.engine.cook.CookResult;
+import com.crustplan.engine.cook.CookSettings;
+import com.crustplan.engine.cook.CookSimulation;
+import com.crustplan.engine.cook.Sample;
+import com.crustplan.engine.cook.Target;
+import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.system.TemperatureUnit;
+
+/**
+ * The one place the web app runs the engine: takes engine inputs (never entities), runs the cook and
+ * adds what a kitchen needs around the numbers (warnings with reasons, the usual cautions, swatches).
+ * A new simulation per call: nothing stateful is shared between requests.
+ */
+@Service
+public class PlanService {
+
+	/** Longest plan: the engine's own limit of 6 h. */
+	public static final double MAX_HORIZON_MINUTES = CookSettings.MAX_HORIZON_S / 60;
+
+	/** An hour unless asked otherwise: longer than any sear, roast or fry in the demo kitchen (common practice). */
+	public static final double DEFAULT_HORIZON_MINUTES = 60;
+
+	/** Swatches in the strip: enough to see the colour change, few enough to read on a tablet. */
+	static final int SWATCHES = 10;
+
+	// FDA Food Code 2022, section 3-401.11 (A)(1)-(3): minimum internal temperatures and holding times,
+	// with both of the code's own figures, so °F shows the code's number rather than a rounded conversion.
+	static final double FOOD_CODE_WHOLE_CUT_C = 63; // 145 °F for 15 s: meat, fish, eggs
+
+	static final double FOOD_CODE_WHOLE_CUT_F = 145;
+
+	static final double FOOD_CODE_COMMINUTED_C = 68; // 155 °F for 17 s: minced meat and fish
+
+	static final double FOOD_CODE_COMMINUTED_F = 155;
+
+	static final double FOOD_CODE_POULTRY_C = 74; // 165 °F for < 1 s: poultry, stuffed foods
+
+	static final double FOOD_CODE_POULTRY_F = 165;
+
+	/** Above neutral, Maillard browning and acrylamide formation speed up (Martins, Jongen & van Boekel 2000, Trends Food Sci Technol 11:364). */
+	static final double ALKALINE_PH = 7;
+
+	/** A plan for the category's usual product, with the acrylamide changes worked out. */
+	public PlanReport plan(Surface surface, HeatSetup setup, Target target, double horizonMinutes,
+			TemperatureUnit unit) {
+		return plan(surface, Product.defaultFor(surface.category()), setup, target, horizonMinutes, unit, true);
+	}
+
+	/**
+	 * @param product what the surface is sold as (sets the acrylamide benchmark)
+	 * @param withMitigations whether to run the model again for each acrylamide-reducing change
+	 * (a few hundred milliseconds)
+	 */
+	public PlanReport plan(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
+			TemperatureUnit unit, boolean withMitigations) {
+		if (!Double.isFinite(horizonMinutes) || horizonMinutes < 1 || horizonMinutes > MAX_HORIZON_MINUTES) {
+			throw new InvalidInputException("horizonMinutes",
+					String.format(Locale.ROOT, "must be from 1 to %.0f minutes", MAX_HORIZON_MINUTES));
+		}
+		CookSettings settings = CookSettings.defaults().withHorizonS(horizonMinutes * 60);
+		CookResult result = CookSimulation.run(surface, setup, target, settings);
+		AcrylamideEstimate estimate = AcrylamideEstimate.of(surface, product, setup, target, result);
+		List<Mitigation> mitigations = withMitigations
+				? Mitigations.compute(surface, product, setup, target, settings) : List.of();
+		List<PlanWarning> warnings = warnings(surface, setup, result, unit);
+		for (AcrylamideWarning a : estimate.warnings()) {
+			warnings.add(new PlanWarning(a.code().toLowerCase(Locale.ROOT).replace('_', '-'),
+					a.message() + " (" + a.basis() + ")"));
+		}
+		return new PlanReport(surface, setup, target.describe(surface.category()), horizonMinutes, result, warnings,
+				cautions(surface, setup), AcrylamideView.of(estimate, mitigations), swatches(result));
+	}
+
+	private static List<PlanWarning> warnings(Surface surface, HeatSetup setup, CookResult result, TemperatureUnit u) {
+		List<PlanWarning> w = new ArrayList<>();
+		if (!result.reached()) {
+			w.add(new PlanWarning("target-not-reached", "The target colour is not reached: " + result.explanation()));
+		}
+		double core = result.coreTemperatureAtTargetC();
+		FoodCategory c = surface.category();
+		if (result.reached() && Double.isFinite(core)) {
+			if (c == FoodCategory.POULTRY_SKIN && core < FOOD_CODE_POULTRY_C) {
+				w.add(new PlanWarning("core-below-food-code", String.format(Locale.ROOT,
+						"When the skin reaches the target colour the core is predicted at %s, below the %s poultry "
+								+ "needs (FDA Food Code 2022, 3-401.11): finish at a lower heat and probe it.",
+						u.format(core), code(u, FOOD_CODE_POULTRY_C, FOOD_CODE_POULTRY_F))));
+			}
+			else if ((c == FoodCategory.MEAT || c == FoodCategory.FISH) && core < FOOD_CODE_WHOLE_CUT_C) {
+				w.add(new PlanWarning("core-below-food-code", String.format(Locale.ROOT,
+						"When the surface reaches the target colour the core is predicted at %s, below %s for 15 s "
+								+ "(FDA Food Code 2022, 3-401.11, whole cuts; %s for minced). Serve it undercooked "
+								+ "only where your food code allows it, with the advisory it requires.",
+						u.format(core), code(u, FOOD_CODE_WHOLE_CUT_C, FOOD_CODE_WHOLE_CUT_F),
+						code(u, FOOD_CODE_COMMINUTED_C, FOOD_CODE_COMMINUTED_F))));
+			}
+		}
+		if (surface.ph() > ALKALINE_PH) {
+			w.add(new PlanWarning("alkaline-surface", String.format(Locale.ROOT,
+					"The additions bring the surface to pH %.1f: above neutral browning runs faster and, in "
+							+ "starchy foods, more acrylamide forms.",
+					surface.ph())));
+		}
+		return w;
+	}
+
+	private static String code(TemperatureUnit u, double c, double f) {
+		return u == TemperatureUnit.FAHRENHEIT ? String.format(Locale.ROOT, "%.0f °F", f)
+				: String.format(Locale.ROOT, "%.0f °C", c);
+	}
+
+	private static List<String> cautions(Surface surface, HeatSetup setup) {
+		List<String> c = new ArrayList<>();
+		c.add(AcrylamideCautions.CARCINOGEN + " " + AcrylamideCautions.ESTIMATE);
+		c.add("Check the core temperature with a calibrated probe thermometer: the predicted core temperature "
+				+ "is an estimate for a slab of even thickness.");
+		c.add("Follow your local food code and licensed practice. For reference, the FDA Food Code 2022, section "
+				+ "3-401.11, asks for 63 °C (145 °F) for 15 s for whole cuts of meat and fish, 68 °C (155 °F) for "
+				+ "17 s for minced meat and fish, and 74 °C (165 °F) for under 1 s for poultry.");
+		if (setup instanceof HeatSetup.DeepFryer) {
+			c.add("Hot oil: lower food in slowly and dry, never add water, fill only to the mark, and keep a lid "
+					+ "and a fire extinguisher for cooking oil (class F / K) at hand.");
+		}
+		if (setup instanceof HeatSetup.PanContact) {
+			c.add("Hot pan and fat: turn food away from you and keep handles off the flame.");
+		}
+		if (surface.bicarbonateGPerKg() > 0) {
+			c.add("Bicarbonate raises the surface pH: colour comes faster, so check earlier than usual.");
+		}
+		return c;
+	}
+
+	/** Evenly spaced swatches over the run; the one nearest the target time is marked. */
+	static List<Swatch> swatches(CookResult result) {
+		List<Sample> s = result.series();
+		if (s.isEmpty()) {
+			return List.of();
+		}
+		int n = s.size();
+		TreeSet<Integer> picks = new TreeSet<>();
+		for (int k = 0; k < SWATCHES; k++) {
+			picks.add((int) Math.round(k * (n - 1) / (double) (SWATCHES - 1)));
+		}
+		int targetIndex = -1;
+		if (result.reached()) {
+			targetIndex = nearest(s, result.timeToTargetS());
+			Integer near = picks.floor(targetIndex);
+			Integer above = picks.ceiling(targetIndex);
+			Integer replace = near == null ? above
+					: above == null ? near : (targetIndex - near <= above - targetIndex ? near : above);
+			if (replace != null && replace != 0 && replace != n - 1) {
+				picks.remove(replace);
+			}
+			picks.add(targetIndex);
+		}
+		List<Swatch> out = new ArrayList<>();
+		for (int i : picks) {
+			Sample x = s.get(i);
+			out.add(new Swatch(x.timeS(), x.colourHex(), x.colour().lightness(), i == targetIndex));
+		}
+		return out;
+	}
+
+	private static int nearest(List<Sample> s, double t) {
+		int best = 0;
+		for (int i = 1; i < s.size(); i++) {
+			if (Math.abs(s.get(i).timeS() - t) < Math.abs(s.get(best).timeS() - t)) {
+				best = i;
+			}
+		}
+		return best;
+	}
+
+}

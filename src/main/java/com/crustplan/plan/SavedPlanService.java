@@ -1,0 +1,55 @@
+package com.crustplan.plan;
+
+import java.util.List;
+
+import org.springframework.stereotype.Service;
+import org.springframework.transaction.annotation.Transactional;
+
+import com.crustplan.system.NotFoundException;
+import com.crustplan.system.TemperatureUnit;
+
+import tools.jackson.databind.json.JsonMapper;
+
+/** Saved plans; a save is one transaction of one row, so it is there whole or not at all. */
+@Service
+public class SavedPlanService {
+
+	private final SavedPlanRepository plans;
+
+	private final JsonMapper json;
+
+	SavedPlanService(SavedPlanRepository plans, JsonMapper json) {
+		this.plans = plans;
+		this.json = json;
+	}
+
+	@Transactional
+	public SavedPlan save(String name, String surfaceName, String setupName, PlanInputs inputs, PlanReport report,
+			String username) {
+		PlanInputs celsius = new PlanInputs(inputs.surface().inUnit(TemperatureUnit.CELSIUS),
+				inputs.setup().inUnit(TemperatureUnit.CELSIUS), inputs.targetStage(), inputs.targetLightness(),
+				inputs.horizonMinutes());
+		return plans.save(new SavedPlan(name.trim(), surfaceName, setupName, report.targetLabel(),
+				json.writeValueAsString(celsius), report.reached(), report.timeToTargetS(), username));
+	}
+
+	@Transactional(readOnly = true)
+	public SavedPlan get(long id) {
+		return plans.findById(id).orElseThrow(() -> new NotFoundException("Plan", id));
+	}
+
+	public PlanInputs inputs(SavedPlan plan) {
+		return json.readValue(plan.getInputsJson(), PlanInputs.class);
+	}
+
+	@Transactional(readOnly = true)
+	public List<SavedPlan> all() {
+		return plans.findAllByOrderByCreatedAtDesc();
+	}
+
+	@Transactional
+	public void delete(long id) {
+		plans.delete(plans.findById(id).orElseThrow(() -> new NotFoundException("Plan", id)));
+	}
+
+}

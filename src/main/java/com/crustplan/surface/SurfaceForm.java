@@ -1,0 +1,130 @@
+package com.crustplan.surface;
+
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import jakarta.validation.constraints.NotBlank;
+import jakarta.validation.constraints.NotNull;
+import jakarta.validation.constraints.Size;
+
+import com.crustplan.engine.acrylamide.Product;
+import com.crustplan.engine.food.Composition;
+import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.food.Surface;
+import com.crustplan.system.TemperatureUnit;
+
+/**
+ * What a cook types in for a surface. The ranges here give every field its message at once; the
+ * engine's own checks (the composition sum, the pH range) run after them in {@link #toSurface()} and
+ * are the final word. {@code initialTemperature} is in the unit named by {@code temperatureUnit}.
+ */
+public record SurfaceForm(
+		@NotBlank(message = "give the surface a name") @Size(max = 80, message = "at most 80 characters") String name,
+		@NotBlank(message = "choose a category") String category,
+		@Size(max = 32, message = "choose from the list") String product,
+		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double waterPct,
+		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double proteinPct,
+		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double fatPct,
+		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double reducingSugarPct,
+		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double sucrosePct,
+		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double starchPct,
+		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double fibrePct,
+		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double ashPct,
+		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 50000 mg/kg") @DecimalMax(value = "50000", message = "must be 0 to 50000 mg/kg") Double asparagineMgPerKg,
+		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 2000 g/m²") @DecimalMax(value = "2000", message = "must be 0 to 2000 g/m²") Double surfaceWaterGPerM2,
+		@NotNull(message = "required") @DecimalMin(value = "0.5", message = "must be 0.5 to 200 mm") @DecimalMax(value = "200", message = "must be 0.5 to 200 mm") Double thicknessMm,
+		@DecimalMin(value = "2", message = "must be 2 to 10, or empty for the category's typical pH") @DecimalMax(value = "10", message = "must be 2 to 10, or empty for the category's typical pH") Double ph,
+		@NotNull(message = "required (0 for none)") @DecimalMin(value = "0", message = "must be 0 to 50 g/kg") @DecimalMax(value = "50", message = "must be 0 to 50 g/kg") Double bicarbonateGPerKg,
+		@NotNull(message = "required (0 for none)") @DecimalMin(value = "0", message = "must be 0 to 50 g/kg") @DecimalMax(value = "50", message = "must be 0 to 50 g/kg") Double acidGPerKg,
+		@NotNull(message = "required") Double initialTemperature,
+		String temperatureUnit,
+		@Size(max = 1000, message = "at most 1000 characters") String notes) {
+
+	/** A new form with the category's defaults. */
+	public static SurfaceForm defaults(FoodCategory c, String name, TemperatureUnit unit) {
+		Composition k = c.defaultComposition();
+		return new SurfaceForm(name, c.key(), null, k.waterPct(), k.proteinPct(), k.fatPct(), k.reducingSugarPct(),
+				k.sucrosePct(), k.starchPct(), k.fibrePct(), k.ashPct(), c.defaultAsparagineMgPerKg(),
+				c.defaultSurfaceWaterGPerM2(), c.defaultThicknessMm(), null, 0.0, 0.0,
+				round1(unit.fromCelsius(c.defaultInitialTemperatureC())), unit.code(), null);
+	}
+
+	public static SurfaceForm of(SavedSurface s, TemperatureUnit unit) {
+		return new SurfaceForm(s.getName(), s.getCategory(), s.getProduct(), s.getWaterPct(), s.getProteinPct(), s.getFatPct(),
+				s.getReducingSugarPct(), s.getSucrosePct(), s.getStarchPct(), s.getFibrePct(), s.getAshPct(),
+				s.getAsparagineMgPerKg(), s.getSurfaceWaterGPerM2(), s.getThicknessMm(), s.getPh(),
+				s.getBicarbonateGPerKg(), s.getAcidGPerKg(), round1(unit.fromCelsius(s.getInitialTemperatureC())),
+				unit.code(), s.getNotes());
+	}
+
+	public SurfaceForm withName(String newName) {
+		return new SurfaceForm(newName, category, product, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct,
+				starchPct, fibrePct, ashPct, asparagineMgPerKg, surfaceWaterGPerM2, thicknessMm, ph, bicarbonateGPerKg,
+				acidGPerKg, initialTemperature, temperatureUnit, notes);
+	}
+
+	/** The same form with temperatures in another unit (for re-rendering after a °C/°F switch). */
+	public SurfaceForm inUnit(TemperatureUnit unit) {
+		Double c = initialTemperatureC();
+		return new SurfaceForm(name, category, product, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct, starchPct,
+				fibrePct, ashPct, asparagineMgPerKg, surfaceWaterGPerM2, thicknessMm, ph, bicarbonateGPerKg, acidGPerKg,
+				c == null ? null : round1(unit.fromCelsius(c)), unit.code(), notes);
+	}
+
+	public TemperatureUnit unit() {
+		return TemperatureUnit.fromCode(temperatureUnit);
+	}
+
+	public Double initialTemperatureC() {
+		return unit().toCelsius(initialTemperature);
+	}
+
+	/**
+	 * The engine's input. Throws {@link InvalidInputException} naming the engine's field
+	 * ({@code waterPct}, {@code composition}, {@code pH}, {@code initialTemperatureC} ...).
+	 */
+	public Surface toSurface() {
+		FoodCategory c = FoodCategory.byKey(category == null ? "" : category)
+			.orElseThrow(() -> new InvalidInputException("category", "is not a category Crustplan knows"));
+		Composition composition = new Composition(req("waterPct", waterPct), req("proteinPct", proteinPct),
+				req("fatPct", fatPct), req("reducingSugarPct", reducingSugarPct), req("sucrosePct", sucrosePct),
+				req("starchPct", starchPct), req("fibrePct", fibrePct), req("ashPct", ashPct));
+		return new Surface(c, composition, req("asparagineMgPerKg", asparagineMgPerKg),
+				req("surfaceWaterGPerM2", surfaceWaterGPerM2), req("thicknessMm", thicknessMm), ph,
+				req("bicarbonateGPerKg", bicarbonateGPerKg), req("acidGPerKg", acidGPerKg),
+				req("initialTemperatureC", initialTemperatureC()));
+	}
+
+	/**
+	 * What the surface is sold as, which sets its acrylamide benchmark; empty means the category's
+	 * usual product. Throws {@link InvalidInputException} (field {@code product}) for a product of
+	 * another category.
+	 */
+	public Product toProduct() {
+		FoodCategory c = FoodCategory.byKey(category == null ? "" : category)
+			.orElseThrow(() -> new InvalidInputException("category", "is not a category Crustplan knows"));
+		return Product.forSurface(c, product);
+	}
+
+	/** The form field an engine field name belongs to; null for checks across fields. */
+	public static String formField(String engineField) {
+		return switch (engineField) {
+			case "pH" -> "ph";
+			case "initialTemperatureC" -> "initialTemperature";
+			case "composition" -> null;
+			default -> engineField;
+		};
+	}
+
+	private static double req(String field, Double v) {
+		if (v == null) {
+			throw new InvalidInputException(field, "is required");
+		}
+		return v;
+	}
+
+	private static double round1(double v) {
+		return Math.round(v * 10) / 10.0;
+	}
+
+}

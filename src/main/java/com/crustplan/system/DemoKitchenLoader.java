@@ -1,0 +1,136 @@
+package com.crustplan.system;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.util.List;
+import java.util.Set;
+
+import jakarta.validation.ConstraintViolation;
+import jakarta.validation.Validator;
+
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+import org.springframework.boot.ApplicationArguments;
+import org.springframework.boot.ApplicationRunner;
+import org.springframework.boot.autoconfigure.condition.ConditionalOnProperty;
+import org.springframework.core.io.ClassPathResource;
+import org.springframework.security.crypto.password.PasswordEncoder;
+import org.springframework.stereotype.Component;
+import org.springframework.transaction.support.TransactionTemplate;
+
+import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.setup.SetupForm;
+import com.crustplan.setup.SetupService;
+import com.crustplan.surface.SurfaceForm;
+import com.crustplan.surface.SurfaceService;
+import com.crustplan.user.Role;
+import com.crustplan.user.UserAccount;
+import com.crustplan.user.UserAccountRepository;
+
+import tools.jackson.core.JacksonException;
+import tools.jackson.dataformat.yaml.YAMLMapper;
+
+/**
+ * Loads the invented demo kitchen (templates-demo/kitchen.yaml) into an empty database, with demo
+ * accounts whose passwords the sign-in page shows. Every entry goes through the same form validation
+ * and engine checks as a cook's input; a bad entry stops the load with the entry and field named, and
+ * nothing of it is saved (one transaction).
+ */
+@Component
+@ConditionalOnProperty(name = "crustplan.demo.enabled", havingValue = "true")
+class DemoKitchenLoader implements ApplicationRunner {
+
+	static final String FILE = "templates-demo/kitchen.yaml";
+
+	/** Demo only: shown on the sign-in page while the demo kitchen is enabled. */
+	record DemoAccount(String username, String password, Role role) {
+	}
+
+	static final List<DemoAccount> DEMO_ACCOUNTS = List.of(new DemoAccount("chef", "chef-demo", Role.CHEF),
+			new DemoAccount("cook", "cook-demo", Role.COOK));
+
+	record DemoKitchen(String kitchen, List<SurfaceForm> surfaces, List<SetupForm> setups) {
+	}
+
+	private static final Logger log = LoggerFactory.getLogger(DemoKitchenLoader.class);
+
+	private final SurfaceService surfaces;
+
+	private final SetupService setups;
+
+	private final UserAccountRepository users;
+
+	private final PasswordEncoder encoder;
+
+	private final Validator validator;
+
+	private final TransactionTemplate tx;
+
+	DemoKitchenLoader(SurfaceService surfaces, SetupService setups, UserAccountRepository users,
+			PasswordEncoder encoder, Validator validator, TransactionTemplate tx) {
+		this.surfaces = surfaces;
+		this.setups = setups;
+		this.users = users;
+		this.encoder = encoder;
+		this.validator = validator;
+		this.tx = tx;
+	}
+
+	@Override
+	public void run(ApplicationArguments args) {
+		tx.executeWithoutResult(status -> {
+			for (DemoAccount a : DEMO_ACCOUNTS) {
+				if (!users.existsByUsernameIgnoreCase(a.username())) {
+					users.save(new UserAccount(a.username(), encoder.encode(a.password()), a.role()));
+				}
+			}
+			if (surfaces.count() > 0 || !setups.all().isEmpty()) {
+				return;
+			}
+			DemoKitchen k = read();
+			for (int i = 0; i < k.surfaces().size(); i++) {
+				SurfaceForm f = k.surfaces().get(i);
+				check("surfaces[" + i + "] (" + f.name() + ")", validator.validate(f));
+				try {
+					surfaces.create(f);
+				}
+				catch (InvalidInputException e) {
+					throw new IllegalStateException(FILE + ": surfaces[" + i + "] " + e.getMessage(), e);
+				}
+			}
+			for (int i = 0; i < k.setups().size(); i++) {
+				SetupForm f = k.setups().get(i);
+				check("setups[" + i + "] (" + f.name() + ")", validator.validate(f));
+				try {
+					setups.create(f);
+				}
+				catch (InvalidInputException e) {
+					throw new IllegalStateException(FILE + ": setups[" + i + "] " + e.getMessage(), e);
+				}
+			}
+			log.info("Demo kitchen '{}' loaded: {} surfaces, {} setups", k.kitchen(), k.surfaces().size(),
+					k.setups().size());
+		});
+	}
+
+	static DemoKitchen read() {
+		try (InputStream in = new ClassPathResource(FILE).getInputStream()) {
+			DemoKitchen k = YAMLMapper.builder().build().readValue(in, DemoKitchen.class);
+			if (k == null || k.surfaces() == null || k.setups() == null) {
+				throw new IllegalStateException(FILE + ": needs 'surfaces' and 'setups' lists");
+			}
+			return k;
+		}
+		catch (IOException | JacksonException e) {
+			throw new IllegalStateException(FILE + " cannot be read: " + e.getMessage(), e);
+		}
+	}
+
+	private static <T> void check(String where, Set<ConstraintViolation<T>> violations) {
+		if (!violations.isEmpty()) {
+			ConstraintViolation<T> v = violations.iterator().next();
+			throw new IllegalStateException(FILE + ": " + where + " " + v.getPropertyPath() + " " + v.getMessage());
+		}
+	}
+
+}

@@ -1,0 +1,100 @@
+package com.crustplan.system;
+
+import java.util.Locale;
+
+import org.springframework.stereotype.Component;
+
+/** Number and time formats for the pages, called from templates as {@code @fmt}. */
+@Component("fmt")
+public class Formats {
+
+	public String temp(Double celsius, TemperatureUnit unit) {
+		return celsius == null ? "–" : unit.format(celsius);
+	}
+
+	/** Minutes and seconds the way a kitchen timer shows them. */
+	public static String duration(double seconds) {
+		if (!Double.isFinite(seconds)) {
+			return "–";
+		}
+		long s = Math.round(seconds);
+		long h = s / 3600;
+		long m = (s % 3600) / 60;
+		long r = s % 60;
+		if (h > 0) {
+			return String.format(Locale.ROOT, "%d h %02d min", h, m);
+		}
+		if (m > 0) {
+			return String.format(Locale.ROOT, "%d min %02d s", m, r);
+		}
+		return r + " s";
+	}
+
+	public String time(Double seconds) {
+		return seconds == null ? "–" : duration(seconds);
+	}
+
+	/** mm:ss labels under the colour swatches. */
+	public String clock(double seconds) {
+		long s = Math.round(seconds);
+		return String.format(Locale.ROOT, "%d:%02d", s / 60, s % 60);
+	}
+
+	/** Up to {@code digits} decimals, trailing zeros dropped. */
+	public static String number(double v, int digits) {
+		if (!Double.isFinite(v)) {
+			return "–";
+		}
+		String s = String.format(Locale.ROOT, "%." + digits + "f", v);
+		if (s.contains(".")) {
+			s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
+		}
+		return s.equals("-0") ? "0" : s;
+	}
+
+	/** Four significant figures for model constants (1.6e+05 stays readable next to 0.85). */
+	public String sig(double v) {
+		if (v != 0 && (Math.abs(v) >= 1e5 || Math.abs(v) < 1e-3)) {
+			return String.format(Locale.ROOT, "%.3g", v).replace("e+0", "×10^").replace("e-0", "×10^-").replace("e+", "×10^")
+				.replace("e-", "×10^-");
+		}
+		return number(v, 4);
+	}
+
+	private static final java.time.format.DateTimeFormatter DATE = java.time.format.DateTimeFormatter
+		.ofPattern("d MMM yyyy", Locale.UK);
+
+	private static final java.time.format.DateTimeFormatter DATE_TIME = java.time.format.DateTimeFormatter
+		.ofPattern("d MMM yyyy, HH:mm", Locale.UK);
+
+	/** Dates in the server's zone: a kitchen's server sits in the kitchen's time zone. */
+	public String date(java.time.Instant t) {
+		return t == null ? "–" : DATE.format(t.atZone(java.time.ZoneId.systemDefault()));
+	}
+
+	public String dateTime(java.time.Instant t) {
+		return t == null ? "–" : DATE_TIME.format(t.atZone(java.time.ZoneId.systemDefault()));
+	}
+
+	/** A form input's value: up to 6 decimals, no trailing zeros, empty for none. */
+	public String plain(Object v) {
+		if (v instanceof Double d) {
+			return Double.isFinite(d) ? number(d, 6) : "";
+		}
+		return v == null ? "" : v.toString();
+	}
+
+	/** A relative change as a signed percentage: −30 %, +5 %. */
+	public String signedPct(double relative) {
+		if (!Double.isFinite(relative)) {
+			return "–";
+		}
+		long p = Math.round(relative * 100);
+		return (p > 0 ? "+" : p < 0 ? "−" : "") + Math.abs(p) + " %";
+	}
+
+	public String num(Double v, int digits) {
+		return v == null ? "–" : number(v, digits);
+	}
+
+}

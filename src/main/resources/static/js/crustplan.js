@@ -1,0 +1,159 @@
+// Crustplan page behaviour: small enhancements; every page works without them except the charts.
+(function () {
+  'use strict';
+
+  function surfaceForm() {
+    var form = document.getElementById('surface-form');
+    if (!form) { return; }
+    var parts = ['waterPct', 'proteinPct', 'fatPct', 'reducingSugarPct', 'sucrosePct', 'starchPct', 'fibrePct', 'ashPct'];
+    var out = document.getElementById('remainder');
+    function remainder() {
+      var sum = 0, ok = true;
+      parts.forEach(function (p) {
+        var v = parseFloat(form.elements[p].value);
+        if (isNaN(v)) { ok = false; } else { sum += v; }
+      });
+      if (!out) { return; }
+      if (!ok) { out.textContent = '–'; return; }
+      var r = 100 - sum;
+      out.textContent = r < -0.05 ? 'over 100 % by ' + (-r).toFixed(2) + ' %' : Math.max(0, r).toFixed(2) + ' %';
+      out.classList.toggle('error', r < -0.05);
+    }
+    parts.forEach(function (p) { form.elements[p].addEventListener('input', remainder); });
+    // offer only the products of the chosen category
+    var product = form.elements.product;
+    function products() {
+      if (!product) { return; }
+      var cat = form.elements.category.value;
+      Array.prototype.forEach.call(product.options, function (o) {
+        var on = !o.dataset.category || o.dataset.category === cat;
+        o.hidden = !on;
+        o.disabled = !on;
+        if (!on && o.selected) { product.value = ''; }
+      });
+    }
+    form.elements.category.addEventListener('change', products);
+    products();
+    var defaults = JSON.parse(form.dataset.defaults || '{}');
+    var fill = document.getElementById('fill-defaults');
+    if (fill) {
+      fill.addEventListener('click', function () {
+        var d = defaults[form.elements.category.value];
+        if (!d) { return; }
+        Object.keys(d).forEach(function (k) {
+          if (k === 'phPlaceholder') { form.elements.ph.value = ''; form.elements.ph.placeholder = 'typical ' + d[k]; return; }
+          if (form.elements[k]) { form.elements[k].value = d[k]; }
+        });
+        remainder();
+      });
+    }
+  }
+
+  function setupForm() {
+    var form = document.getElementById('setup-form');
+    if (!form) { return; }
+    var mode = form.elements.mode;
+    function show() {
+      form.querySelectorAll('[data-modes]').forEach(function (el) {
+        var on = el.dataset.modes.split(' ').indexOf(mode.value) >= 0;
+        el.hidden = !on;
+      });
+    }
+    mode.addEventListener('change', show);
+    show();
+  }
+
+  function planForm() {
+    var form = document.getElementById('plan-form');
+    if (!form) { return; }
+    var surface = form.elements.surfaceId;
+    var stage = form.elements.targetStage;
+    function filter() {
+      var opt = surface.options[surface.selectedIndex];
+      var cat = opt ? opt.dataset.category : null;
+      var current = stage.value;
+      Array.prototype.forEach.call(stage.querySelectorAll('optgroup'), function (g) {
+        var on = !cat || g.dataset.category === cat;
+        g.hidden = !on;
+        g.disabled = !on;
+      });
+      if (cat && current) {
+        var match = stage.querySelector('optgroup[data-category="' + cat + '"] option[value="' + current + '"]');
+        if (match) { match.selected = true; } else { stage.value = ''; }
+      }
+    }
+    surface.addEventListener('change', filter);
+    filter();
+  }
+
+  var INK = '#1f2328';
+  var GRID = 'rgba(31,35,40,0.10)';
+
+  function axis(title, extra) {
+    var a = { title: { display: true, text: title, color: INK, font: { size: 13 } }, grid: { color: GRID }, ticks: { color: INK } };
+    return Object.assign(a, extra || {});
+  }
+
+  function points(xs, ys) {
+    return xs.map(function (x, i) { return { x: x, y: ys[i] }; });
+  }
+
+  function line(label, xs, ys, colour, extra) {
+    return Object.assign({ label: label, data: points(xs, ys), borderColor: colour, backgroundColor: colour,
+      borderWidth: 2.5, pointRadius: 0, tension: 0.15 }, extra || {});
+  }
+
+  function charts() {
+    var box = document.getElementById('charts');
+    if (!box || !box.dataset.plan || typeof Chart === 'undefined') { return; }
+    var d = JSON.parse(box.dataset.plan);
+    var t = d.timeMin;
+    Chart.defaults.font.family = getComputedStyle(document.body).fontFamily;
+    Chart.defaults.color = INK;
+    var common = { responsive: true, maintainAspectRatio: false, animation: false, interaction: { mode: 'nearest', axis: 'x', intersect: false },
+      plugins: { legend: { position: 'bottom', labels: { boxWidth: 14, color: INK } } } };
+    var x = axis('Time (min)', { type: 'linear', min: 0, max: t.length ? t[t.length - 1] : undefined });
+    var targetX = d.targetTimeMin;
+    var marker = function (ys, label) {
+      if (targetX === null || targetX === undefined) { return []; }
+      return [{ type: 'scatter', label: label, data: [{ x: targetX, y: ys }], pointRadius: 6, pointStyle: 'rectRot',
+        borderColor: INK, backgroundColor: '#ffffff', borderWidth: 2 }];
+    };
+
+    new Chart(document.getElementById('chart-temperature'), {
+      type: 'line',
+      data: { datasets: [
+        line('Surface (' + d.unit + ')', t, d.surfaceTemperature, '#b42318'),
+        line('Other face (' + d.unit + ')', t, d.otherFaceTemperature, '#b7791f', { borderDash: [6, 4], borderWidth: 2 }),
+        line('Core (' + d.unit + ')', t, d.coreTemperature, '#1d4ed8')
+      ] },
+      options: Object.assign({}, common, { scales: { x: x, y: axis('Temperature (' + d.unit + ')') } })
+    });
+
+    var target = t.map(function () { return d.targetBrowningPct; });
+    new Chart(document.getElementById('chart-browning'), {
+      type: 'line',
+      data: { datasets: [
+        line('Browning (% of full)', t, d.browningPct, '#7a3b12'),
+        line('Target', t, target, INK, { borderDash: [8, 5], borderWidth: 2 }),
+        line('Lightness L*', t, d.lightness, '#6b7280', { yAxisID: 'l', borderWidth: 1.5 })
+      ].concat(marker(d.targetBrowningPct, 'Target reached')) },
+      options: Object.assign({}, common, { scales: { x: x, y: axis('Browning (%)', { min: 0, max: 100 }),
+        l: axis('L*', { position: 'right', min: 0, max: 100, grid: { drawOnChartArea: false } }) } })
+    });
+
+    new Chart(document.getElementById('chart-water'), {
+      type: 'line',
+      data: { datasets: [line('Water activity at the surface', t, d.surfaceWaterActivity, '#0f766e', { fill: false })] },
+      options: Object.assign({}, common, { scales: { x: x, y: axis('Water activity a_w (0–1)', { min: 0, max: 1 }) } })
+    });
+    box.dataset.rendered = 'true';
+  }
+
+  document.addEventListener('DOMContentLoaded', function () {
+    surfaceForm();
+    setupForm();
+    planForm();
+    charts();
+  });
+}());

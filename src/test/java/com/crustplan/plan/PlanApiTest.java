@@ -1,0 +1,222 @@
+package com.crustplan.plan;
+
+import static org.hamcrest.Matchers.containsString;
+import static org.hamcrest.Matchers.greaterThan;
+import static org.hamcrest.Matchers.hasItem;
+import static org.hamcrest.Matchers.hasSize;
+import static org.hamcrest.Matchers.nullValue;
+import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.anonymous;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.content;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import org.junit.jupiter.api.Nested;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.http.MediaType;
+import org.springframework.test.web.servlet.MockMvc;
+import org.springframework.test.web.servlet.ResultActions;
+
+import com.crustplan.CrustplanTest;
+
+/** JSON API v1, called without signing in (it computes and saves nothing). */
+@CrustplanTest
+class PlanApiTest {
+
+	@Autowired
+	MockMvc mvc;
+
+	/**
+	 * The request body of the issue, potato chips in a 175 °C fryer, with starch 16.4 % instead of 17 %:
+	 * the issue's example adds up to 100.6 %, which the engine rightly refuses.
+	 */
+	static final String CHIPS = """
+			{ "surface": { "category": "potato", "waterPct": 78, "proteinPct": 2, "fatPct": 0.1,
+			    "reducingSugarPct": 0.3, "sucrosePct": 0.2, "starchPct": 16.4, "fibrePct": 2, "ashPct": 1,
+			    "asparagineMgPerKg": 3000, "surfaceWaterGPerM2": 20, "thicknessMm": 10,
+			    "pH": 6.0, "bicarbonateGPerKg": 0, "acidGPerKg": 0, "initialTemperatureC": 5 },
+			  "heat": { "mode": "fryer", "temperatureC": 175 },
+			  "target": { "stage": "golden" },
+			  "horizonMinutes": 30 }""";
+
+	ResultActions plan(String body) throws Exception {
+		return mvc.perform(post("/api/v1/plans").with(anonymous()).contentType(MediaType.APPLICATION_JSON).content(body));
+	}
+
+	@Test
+	void shouldListCategoriesWithDefaultsAndStagesWithoutSignIn() throws Exception {
+		mvc.perform(get("/api/v1/categories").with(anonymous()))
+			.andExpect(status().isOk())
+			.andExpect(jsonPath("$", hasSize(7)))
+			.andExpect(jsonPath("$[*].key", hasItem("poultry-skin")))
+			.andExpect(jsonPath("$[?(@.key=='potato')].defaults.waterPct").value(79.0))
+			.andExpect(jsonPath("$[?(@.key=='potato')].stages[*].key", hasItem("golden")));
+	}
+
+	@Test
+	void shouldComputeAPlanWithoutSavingOrSigningIn() throws Exception {
+		plan(CHIPS).andExpect(status().isOk())
+			.andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_JSON))
+			.andExpect(jsonPath("$.reached").value(true))
+			.andExpect(jsonPath("$.timeToTargetS").value(greaterThan(0.0)))
+			// pH given as 6.0 with no additions stays 6.0
+			.andExpect(jsonPath("$.pH").value(6.0))
+			.andExpect(jsonPath("$.series.timeS.length()").value(greaterThan(10)))
+			.andExpect(jsonPath("$.series.colorHex[0]").value(org.hamcrest.Matchers.matchesPattern("#[0-9a-fA-F]{6}")))
+			// potato without a named product is benchmarked as French fries: 500 µg/kg (Reg. (EU) 2017/2158, Annex IV)
+			.andExpect(jsonPath("$.acrylamide.benchmarkUgPerKg").value(500.0))
+			.andExpect(jsonPath("$.assumptions.length()").value(greaterThan(0)))
+			.andExpect(jsonPath("$.cautions[*]", hasItem(containsString("Hot oil"))));
+	}
+
+	@Test
+	void shouldFillOptionalFieldsFromTheCategoryDefaults() throws Exception {
+		plan("""
+				{ "surface": { "category": "meat" }, "heat": { "mode": "pan", "temperatureC": 220 },
+				  "target": { "stage": "browned" } }""")
+			.andExpect(status().isOk())
+			// the meat category's typical pH is 5.6 (beef 5.5–5.8, food pH tables)
+			.andExpect(jsonPath("$.pH").value(5.6));
+	}
+
+	@Test
+	void shouldWarnWhenFryingPotatoAt175OrAbove() throws Exception {
+		plan(CHIPS.replace("\"temperatureC\": 175", "\"temperatureC\": 190"))
+			.andExpect(status().isOk())
+			// Commission Regulation (EU) 2017/2158, Annex II: fry potato products below 175 °C
+			.andExpect(jsonPath("$.warnings[*].code", hasItem("frying-at-175-or-above")));
+	}
+
+	@Test
+	void shouldEstimateAcrylamideAgainstTheFrenchFriesBenchmark() throws Exception {
+		plan(CHIPS.replace("\"category\": \"potato\"", "\"category\": \"potato\", \"product\": \"french-fries\""))
+			.andExpect(status().isOk())
+			// Commission Regulation (EU) 2017/2158, Annex IV: French fries (ready-to-eat) 500 µg/kg
+			.andExpect(jsonPath("$.acrylamide.benchmarkUgPerKg").value(500.0))
+			.andExpect(jsonPath("$.acrylamide.zone").value(org.hamcrest.Matchers.oneOf("low", "elevated", "high")))
+			.andExpect(jsonPath("$.acrylamide.portionUgPerKg").value(greaterThan(0.0)))
+			.andExpect(jsonPath("$.acrylamide.mitigations.length()").value(greaterThan(0)));
+	}
+
+	@Test
+	void shouldGiveNoBenchmarkForMeat() throws Exception {
+		plan("""
+				{ "surface": { "category": "meat" }, "heat": { "mode": "pan", "temperatureC": 220 },
+				  "target": { "stage": "browned" }, "mitigations": false }""")
+			.andExpect(status().isOk())
+			// the regulation sets no benchmark for meat
+			.andExpect(jsonPath("$.acrylamide.benchmarkUgPerKg").value(nullValue()))
+			.andExpect(jsonPath("$.acrylamide.zone").value(nullValue()))
+			.andExpect(jsonPath("$.acrylamide.mitigations.length()").value(0));
+	}
+
+	@Nested
+	class BadInput {
+
+		void rejects(String body, String field) throws Exception {
+			plan(body).andExpect(status().isBadRequest())
+				.andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_JSON))
+				.andExpect(jsonPath("$.errors[*].field", hasItem(field)))
+				.andExpect(jsonPath("$.errors[0].message").isNotEmpty());
+		}
+
+		@Test
+		void shouldRejectACompositionOverHundredPercent() throws Exception {
+			rejects(CHIPS.replace("\"starchPct\": 16.4", "\"starchPct\": 40"), "surface.composition");
+		}
+
+		@Test
+		void shouldRejectANegativeValue() throws Exception {
+			rejects(CHIPS.replace("\"waterPct\": 78", "\"waterPct\": -1"), "surface.waterPct");
+		}
+
+		@ParameterizedTest
+		@CsvSource({ "0", "250", "-5" })
+		void shouldRejectAThicknessOutsideTheModel(String mm) throws Exception {
+			rejects(CHIPS.replace("\"thicknessMm\": 10", "\"thicknessMm\": " + mm), "surface.thicknessMm");
+		}
+
+		@ParameterizedTest
+		@CsvSource({ "fryer, 250", "oven, 400", "pan, 50", "grill, 100" })
+		void shouldRejectATemperatureOutsideWhatTheModeAllows(String mode, String t) throws Exception {
+			rejects(CHIPS.replace("\"mode\": \"fryer\", \"temperatureC\": 175",
+					"\"mode\": \"" + mode + "\", \"temperatureC\": " + t), "heat.temperatureC");
+		}
+
+		@Test
+		void shouldRejectAProductOfAnotherCategory() throws Exception {
+			rejects(CHIPS.replace("\"category\": \"potato\"", "\"category\": \"potato\", \"product\": \"biscuits\""),
+					"surface.product");
+			rejects(CHIPS.replace("\"category\": \"potato\"", "\"category\": \"potato\", \"product\": 7"),
+					"surface.product");
+		}
+
+		@Test
+		void shouldRejectAnUnknownModeCategoryAndStage() throws Exception {
+			rejects(CHIPS.replace("\"fryer\"", "\"microwave\""), "heat.mode");
+			rejects(CHIPS.replace("\"potato\"", "\"unicorn\""), "surface.category");
+			rejects(CHIPS.replace("\"golden\"", "\"mahogany\""), "target.stage");
+		}
+
+		@Test
+		void shouldRejectMalformedJson() throws Exception {
+			rejects(CHIPS.substring(0, 40), "body");
+			rejects("not json at all", "body");
+			rejects("", "body");
+			rejects("[1, 2, 3]", "body");
+			rejects("null", "body");
+		}
+
+		@ParameterizedTest
+		@CsvSource(delimiter = '|', value = { "NaN|surface.waterPct", "Infinity|surface.waterPct",
+				"-Infinity|surface.waterPct", "\"NaN\"|surface.waterPct", "\"Infinity\"|surface.waterPct",
+				"1e400|surface.waterPct", "\"78\"|surface.waterPct", "true|surface.waterPct", "{}|surface.waterPct",
+				"[78]|surface.waterPct" })
+		void shouldRejectNonFiniteAndWronglyTypedNumbers(String value, String field) throws Exception {
+			String body = CHIPS.replace("\"waterPct\": 78", "\"waterPct\": " + value);
+			if (value.equals("NaN") || value.contains("Infinity") && !value.startsWith("\"")) {
+				// bare NaN and Infinity are not JSON (RFC 8259): the body itself is malformed
+				rejects(body, "body");
+			}
+			else {
+				rejects(body, field);
+			}
+		}
+
+		@Test
+		void shouldRejectMissingObjectsAndTargets() throws Exception {
+			rejects("{ \"heat\": { \"mode\": \"pan\", \"temperatureC\": 200 }, \"target\": { \"lightness\": 60 } }",
+					"surface");
+			rejects(CHIPS.replace("\"heat\": { \"mode\": \"fryer\", \"temperatureC\": 175 },", ""), "heat");
+			rejects(CHIPS.replace("{ \"stage\": \"golden\" }", "{ }"), "target");
+			rejects(CHIPS.replace("{ \"stage\": \"golden\" }", "{ \"stage\": \"golden\", \"lightness\": 60 }"), "target");
+			rejects(CHIPS.replace("{ \"stage\": \"golden\" }", "\"golden\""), "target");
+		}
+
+		@Test
+		void shouldRejectALightnessThePathNeverReachesAndAHorizonOverSixHours() throws Exception {
+			rejects(CHIPS.replace("{ \"stage\": \"golden\" }", "{ \"lightness\": 5 }"), "target.lightness");
+			rejects(CHIPS.replace("\"horizonMinutes\": 30", "\"horizonMinutes\": 999"), "horizonMinutes");
+		}
+
+		@Test
+		void shouldRejectBadTypesInTheHeatSettings() throws Exception {
+			rejects(CHIPS.replace("\"temperatureC\": 175", "\"temperatureC\": 175, \"fan\": \"yes\""), "heat.fan");
+			rejects(CHIPS.replace("\"mode\": \"fryer\"", "\"mode\": 3"), "heat.mode");
+			rejects(CHIPS.replace("\"potato\"", "\"" + "x".repeat(5000) + "\""), "surface.category");
+		}
+
+	}
+
+	@Test
+	void shouldAnswerOtherApiCallsWithoutSignInAs401Json() throws Exception {
+		mvc.perform(get("/api/v1/plans").with(anonymous()))
+			.andExpect(status().isUnauthorized())
+			.andExpect(jsonPath("$.errors[0].field").value("authorization"));
+	}
+
+}

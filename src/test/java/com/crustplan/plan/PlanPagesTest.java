@@ -1,0 +1,197 @@
+package com.crustplan.plan;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.hamcrest.Matchers.containsString;
+import static org.hamcrest.Matchers.not;
+import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.csrf;
+import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.user;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.content;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.flash;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.model;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.redirectedUrlPattern;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.view;
+
+import org.junit.jupiter.api.Nested;
+import org.junit.jupiter.api.Test;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.security.test.context.support.WithMockUser;
+import org.springframework.test.web.servlet.MockMvc;
+import org.springframework.test.web.servlet.MvcResult;
+
+import com.crustplan.CrustplanTest;
+import com.crustplan.DemoData;
+
+@CrustplanTest
+@WithMockUser(username = "chef", roles = "CHEF")
+class PlanPagesTest {
+
+	@Autowired
+	MockMvc mvc;
+
+	@Autowired
+	DemoData demo;
+
+	@Autowired
+	SavedPlanRepository plans;
+
+	String chips() {
+		return String.valueOf(demo.surface("Chips, 10 mm, blanched"));
+	}
+
+	String fryer() {
+		return String.valueOf(demo.setup("Fryer, chips"));
+	}
+
+	@Test
+	void shouldShowThePickerWithoutAPlan() throws Exception {
+		mvc.perform(get("/plan"))
+			.andExpect(status().isOk())
+			.andExpect(view().name("plan/plan"))
+			.andExpect(model().attributeDoesNotExist("report"))
+			.andExpect(content().string(containsString("Chips, 10 mm, blanched")));
+	}
+
+	@Test
+	void shouldComputeAPlanWithChartsSwatchesAndCautions() throws Exception {
+		mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetStage", "golden"))
+			.andExpect(status().isOk())
+			.andExpect(model().attributeExists("report", "chartJson"))
+			.andExpect(content().string(containsString("id=\"time-to-target\"")))
+			.andExpect(content().string(containsString("data-plan=")))
+			.andExpect(content().string(containsString("class=\"swatch\"")))
+			// cautions a kitchen expects (IARC group, the FDA Food Code edition, hot oil)
+			.andExpect(content().string(containsString("Group 2A")))
+			.andExpect(content().string(containsString("FDA Food Code 2022")))
+			.andExpect(content().string(containsString("Hot oil")))
+			// the acrylamide section: the estimate where the engine gives one, otherwise it says so
+			.andExpect(content().string(org.hamcrest.Matchers.anyOf(containsString("Estimate not available"),
+					containsString("µg/kg</dd>"))));
+	}
+
+	@Test
+	void shouldPlanToALightnessTarget() throws Exception {
+		mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetLightness", "64"))
+			.andExpect(status().isOk())
+			.andExpect(model().attributeExists("report"))
+			.andExpect(content().string(containsString("L* 64")));
+	}
+
+	@Test
+	void shouldSaveAPlanAndOpenItLater() throws Exception {
+		MvcResult r = mvc.perform(post("/plans").with(csrf())
+			.param("surfaceId", chips())
+			.param("setupId", fryer())
+			.param("targetStage", "golden")
+			.param("horizonMinutes", "30")
+			.param("name", "Friday chips"))
+			.andExpect(status().is3xxRedirection())
+			.andExpect(redirectedUrlPattern("/plans/*"))
+			.andExpect(flash().attribute("message", containsString("Friday chips")))
+			.andReturn();
+		mvc.perform(get(r.getResponse().getRedirectedUrl()))
+			.andExpect(status().isOk())
+			.andExpect(view().name("plan/show"))
+			.andExpect(content().string(containsString("Friday chips")))
+			.andExpect(content().string(containsString("data-plan=")));
+		mvc.perform(get("/plans")).andExpect(status().isOk()).andExpect(content().string(containsString("Friday chips")));
+	}
+
+	@Test
+	void shouldDeleteASavedPlanAfterConfirmation() throws Exception {
+		MvcResult r = mvc.perform(post("/plans").with(csrf())
+			.param("surfaceId", chips())
+			.param("setupId", fryer())
+			.param("targetStage", "golden")
+			.param("name", "Plan to delete")).andReturn();
+		String url = r.getResponse().getRedirectedUrl();
+		long id = Long.parseLong(url.substring(url.lastIndexOf('/') + 1));
+		mvc.perform(get("/plans/{id}/delete", id)).andExpect(view().name("plan/delete"));
+		mvc.perform(post("/plans/{id}/delete", id).with(csrf())).andExpect(status().is3xxRedirection());
+		assertThat(plans.findById(id)).isEmpty();
+		mvc.perform(get("/plans/{id}", id)).andExpect(status().isNotFound());
+	}
+
+	@Test
+	void shouldShowASavedPlanTheModelNoLongerAcceptsWithoutFailing() throws Exception {
+		long unreadable = plans.save(new SavedPlan("Unreadable", "s", "t", "Golden", "{not json", true, 60.0, "chef"))
+			.getId();
+		mvc.perform(get("/plans/{id}", unreadable))
+			.andExpect(status().isOk())
+			.andExpect(content().string(containsString("cannot be read")));
+		MvcResult r = mvc.perform(post("/plans").with(csrf()).param("surfaceId", chips()).param("setupId", fryer())
+			.param("targetStage", "golden").param("name", "Soon too thick")).andReturn();
+		SavedPlan good = plans.findById(Long.parseLong(r.getResponse().getRedirectedUrl().replace("/plans/", "")))
+			.orElseThrow();
+		// the same inputs with a thickness beyond the model's 200 mm
+		String json = good.getInputsJson().replace("\"thicknessMm\":10.0", "\"thicknessMm\":500.0");
+		assertThat(json).contains("500.0");
+		long stale = plans.save(new SavedPlan("Too thick", "s", "t", "Golden", json, true, 60.0, "chef")).getId();
+		mvc.perform(get("/plans/{id}", stale))
+			.andExpect(status().isOk())
+			.andExpect(content().string(containsString("thicknessMm: must be a number from 0.5 to 200")));
+	}
+
+	@Nested
+	class BadInput {
+
+		@Test
+		void shouldRejectAStageOfAnotherCategory() throws Exception {
+			mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetStage", "mahogany"))
+				.andExpect(status().isOk())
+				.andExpect(model().attributeHasFieldErrors("form", "targetStage"))
+				.andExpect(model().attributeDoesNotExist("report"));
+		}
+
+		@Test
+		void shouldRejectALightnessOutsideTheScale() throws Exception {
+			mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetLightness", "150"))
+				.andExpect(model().attributeHasFieldErrors("form", "targetLightness"));
+			mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetLightness", "NaN"))
+				.andExpect(model().attributeHasFieldErrorCode("form", "targetLightness", "typeMismatch"));
+		}
+
+		@Test
+		void shouldRejectAMissingSurfaceAndAnUnreadableId() throws Exception {
+			mvc.perform(get("/plan").param("surfaceId", "987654").param("setupId", fryer()).param("targetStage", "golden"))
+				.andExpect(status().isOk())
+				.andExpect(model().attributeHasFieldErrors("form", "surfaceId"));
+			mvc.perform(get("/plan").param("surfaceId", "abc").param("setupId", fryer()))
+				.andExpect(status().isOk())
+				.andExpect(model().attributeHasFieldErrorCode("form", "surfaceId", "typeMismatch"));
+		}
+
+		@Test
+		void shouldRejectANoTargetAndABlankPlanName() throws Exception {
+			mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()))
+				.andExpect(model().attributeHasFieldErrors("form", "targetLightness"));
+			mvc.perform(post("/plans").with(csrf()).param("surfaceId", chips()).param("setupId", fryer())
+				.param("targetStage", "golden").param("name", ""))
+				.andExpect(status().isOk())
+				.andExpect(model().attributeHasFieldErrors("form", "name"))
+				.andExpect(content().string(containsString("give the plan a name")));
+		}
+
+		@Test
+		void shouldRejectAHorizonOverSixHours() throws Exception {
+			mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetStage", "golden")
+				.param("horizonMinutes", "1000"))
+				.andExpect(model().attributeHasFieldErrors("form", "horizonMinutes"));
+		}
+
+	}
+
+	@Test
+	void shouldLetACookPlanButNotSave() throws Exception {
+		mvc.perform(get("/plan").with(user("cook").roles("COOK")).param("surfaceId", chips()).param("setupId", fryer())
+			.param("targetStage", "golden"))
+			.andExpect(status().isOk())
+			.andExpect(content().string(not(containsString("Save this plan"))));
+		mvc.perform(post("/plans").with(csrf()).with(user("cook").roles("COOK")).param("surfaceId", chips())
+			.param("setupId", fryer()).param("targetStage", "golden").param("name", "cook's plan"))
+			.andExpect(status().isForbidden());
+	}
+
+}

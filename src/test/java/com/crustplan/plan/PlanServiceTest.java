@@ -1,0 +1,100 @@
+package com.crustplan.plan;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+
+import com.crustplan.engine.cook.Target;
+import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.system.TemperatureUnit;
+
+/** What the plan service adds around the engine's numbers: warnings, cautions, swatches. No Spring. */
+class PlanServiceTest {
+
+	final PlanService planner = new PlanService();
+
+	/** A 60 mm skin-on piece in a 240 °C pan: the skin colours long before the core is safe. */
+	PlanReport thickChicken(TemperatureUnit unit) {
+		Surface s = Surface.defaults(FoodCategory.POULTRY_SKIN).withThicknessMm(60);
+		return planner.plan(s, new HeatSetup.PanContact(240, true, 0), Target.stage("light-golden"), 30, unit);
+	}
+
+	@Test
+	void shouldWarnWhenPoultryIsColouredBeforeTheFoodCodeCoreTemperature() {
+		PlanReport r = thickChicken(TemperatureUnit.FAHRENHEIT);
+		assertThat(r.reached()).isTrue();
+		assertThat(r.coreTemperatureAtTargetC()).isLessThan(74.0);
+		PlanWarning w = r.warnings().stream().filter(x -> x.code().equals("core-below-food-code")).findFirst()
+			.orElseThrow();
+		// FDA Food Code 2022, 3-401.11(A)(3): poultry 165 °F (74 °C), the code's own °F figure
+		assertThat(w.message()).contains("165 °F").contains("FDA Food Code 2022");
+		assertThat(thickChicken(TemperatureUnit.CELSIUS).warnings().stream()
+			.filter(x -> x.code().equals("core-below-food-code"))
+			.findFirst()
+			.orElseThrow()
+			.message()).contains("74 °C");
+	}
+
+	@Test
+	void shouldAlwaysCarryTheUsualCautions() {
+		List<String> c = thickChicken(TemperatureUnit.CELSIUS).cautions();
+		assertThat(c).anySatisfy(x -> assertThat(x).contains("Group 2A"));
+		assertThat(c).anySatisfy(x -> assertThat(x).contains("probe"));
+		// FDA Food Code 2022 3-401.11: 63 °C 15 s whole cuts, 68 °C 17 s minced, 74 °C < 1 s poultry
+		assertThat(c).anySatisfy(x -> assertThat(x).contains("2022").contains("63 °C (145 °F) for 15 s")
+			.contains("68 °C (155 °F) for 17 s").contains("74 °C (165 °F) for under 1 s"));
+		assertThat(c).anySatisfy(x -> assertThat(x).contains("Hot pan"));
+	}
+
+	@Test
+	void shouldCautionAboutHotOilOnlyForTheFryer() {
+		Surface chips = Surface.defaults(FoodCategory.POTATO);
+		PlanReport fried = planner.plan(chips, new HeatSetup.DeepFryer(170), Target.stage("light-golden"), 20,
+				TemperatureUnit.CELSIUS);
+		assertThat(fried.cautions()).anySatisfy(x -> assertThat(x).startsWith("Hot oil"));
+		assertThat(thickChicken(TemperatureUnit.CELSIUS).cautions()).noneSatisfy(x -> assertThat(x).startsWith("Hot oil"));
+	}
+
+	@Test
+	void shouldMarkExactlyOneTargetSwatchInTimeOrder() {
+		PlanReport r = thickChicken(TemperatureUnit.CELSIUS);
+		List<Swatch> s = r.swatches();
+		assertThat(s).hasSizeBetween(5, PlanService.SWATCHES);
+		assertThat(s.stream().filter(Swatch::target)).hasSize(1);
+		for (int i = 1; i < s.size(); i++) {
+			assertThat(s.get(i).timeS()).isGreaterThan(s.get(i - 1).timeS());
+		}
+		Swatch t = s.stream().filter(Swatch::target).findFirst().orElseThrow();
+		// the marked swatch is the sample nearest the target time: within one output interval (5 s)
+		assertThat(Math.abs(t.timeS() - r.timeToTargetS())).isLessThanOrEqualTo(5.0);
+		assertThat(t.hex()).matches("#[0-9a-fA-F]{6}");
+	}
+
+	@Test
+	void shouldRefuseAHorizonOutsideOneMinuteToSixHours() {
+		Surface s = Surface.defaults(FoodCategory.MEAT);
+		HeatSetup pan = new HeatSetup.PanContact(220, true, 60);
+		assertThatThrownBy(() -> planner.plan(s, pan, Target.stage("browned"), 0, TemperatureUnit.CELSIUS))
+			.isInstanceOf(InvalidInputException.class)
+			.extracting(e -> ((InvalidInputException) e).field())
+			.isEqualTo("horizonMinutes");
+		assertThatThrownBy(() -> planner.plan(s, pan, Target.stage("browned"), 361, TemperatureUnit.CELSIUS))
+			.isInstanceOf(InvalidInputException.class);
+	}
+
+	@Test
+	void shouldShowAnAcrylamideEstimateExactlyWhenTheEngineGivesOne() {
+		// the engine's acrylamide fields are NaN until its acrylamide model is in; then the page shows them
+		PlanReport r = thickChicken(TemperatureUnit.CELSIUS);
+		assertThat(r.acrylamide().available())
+			.isEqualTo(Double.isFinite(r.result().crustAcrylamideAtTargetUgPerKg())
+					|| Double.isFinite(r.result().portionAcrylamideAtTargetUgPerKg()));
+	}
+
+}
