@@ -19,8 +19,8 @@ import org.springframework.web.bind.annotation.RestController;
 
 import com.crustplan.engine.cook.Sample;
 import com.crustplan.engine.food.BrowningStage;
-import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.surface.CategoryDefaults;
 import com.crustplan.engine.food.InvalidInputException;
 import com.crustplan.system.TemperatureUnit;
 
@@ -47,19 +47,7 @@ class PlanApiController {
 	List<Map<String, Object>> categories() {
 		List<Map<String, Object>> out = new ArrayList<>();
 		for (FoodCategory c : FoodCategory.values()) {
-			Composition k = c.defaultComposition();
-			Map<String, Object> d = new LinkedHashMap<>();
-			d.put("waterPct", k.waterPct());
-			d.put("proteinPct", k.proteinPct());
-			d.put("fatPct", k.fatPct());
-			d.put("reducingSugarPct", k.reducingSugarPct());
-			d.put("sucrosePct", k.sucrosePct());
-			d.put("starchPct", k.starchPct());
-			d.put("fibrePct", k.fibrePct());
-			d.put("ashPct", k.ashPct());
-			d.put("asparagineMgPerKg", c.defaultAsparagineMgPerKg());
-			d.put("surfaceWaterGPerM2", c.defaultSurfaceWaterGPerM2());
-			d.put("thicknessMm", c.defaultThicknessMm());
+			Map<String, Object> d = CategoryDefaults.of(c);
 			d.put("pH", c.defaultPh());
 			d.put("bicarbonateGPerKg", 0.0);
 			d.put("acidGPerKg", 0.0);

@@ -18,7 +18,6 @@ import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 import com.crustplan.engine.acrylamide.Product;
-import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.InvalidInputException;
 import com.crustplan.engine.food.Surface;
@@ -168,19 +167,7 @@ class SurfaceController {
 	private static Map<String, Map<String, Object>> defaultsByKey(TemperatureUnit units) {
 		Map<String, Map<String, Object>> all = new LinkedHashMap<>();
 		for (FoodCategory c : FoodCategory.values()) {
-			Composition k = c.defaultComposition();
-			Map<String, Object> d = new LinkedHashMap<>();
-			d.put("waterPct", k.waterPct());
-			d.put("proteinPct", k.proteinPct());
-			d.put("fatPct", k.fatPct());
-			d.put("reducingSugarPct", k.reducingSugarPct());
-			d.put("sucrosePct", k.sucrosePct());
-			d.put("starchPct", k.starchPct());
-			d.put("fibrePct", k.fibrePct());
-			d.put("ashPct", k.ashPct());
-			d.put("asparagineMgPerKg", c.defaultAsparagineMgPerKg());
-			d.put("surfaceWaterGPerM2", c.defaultSurfaceWaterGPerM2());
-			d.put("thicknessMm", c.defaultThicknessMm());
+			Map<String, Object> d = CategoryDefaults.of(c);
 			d.put("phPlaceholder", c.defaultPh());
 			d.put("initialTemperature", Math.round(units.fromCelsius(c.defaultInitialTemperatureC()) * 10) / 10.0);
 			all.put(c.key(), d);
