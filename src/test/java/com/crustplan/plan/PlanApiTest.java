@@ -93,7 +93,8 @@ class PlanApiTest {
 
 	@Test
 	void shouldEstimateAcrylamideAgainstTheFrenchFriesBenchmark() throws Exception {
-		plan(CHIPS.replace("\"category\": \"potato\"", "\"category\": \"potato\", \"product\": \"french-fries\""))
+		plan(CHIPS.replace("\"category\": \"potato\"", "\"category\": \"potato\", \"product\": \"french-fries\"")
+			.replaceFirst("\\}\\s*$", ", \"mitigations\": true }"))
 			.andExpect(status().isOk())
 			// Commission Regulation (EU) 2017/2158, Annex IV: French fries (ready-to-eat) 500 µg/kg
 			.andExpect(jsonPath("$.acrylamide.benchmarkUgPerKg").value(500.0))
