@@ -21,29 +21,42 @@ import tools.jackson.databind.json.JsonMapper;
 /**
  * Reads a {@code POST /api/v1/plans} body into engine inputs, field by field, so that every kind of
  * bad input (wrong type, NaN or Infinity, missing object, unknown mode) becomes a field error instead
- * of a binding exception. Missing optional fields take the category's defaults.
+ * of a binding exception. Missing optional fields take the category's defaults. The surface API's
+ * save body ({@code name}, {@code notes}, {@code surface}) is read by the same code.
  */
-final class PlanRequestReader {
+public final class PlanRequestReader {
 
 	record PlanRequest(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
 			boolean mitigations) {
 	}
 
+	/**
+	 * A surface to save: the engine's surface (already checked) with its name, notes and product key
+	 * (null for the category's usual product).
+	 */
+	public record SurfaceRequest(String name, String notes, Surface surface, String product) {
+	}
+
 	/** Thrown with every field error found in one pass. */
-	static final class BadRequest extends RuntimeException {
+	public static final class BadRequest extends RuntimeException {
 
 		private final transient List<ApiError.FieldError> errors;
 
 		BadRequest(List<ApiError.FieldError> errors) {
-			super("bad plan request", null, false, false);
+			super("bad request body", null, false, false);
 			this.errors = List.copyOf(errors);
 		}
 
-		List<ApiError.FieldError> errors() {
+		public List<ApiError.FieldError> errors() {
 			return errors;
 		}
 
 	}
+
+	/** Longest name and notes a saved surface keeps (the columns' lengths). */
+	static final int NAME_MAX = 80;
+
+	static final int NOTES_MAX = 1000;
 
 	private final List<ApiError.FieldError> errors = new ArrayList<>();
 
@@ -51,17 +64,24 @@ final class PlanRequestReader {
 	}
 
 	static PlanRequest read(String body, JsonMapper json) {
+		return new PlanRequestReader().request(tree(body, json, "send a JSON object with surface, heat and target"));
+	}
+
+	/** Reads a surface save body: {@code name} (required), {@code notes} and {@code surface} as for a plan. */
+	public static SurfaceRequest readSurface(String body, JsonMapper json) {
+		return new PlanRequestReader().surfaceRequest(tree(body, json, "send a JSON object with name and surface"));
+	}
+
+	private static JsonNode tree(String body, JsonMapper json, String whatToSend) {
 		if (body == null || body.isBlank()) {
-			throw new BadRequest(List.of(new ApiError.FieldError("body", "send a JSON object with surface, heat and target")));
+			throw new BadRequest(List.of(new ApiError.FieldError("body", whatToSend)));
 		}
-		JsonNode root;
 		try {
-			root = json.readTree(body);
+			return json.readTree(body);
 		}
 		catch (JacksonException e) {
 			throw new BadRequest(List.of(new ApiError.FieldError("body", "malformed JSON: " + shortMessage(e))));
 		}
-		return new PlanRequestReader().request(root);
 	}
 
 	private static String shortMessage(JacksonException e) {
@@ -83,19 +103,7 @@ final class PlanRequestReader {
 		Double horizon = number(root, "horizonMinutes", "horizonMinutes");
 		Boolean mitigations = bool(root, "mitigations", "mitigations");
 
-		FoodCategory category = null;
-		if (s != null) {
-			String key = text(s, "category", "surface.category");
-			if (key != null) {
-				category = FoodCategory.byKey(key).orElse(null);
-				if (category == null) {
-					error("surface.category", "'" + key + "' is not a category; use one of " + categoryKeys());
-				}
-			}
-			else if (!hasError("surface.category")) {
-				error("surface.category", "is required; use one of " + categoryKeys());
-			}
-		}
+		FoodCategory category = category(s);
 		Surface surface = category == null ? null : surface(s, category);
 		Product product = category == null ? null : product(s, category);
 		HeatSetup setup = h == null ? null : heat(h);
@@ -106,6 +114,45 @@ final class PlanRequestReader {
 		double horizonMinutes = horizon == null ? PlanService.DEFAULT_HORIZON_MINUTES : horizon;
 		// the reducing changes cost a dozen further runs: an API client asks for them
 		return new PlanRequest(surface, product, setup, target, horizonMinutes, mitigations != null && mitigations);
+	}
+
+	private SurfaceRequest surfaceRequest(JsonNode root) {
+		if (root == null || !root.isObject()) {
+			throw new BadRequest(List.of(new ApiError.FieldError("body", "must be a JSON object")));
+		}
+		String name = text(root, "name", "name", NAME_MAX);
+		if (name == null && !hasError("name")) {
+			error("name", "is required: give the surface a name");
+		}
+		String notes = text(root, "notes", "notes", NOTES_MAX);
+		JsonNode s = object(root, "surface");
+		FoodCategory category = category(s);
+		Surface surface = category == null ? null : surface(s, category);
+		Product product = category == null ? null : product(s, category);
+		if (!errors.isEmpty()) {
+			throw new BadRequest(errors);
+		}
+		// a product left out stays empty, so the record follows the category's usual product
+		String productKey = text(s, "product", "surface.product") == null ? null : product.key();
+		return new SurfaceRequest(name, notes, surface, productKey);
+	}
+
+	private FoodCategory category(JsonNode s) {
+		if (s == null) {
+			return null;
+		}
+		String key = text(s, "category", "surface.category");
+		if (key != null) {
+			FoodCategory category = FoodCategory.byKey(key).orElse(null);
+			if (category == null) {
+				error("surface.category", "'" + key + "' is not a category; use one of " + categoryKeys());
+			}
+			return category;
+		}
+		if (!hasError("surface.category")) {
+			error("surface.category", "is required; use one of " + categoryKeys());
+		}
+		return null;
 	}
 
 	private Surface surface(JsonNode s, FoodCategory c) {
@@ -233,6 +280,10 @@ final class PlanRequestReader {
 	}
 
 	private String text(JsonNode parent, String name, String field) {
+		return text(parent, name, field, 80);
+	}
+
+	private String text(JsonNode parent, String name, String field, int maxLength) {
 		JsonNode n = parent.get(name);
 		if (n == null || n.isNull()) {
 			return null;
@@ -245,8 +296,8 @@ final class PlanRequestReader {
 		if (v.isEmpty()) {
 			return null;
 		}
-		if (v.length() > 80) {
-			error(field, "is too long (at most 80 characters)");
+		if (v.length() > maxLength) {
+			error(field, "is too long (at most " + maxLength + " characters)");
 			return null;
 		}
 		return v;
