@@ -8,8 +8,9 @@
 #
 # Settings (environment): DURATION (20s per run), CONNECTIONS ("8 32"), THREADS (2, one per core),
 # WARMUP (10s, not reported: lets the JIT compile the engine), PORT (a free one from 18080 up),
-# PAGE_PATH (/plan), and LOGIN_USER / LOGIN_PASSWORD to sign in for the page (it needs a signed-in
-# cook); without them the page runs are skipped if the page redirects to the sign-in form.
+# PROFILE (demo: the demo kitchen and its accounts), PAGE_PATH (the demo chips plan), LOGIN_USER /
+# LOGIN_PASSWORD to sign in for the page (it needs a signed-in cook; default the demo cook); if the
+# page still redirects to the sign-in form its runs are skipped.
 # Goal (issue 6): >= 300 requests/s for the plans API at 32 connections, 0 errors, p99 < 200 ms.
 set -euo pipefail
 
@@ -19,7 +20,10 @@ DURATION="${DURATION:-20s}"
 CONNECTIONS="${CONNECTIONS:-8 32}"
 THREADS="${THREADS:-2}"
 WARMUP="${WARMUP:-10s}"
-PAGE_PATH="${PAGE_PATH:-/plan}"
+# the plan page with a plan computed: the demo kitchen's chips (surface 4) in its fryer (setup 6) to golden
+PAGE_PATH="${PAGE_PATH:-/plan?surfaceId=4&setupId=6&targetStage=golden}"
+# the demo profile loads the invented demo kitchen (surfaces, setups, accounts) into the empty database
+PROFILE="${PROFILE:-demo}"
 # the demo kitchen's cook account, which its sign-in page lists; set LOGIN_USER= (empty) to load anonymously
 LOGIN_USER="${LOGIN_USER-cook}"
 LOGIN_PASSWORD="${LOGIN_PASSWORD-cook-demo}"
@@ -61,6 +65,7 @@ echo "== starting $(basename "$jar") on $base (database in $work)"
 java -jar "$jar" \
   --server.address=127.0.0.1 --server.port="$PORT" \
   --spring.datasource.url="jdbc:h2:file:$work/db/crustplan;WRITE_DELAY=0" \
+  --spring.profiles.active="$PROFILE" \
   >"$work/app.log" 2>&1 &
 app_pid=$!
 
