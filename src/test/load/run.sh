@@ -4,7 +4,7 @@
 # GET of the plan page at 8 and 32 connections, prints requests/s, p50/p99 latency and errors, and
 # stops the app it started.
 #
-#   load/run.sh                     (from the project folder; builds the jar first if there is none)
+#   src/test/load/run.sh                     (from the project folder; builds the jar first if there is none)
 #
 # Settings (environment): DURATION (20s per run), CONNECTIONS ("8 32"), THREADS (2, one per core),
 # WARMUP (10s, not reported: lets the JIT compile the engine), PORT (a free one from 18080 up),
@@ -15,7 +15,7 @@
 set -euo pipefail
 
 here="$(cd "$(dirname "$0")" && pwd)"
-project="$(cd "$here/.." && pwd)"
+project="$(cd "$here/../../.." && pwd)"
 DURATION="${DURATION:-20s}"
 CONNECTIONS="${CONNECTIONS:-8 32}"
 THREADS="${THREADS:-2}"
@@ -29,7 +29,7 @@ LOGIN_USER="${LOGIN_USER-cook}"
 LOGIN_PASSWORD="${LOGIN_PASSWORD-cook-demo}"
 
 for tool in wrk curl java; do
-  command -v "$tool" >/dev/null || { echo "load/run.sh: '$tool' is not installed (Debian: apt-get install -y $tool)" >&2; exit 2; }
+  command -v "$tool" >/dev/null || { echo "src/test/load/run.sh: '$tool' is not installed (Debian: apt-get install -y $tool)" >&2; exit 2; }
 done
 
 jar="${JAR:-}"
