@@ -89,7 +89,10 @@ public record RiskMap(FoodCategory category, Product product, String mode, Strin
 		FoodCategory category = surface.category();
 		List<BrowningStage> stages = new ArrayList<>(category.stages());
 		stages.sort(Comparator.comparingDouble(s -> s.extentOn(category.colourPath())));
-		double[] stageExtent = stages.stream().mapToDouble(s -> s.extentOn(category.colourPath())).toArray();
+		double[] stageExtent = new double[stages.size()];
+		for (int i = 0; i < stageExtent.length; i++) {
+			stageExtent[i] = stages.get(i).extentOn(category.colourPath());
+		}
 		BenchmarkLevel benchmark = product.benchmark().orElse(null);
 		CookSettings settings = settingsFor(base, timeStepS, maxTimeS);
 		// rows are independent runs, each owning its simulation: compute them on all cores
