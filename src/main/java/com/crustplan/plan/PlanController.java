@@ -61,6 +61,30 @@ class PlanController {
 		return page(model, form, result);
 	}
 
+	@GetMapping("/plan/risk-map")
+	String riskMap(@Valid @ModelAttribute("form") PlanForm form, BindingResult result,
+			@ModelAttribute("units") TemperatureUnit units, Model model) {
+		if (!form.complete()) {
+			result.reject("incomplete", "choose a surface and a setup first");
+		}
+		if (!result.hasErrors()) {
+			resolve(form, result).ifPresent(r -> {
+				PlanInputs in = r.inputs();
+				try {
+					model.addAttribute("map", planner.riskMap(in.surface().toSurface(), in.surface().toProduct(),
+							in.setup().toHeatSetup(), in.target(), in.horizonMinutes(), r.surfaceName(), r.setupName()));
+				}
+				catch (InvalidInputException e) {
+					result.reject("engine." + e.field(), e.field() + ": " + e.reason());
+				}
+			});
+		}
+		if (result.hasErrors()) {
+			return page(model, form, result);
+		}
+		return "plan/risk";
+	}
+
 	@PostMapping("/plans")
 	String save(@Valid @ModelAttribute("form") PlanForm form, BindingResult result,
 			@ModelAttribute("units") TemperatureUnit units, Model model, Principal principal,

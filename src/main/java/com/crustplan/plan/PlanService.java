@@ -12,6 +12,7 @@ import com.crustplan.engine.acrylamide.AcrylamideEstimate;
 import com.crustplan.engine.acrylamide.AcrylamideWarning;
 import com.crustplan.engine.acrylamide.Mitigation;
 import com.crustplan.engine.acrylamide.Mitigations;
+import com.crustplan.engine.acrylamide.RiskMap;
 import com.crustplan.engine.acrylamide.Product;
 import com.crustplan.engine.cook.CookResult;
 import com.crustplan.engine.cook.CookSettings;
@@ -145,6 +146,41 @@ public class PlanService {
 			c.add("Bicarbonate raises the surface pH: colour comes faster, so check earlier than usual.");
 		}
 		return c;
+	}
+
+	/** Most time columns on the risk map: readable on a tablet. */
+	static final int RISK_MAP_COLUMNS = 24;
+
+	/**
+	 * The acrylamide risk map around a setup: the mode's usual range of set temperatures (and the setup's
+	 * own) down, times across up to twice the planned time (10 min at least, the horizon at most).
+	 */
+	public RiskMapView riskMap(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
+			String surfaceName, String setupName) {
+		CookSettings settings = CookSettings.defaults();
+		CookResult planned = CookSimulation.run(surface, setup, target,
+				settings.withHorizonS(horizonMinutes * 60).withRecordSeries(false));
+		double span = Math.min(horizonMinutes * 60,
+				Math.max(600, planned.reached() ? 2 * planned.timeToTargetS() : horizonMinutes * 60));
+		double step = Math.max(30, Math.ceil(span / RISK_MAP_COLUMNS / 30) * 30);
+		RiskMap map = RiskMap.compute(surface, product, setup, target, riskMapTemperatures(setup), step,
+				step * Math.ceil(span / step), settings);
+		return RiskMapView.of(map, surface.category().colourPath(), surfaceName, setupName);
+	}
+
+	/** The mode's usual range in even steps, with the setup's own temperature added. */
+	static double[] riskMapTemperatures(HeatSetup setup) {
+		// fryer: the common frying range (EU 2017/2158 Annex II asks for below 175 °C); grill: element
+		// temperatures (from memory); pan surfaces and oven air: common practice
+		double from = setup instanceof HeatSetup.RadiantGrill ? 500 : 150;
+		double to = setup instanceof HeatSetup.DeepFryer ? 190 : setup instanceof HeatSetup.RadiantGrill ? 1000 : 250;
+		double by = setup instanceof HeatSetup.DeepFryer ? 5 : setup instanceof HeatSetup.RadiantGrill ? 50 : 10;
+		TreeSet<Double> t = new TreeSet<>();
+		for (double v = from; v <= to + 1e-9; v += by) {
+			t.add(v);
+		}
+		t.add(setup.temperatureC());
+		return t.stream().mapToDouble(Double::doubleValue).toArray();
 	}
 
 	/** Evenly spaced swatches over the run; the one nearest the target time is marked. */

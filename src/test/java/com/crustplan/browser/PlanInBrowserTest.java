@@ -94,6 +94,13 @@ class PlanInBrowserTest {
 		driver.manage().window().setSize(new Dimension(1280, 2600));
 		Path shot = Browser.screenshot(driver, "plan-chips-fryer");
 		assertThat(Files.size(shot)).isGreaterThan(10_000);
+
+		// the plan's risk map: one row per set temperature, cells coloured, the target cell outlined
+		driver.findElement(By.id("risk-map-link")).click();
+		assertThat(driver.findElements(By.cssSelector("#risk-map tbody tr"))).hasSizeGreaterThanOrEqualTo(9);
+		assertThat(driver.findElements(By.cssSelector("#risk-map td.risk-target"))).isNotEmpty();
+		driver.manage().window().setSize(new Dimension(1280, 1100));
+		Browser.screenshot(driver, "risk-map-chips-fryer");
 	}
 
 	@Test

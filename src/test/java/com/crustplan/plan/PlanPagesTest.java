@@ -72,6 +72,38 @@ class PlanPagesTest {
 	}
 
 	@Test
+	void shouldDrawTheRiskMapWhoseCellsAreSingleRuns() throws Exception {
+		// the fryer rows run 150–190 °C (the common frying range) plus the setup's own temperature
+		RiskMapView map = (RiskMapView) mvc
+			.perform(get("/plan/risk-map").param("surfaceId", chips()).param("setupId", fryer()).param("targetStage", "golden"))
+			.andExpect(status().isOk())
+			.andExpect(view().name("plan/risk"))
+			// Commission Regulation (EU) 2017/2158, Annex IV: French fries 500 µg/kg
+			.andExpect(content().string(containsString("500 µg/kg")))
+			.andExpect(content().string(containsString("risk-target")))
+			.andExpect(content().string(containsString("IARC")))
+			.andReturn().getModelAndView().getModel().get("map");
+		assertThat(map.rows()).hasSizeGreaterThanOrEqualTo(9);
+		assertThat(map.rows()).allSatisfy(r -> assertThat(r.cells()).hasSize(map.timesS().size()));
+		// hotter oil reaches the colour sooner (each row is its own run)
+		assertThat(map.rows().get(map.rows().size() - 1).targetTimeS()).isLessThan(map.rows().get(0).targetTimeS());
+	}
+
+	@Test
+	void shouldLinkThePlanToItsRiskMap() throws Exception {
+		mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetStage", "golden"))
+			.andExpect(content().string(containsString("/plan/risk-map?surfaceId=")));
+	}
+
+	@Test
+	void shouldAskForASurfaceAndSetupBeforeDrawingARiskMap() throws Exception {
+		mvc.perform(get("/plan/risk-map"))
+			.andExpect(status().isOk())
+			.andExpect(view().name("plan/plan"))
+			.andExpect(content().string(containsString("choose a surface and a setup first")));
+	}
+
+	@Test
 	void shouldPlanToALightnessTarget() throws Exception {
 		mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetLightness", "64"))
 			.andExpect(status().isOk())
