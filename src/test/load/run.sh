@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # Load test of the packaged app on loopback: starts target/*.jar on a throwaway H2 file database in a
-# temporary folder, waits for /actuator/health, runs wrk against POST /api/v1/plans (two bodies) and
+# temporary folder, waits for /actuator/health, runs wrk against POST /api/v1/plans (each body in bodies/) and
 # GET of the plan page at 8 and 32 connections, prints requests/s, p50/p99 latency and errors, and
 # stops the app it started.
 #
