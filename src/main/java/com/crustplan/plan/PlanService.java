@@ -180,7 +180,12 @@ public class PlanService {
 			t.add(v);
 		}
 		t.add(setup.temperatureC());
-		return t.stream().mapToDouble(Double::doubleValue).toArray();
+		double[] out = new double[t.size()];
+		int i = 0;
+		for (double v : t) {
+			out[i++] = v;
+		}
+		return out;
 	}
 
 	/** Evenly spaced swatches over the run; the one nearest the target time is marked. */
