@@ -11,6 +11,7 @@ import com.crustplan.engine.browning.WaterActivityFactor;
 import com.crustplan.engine.colour.ColourPath;
 import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.FaceExchange;
 import com.crustplan.engine.heat.FaceFlux;
@@ -278,6 +279,12 @@ public final class CookSimulation implements Layers {
 			double crustBefore = acrylamide.crustUgPerKg();
 			double portionBefore = acrylamide.portionUgPerKg();
 			step(step);
+			if (!physical(temperature[0]) || !physical(temperature[n - 1]) || !physical(core())) {
+				throw new InvalidInputException("surface", String.format(
+						"the model could not follow this cook (a %.1f mm piece with %.0f g/m² of standing water): "
+								+ "use a thicker piece, less standing water or a gentler heat", surface.thicknessMm(),
+						surface.surfaceWaterGPerM2()));
+			}
 			if (afterEachStep != null) {
 				afterEachStep.accept(this);
 			}
@@ -312,6 +319,11 @@ public final class CookSimulation implements Layers {
 				coreAtTarget - 273.15, crustAtTarget, portionAtTarget, maxSurface - 273.15, extent[0], time, series, assumptions,
 				new EnergyLedger(heatIn, vapourOut, evaporated),
 				new CookResult.FinalState(positions(), temperature, moisture, dryMass, film));
+	}
+
+	/** Between the coldest start (−20 °C) and the hottest element (1200 °C), with margin: else the step failed. */
+	private static boolean physical(double temperatureK) {
+		return temperatureK > 223.15 && temperatureK < 1573.15;
 	}
 
 	private double[] positions() {
