@@ -79,7 +79,8 @@ public class PlanService {
 		CookSettings settings = CookSettings.defaults().withHorizonS(horizonMinutes * 60);
 		CookResult result = CookSimulation.run(surface, setup, target, settings);
 		AcrylamideEstimate estimate = AcrylamideEstimate.of(surface, product, setup, target, result);
-		List<Mitigation> mitigations = withMitigations
+		// where no benchmark applies (meat, fish, vegetables) acrylamide is not the kitchen's concern: no changes offered
+		List<Mitigation> mitigations = withMitigations && product.benchmark().isPresent()
 				? Mitigations.compute(surface, product, setup, target, settings) : List.of();
 		List<PlanWarning> warnings = warnings(surface, setup, result, unit);
 		for (AcrylamideWarning a : estimate.warnings()) {
