@@ -1,32 +1,18 @@
 package com.crustplan.surface;
 
-import java.time.Instant;
 
 import jakarta.persistence.Column;
 import jakarta.persistence.Entity;
-import jakarta.persistence.GeneratedValue;
-import jakarta.persistence.GenerationType;
-import jakarta.persistence.Id;
 import jakarta.persistence.Table;
-import jakarta.persistence.Version;
 
+import com.crustplan.system.KitchenRecord;
 import com.crustplan.engine.acrylamide.Product;
 import com.crustplan.engine.food.FoodCategory;
 
 /** A surface the kitchen keeps (a cut, a dough, a batch of potatoes). Never handed to the engine. */
 @Entity
 @Table(name = "surface")
-public class SavedSurface {
-
-	@Id
-	@GeneratedValue(strategy = GenerationType.IDENTITY)
-	private Long id;
-
-	@Version
-	private int version;
-
-	@Column(nullable = false, length = 80)
-	private String name;
+public class SavedSurface extends KitchenRecord {
 
 	@Column(nullable = false, length = 32)
 	private String category;
@@ -79,28 +65,18 @@ public class SavedSurface {
 	@Column(name = "initial_temperature_c", nullable = false)
 	private double initialTemperatureC;
 
-	@Column(length = 1000)
-	private String notes;
-
-	@Column(name = "created_at", nullable = false)
-	private Instant createdAt;
-
-	@Column(name = "updated_at", nullable = false)
-	private Instant updatedAt;
-
 	protected SavedSurface() {
 	}
 
 	/** A new record from a form that has passed validation and the engine's checks. */
 	public static SavedSurface from(SurfaceForm form) {
 		SavedSurface s = new SavedSurface();
-		s.createdAt = Instant.now();
 		s.update(form);
 		return s;
 	}
 
 	public void update(SurfaceForm f) {
-		name = f.name().trim();
+		rename(f.name(), f.notes());
 		category = FoodCategory.byKey(f.category()).map(FoodCategory::key).orElse(f.category());
 		product = f.product() == null || f.product().isBlank() ? null : f.toProduct().key();
 		waterPct = f.waterPct();
@@ -118,21 +94,11 @@ public class SavedSurface {
 		bicarbonateGPerKg = f.bicarbonateGPerKg();
 		acidGPerKg = f.acidGPerKg();
 		initialTemperatureC = f.initialTemperatureC();
-		notes = f.notes() == null || f.notes().isBlank() ? null : f.notes().trim();
-		updatedAt = Instant.now();
 	}
 
 	/** The category's label for lists; an unknown key is shown as it is stored. */
 	public String getCategoryLabel() {
 		return FoodCategory.byKey(category).map(FoodCategory::label).orElse(category);
-	}
-
-	public Long getId() {
-		return id;
-	}
-
-	public String getName() {
-		return name;
 	}
 
 	public String getCategory() {
@@ -213,14 +179,6 @@ public class SavedSurface {
 
 	public double getInitialTemperatureC() {
 		return initialTemperatureC;
-	}
-
-	public String getNotes() {
-		return notes;
-	}
-
-	public Instant getUpdatedAt() {
-		return updatedAt;
 	}
 
 }
