@@ -4,7 +4,7 @@ import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.web.bind.annotation.GetMapping;
 
-import com.crustplan.engine.model.ModelCatalogue;
+import com.crustplan.engine.catalogue.ModelCatalogue;
 
 /** The model and its sources, generated from the engine's own catalogue of equations and constants. */
 @Controller

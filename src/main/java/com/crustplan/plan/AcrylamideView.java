@@ -2,9 +2,9 @@ package com.crustplan.plan;
 
 import java.util.List;
 
-import com.crustplan.engine.acrylamide.AcrylamideEstimate;
-import com.crustplan.engine.acrylamide.AcrylamideZone;
-import com.crustplan.engine.acrylamide.Mitigation;
+import com.crustplan.engine.assessment.AcrylamideEstimate;
+import com.crustplan.engine.assessment.AcrylamideZone;
+import com.crustplan.engine.assessment.Mitigation;
 
 /**
  * The acrylamide estimate as the plan shows it. Levels are null where the engine gives no estimate;

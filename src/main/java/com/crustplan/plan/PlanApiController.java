@@ -21,7 +21,7 @@ import com.crustplan.engine.cook.Sample;
 import com.crustplan.engine.food.BrowningStage;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.surface.CategoryDefaults;
-import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.system.TemperatureUnit;
 
 import com.fasterxml.jackson.annotation.JsonProperty;
@@ -62,12 +62,12 @@ class PlanApiController {
 				stages.add(m);
 			}
 			List<Map<String, Object>> products = new ArrayList<>();
-			for (com.crustplan.engine.acrylamide.Product p : com.crustplan.engine.acrylamide.Product.of(c)) {
+			for (com.crustplan.engine.assessment.Product p : com.crustplan.engine.assessment.Product.of(c)) {
 				Map<String, Object> m = new LinkedHashMap<>();
 				m.put("key", p.key());
 				m.put("label", p.label());
 				m.put("benchmarkUgPerKg", p.benchmark().map(b -> b.microgramsPerKg()).orElse(null));
-				m.put("default", p == com.crustplan.engine.acrylamide.Product.defaultFor(c));
+				m.put("default", p == com.crustplan.engine.assessment.Product.defaultFor(c));
 				products.add(m);
 			}
 			Map<String, Object> cat = new LinkedHashMap<>();
@@ -119,7 +119,7 @@ class PlanApiController {
 	record Change(String code, String title, String change, boolean applicable, String reason, String basis,
 			Double beforeUgPerKg, Double afterUgPerKg, Double beforeMinutes, Double afterMinutes, String source) {
 
-		static Change of(com.crustplan.engine.acrylamide.Mitigation m) {
+		static Change of(com.crustplan.engine.assessment.Mitigation m) {
 			return new Change(m.code(), m.title(), m.change(), m.applicable(), m.reason(), m.basis().meaning(),
 					PlanReport.finite(m.beforeUgPerKg()), PlanReport.finite(m.afterUgPerKg()),
 					PlanReport.finite(m.beforeMinutes()), PlanReport.finite(m.afterMinutes()), m.source());

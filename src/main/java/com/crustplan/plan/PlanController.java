@@ -16,7 +16,7 @@ import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 import com.crustplan.engine.food.FoodCategory;
-import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.setup.SavedSetup;
 import com.crustplan.setup.SetupForm;
 import com.crustplan.setup.SetupService;

@@ -1,7 +1,7 @@
 package com.crustplan.plan;
 
 import com.crustplan.engine.cook.Target;
-import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.setup.SetupForm;
 import com.crustplan.surface.SurfaceForm;
 

@@ -4,11 +4,11 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import com.crustplan.engine.acrylamide.Product;
+import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
-import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.setup.HeatMode;

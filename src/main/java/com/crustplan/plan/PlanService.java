@@ -7,20 +7,20 @@ import java.util.TreeSet;
 
 import org.springframework.stereotype.Service;
 
-import com.crustplan.engine.acrylamide.AcrylamideCautions;
-import com.crustplan.engine.acrylamide.AcrylamideEstimate;
-import com.crustplan.engine.acrylamide.AcrylamideWarning;
-import com.crustplan.engine.acrylamide.Mitigation;
-import com.crustplan.engine.acrylamide.Mitigations;
-import com.crustplan.engine.acrylamide.RiskMap;
-import com.crustplan.engine.acrylamide.Product;
+import com.crustplan.engine.assessment.AcrylamideCautions;
+import com.crustplan.engine.assessment.AcrylamideEstimate;
+import com.crustplan.engine.assessment.AcrylamideWarning;
+import com.crustplan.engine.assessment.Mitigation;
+import com.crustplan.engine.assessment.Mitigations;
+import com.crustplan.engine.assessment.RiskMap;
+import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.cook.CookResult;
 import com.crustplan.engine.cook.CookSettings;
-import com.crustplan.engine.cook.CookSimulation;
+import com.crustplan.engine.assessment.AcrylamideCook;
 import com.crustplan.engine.cook.Sample;
 import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.food.FoodCategory;
-import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.system.TemperatureUnit;
@@ -77,7 +77,7 @@ public class PlanService {
 					String.format(Locale.ROOT, "must be from 1 to %.0f minutes", MAX_HORIZON_MINUTES));
 		}
 		CookSettings settings = CookSettings.defaults().withHorizonS(horizonMinutes * 60);
-		CookResult result = CookSimulation.run(surface, setup, target, settings);
+		CookResult result = AcrylamideCook.run(surface, setup, target, settings);
 		AcrylamideEstimate estimate = AcrylamideEstimate.of(surface, product, setup, target, result);
 		// where no benchmark applies (meat, fish, vegetables) acrylamide is not the kitchen's concern: no changes offered
 		List<Mitigation> mitigations = withMitigations && product.benchmark().isPresent()
@@ -159,7 +159,7 @@ public class PlanService {
 	public RiskMapView riskMap(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
 			String surfaceName, String setupName) {
 		CookSettings settings = CookSettings.defaults();
-		CookResult planned = CookSimulation.run(surface, setup, target,
+		CookResult planned = AcrylamideCook.run(surface, setup, target,
 				settings.withHorizonS(horizonMinutes * 60).withRecordSeries(false));
 		double span = Math.min(horizonMinutes * 60,
 				Math.max(600, planned.reached() ? 2 * planned.timeToTargetS() : horizonMinutes * 60));

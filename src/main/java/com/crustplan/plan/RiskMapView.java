@@ -3,7 +3,7 @@ package com.crustplan.plan;
 import java.util.ArrayList;
 import java.util.List;
 
-import com.crustplan.engine.acrylamide.RiskMap;
+import com.crustplan.engine.assessment.RiskMap;
 import com.crustplan.engine.colour.ColourPath;
 
 /**

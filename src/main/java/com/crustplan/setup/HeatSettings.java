@@ -1,6 +1,6 @@
 package com.crustplan.setup;
 
-import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.heat.HeatSetup;
 
 /**

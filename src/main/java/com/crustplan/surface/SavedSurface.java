@@ -6,7 +6,7 @@ import jakarta.persistence.Entity;
 import jakarta.persistence.Table;
 
 import com.crustplan.system.KitchenRecord;
-import com.crustplan.engine.acrylamide.Product;
+import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.food.FoodCategory;
 
 /** A surface the kitchen keeps (a cut, a dough, a batch of potatoes). Never handed to the engine. */

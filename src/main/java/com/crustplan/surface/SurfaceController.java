@@ -17,9 +17,9 @@ import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
-import com.crustplan.engine.acrylamide.Product;
+import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.food.FoodCategory;
-import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.system.EngineErrors;
 import com.crustplan.system.FormBinding;

@@ -5,7 +5,7 @@ import java.util.function.UnaryOperator;
 
 import org.springframework.validation.BindingResult;
 
-import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.input.InvalidInputException;
 
 /** Puts an engine input error on the form field it belongs to, so the form shows it beside the input. */
 public final class EngineErrors {

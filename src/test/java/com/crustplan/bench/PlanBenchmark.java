@@ -17,8 +17,8 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 
-import com.crustplan.engine.acrylamide.Product;
-import com.crustplan.engine.acrylamide.RiskMap;
+import com.crustplan.engine.assessment.Product;
+import com.crustplan.engine.assessment.RiskMap;
 import com.crustplan.engine.cook.CookResult;
 import com.crustplan.engine.cook.CookSettings;
 

@@ -2,7 +2,7 @@ package com.crustplan.bench;
 
 import com.crustplan.engine.cook.CookResult;
 import com.crustplan.engine.cook.CookSettings;
-import com.crustplan.engine.cook.CookSimulation;
+import com.crustplan.engine.assessment.AcrylamideCook;
 import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
@@ -36,11 +36,11 @@ final class Plans {
 	}
 
 	static CookResult steak(CookSettings settings) {
-		return CookSimulation.run(STEAK, PAN_220, BROWNED, settings);
+		return AcrylamideCook.run(STEAK, PAN_220, BROWNED, settings);
 	}
 
 	static CookResult chips(CookSettings settings) {
-		return CookSimulation.run(CHIPS, FRYER_175, GOLDEN, settings);
+		return AcrylamideCook.run(CHIPS, FRYER_175, GOLDEN, settings);
 	}
 
 	static double mapTemperatureC(int i) {
@@ -64,7 +64,7 @@ final class Plans {
 	}
 
 	static double mapPoint(int i, CookSettings summary) {
-		return CookSimulation.run(CHIPS, new HeatSetup.DeepFryer(mapTemperatureC(i)), GOLDEN, summary).timeToTargetS();
+		return AcrylamideCook.run(CHIPS, new HeatSetup.DeepFryer(mapTemperatureC(i)), GOLDEN, summary).timeToTargetS();
 	}
 
 }

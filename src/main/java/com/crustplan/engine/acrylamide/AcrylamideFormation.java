@@ -2,11 +2,11 @@ package com.crustplan.engine.acrylamide;
 
 import java.util.Arrays;
 
+import com.crustplan.engine.cook.LayerReaction;
 import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.layers.Grid;
 import com.crustplan.engine.layers.Layers;
-import com.crustplan.engine.model.ModelSection;
 
 /**
  * Acrylamide in every control volume of a run, stepped from the layer's own temperature and water
@@ -17,7 +17,10 @@ import com.crustplan.engine.model.ModelSection;
  * face a {@code Sample} calls the surface. The portion is the whole piece, mass-weighted. One instance
  * belongs to one run; {@link #step} allocates nothing.
  */
-public final class AcrylamideFormation {
+public final class AcrylamideFormation implements LayerReaction {
+
+	/** Acrylamide formation as the cook's layer reaction. */
+	public static final LayerReaction.Factory REACTION = AcrylamideFormation::new;
 
 	/** µg of acrylamide per mmol. */
 	private static final double UG_PER_MMOL = AcrylamideModel.ACRYLAMIDE_MOLAR_MASS * 1000;
@@ -113,6 +116,7 @@ public final class AcrylamideFormation {
 	}
 
 	/** Advances every layer by dt from the state the view shows now (after the step's heat and moisture). */
+	@Override
 	public void step(Layers layers, double dt) {
 		double yield = kinetics.yield();
 		double kfRef = kinetics.formationRateAtRef() * phFactor / yield;
@@ -184,9 +188,14 @@ public final class AcrylamideFormation {
 		return acrylamide[i];
 	}
 
-	/** The model chapter for the model catalogue. */
-	public static ModelSection section() {
-		return AcrylamideModel.section();
+	@Override
+	public double crustLevel() {
+		return crustUgPerKg();
+	}
+
+	@Override
+	public double portionLevel() {
+		return portionUgPerKg();
 	}
 
 }

@@ -1,6 +1,6 @@
 package com.crustplan.engine.acrylamide;
 
-import com.crustplan.engine.browning.ArrheniusRate;
+import com.crustplan.engine.kinetics.ArrheniusRate;
 
 /**
  * The Arrhenius factors of formation and elimination tabulated every 0.05 K, so the per-layer step

@@ -1,5 +1,7 @@
 package com.crustplan.engine.browning;
 
+import com.crustplan.engine.kinetics.ArrheniusRate;
+
 import com.crustplan.engine.model.Parameter;
 
 /**

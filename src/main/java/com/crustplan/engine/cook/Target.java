@@ -3,7 +3,7 @@ package com.crustplan.engine.cook;
 import com.crustplan.engine.colour.ColourPath;
 import com.crustplan.engine.food.BrowningStage;
 import com.crustplan.engine.food.FoodCategory;
-import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.input.InvalidInputException;
 
 /** The colour to cook to: a CIE L* value or one of the category's named stages. */
 public record Target(Double lightness, String stage) {

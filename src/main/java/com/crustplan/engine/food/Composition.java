@@ -1,5 +1,7 @@
 package com.crustplan.engine.food;
 
+import com.crustplan.engine.input.InvalidInputException;
+
 /**
  * Proximate composition of a food in mass percent. Reducing sugars (glucose, fructose, lactose,
  * maltose) and sucrose are kept apart because only the first take part in Maillard browning; what the

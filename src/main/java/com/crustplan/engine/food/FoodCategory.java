@@ -3,7 +3,7 @@ package com.crustplan.engine.food;
 import java.util.List;
 import java.util.Optional;
 
-import com.crustplan.engine.browning.ArrheniusRate;
+import com.crustplan.engine.kinetics.ArrheniusRate;
 import com.crustplan.engine.browning.BrowningKinetics;
 import com.crustplan.engine.colour.ColourPath;
 import com.crustplan.engine.model.Parameter;

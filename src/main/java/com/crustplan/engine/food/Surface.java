@@ -1,5 +1,7 @@
 package com.crustplan.engine.food;
 
+import com.crustplan.engine.input.InvalidInputException;
+
 /**
  * A food surface as a cook describes it: the engine's input. Units are in the names; {@code phOverride}
  * null means the category's typical pH.

@@ -2,7 +2,7 @@ package com.crustplan.engine.heat;
 
 import java.util.List;
 
-import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.model.Parameter;
 import com.crustplan.engine.water.Atmosphere;
 

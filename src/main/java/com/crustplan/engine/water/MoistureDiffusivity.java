@@ -1,6 +1,6 @@
 package com.crustplan.engine.water;
 
-import com.crustplan.engine.browning.ArrheniusRate;
+import com.crustplan.engine.kinetics.ArrheniusRate;
 import com.crustplan.engine.model.Parameter;
 
 /**

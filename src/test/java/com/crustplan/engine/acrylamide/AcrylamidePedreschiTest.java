@@ -76,7 +76,8 @@ class AcrylamidePedreschiTest {
 		LayerHistory history = new LayerHistory();
 		Target never = Target.lightness(FoodCategory.POTATO.colourPath().darkestLightness());
 		CookResult r = CookSimulation.run(PedreschiFit.blanchedStrip(), new HeatSetup.DeepFryer(175), never,
-				PedreschiFit.settings().withHorizonS(480).withRecordSeries(true).withOutputIntervalS(60), history::accept);
+				PedreschiFit.settings().withHorizonS(480).withRecordSeries(true).withOutputIntervalS(60), AcrylamideFormation.REACTION,
+				history::accept);
 		List<Sample> series = r.series();
 		Sample last = series.get(series.size() - 1);
 		AcrylamideFormation replay = new AcrylamideFormation(PedreschiFit.blanchedStrip(), history.grid());

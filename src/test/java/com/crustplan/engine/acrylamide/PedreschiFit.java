@@ -60,7 +60,7 @@ public final class PedreschiFit {
 		LayerHistory history = new LayerHistory();
 		Surface strip = blanchedStrip();
 		Target never = Target.lightness(FoodCategory.POTATO.colourPath().darkestLightness());
-		CookSimulation.run(strip, new HeatSetup.DeepFryer(oilC), never, settings().withHorizonS(horizonFor(oilC)),
+		CookSimulation.run(strip, new HeatSetup.DeepFryer(oilC), never, settings().withHorizonS(horizonFor(oilC)), AcrylamideFormation.REACTION,
 				history::accept);
 		return history;
 	}

@@ -8,7 +8,7 @@ import org.junit.jupiter.api.Test;
 
 import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
-import com.crustplan.engine.food.InvalidInputException;
+import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
 

@@ -1,5 +1,8 @@
 package com.crustplan.engine.model;
 
+import com.crustplan.engine.catalogue.ModelCatalogue;
+import com.crustplan.engine.catalogue.ModelDocument;
+
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.io.IOException;

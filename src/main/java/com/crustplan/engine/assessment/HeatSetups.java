@@ -1,0 +1,27 @@
+package com.crustplan.engine.assessment;
+
+import com.crustplan.engine.heat.HeatSetup;
+
+/** The same heat setup at another set temperature: for maps and the lower-temperature suggestion. */
+public final class HeatSetups {
+
+	private HeatSetups() {
+	}
+
+	public static HeatSetup withTemperature(HeatSetup template, double temperatureC) {
+		if (template instanceof HeatSetup.DeepFryer) {
+			return new HeatSetup.DeepFryer(temperatureC);
+		}
+		if (template instanceof HeatSetup.Oven o) {
+			return new HeatSetup.Oven(temperatureC, o.fan(), o.steamPct());
+		}
+		if (template instanceof HeatSetup.PanContact p) {
+			return new HeatSetup.PanContact(temperatureC, p.fatFilm(), p.flipEverySeconds());
+		}
+		if (template instanceof HeatSetup.RadiantGrill g) {
+			return new HeatSetup.RadiantGrill(temperatureC, g.flipEverySeconds());
+		}
+		throw new IllegalArgumentException("unknown heat setup " + template);
+	}
+
+}

@@ -1,0 +1,232 @@
+package com.crustplan.engine.assessment;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Optional;
+
+import com.crustplan.engine.cook.CookResult;
+import com.crustplan.engine.cook.CookSettings;
+import com.crustplan.engine.cook.Target;
+import com.crustplan.engine.food.BrowningStage;
+import com.crustplan.engine.food.Composition;
+import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.input.InvalidInputException;
+import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.model.Evidence;
+import com.crustplan.engine.model.Parameter;
+
+/**
+ * Changes that lower acrylamide, each computed by re-running the model with the change and comparing the
+ * portion's acrylamide and the time at the target colour.
+ * <p>
+ * Precursor removals: soaking and blanching leach sugars and asparagine alike (both small, water-soluble
+ * molecules of similar size, so we take the same fraction for both). With formation proportional to
+ * [Asn]·[RS], removing a fraction f of each leaves (1 − f)² of the acrylamide, so a measured reduction R
+ * gives f = 1 − √(1 − R).
+ */
+public final class Mitigations {
+
+	public static final Parameter SOAK_REMOVAL = Parameter.derived("f_soak", "share of sugars and asparagine removed by soaking",
+			1 - Math.sqrt(1 - 0.27), "–",
+			"Pedreschi, Kaack & Granby 2006 (Food Res Int 39:40): soaking 120 min cut fries' acrylamide by 33 / 21 / 27 % at 150 / 170 / 190 °C; mean 27 % → f = 1 − √0.73");
+
+	public static final Parameter BLANCH_REMOVAL = Parameter.derived("f_blanch", "share of sugars and asparagine removed by blanching",
+			1 - Math.sqrt(1 - 0.64), "–",
+			"Pedreschi et al. 2005: blanching 85 °C, 3.5 min cut crisps' acrylamide by 64 % on average → f = 1 − √0.36");
+
+	public static final Parameter ASPARAGINASE_REMOVAL = Parameter.fromMemory("f_Asn", "share of free asparagine removed by asparaginase",
+			0.6, "–",
+			"enzyme treatments of potato strips and doughs remove roughly half to nine tenths of free asparagine (e.g. Pedreschi, Kaack & Granby 2008, Food Chem 109:386, fries); 60 % from memory");
+
+	public static final Parameter ACID_DIP_UPTAKE = Parameter.assumption("c_acid", "citric acid taken up by an acid dip", 1.0, "g/kg",
+			"a dip of cut potatoes in about 1 % citric acid (as in Jung, Choi & Ju 2003, J Food Sci 68:1287); uptake of 1 g per kg of food assumed");
+
+	public static final Parameter COLD_STORAGE_SUGAR = Parameter.fromMemory("F_cold", "reducing sugar of cold-stored tubers relative to warm-stored",
+			3.0, "–",
+			"storage at 2–4 °C raises glucose and fructose several-fold within weeks (cold-induced sweetening); factor 3 from memory");
+
+	public static final Parameter FRYER_STEP_C = Parameter.commonPractice("ΔT_fry", "temperature step for frying lower", 10, "°C",
+			"one usual fryer setting step; never above 170 °C so the result also meets the below-175 °C measure (common practice)");
+
+	public static final Parameter OVEN_PAN_STEP_C = Parameter.commonPractice("ΔT_oven", "temperature step for baking or searing lower", 20,
+			"°C", "a usual oven or pan setting step (common practice)");
+
+	public static final Parameter GRILL_STEP_C = Parameter.commonPractice("ΔT_grill", "heater temperature step for grilling lower", 100,
+			"°C", "a radiant element runs at 600–1000 °C; one step lower on the dial (common practice)");
+
+	private static final String LIGHTER_SOURCE = "Regulation (EU) 2017/2158, Annex II: cook, bake and toast to a lighter colour; the stages are the category's own";
+
+	private Mitigations() {
+	}
+
+	/** All changes for a planned cook, in a fixed order; those that do not apply say why. */
+	public static List<Mitigation> compute(Surface surface, Product product, HeatSetup setup, Target target, CookSettings base) {
+		if (product.category() != surface.category()) {
+			throw new InvalidInputException("product", "'" + product.key() + "' is not a product of " + surface.category().label());
+		}
+		CookSettings settings = base.withRecordSeries(false);
+		CookResult baseline = AcrylamideCook.run(surface, setup, target, settings);
+		List<Mitigation> list = new ArrayList<>();
+		FoodCategory category = surface.category();
+		boolean potato = category == FoodCategory.POTATO;
+		if (!baseline.reached()) {
+			list.add(Mitigation.notApplicable("NO_BASELINE", "No comparison", "—", "—", Evidence.ASSUMPTION, Mitigation.Basis.SAME_COLOUR,
+					"The planned cook does not reach the target colour, so there is no acrylamide at the target to compare."));
+			return list;
+		}
+		Baseline b = new Baseline(surface, setup, target, settings, baseline);
+		list.add(lowerTemperature(b));
+		list.add(lighterTarget(b));
+		if (potato) {
+			list.add(rawChange(b, "SOAK", "Soak before frying", String.format(
+					"soak the cut potatoes 30 min–2 h in cold water and rinse (removes about %.0f %% of sugars and asparagine)",
+					SOAK_REMOVAL.value() * 100), SOAK_REMOVAL, removePrecursors(surface, SOAK_REMOVAL.value(), SOAK_REMOVAL.value())));
+			list.add(rawChange(b, "BLANCH", "Blanch before frying", String.format(
+					"blanch in hot water (about 85 °C, 3–4 min) before frying (removes about %.0f %% of sugars and asparagine)",
+					BLANCH_REMOVAL.value() * 100), BLANCH_REMOVAL, removePrecursors(surface, BLANCH_REMOVAL.value(), BLANCH_REMOVAL.value())));
+		}
+		list.add(rawChange(b, "ASPARAGINASE", "Asparaginase", String.format(
+				"treat with asparaginase (a dip for cut potatoes, or in the dough; removes about %.0f %% of the asparagine)",
+				ASPARAGINASE_REMOVAL.value() * 100), ASPARAGINASE_REMOVAL, removePrecursors(surface, 0, ASPARAGINASE_REMOVAL.value())));
+		Surface acid = surface.withAcidGPerKg(Math.min(50, surface.acidGPerKg() + ACID_DIP_UPTAKE.value()));
+		list.add(rawChange(b, "ACID_DIP", potato ? "Acid dip" : "Acid in the recipe", String.format(
+				"%s: about %.1f g citric acid per kg food (pH %.2f → %.2f)",
+				potato ? "dip in dilute citric acid before cooking" : "add citric acid", ACID_DIP_UPTAKE.value(), surface.ph(),
+				acid.ph()), ACID_DIP_UPTAKE, acid));
+		if (potato) {
+			list.add(warmStorage(b));
+		}
+		return list;
+	}
+
+	/** The planned cook, against which every change is measured. */
+	private record Baseline(Surface surface, HeatSetup setup, Target target, CookSettings settings, CookResult result) {
+
+		double ug() {
+			return result.portionAcrylamideAtTargetUgPerKg();
+		}
+
+		double minutes() {
+			return result.timeToTargetS() / 60;
+		}
+
+	}
+
+	private static Mitigation lowerTemperature(Baseline b) {
+		HeatSetup setup = b.setup();
+		double t = setup.temperatureC();
+		double lower;
+		Parameter step;
+		if (setup instanceof HeatSetup.DeepFryer) {
+			step = FRYER_STEP_C;
+			lower = Math.min(t - step.value(), 170);
+		}
+		else if (setup instanceof HeatSetup.RadiantGrill) {
+			step = GRILL_STEP_C;
+			lower = t - step.value();
+		}
+		else {
+			step = OVEN_PAN_STEP_C;
+			lower = t - step.value();
+		}
+		String title = "Lower temperature, longer cook";
+		String change = String.format("cook at %.0f °C instead of %.0f °C to the same colour", lower, t);
+		HeatSetup cooler;
+		try {
+			cooler = HeatSetups.withTemperature(setup, lower);
+		}
+		catch (IllegalArgumentException e) {
+			return Mitigation.notApplicable("LOWER_TEMPERATURE", title, change, step.source(), step.evidence(),
+					Mitigation.Basis.SAME_COLOUR, "The setting is already at the lowest temperature this heat mode allows.");
+		}
+		CookResult r = AcrylamideCook.run(b.surface(), cooler, b.target(), b.settings());
+		Mitigation m = sameColour(b, "LOWER_TEMPERATURE", title, change, step.source(), step.evidence(), r,
+				String.format("At %.0f °C the target colour is not reached within the time allowed.", lower));
+		if (m.applicable() && m.effectUgPerKg() >= 0) {
+			// an honest null result: the slower formation is offset by a longer cook that dries more of the piece
+			return new Mitigation(m.code(), m.title(), m.change(), m.source(), m.evidence(), true,
+					"No gain at the same colour for this piece: the longer cook dries more of it, which offsets the slower formation. Frying below 175 °C is still the rule for potato products.",
+					m.basis(), m.beforeUgPerKg(), m.afterUgPerKg(), m.beforeMinutes(), m.afterMinutes(), m.afterAtSameColourUgPerKg());
+		}
+		return m;
+	}
+
+	private static Mitigation lighterTarget(Baseline b) {
+		FoodCategory category = b.surface().category();
+		double extent = b.target().extentFor(category);
+		Optional<BrowningStage> lighter = category.stages().stream()
+			.filter(s -> s.extentOn(category.colourPath()) < extent - 1e-6)
+			.max(Comparator.comparingDouble(s -> s.extentOn(category.colourPath())));
+		if (lighter.isEmpty()) {
+			return Mitigation.notApplicable("LIGHTER_TARGET", "Lighter colour", "cook one stage lighter", LIGHTER_SOURCE,
+					Evidence.PUBLISHED, Mitigation.Basis.SAME_COLOUR,
+					"The target is already the lightest stage of " + category.label() + ".");
+		}
+		BrowningStage s = lighter.get();
+		CookResult r = AcrylamideCook.run(b.surface(), b.setup(), Target.stage(s.key()), b.settings());
+		return sameColour(b, "LIGHTER_TARGET", "Lighter colour",
+				"cook to " + s.label().toLowerCase() + " instead of " + b.target().describe(category).toLowerCase(), LIGHTER_SOURCE,
+				Evidence.PUBLISHED, r, "The lighter stage is not reached either.");
+	}
+
+	private static Mitigation sameColour(Baseline b, String code, String title, String change, String source, Evidence evidence,
+			CookResult r, String notReached) {
+		if (!r.reached()) {
+			return Mitigation.notApplicable(code, title, change, source, evidence, Mitigation.Basis.SAME_COLOUR, notReached);
+		}
+		return new Mitigation(code, title, change, source, evidence, true, "", Mitigation.Basis.SAME_COLOUR, b.ug(),
+				r.portionAcrylamideAtTargetUgPerKg(), b.minutes(), r.timeToTargetS() / 60, r.portionAcrylamideAtTargetUgPerKg());
+	}
+
+	/** A change of the raw food, compared after the baseline's cooking time. */
+	private static Mitigation rawChange(Baseline b, String code, String title, String change, Parameter fraction, Surface changed) {
+		double atSameTime = portionAfter(changed, b.setup(), b.settings(), b.result().timeToTargetS());
+		CookResult toColour = AcrylamideCook.run(changed, b.setup(), b.target(), b.settings());
+		return new Mitigation(code, title, change, fraction.source(), fraction.evidence(), true, "", Mitigation.Basis.SAME_TIME,
+				b.ug(), atSameTime, b.minutes(), toColour.reached() ? toColour.timeToTargetS() / 60 : Double.NaN,
+				toColour.reached() ? toColour.portionAcrylamideAtTargetUgPerKg() : Double.NaN);
+	}
+
+	private static Mitigation warmStorage(Baseline b) {
+		Composition c = b.surface().composition();
+		double extra = c.reducingSugarPct() * (COLD_STORAGE_SUGAR.value() - 1);
+		// the extra sugar comes from starch (cold-induced sweetening breaks starch down)
+		double fromStarch = Math.min(extra, c.starchPct());
+		Composition cold = new Composition(c.waterPct(), c.proteinPct(), c.fatPct(), c.reducingSugarPct() + fromStarch,
+				c.sucrosePct(), c.starchPct() - fromStarch, c.fibrePct(), c.ashPct());
+		Surface coldStored = b.surface().withComposition(cold);
+		String title = "Store potatoes above 6 °C";
+		String change = String.format(
+				"keep potatoes above 6 °C (taken to be how these were stored): cold-stored tubers would hold about %.1f %% reducing sugar instead of %.1f %%",
+				cold.reducingSugarPct(), c.reducingSugarPct());
+		double coldAtSameTime = portionAfter(coldStored, b.setup(), b.settings(), b.result().timeToTargetS());
+		CookResult coldToColour = AcrylamideCook.run(coldStored, b.setup(), b.target(), b.settings());
+		// before: cold-stored tubers cooked as planned; after: the potatoes as entered
+		return new Mitigation("WARM_STORAGE", title, change, COLD_STORAGE_SUGAR.source(), COLD_STORAGE_SUGAR.evidence(), true, "",
+				Mitigation.Basis.SAME_TIME, coldAtSameTime, b.ug(),
+				coldToColour.reached() ? coldToColour.timeToTargetS() / 60 : Double.NaN, b.minutes(), b.ug());
+	}
+
+	/** Portion acrylamide after exactly {@code timeS} of cooking, whatever the colour. */
+	static double portionAfter(Surface surface, HeatSetup setup, CookSettings settings, double timeS) {
+		Target never = Target.lightness(surface.category().colourPath().darkestLightness());
+		CookResult r = AcrylamideCook.run(surface, setup, never,
+				settings.withHorizonS(timeS).withRecordSeries(true).withOutputIntervalS(timeS));
+		return r.series().get(r.series().size() - 1).portionAcrylamideUgPerKg();
+	}
+
+	/** The surface with a share of its reducing sugar and of its asparagine leached out. */
+	static Surface removePrecursors(Surface surface, double sugarFraction, double asparagineFraction) {
+		Composition c = surface.composition();
+		return surface.withComposition(c.withReducingSugarPct(c.reducingSugarPct() * (1 - sugarFraction)))
+			.withAsparagineMgPerKg(surface.asparagineMgPerKg() * (1 - asparagineFraction));
+	}
+
+	public static List<Parameter> parameters() {
+		return List.of(SOAK_REMOVAL, BLANCH_REMOVAL, ASPARAGINASE_REMOVAL, ACID_DIP_UPTAKE, COLD_STORAGE_SUGAR, FRYER_STEP_C,
+				OVEN_PAN_STEP_C, GRILL_STEP_C);
+	}
+
+}

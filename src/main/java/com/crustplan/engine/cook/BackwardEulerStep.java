@@ -1,0 +1,51 @@
+package com.crustplan.engine.cook;
+
+import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.heat.FaceSchedule;
+import com.crustplan.engine.layers.HeatConduction;
+
+/**
+ * One time step of a cook, implicit (backward Euler) in heat and moisture: (1) properties from
+ * composition, temperature and moisture; (2) heat conduction with the faces' exchange linearised and
+ * (3) local boiling solved with it; (4) moisture diffusion with the face's evaporation implicit in
+ * moisture; then the layer reaction, and (5) browning at each face. Owns its scratch arrays: one per run.
+ */
+final class BackwardEulerStep {
+
+	private final CookState state;
+
+	private final MatrixProperties properties;
+
+	private final HeatStep heat;
+
+	private final MoistureStep moisture;
+
+	private final SurfaceBrowning browning;
+
+	private final LayerReaction reaction;
+
+	BackwardEulerStep(CookState state, Surface surface, FaceSchedule schedule, MatrixProperties properties,
+			LayerReaction reaction, EnergyAccount account) {
+		this.state = state;
+		this.properties = properties;
+		this.heat = new HeatStep(state, schedule, properties, new HeatConduction(state.grid()), account);
+		this.moisture = new MoistureStep(state, schedule, properties, heat, account);
+		this.browning = new SurfaceBrowning(surface.category().browning(), surface.composition(), surface.ph());
+		this.reaction = reaction;
+	}
+
+	SurfaceBrowning browning() {
+		return browning;
+	}
+
+	void step(double dt) {
+		double now = state.time;
+		properties.evaluate(state);
+		heat.step(dt);
+		moisture.step(dt);
+		reaction.step(state, dt);
+		browning.step(state, dt);
+		state.time = now + dt;
+	}
+
+}

@@ -1,0 +1,180 @@
+package com.crustplan.engine.cook;
+
+import com.crustplan.engine.layers.Grid;
+import com.crustplan.engine.layers.Layers;
+import com.crustplan.engine.water.GabIsotherm;
+
+/**
+ * What a cook knows at one instant: per control volume its temperature, moisture, dry matter and
+ * volume; per face its standing water, browning extent and boiling flux; and the time. The stepper
+ * updates it in place; everything else reads it through {@link Layers} or the accessors here.
+ */
+public final class CookState implements Layers {
+
+	/** Residual moisture a node keeps, kg/kg d.b.: bone-dry is outside the isotherm fits. */
+	static final double MIN_MOISTURE = 1e-3;
+
+	private final Grid grid;
+
+	private final GabIsotherm isotherm;
+
+	private final int n;
+
+	final double[] temperature;
+
+	final double[] moisture;
+
+	final double[] dryMass;
+
+	final double[] volume;
+
+	/** Face 0 (the node at x = 0) and face 1 (the last node). */
+	final Face[] faces = { new Face(), new Face() };
+
+	double time;
+
+	CookState(Grid grid, GabIsotherm isotherm, double temperatureK, double moistureDryBasis, double bulkDensity,
+			double standingWaterKgPerM2) {
+		this.grid = grid;
+		this.isotherm = isotherm;
+		this.n = grid.size();
+		temperature = new double[n];
+		moisture = new double[n];
+		dryMass = new double[n];
+		volume = new double[n];
+		for (int i = 0; i < n; i++) {
+			temperature[i] = temperatureK;
+			moisture[i] = moistureDryBasis;
+			volume[i] = grid.width(i);
+			dryMass[i] = bulkDensity * volume[i] / (1 + moistureDryBasis);
+		}
+		faces[0].standingWater = standingWaterKgPerM2;
+		faces[1].standingWater = standingWaterKgPerM2;
+	}
+
+	/** The node that carries a face. */
+	int faceNode(int face) {
+		return face == 0 ? 0 : n - 1;
+	}
+
+	/** The face a node carries, or −1 for an inner node. */
+	int faceOf(int i) {
+		return i == 0 ? 0 : i == n - 1 ? 1 : -1;
+	}
+
+	Face face(int face) {
+		return faces[face];
+	}
+
+	GabIsotherm isotherm() {
+		return isotherm;
+	}
+
+	/** Water activity at a face: 1 while standing water covers it, else the isotherm's at its node. */
+	double faceWaterActivity(int face) {
+		return faces[face].standingWater > 0 ? 1 : isotherm.waterActivity(moisture[faceNode(face)]);
+	}
+
+	/** Water a layer can still boil off, kg/m²: standing water on its face and its own above the residue. */
+	double availableWater(int i) {
+		double w = Math.max(0, (moisture[i] - MIN_MOISTURE) * dryMass[i]);
+		int face = faceOf(i);
+		if (face >= 0) {
+			w += faces[face].standingWater;
+		}
+		return w;
+	}
+
+	boolean hasWater(int i) {
+		int face = faceOf(i);
+		return moisture[i] > MIN_MOISTURE || (face >= 0 && faces[face].standingWater > 0);
+	}
+
+	/** Centre temperature, K (the mid-thickness, interpolated). */
+	public double coreK() {
+		return grid.interpolate(temperature, 0.5 * grid.thickness());
+	}
+
+	public double surfaceK() {
+		return temperature[0];
+	}
+
+	public double otherFaceK() {
+		return temperature[n - 1];
+	}
+
+	/** Browning extent at a face, 0 (raw) to 1 (the colour path's end). */
+	public double browningExtent(int face) {
+		return faces[face].browningExtent;
+	}
+
+	/** Standing water on a face, kg/m². */
+	public double standingWater(int face) {
+		return faces[face].standingWater;
+	}
+
+	CookResult.FinalState finalState() {
+		double[] p = new double[n];
+		for (int i = 0; i < n; i++) {
+			p[i] = grid.position(i);
+		}
+		return new CookResult.FinalState(p, temperature, moisture, dryMass,
+				new double[] { faces[0].standingWater, faces[1].standingWater });
+	}
+
+	// ---------------------------------------------------------------- Layers view
+
+	@Override
+	public Grid grid() {
+		return grid;
+	}
+
+	@Override
+	public int size() {
+		return n;
+	}
+
+	@Override
+	public double temperatureK(int i) {
+		return temperature[i];
+	}
+
+	@Override
+	public double moisture(int i) {
+		return moisture[i];
+	}
+
+	@Override
+	public double waterActivity(int i) {
+		int face = faceOf(i);
+		if (face >= 0 && faces[face].standingWater > 0) {
+			return 1;
+		}
+		return isotherm.waterActivity(moisture[i]);
+	}
+
+	@Override
+	public double dryMass(int i) {
+		return dryMass[i];
+	}
+
+	@Override
+	public double timeS() {
+		return time;
+	}
+
+	/** What each heated face carries besides its node: standing water, browning, the boiling under it. */
+	static final class Face {
+
+		/** Standing water, kg/m². */
+		double standingWater;
+
+		/** Browning extent, 0–1. */
+		double browningExtent;
+
+		/** Water boiled off under this half of the piece in the last step, kg/(m²·s): it stirs a fryer's oil. */
+		double boilingFlux;
+
+	}
+
+}

@@ -1,0 +1,67 @@
+package com.crustplan.engine.cook;
+
+/**
+ * The few values of a cook that listeners and events read at the end of a step: filled in place by the
+ * driver (the inner loop allocates nothing), so hold on to the numbers, not to the moment.
+ */
+public final class Moment {
+
+	double timeS;
+
+	double surfaceK;
+
+	double coreK;
+
+	double surfaceExtent;
+
+	double surfaceWaterActivity;
+
+	double crustLevel;
+
+	double portionLevel;
+
+	void fill(CookState state, LayerReaction reaction) {
+		timeS = state.time;
+		surfaceK = state.surfaceK();
+		coreK = state.coreK();
+		surfaceExtent = state.browningExtent(0);
+		surfaceWaterActivity = state.faceWaterActivity(0);
+		crustLevel = reaction.crustLevel();
+		portionLevel = reaction.portionLevel();
+	}
+
+	public double timeS() {
+		return timeS;
+	}
+
+	/** Temperature of face 0, K. */
+	public double surfaceK() {
+		return surfaceK;
+	}
+
+	/** Centre temperature, K. */
+	public double coreK() {
+		return coreK;
+	}
+
+	/** Browning extent of face 0. */
+	public double surfaceExtent() {
+		return surfaceExtent;
+	}
+
+	/** Water activity at face 0 (1 while standing water covers it). */
+	public double surfaceWaterActivity() {
+		return surfaceWaterActivity;
+	}
+
+	/** The layer reaction's level in the outer crust (µg/kg for acrylamide). */
+	public double crustLevel() {
+		return crustLevel;
+	}
+
+	/** The layer reaction's level in the whole portion. */
+	public double portionLevel() {
+		return portionLevel;
+	}
+
+}

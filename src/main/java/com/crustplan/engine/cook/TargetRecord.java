@@ -1,0 +1,55 @@
+package com.crustplan.engine.cook;
+
+/**
+ * What happens when the target colour is reached: the time, core temperature and reaction levels at
+ * that instant are kept, and the cook runs on by a share of the time (charts show what overcooking does).
+ */
+final class TargetRecord implements EventHandler {
+
+	private final CookSettings settings;
+
+	private double reachedAtS = Double.NaN;
+
+	private double coreK = Double.NaN;
+
+	private double crustLevel = Double.NaN;
+
+	private double portionLevel = Double.NaN;
+
+	TargetRecord(CookSettings settings) {
+		this.settings = settings;
+	}
+
+	@Override
+	public double eventOccurred(StepInterpolator step, double f) {
+		Moment before = step.previous();
+		Moment after = step.current();
+		reachedAtS = step.timeAt(f);
+		coreK = StepInterpolator.between(before.coreK(), after.coreK(), f);
+		crustLevel = StepInterpolator.between(before.crustLevel(), after.crustLevel(), f);
+		portionLevel = StepInterpolator.between(before.portionLevel(), after.portionLevel(), f);
+		return Math.min(settings.horizonS(),
+				Math.max(reachedAtS * (1 + settings.runPastTargetFraction()), reachedAtS + settings.timeStepS()));
+	}
+
+	boolean reached() {
+		return !Double.isNaN(reachedAtS);
+	}
+
+	double reachedAtS() {
+		return reachedAtS;
+	}
+
+	double coreK() {
+		return coreK;
+	}
+
+	double crustLevel() {
+		return crustLevel;
+	}
+
+	double portionLevel() {
+		return portionLevel;
+	}
+
+}
