@@ -4,6 +4,7 @@ import static com.tngtech.archunit.base.DescribedPredicate.not;
 import static com.tngtech.archunit.core.domain.JavaClass.Predicates.resideInAPackage;
 import static com.tngtech.archunit.core.domain.JavaClass.Predicates.resideInAnyPackage;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
 import com.tngtech.archunit.core.importer.ImportOption;
 import com.tngtech.archunit.junit.AnalyzeClasses;
@@ -38,5 +39,19 @@ class ArchitectureTest {
 		.should()
 		.dependOnClassesThat(not(resideInAnyPackage("com.crustplan.engine..", "java..", "")))
 		.because("the engine is plain Java 17");
+
+	@ArchTest
+	static final ArchRule shouldHaveNoCyclesBetweenSubPackages = slices().matching("com.crustplan.engine.(*)..")
+		.should()
+		.beFreeOfCycles()
+		.because("each engine package builds on the ones below it: the cook never imports what judges cooks");
+
+	@ArchTest
+	static final ArchRule cookShouldNotKnowAcrylamide = noClasses().that()
+		.resideInAPackage("com.crustplan.engine.cook..")
+		.should()
+		.dependOnClassesThat()
+		.resideInAnyPackage("com.crustplan.engine.acrylamide..", "com.crustplan.engine.assessment..")
+		.because("acrylamide formation plugs into the cook as a layer reaction");
 
 }
