@@ -58,6 +58,31 @@ public final class CookSimulation {
 		this.stepper = new BackwardEulerStep(state, surface, schedule, properties, this.reaction, account);
 	}
 
+	/**
+	 * A cook ready to run, to which listeners and events can be added first (each run is one-shot):
+	 * {@code CookSimulation.of(surface, setup, settings).listen(l).on(event, handler).run(target)}.
+	 */
+	public static CookSimulation of(Surface surface, HeatSetup setup, CookSettings settings, LayerReaction.Factory reaction) {
+		return new CookSimulation(surface, setup, settings, reaction);
+	}
+
+	/** Adds a listener called at the start, after every step and at the end. */
+	public CookSimulation listen(StepListener listener) {
+		listeners.add(listener);
+		return this;
+	}
+
+	/** Adds an event and what to do when it fires (it fires once). */
+	public CookSimulation on(CookEvent event, EventHandler handler) {
+		events.add(new Watch(event, handler));
+		return this;
+	}
+
+	/** Runs to the target (and a little past it), to the horizon, or until an event handler stops it. */
+	public CookResult run(Target target) {
+		return march(target.extentFor(surface.category()));
+	}
+
 	/** Runs a cook to the target (and a little past it) or to the horizon, with no layer reaction. */
 	public static CookResult run(Surface surface, HeatSetup setup, Target target, CookSettings settings) {
 		return run(surface, setup, target, settings, LayerReaction.NONE);
@@ -66,7 +91,7 @@ public final class CookSimulation {
 	/** Runs a cook with a reaction stepped in every layer (acrylamide formation, for one). */
 	public static CookResult run(Surface surface, HeatSetup setup, Target target, CookSettings settings,
 			LayerReaction.Factory reaction) {
-		return new CookSimulation(surface, setup, settings, reaction).march(target.extentFor(surface.category()));
+		return of(surface, setup, settings, reaction).run(target);
 	}
 
 	/**
@@ -76,14 +101,12 @@ public final class CookSimulation {
 	 */
 	public static CookResult run(Surface surface, HeatSetup setup, Target target, CookSettings settings,
 			LayerReaction.Factory reaction, Consumer<? super Layers> afterEachStep) {
-		CookSimulation simulation = new CookSimulation(surface, setup, settings, reaction);
-		simulation.listeners.add(new StepListener() {
+		return of(surface, setup, settings, reaction).listen(new StepListener() {
 			@Override
 			public void handleStep(CookState state, StepInterpolator step) {
 				afterEachStep.accept(state);
 			}
-		});
-		return simulation.march(target.extentFor(surface.category()));
+		}).run(target);
 	}
 
 	public static CookResult run(Surface surface, HeatSetup setup, Target target) {
@@ -99,7 +122,7 @@ public final class CookSimulation {
 		SurfaceWatch watch = new SurfaceWatch();
 		listeners.add(watch);
 		TargetRecord target = new TargetRecord(settings);
-		events.add(new Watch(CookEvent.targetColourReached(targetExtent), target));
+		events.add(0, new Watch(CookEvent.targetColourReached(targetExtent), target));
 
 		double dt = settings.timeStepS();
 		double stopAt = settings.horizonS();
