@@ -21,6 +21,9 @@ public final class HeatSetups {
 		if (template instanceof HeatSetup.RadiantGrill g) {
 			return new HeatSetup.RadiantGrill(temperatureC, g.flipEverySeconds());
 		}
+		if (template instanceof HeatSetup.Rest) {
+			return new HeatSetup.Rest(temperatureC);
+		}
 		throw new IllegalArgumentException("unknown heat setup " + template);
 	}
 

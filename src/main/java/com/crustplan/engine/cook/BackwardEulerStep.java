@@ -1,7 +1,6 @@
 package com.crustplan.engine.cook;
 
 import com.crustplan.engine.food.Surface;
-import com.crustplan.engine.heat.FaceSchedule;
 import com.crustplan.engine.layers.HeatConduction;
 
 /**
@@ -24,7 +23,7 @@ final class BackwardEulerStep {
 
 	private final LayerReaction reaction;
 
-	BackwardEulerStep(CookState state, Surface surface, FaceSchedule schedule, MatrixProperties properties,
+	BackwardEulerStep(CookState state, Surface surface, ActiveHeat schedule, MatrixProperties properties,
 			LayerReaction reaction, EnergyAccount account) {
 		this.state = state;
 		this.properties = properties;

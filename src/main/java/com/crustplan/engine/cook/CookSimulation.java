@@ -5,7 +5,6 @@ import java.util.List;
 import java.util.function.Consumer;
 
 import com.crustplan.engine.food.Surface;
-import com.crustplan.engine.heat.FaceSchedule;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.layers.Grid;
@@ -24,7 +23,7 @@ public final class CookSimulation {
 
 	private final HeatSetup setup;
 
-	private final FaceSchedule schedule;
+	private final ActiveHeat heat;
 
 	private final CookSettings settings;
 
@@ -45,7 +44,7 @@ public final class CookSimulation {
 	private CookSimulation(Surface surface, HeatSetup setup, CookSettings settings, LayerReaction.Factory reaction) {
 		this.surface = surface;
 		this.setup = setup;
-		this.schedule = setup.schedule();
+		this.heat = new ActiveHeat(setup.schedule());
 		this.settings = settings;
 		Grid grid = new Grid(surface.thicknessMm() / 1000, settings.nodes(), Grid.DEFAULT_CLUSTERING);
 		double x0 = surface.composition().moistureDryBasis();
@@ -55,7 +54,7 @@ public final class CookSimulation {
 		this.state = new CookState(grid, surface.category().isotherm(), surface.initialTemperatureC() + 273.15, x0, bulkDensity,
 				surface.surfaceWaterGPerM2() / 1000);
 		this.reaction = reaction.start(surface, grid);
-		this.stepper = new BackwardEulerStep(state, surface, schedule, properties, this.reaction, account);
+		this.stepper = new BackwardEulerStep(state, surface, heat, properties, this.reaction, account);
 	}
 
 	/**
@@ -113,24 +112,101 @@ public final class CookSimulation {
 		return run(surface, setup, target, CookSettings.defaults());
 	}
 
-	private CookResult march(double targetExtent) {
-		SeriesRecorder recorder = settings.recordSeries() ? new SeriesRecorder(surface.category().colourPath(),
-				settings.outputIntervalS()) : null;
-		if (recorder != null) {
-			listeners.add(recorder);
+	/**
+	 * Runs a cook in steps, each held until its end; the state carries over from step to step. The plan's
+	 * targets, a colour and a core temperature (either may be null), are recorded where they are reached;
+	 * they do not end the cook.
+	 */
+	public static StepsResult runSteps(Surface surface, List<CookStep> steps, Target colour, Double coreTargetC,
+			CookSettings settings, LayerReaction.Factory reaction) {
+		if (steps.isEmpty()) {
+			throw new InvalidInputException("steps", "a plan needs at least one step");
 		}
-		SurfaceWatch watch = new SurfaceWatch();
-		listeners.add(watch);
+		return new CookSimulation(surface, steps.get(0).setup(), settings, reaction).marchSteps(steps, colour, coreTargetC);
+	}
+
+	private CookResult march(double targetExtent) {
 		TargetRecord target = new TargetRecord(settings);
 		events.add(0, new Watch(CookEvent.targetColourReached(targetExtent), target));
+		start();
+		advance(settings.horizonS());
+		return finish(target, targetExtent, setup.assumptions());
+	}
 
-		double dt = settings.timeStepS();
-		double stopAt = settings.horizonS();
-		double nextChange = schedule.nextChangeAfter(0);
+	private StepsResult marchSteps(List<CookStep> steps, Target colour, Double coreTargetC) {
+		double targetExtent = colour == null ? Double.NaN : colour.extentFor(surface.category());
+		TargetRecord target = new TargetRecord(null);
+		if (colour != null) {
+			events.add(new Watch(CookEvent.targetColourReached(targetExtent), target));
+		}
+		TargetRecord core = new TargetRecord(null);
+		if (coreTargetC != null) {
+			events.add(new Watch(CookEvent.coreTemperatureReached(coreTargetC + 273.15), core));
+		}
+		start();
+		List<CookStep.Record> records = new ArrayList<>();
+		List<String> assumptions = new ArrayList<>();
+		double horizon = settings.horizonS();
+		for (int k = 0; k < steps.size() && state.time < horizon - 1e-9; k++) {
+			CookStep step = steps.get(k);
+			double startS = state.time;
+			heat.use(step.setup().schedule(), startS);
+			for (String a : step.setup().assumptions()) {
+				if (!assumptions.contains(a)) {
+					assumptions.add(a);
+				}
+			}
+			CookStep.Ending[] endedBy = { CookStep.Ending.TIME };
+			List<Watch> ends = new ArrayList<>();
+			if (step.colour() != null) {
+				ends.add(new Watch(CookEvent.targetColourReached(step.colour().extentFor(surface.category())), (s, f) -> {
+					endedBy[0] = CookStep.Ending.COLOUR;
+					return s.current().timeS();
+				}));
+			}
+			if (step.coreTemperatureC() != null) {
+				ends.add(new Watch(CookEvent.coreTemperatureReached(step.coreTemperatureC() + 273.15), (s, f) -> {
+					endedBy[0] = CookStep.Ending.CORE;
+					return s.current().timeS();
+				}));
+			}
+			events.addAll(ends);
+			double until = startS + step.maxDurationS();
+			if (until > horizon) {
+				until = horizon;
+				endedBy[0] = CookStep.Ending.HORIZON;
+			}
+			advance(until);
+			events.removeAll(ends);
+			records.add(new CookStep.Record(k, startS, state.time, endedBy[0], state.coreK() - 273.15,
+					state.surfaceK() - 273.15, state.browningExtent(0)));
+		}
+		CookResult cook = finish(target, targetExtent, assumptions);
+		return new StepsResult(cook, records, coreTargetC == null ? Double.NaN : coreTargetC, core.reachedAtS(),
+				core.reached() ? core.surfaceExtent() : Double.NaN);
+	}
+
+	private SeriesRecorder recorder;
+
+	private SurfaceWatch watch;
+
+	private void start() {
+		if (settings.recordSeries()) {
+			recorder = new SeriesRecorder(surface.category().colourPath(), settings.outputIntervalS());
+			listeners.add(recorder);
+		}
+		watch = new SurfaceWatch();
+		listeners.add(watch);
 		interpolator.start(state, reaction);
 		for (StepListener l : listeners) {
 			l.init(state, interpolator);
 		}
+	}
+
+	/** Marches until stopAt or until an event handler asks to stop sooner. */
+	private void advance(double stopAt) {
+		double dt = settings.timeStepS();
+		double nextChange = heat.nextChangeAfter(state.time);
 		while (state.time < stopAt - 1e-9) {
 			// land exactly on output times, flips and the end
 			double next = Math.min(stopAt, Math.min(nextCheckpoint(), nextChange));
@@ -141,28 +217,34 @@ public final class CookSimulation {
 			for (StepListener l : listeners) {
 				l.handleStep(state, interpolator);
 			}
-			for (Watch w : events) {
+			for (int e = 0; e < events.size(); e++) {
+				Watch w = events.get(e);
 				if (!w.fired && w.event.happened(interpolator.current())) {
 					w.fired = true;
 					stopAt = Math.min(stopAt, w.handler.eventOccurred(interpolator, w.event.crossing(interpolator)));
 				}
 			}
 			if (state.time >= nextChange - 1e-9) {
-				nextChange = schedule.nextChangeAfter(state.time + 1e-9);
+				nextChange = heat.nextChangeAfter(state.time + 1e-9);
 			}
 		}
+	}
+
+	private CookResult finish(TargetRecord target, double targetExtent, List<String> heatAssumptions) {
 		for (StepListener l : listeners) {
 			l.finish(state, interpolator);
 		}
+		boolean noColourTarget = Double.isNaN(targetExtent);
 		Outcome outcome = CookSummary.outcome(target.reached(), stepper.browning().canBrown(), watch.maxSurfaceK(),
 				watch.everDry());
 		String explanation = CookSummary.explain(outcome, watch.maxSurfaceK(), state.browningExtent(0), state.time);
-		List<String> assumptions = new ArrayList<>(setup.assumptions());
+		List<String> assumptions = new ArrayList<>(heatAssumptions);
 		assumptions.addAll(CookSummary.surfaceAssumptions(surface));
 		return new CookResult(outcome, explanation, target.reachedAtS(), targetExtent,
-				surface.category().colourPath().colourAt(targetExtent), surface.ph(), target.coreK() - 273.15,
-				target.crustLevel(), target.portionLevel(), watch.maxSurfaceK() - 273.15, state.browningExtent(0), state.time,
-				recorder == null ? List.of() : recorder.series(), assumptions, account.ledger(), state.finalState());
+				noColourTarget ? null : surface.category().colourPath().colourAt(targetExtent), surface.ph(),
+				target.coreK() - 273.15, target.crustLevel(), target.portionLevel(), watch.maxSurfaceK() - 273.15,
+				state.browningExtent(0), state.time, recorder == null ? List.of() : recorder.series(), assumptions,
+				account.ledger(), state.finalState());
 	}
 
 	private double nextCheckpoint() {

@@ -2,7 +2,6 @@ package com.crustplan.engine.cook;
 
 import com.crustplan.engine.heat.FaceExchange;
 import com.crustplan.engine.heat.FaceFlux;
-import com.crustplan.engine.heat.FaceSchedule;
 import com.crustplan.engine.layers.HeatConduction;
 import com.crustplan.engine.water.WaterVapour;
 
@@ -24,7 +23,7 @@ final class HeatStep {
 
 	private final CookState state;
 
-	private final FaceSchedule schedule;
+	private final ActiveHeat schedule;
 
 	private final MatrixProperties properties;
 
@@ -58,7 +57,7 @@ final class HeatStep {
 	 */
 	final double[] faceEvaporation = new double[2];
 
-	HeatStep(CookState state, FaceSchedule schedule, MatrixProperties properties, HeatConduction conduction,
+	HeatStep(CookState state, ActiveHeat schedule, MatrixProperties properties, HeatConduction conduction,
 			EnergyAccount account) {
 		this.state = state;
 		this.schedule = schedule;

@@ -2,7 +2,6 @@ package com.crustplan.engine.cook;
 
 import com.crustplan.engine.heat.FaceExchange;
 import com.crustplan.engine.heat.FaceFlux;
-import com.crustplan.engine.heat.FaceSchedule;
 import com.crustplan.engine.layers.MoistureDiffusion;
 import com.crustplan.engine.properties.FoodComponent;
 import com.crustplan.engine.water.MoistureDiffusivity;
@@ -18,7 +17,7 @@ final class MoistureStep {
 
 	private final CookState state;
 
-	private final FaceSchedule schedule;
+	private final ActiveHeat schedule;
 
 	private final MatrixProperties properties;
 
@@ -40,7 +39,7 @@ final class MoistureStep {
 
 	private final FaceFlux flux = new FaceFlux();
 
-	MoistureStep(CookState state, FaceSchedule schedule, MatrixProperties properties, HeatStep heat, EnergyAccount account) {
+	MoistureStep(CookState state, ActiveHeat schedule, MatrixProperties properties, HeatStep heat, EnergyAccount account) {
 		this.state = state;
 		this.schedule = schedule;
 		this.properties = properties;

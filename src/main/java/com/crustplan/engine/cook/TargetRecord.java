@@ -1,8 +1,9 @@
 package com.crustplan.engine.cook;
 
 /**
- * What happens when the target colour is reached: the time, core temperature and reaction levels at
- * that instant are kept, and the cook runs on by a share of the time (charts show what overcooking does).
+ * What happens when a target is reached: the time, core temperature, surface browning and reaction
+ * levels at that instant are kept; a one-step cook then runs on by a share of the time (charts show what
+ * overcooking does), a cook in steps goes on with its steps.
  */
 final class TargetRecord implements EventHandler {
 
@@ -16,6 +17,9 @@ final class TargetRecord implements EventHandler {
 
 	private double portionLevel = Double.NaN;
 
+	private double surfaceExtent = Double.NaN;
+
+	/** @param settings the run-past share and horizon, or null to go on as before */
 	TargetRecord(CookSettings settings) {
 		this.settings = settings;
 	}
@@ -28,6 +32,10 @@ final class TargetRecord implements EventHandler {
 		coreK = StepInterpolator.between(before.coreK(), after.coreK(), f);
 		crustLevel = StepInterpolator.between(before.crustLevel(), after.crustLevel(), f);
 		portionLevel = StepInterpolator.between(before.portionLevel(), after.portionLevel(), f);
+		surfaceExtent = StepInterpolator.between(before.surfaceExtent(), after.surfaceExtent(), f);
+		if (settings == null) {
+			return Double.POSITIVE_INFINITY;
+		}
 		return Math.min(settings.horizonS(),
 				Math.max(reachedAtS * (1 + settings.runPastTargetFraction()), reachedAtS + settings.timeStepS()));
 	}
@@ -50,6 +58,10 @@ final class TargetRecord implements EventHandler {
 
 	double portionLevel() {
 		return portionLevel;
+	}
+
+	double surfaceExtent() {
+		return surfaceExtent;
 	}
 
 }

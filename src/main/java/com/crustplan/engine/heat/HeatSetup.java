@@ -6,9 +6,9 @@ import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.model.Parameter;
 import com.crustplan.engine.water.Atmosphere;
 
-/** How heat reaches the food: one of four modes, each a record of what a cook sets. */
+/** How heat reaches the food: one of four modes, or resting, each a record of what a cook sets. */
 public sealed interface HeatSetup
-		permits HeatSetup.PanContact, HeatSetup.Oven, HeatSetup.RadiantGrill, HeatSetup.DeepFryer {
+		permits HeatSetup.PanContact, HeatSetup.Oven, HeatSetup.RadiantGrill, HeatSetup.DeepFryer, HeatSetup.Rest {
 
 	Parameter KITCHEN_AIR_C = Parameter.commonPractice("T_room", "kitchen air temperature", 25, "°C", "common practice");
 
@@ -249,6 +249,43 @@ public sealed interface HeatSetup
 					String.format("Oil-side coefficient %.0f W/m²K, up to %.0f W/m²K while water boils off vigorously.",
 							OIL_QUIET.value(), OIL_BUBBLING.value()),
 					"Oil taken up by the crust is not modelled.");
+		}
+
+	}
+
+	/**
+	 * Resting after cooking: both faces in still kitchen air. The heat already in the outer layers moves
+	 * on inwards, so the core keeps rising for a while (carry-over).
+	 */
+	record Rest(double airTemperatureC) implements HeatSetup {
+
+		public Rest {
+			// a cold store to a hot pass: what a resting place in a kitchen can be
+			range("temperatureC", airTemperatureC, 0, 45, "°C for resting in kitchen air");
+		}
+
+		@Override
+		public FaceSchedule schedule() {
+			double air = kelvin(airTemperatureC);
+			return FaceSchedule.both(new GasExchange(Atmosphere.kitchen(air), NATURAL_CONVECTION.value(), air,
+					String.format("resting in kitchen air at %.0f °C", airTemperatureC)));
+		}
+
+		@Override
+		public String mode() {
+			return "rest";
+		}
+
+		@Override
+		public double temperatureC() {
+			return airTemperatureC;
+		}
+
+		@Override
+		public List<String> assumptions() {
+			return List.of(String.format(
+					"Resting in still kitchen air at %.0f °C: natural convection %.0f W/m²K and radiation on both faces.",
+					airTemperatureC, NATURAL_CONVECTION.value()));
 		}
 
 	}
