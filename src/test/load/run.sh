@@ -37,8 +37,8 @@ if [ -z "$jar" ]; then
   jar="$(ls "$project"/target/*.jar 2>/dev/null | grep -v -- '-plain.jar$' | head -1 || true)"
 fi
 if [ -z "$jar" ]; then
-  echo "== no jar in target/: building it (mvn -o -q -DskipTests package)"
-  (cd "$project" && mvn -o -q -DskipTests package)
+  echo "== no jar in target/: building it (mvn -q -DskipTests package)"
+  (cd "$project" && mvn -q -DskipTests package)
   jar="$(ls "$project"/target/*.jar | grep -v -- '-plain.jar$' | head -1)"
 fi
 

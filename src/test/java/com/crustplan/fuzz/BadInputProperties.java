@@ -7,20 +7,17 @@ import static org.springframework.security.test.web.servlet.request.SecurityMock
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.stream.IntStream;
+import java.util.stream.Stream;
 
-import net.jqwik.api.Arbitraries;
-import net.jqwik.api.Arbitrary;
-import net.jqwik.api.ForAll;
-import net.jqwik.api.Property;
-import net.jqwik.api.Provide;
-import net.jqwik.api.lifecycle.BeforeContainer;
-
-import org.springframework.context.ApplicationContext;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.http.MediaType;
-import org.springframework.test.context.TestContextManager;
 import org.springframework.test.web.servlet.MockMvc;
 import org.springframework.test.web.servlet.MvcResult;
 import org.springframework.test.web.servlet.request.MockHttpServletRequestBuilder;
@@ -33,29 +30,27 @@ import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * Random and extreme input to the API and the forms never gives a 500: every answer is a result or
- * a field error. jqwik runs outside Spring's JUnit extension, so the shared test context is fetched
- * through Spring's TestContextManager (same configuration, so the same cached context).
+ * Random and extreme input to the API and the forms never gives a 500: every answer is a
+ * result or a field error. Each test runs a fixed number of cases drawn from a seeded
+ * generator ({@link FuzzValues}); a case's name and failure message carry the seed and
+ * the case number.
  */
 @CrustplanTest
 class BadInputProperties {
 
-	static MockMvc mvc;
+	@Autowired
+	MockMvc mvc;
 
-	static JsonMapper json;
+	@Autowired
+	JsonMapper json;
 
-	static DemoData demo;
+	@Autowired
+	DemoData demo;
 
-	@BeforeContainer
-	static void context() throws Exception {
-		ApplicationContext ctx = new TestContextManager(BadInputProperties.class).getTestContext()
-			.getApplicationContext();
-		mvc = ctx.getBean(MockMvc.class);
-		json = ctx.getBean(JsonMapper.class);
-		demo = ctx.getBean(DemoData.class);
-	}
-
-	/** A valid request, each value a raw JSON token; horizon 10 min keeps valid runs short. */
+	/**
+	 * A valid request, each value a raw JSON token; horizon 10 min keeps valid runs
+	 * short.
+	 */
 	static Map<String, Map<String, String>> validRequest() {
 		Map<String, Map<String, String>> r = new LinkedHashMap<>();
 		Map<String, String> s = new LinkedHashMap<>();
@@ -117,34 +112,66 @@ class BadInputProperties {
 	}
 
 	/** Raw JSON tokens (some not JSON at all) from ordinary to hostile. */
-	@Provide
-	Arbitrary<String> tokens() {
-		Arbitrary<String> special = Arbitraries.of("NaN", "Infinity", "-Infinity", "\"NaN\"", "\"Infinity\"",
-				"\"-Infinity\"", "1e400", "-1e400", "1e-400", "-0", "0", "null", "true", "false", "\"\"", "{}", "[]",
-				"[1,2]", "{\"a\":1}", "\"" + "x".repeat(20_000) + "\"", "99999999999999999999999999999", "1.7976931348623157E308",
-				"4.9E-324", "\"78\"", "\"potato\"", "\"pan\"", "\"oven\"", "\"grill\"", "\"golden\"", "\"\\u0000\"",
-				ABSENT, "01", "+1", ".5", "1.", "--1", "\"<script>\"");
-		Arbitrary<String> numbers = Arbitraries.doubles().map(d -> Double.isFinite(d) ? Double.toString(d) : "0");
-		Arbitrary<String> ints = Arbitraries.integers().map(String::valueOf);
-		Arbitrary<String> texts = Arbitraries.strings().ofMaxLength(60).map(s -> json.writeValueAsString(s));
-		return Arbitraries.frequencyOf(net.jqwik.api.Tuple.of(4, special), net.jqwik.api.Tuple.of(3, numbers),
-				net.jqwik.api.Tuple.of(2, ints), net.jqwik.api.Tuple.of(2, texts));
+	static final List<String> SPECIAL_TOKENS = List.of("NaN", "Infinity", "-Infinity", "\"NaN\"", "\"Infinity\"",
+			"\"-Infinity\"", "1e400", "-1e400", "1e-400", "-0", "0", "null", "true", "false", "\"\"", "{}", "[]",
+			"[1,2]", "{\"a\":1}", "\"" + "x".repeat(20_000) + "\"", "99999999999999999999999999999",
+			"1.7976931348623157E308", "4.9E-324", "\"78\"", "\"potato\"", "\"pan\"", "\"oven\"", "\"grill\"",
+			"\"golden\"", "\"\\u0000\"", ABSENT, "01", "+1", ".5", "1.", "--1", "\"<script>\"");
+
+	/**
+	 * Special tokens, finite numbers, ints and JSON strings in the weights 4 : 3 : 2 : 2.
+	 */
+	static String token(FuzzValues v) {
+		int pick = v.below(11);
+		if (pick < 4) {
+			return v.oneOf(SPECIAL_TOKENS);
+		}
+		if (pick < 7) {
+			double d = v.anyFiniteDouble();
+			return Double.isFinite(d) ? Double.toString(d) : "0";
+		}
+		if (pick < 9) {
+			return String.valueOf(v.anyInt());
+		}
+		return JsonMapper.shared().writeValueAsString(v.anyString(60));
 	}
 
-	@Provide
-	Arbitrary<String> fields() {
-		List<String> all = new java.util.ArrayList<>();
+	static List<String> fields() {
+		List<String> all = new ArrayList<>();
 		validRequest().forEach((obj, f) -> f.keySet().forEach(k -> all.add(obj + "." + k)));
 		all.addAll(List.of("surface", "heat", "target", "horizonMinutes", "target.lightness"));
-		return Arbitraries.of(all);
+		return all;
 	}
 
-	@Property(tries = 120)
-	void apiNeverAnswers500(@ForAll("fields") String field, @ForAll("tokens") String token,
-			@ForAll("fields") String second, @ForAll("tokens") String secondToken) throws Exception {
+	/**
+	 * Two changes to a valid plan request: each a field (or a whole object) and a raw
+	 * JSON token.
+	 */
+	record ApiCase(int n, String field, String token, String second, String secondToken) {
+
+		@Override
+		public String toString() {
+			return "seed " + FuzzValues.SEED + ", case " + this.n + ": " + this.field + " = "
+					+ FuzzValues.shown(this.token) + ", " + this.second + " = " + FuzzValues.shown(this.secondToken);
+		}
+
+	}
+
+	static Stream<ApiCase> apiCases() {
+		FuzzValues v = new FuzzValues("apiNeverAnswers500");
+		List<String> fields = fields();
+		return IntStream.range(0, 120)
+			.mapToObj(n -> new ApiCase(n, v.oneOf(fields), token(v), v.oneOf(fields), token(v)))
+			.toList()
+			.stream();
+	}
+
+	@ParameterizedTest(name = "{0}")
+	@MethodSource("apiCases")
+	void apiNeverAnswers500(ApiCase c) throws Exception {
 		Map<String, Map<String, String>> r = validRequest();
 		String horizon = "10";
-		for (String[] change : new String[][] { { field, token }, { second, secondToken } }) {
+		for (String[] change : new String[][] { { c.field(), c.token() }, { c.second(), c.secondToken() } }) {
 			String f = change[0];
 			String v = change[1];
 			if (f.equals("horizonMinutes")) {
@@ -161,45 +188,71 @@ class BadInputProperties {
 			}
 		}
 		String body = body(r, horizon);
-		MvcResult res = mvc.perform(post("/api/v1/plans").with(anonymous()).contentType(MediaType.APPLICATION_JSON)
-			.content(body)).andReturn();
+		MvcResult res = mvc
+			.perform(post("/api/v1/plans").with(anonymous()).contentType(MediaType.APPLICATION_JSON).content(body))
+			.andReturn();
 		int status = res.getResponse().getStatus();
-		assertThat(status).as("status for %s", body.length() > 300 ? body.substring(0, 300) : body).isIn(200, 400);
+		assertThat(status).as("%s: status for %s", c, body.length() > 300 ? body.substring(0, 300) : body)
+			.isIn(200, 400);
 		JsonNode answer = json.readTree(res.getResponse().getContentAsString());
 		if (status == 400) {
-			assertThat(answer.get("errors").isArray()).isTrue();
-			assertThat(answer.get("errors").size()).isPositive();
+			assertThat(answer.get("errors").isArray()).as("%s: errors is a list", c).isTrue();
+			assertThat(answer.get("errors").size()).as("%s: errors listed", c).isPositive();
 			for (JsonNode e : answer.get("errors")) {
-				assertThat(e.get("field").asString()).isNotBlank();
-				assertThat(e.get("message").asString()).isNotBlank();
+				assertThat(e.get("field").asString()).as("%s: error field", c).isNotBlank();
+				assertThat(e.get("message").asString()).as("%s: error message", c).isNotBlank();
 			}
 		}
 		else {
-			assertThat(answer.get("reached").isBoolean()).isTrue();
+			assertThat(answer.get("reached").isBoolean()).as("%s: reached", c).isTrue();
 		}
 	}
 
 	/** Text a cook might type, or paste, or a browser might send. */
-	@Provide
-	Arbitrary<String> typed() {
-		Arbitrary<String> special = Arbitraries.of("", " ", "NaN", "nan", "Infinity", "-Infinity", "1e999", "-1e999",
-				"1e-999", "12,5", "12.5.3", "0x1p3", "1_000", "١٢", "½", "-0", "+5", "5 °C", "abc", "x".repeat(5000),
-				"<script>alert(1)</script>", "%00", "\u0000", "'; DROP TABLE surface; --", "9".repeat(400));
-		Arbitrary<String> numbers = Arbitraries.doubles().map(d -> Double.toString(d));
-		Arbitrary<String> texts = Arbitraries.strings().ofMaxLength(100);
-		return Arbitraries.oneOf(special, numbers, texts);
+	static final List<String> SPECIAL_TYPED = List.of("", " ", "NaN", "nan", "Infinity", "-Infinity", "1e999", "-1e999",
+			"1e-999", "12,5", "12.5.3", "0x1p3", "1_000", "١٢", "½", "-0", "+5", "5 °C", "abc", "x".repeat(5000),
+			"<script>alert(1)</script>", "%00", "\u0000", "'; DROP TABLE surface; --", "9".repeat(400));
+
+	/** Special text, finite numbers and any text, one third each. */
+	static String typed(FuzzValues v) {
+		return switch (v.below(3)) {
+			case 0 -> v.oneOf(SPECIAL_TYPED);
+			case 1 -> Double.toString(v.anyFiniteDouble());
+			default -> v.anyString(100);
+		};
 	}
 
-	@Provide
-	Arbitrary<String> surfaceFields() {
-		return Arbitraries.of("name", "category", "product", "waterPct", "proteinPct", "fatPct", "reducingSugarPct", "sucrosePct",
-				"starchPct", "fibrePct", "ashPct", "asparagineMgPerKg", "surfaceWaterGPerM2", "thicknessMm", "ph",
-				"bicarbonateGPerKg", "acidGPerKg", "initialTemperature", "temperatureUnit", "notes");
+	static final List<String> SURFACE_FIELDS = List.of("name", "category", "product", "waterPct", "proteinPct",
+			"fatPct", "reducingSugarPct", "sucrosePct", "starchPct", "fibrePct", "ashPct", "asparagineMgPerKg",
+			"surfaceWaterGPerM2", "thicknessMm", "ph", "bicarbonateGPerKg", "acidGPerKg", "initialTemperature",
+			"temperatureUnit", "notes");
+
+	static final List<String> PLAN_PARAMS = List.of("surfaceId", "setupId", "targetStage", "targetLightness",
+			"horizonMinutes");
+
+	/** One form field or request parameter set to typed text. */
+	record TypedCase(int n, String field, String value) {
+
+		@Override
+		public String toString() {
+			return "seed " + FuzzValues.SEED + ", case " + this.n + ": " + this.field + " = "
+					+ FuzzValues.shown(this.value);
+		}
+
 	}
 
-	@Property(tries = 120)
-	void surfaceFormNeverAnswers500(@ForAll("surfaceFields") String field, @ForAll("typed") String value)
-			throws Exception {
+	static Stream<TypedCase> typedCases(String method, List<String> fields, int count) {
+		FuzzValues v = new FuzzValues(method);
+		return IntStream.range(0, count).mapToObj(n -> new TypedCase(n, v.oneOf(fields), typed(v))).toList().stream();
+	}
+
+	static Stream<TypedCase> surfaceFormCases() {
+		return typedCases("surfaceFormNeverAnswers500", SURFACE_FIELDS, 120);
+	}
+
+	@ParameterizedTest(name = "{0}")
+	@MethodSource("surfaceFormCases")
+	void surfaceFormNeverAnswers500(TypedCase c) throws Exception {
 		Map<String, String> p = new LinkedHashMap<>();
 		p.put("name", "Fuzzed surface");
 		p.put("category", "fish");
@@ -220,37 +273,37 @@ class BadInputProperties {
 		p.put("initialTemperature", "3");
 		p.put("temperatureUnit", "C");
 		p.put("notes", "");
-		p.put(field, value);
+		p.put(c.field(), c.value());
 		MockHttpServletRequestBuilder req = post("/surfaces/new").with(csrf()).with(user("chef").roles("CHEF"));
 		p.forEach(req::param);
 		MvcResult res = mvc.perform(req).andReturn();
 		int status = res.getResponse().getStatus();
-		assertThat(status).as("%s = %s", field, value.length() > 80 ? value.substring(0, 80) : value).isIn(200, 302);
+		assertThat(status).as("%s", c).isIn(200, 302);
 		if (status == 200) {
-			BindingResult errors = (BindingResult) res.getModelAndView().getModel()
+			BindingResult errors = (BindingResult) res.getModelAndView()
+				.getModel()
 				.get(BindingResult.MODEL_KEY_PREFIX + "form");
-			assertThat(errors.hasErrors()).as("a re-rendered form says why").isTrue();
+			assertThat(errors.hasErrors()).as("%s: a re-rendered form says why", c).isTrue();
 		}
 	}
 
-	@Property(tries = 80)
-	void planPageNeverAnswers500(@ForAll("planParams") String param, @ForAll("typed") String value)
-			throws Exception {
+	static Stream<TypedCase> planPageCases() {
+		return typedCases("planPageNeverAnswers500", PLAN_PARAMS, 80);
+	}
+
+	@ParameterizedTest(name = "{0}")
+	@MethodSource("planPageCases")
+	void planPageNeverAnswers500(TypedCase c) throws Exception {
 		Map<String, String> p = new LinkedHashMap<>();
 		p.put("surfaceId", String.valueOf(demo.surface("Hake fillet, skin side")));
 		p.put("setupId", String.valueOf(demo.setup("Plancha, high")));
 		p.put("targetStage", "golden");
 		p.put("targetLightness", "");
 		p.put("horizonMinutes", "10");
-		p.put(param, value);
+		p.put(c.field(), c.value());
 		MockHttpServletRequestBuilder req = get("/plan").with(user("cook").roles("COOK"));
 		p.forEach(req::param);
-		assertThat(mvc.perform(req).andReturn().getResponse().getStatus()).isEqualTo(200);
-	}
-
-	@Provide
-	Arbitrary<String> planParams() {
-		return Arbitraries.of("surfaceId", "setupId", "targetStage", "targetLightness", "horizonMinutes");
+		assertThat(mvc.perform(req).andReturn().getResponse().getStatus()).as("%s", c).isEqualTo(200);
 	}
 
 }
