@@ -62,17 +62,20 @@ public record SurfaceForm(
 	}
 
 	public SurfaceForm withName(String newName) {
-		return new SurfaceForm(newName, category, product, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct,
-				starchPct, fibrePct, ashPct, asparagineMgPerKg, surfaceWaterGPerM2, thicknessMm, ph, bicarbonateGPerKg,
-				acidGPerKg, initialTemperature, temperatureUnit, notes);
+		return with(newName, initialTemperature, temperatureUnit);
 	}
 
 	/** The same form with temperatures in another unit (for re-rendering after a °C/°F switch). */
 	public SurfaceForm inUnit(TemperatureUnit unit) {
 		Double c = initialTemperatureC();
-		return new SurfaceForm(name, category, product, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct, starchPct,
-				fibrePct, ashPct, asparagineMgPerKg, surfaceWaterGPerM2, thicknessMm, ph, bicarbonateGPerKg, acidGPerKg,
-				c == null ? null : round1(unit.fromCelsius(c)), unit.code(), notes);
+		return with(name, c == null ? null : round1(unit.fromCelsius(c)), unit.code());
+	}
+
+	/** The one copy that changes what is not the surface itself: its name and the unit of its temperature. */
+	private SurfaceForm with(String newName, Double temperature, String unitCode) {
+		return new SurfaceForm(newName, category, product, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct,
+				starchPct, fibrePct, ashPct, asparagineMgPerKg, surfaceWaterGPerM2, thicknessMm, ph, bicarbonateGPerKg,
+				acidGPerKg, temperature, unitCode, notes);
 	}
 
 	public TemperatureUnit unit() {
