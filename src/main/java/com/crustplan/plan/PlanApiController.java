@@ -20,6 +20,7 @@ import org.springframework.web.bind.annotation.RestController;
 import com.crustplan.engine.cook.Sample;
 import com.crustplan.engine.food.BrowningStage;
 import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.SurfaceField;
 import com.crustplan.surface.CategoryDefaults;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.system.TemperatureUnit;
@@ -47,11 +48,7 @@ class PlanApiController {
 	List<Map<String, Object>> categories() {
 		List<Map<String, Object>> out = new ArrayList<>();
 		for (FoodCategory c : FoodCategory.values()) {
-			Map<String, Object> d = CategoryDefaults.of(c);
-			d.put("pH", c.defaultPh());
-			d.put("bicarbonateGPerKg", 0.0);
-			d.put("acidGPerKg", 0.0);
-			d.put("initialTemperatureC", c.defaultInitialTemperatureC());
+			Map<String, Object> d = CategoryDefaults.of(c, List.of(SurfaceField.values()));
 			List<Map<String, Object>> stages = new ArrayList<>();
 			for (BrowningStage s : c.stages()) {
 				Map<String, Object> m = new LinkedHashMap<>();

@@ -1,33 +1,30 @@
 package com.crustplan.surface;
 
+import java.util.Collection;
 import java.util.LinkedHashMap;
 import java.util.Map;
 
-import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.food.SurfaceField;
 
-/** A category's typical composition and size as named fields: for the API and the form's defaults button. */
+/** A category's defaults as named fields, read from the engine: for the API and the form's defaults button. */
 public final class CategoryDefaults {
 
 	private CategoryDefaults() {
 	}
 
-	/** Composition (%), asparagine, standing water and thickness under the API's field names. */
-	public static Map<String, Object> of(FoodCategory c) {
-		Composition k = c.defaultComposition();
-		Map<String, Object> d = new LinkedHashMap<>();
-		d.put("waterPct", k.waterPct());
-		d.put("proteinPct", k.proteinPct());
-		d.put("fatPct", k.fatPct());
-		d.put("reducingSugarPct", k.reducingSugarPct());
-		d.put("sucrosePct", k.sucrosePct());
-		d.put("starchPct", k.starchPct());
-		d.put("fibrePct", k.fibrePct());
-		d.put("ashPct", k.ashPct());
-		d.put("asparagineMgPerKg", c.defaultAsparagineMgPerKg());
-		d.put("surfaceWaterGPerM2", c.defaultSurfaceWaterGPerM2());
-		d.put("thicknessMm", c.defaultThicknessMm());
-		return d;
+	/**
+	 * The defaults of the given fields under their API names, in the order given; pH is the category's
+	 * typical pH, bicarbonate and acid are 0.
+	 */
+	public static Map<String, Object> of(FoodCategory c, Collection<SurfaceField> fields) {
+		Surface d = Surface.defaults(c);
+		Map<String, Object> out = new LinkedHashMap<>();
+		for (SurfaceField f : fields) {
+			out.put(f.key(), f == SurfaceField.PH ? d.basePh() : f.of(d));
+		}
+		return out;
 	}
 
 }

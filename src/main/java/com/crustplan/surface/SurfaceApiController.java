@@ -18,13 +18,10 @@ import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RestController;
 import org.springframework.web.method.annotation.MethodArgumentTypeMismatchException;
 
-import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.input.InvalidInputException;
-import com.crustplan.engine.food.Surface;
 import com.crustplan.plan.ApiError;
 import com.crustplan.plan.PlanRequestReader;
 import com.crustplan.system.NotFoundException;
-import com.crustplan.system.TemperatureUnit;
 
 import com.fasterxml.jackson.annotation.JsonProperty;
 import tools.jackson.databind.json.JsonMapper;
@@ -70,12 +67,7 @@ class SurfaceApiController {
 
 	/** The page form's record of the same surface, so the API saves exactly what the form would. */
 	private static SurfaceForm form(PlanRequestReader.SurfaceRequest r) {
-		Surface s = r.surface();
-		Composition c = s.composition();
-		return new SurfaceForm(r.name(), s.category().key(), r.product(), c.waterPct(), c.proteinPct(), c.fatPct(),
-				c.reducingSugarPct(), c.sucrosePct(), c.starchPct(), c.fibrePct(), c.ashPct(), s.asparagineMgPerKg(),
-				s.surfaceWaterGPerM2(), s.thicknessMm(), s.phOverride(), s.bicarbonateGPerKg(), s.acidGPerKg(),
-				s.initialTemperatureC(), TemperatureUnit.CELSIUS.code(), r.notes());
+		return SurfaceForm.of(r.surface(), r.name(), r.product(), r.notes());
 	}
 
 	@ExceptionHandler(PlanRequestReader.BadRequest.class)

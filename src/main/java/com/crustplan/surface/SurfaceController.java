@@ -2,7 +2,9 @@ package com.crustplan.surface;
 
 import java.util.Arrays;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
+import java.util.stream.Stream;
 
 import jakarta.validation.Valid;
 
@@ -21,6 +23,7 @@ import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.food.SurfaceField;
 import com.crustplan.system.EngineErrors;
 import com.crustplan.system.FormBinding;
 import com.crustplan.system.JsonText;
@@ -31,6 +34,12 @@ import com.crustplan.system.TemperatureUnit;
 class SurfaceController {
 
 	private static final String FORM = "surface/form";
+
+	/** What the form's defaults button fills in: the composition and size, not the cook's additions. */
+	private static final List<SurfaceField> FILLED_BY_DEFAULTS = Stream
+		.concat(SurfaceField.COMPOSITION.stream(),
+				Stream.of(SurfaceField.ASPARAGINE, SurfaceField.SURFACE_WATER, SurfaceField.THICKNESS))
+		.toList();
 
 	private final SurfaceService surfaces;
 
@@ -140,6 +149,7 @@ class SurfaceController {
 		model.addAttribute("products", Arrays.asList(Product.values()));
 		model.addAttribute("derived", derived(shown));
 		model.addAttribute("defaultsJson", json.write(defaultsByKey(units)));
+		model.addAttribute("thicknessRange", InRange.Check.range(SurfaceField.THICKNESS));
 		return FORM;
 	}
 
@@ -167,7 +177,7 @@ class SurfaceController {
 	private static Map<String, Map<String, Object>> defaultsByKey(TemperatureUnit units) {
 		Map<String, Map<String, Object>> all = new LinkedHashMap<>();
 		for (FoodCategory c : FoodCategory.values()) {
-			Map<String, Object> d = CategoryDefaults.of(c);
+			Map<String, Object> d = CategoryDefaults.of(c, FILLED_BY_DEFAULTS);
 			d.put("phPlaceholder", c.defaultPh());
 			d.put("initialTemperature", Math.round(units.fromCelsius(c.defaultInitialTemperatureC()) * 10) / 10.0);
 			all.put(c.key(), d);

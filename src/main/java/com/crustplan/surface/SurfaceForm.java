@@ -1,7 +1,5 @@
 package com.crustplan.surface;
 
-import jakarta.validation.constraints.DecimalMax;
-import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.NotBlank;
 import jakarta.validation.constraints.NotNull;
 import jakarta.validation.constraints.Size;
@@ -11,42 +9,48 @@ import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.food.SurfaceField;
 import com.crustplan.system.TemperatureUnit;
 
 /**
- * What a cook types in for a surface. The ranges here give every field its message at once; the
- * engine's own checks (the composition sum, the pH range) run after them in {@link #toSurface()} and
- * are the final word. {@code initialTemperature} is in the unit named by {@code temperatureUnit}.
+ * What a cook types in for a surface. The ranges, the engine's own ({@link SurfaceField}), give every
+ * field its message at once; the engine's checks across fields (the composition sum) run after them in
+ * {@link #toSurface()} and are the final word. {@code initialTemperature} is in the unit named by {@code temperatureUnit}.
  */
 public record SurfaceForm(
 		@NotBlank(message = "give the surface a name") @Size(max = 80, message = "at most 80 characters") String name,
 		@NotBlank(message = "choose a category") String category,
 		@Size(max = 32, message = "choose from the list") String product,
-		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double waterPct,
-		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double proteinPct,
-		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double fatPct,
-		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double reducingSugarPct,
-		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double sucrosePct,
-		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double starchPct,
-		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double fibrePct,
-		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 100 %") @DecimalMax(value = "100", message = "must be 0 to 100 %") Double ashPct,
-		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 50000 mg/kg") @DecimalMax(value = "50000", message = "must be 0 to 50000 mg/kg") Double asparagineMgPerKg,
-		@NotNull(message = "required") @DecimalMin(value = "0", message = "must be 0 to 2000 g/m²") @DecimalMax(value = "2000", message = "must be 0 to 2000 g/m²") Double surfaceWaterGPerM2,
-		@NotNull(message = "required") @DecimalMin(value = "0.5", message = "must be 0.5 to 200 mm") @DecimalMax(value = "200", message = "must be 0.5 to 200 mm") Double thicknessMm,
-		@DecimalMin(value = "2", message = "must be 2 to 10, or empty for the category's typical pH") @DecimalMax(value = "10", message = "must be 2 to 10, or empty for the category's typical pH") Double ph,
-		@NotNull(message = "required (0 for none)") @DecimalMin(value = "0", message = "must be 0 to 50 g/kg") @DecimalMax(value = "50", message = "must be 0 to 50 g/kg") Double bicarbonateGPerKg,
-		@NotNull(message = "required (0 for none)") @DecimalMin(value = "0", message = "must be 0 to 50 g/kg") @DecimalMax(value = "50", message = "must be 0 to 50 g/kg") Double acidGPerKg,
+		@NotNull(message = "required") @InRange(SurfaceField.WATER) Double waterPct,
+		@NotNull(message = "required") @InRange(SurfaceField.PROTEIN) Double proteinPct,
+		@NotNull(message = "required") @InRange(SurfaceField.FAT) Double fatPct,
+		@NotNull(message = "required") @InRange(SurfaceField.REDUCING_SUGAR) Double reducingSugarPct,
+		@NotNull(message = "required") @InRange(SurfaceField.SUCROSE) Double sucrosePct,
+		@NotNull(message = "required") @InRange(SurfaceField.STARCH) Double starchPct,
+		@NotNull(message = "required") @InRange(SurfaceField.FIBRE) Double fibrePct,
+		@NotNull(message = "required") @InRange(SurfaceField.ASH) Double ashPct,
+		@NotNull(message = "required") @InRange(SurfaceField.ASPARAGINE) Double asparagineMgPerKg,
+		@NotNull(message = "required") @InRange(SurfaceField.SURFACE_WATER) Double surfaceWaterGPerM2,
+		@NotNull(message = "required") @InRange(SurfaceField.THICKNESS) Double thicknessMm,
+		@InRange(value = SurfaceField.PH, orElse = "or empty for the category's typical pH") Double ph,
+		@NotNull(message = "required (0 for none)") @InRange(SurfaceField.BICARBONATE) Double bicarbonateGPerKg,
+		@NotNull(message = "required (0 for none)") @InRange(SurfaceField.ACID) Double acidGPerKg,
 		@NotNull(message = "required") Double initialTemperature,
 		String temperatureUnit,
 		@Size(max = 1000, message = "at most 1000 characters") String notes) {
 
 	/** A new form with the category's defaults. */
 	public static SurfaceForm defaults(FoodCategory c, String name, TemperatureUnit unit) {
-		Composition k = c.defaultComposition();
-		return new SurfaceForm(name, c.key(), null, k.waterPct(), k.proteinPct(), k.fatPct(), k.reducingSugarPct(),
-				k.sucrosePct(), k.starchPct(), k.fibrePct(), k.ashPct(), c.defaultAsparagineMgPerKg(),
-				c.defaultSurfaceWaterGPerM2(), c.defaultThicknessMm(), null, 0.0, 0.0,
-				round1(unit.fromCelsius(c.defaultInitialTemperatureC())), unit.code(), null);
+		return of(Surface.defaults(c), name, null, null).inUnit(unit);
+	}
+
+	/** The form of an engine surface (temperatures in °C), so a surface read elsewhere saves as the form would. */
+	public static SurfaceForm of(Surface s, String name, String product, String notes) {
+		Composition k = s.composition();
+		return new SurfaceForm(name, s.category().key(), product, k.waterPct(), k.proteinPct(), k.fatPct(),
+				k.reducingSugarPct(), k.sucrosePct(), k.starchPct(), k.fibrePct(), k.ashPct(), s.asparagineMgPerKg(),
+				s.surfaceWaterGPerM2(), s.thicknessMm(), s.phOverride(), s.bicarbonateGPerKg(), s.acidGPerKg(),
+				s.initialTemperatureC(), TemperatureUnit.CELSIUS.code(), notes);
 	}
 
 	public static SurfaceForm of(SavedSurface s, TemperatureUnit unit) {
@@ -58,17 +62,20 @@ public record SurfaceForm(
 	}
 
 	public SurfaceForm withName(String newName) {
-		return new SurfaceForm(newName, category, product, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct,
-				starchPct, fibrePct, ashPct, asparagineMgPerKg, surfaceWaterGPerM2, thicknessMm, ph, bicarbonateGPerKg,
-				acidGPerKg, initialTemperature, temperatureUnit, notes);
+		return with(newName, initialTemperature, temperatureUnit);
 	}
 
 	/** The same form with temperatures in another unit (for re-rendering after a °C/°F switch). */
 	public SurfaceForm inUnit(TemperatureUnit unit) {
 		Double c = initialTemperatureC();
-		return new SurfaceForm(name, category, product, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct, starchPct,
-				fibrePct, ashPct, asparagineMgPerKg, surfaceWaterGPerM2, thicknessMm, ph, bicarbonateGPerKg, acidGPerKg,
-				c == null ? null : round1(unit.fromCelsius(c)), unit.code(), notes);
+		return with(name, c == null ? null : round1(unit.fromCelsius(c)), unit.code());
+	}
+
+	/** The one copy that changes what is not the surface itself: its name and the unit of its temperature. */
+	private SurfaceForm with(String newName, Double temperature, String unitCode) {
+		return new SurfaceForm(newName, category, product, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct,
+				starchPct, fibrePct, ashPct, asparagineMgPerKg, surfaceWaterGPerM2, thicknessMm, ph, bicarbonateGPerKg,
+				acidGPerKg, temperature, unitCode, notes);
 	}
 
 	public TemperatureUnit unit() {

@@ -1,34 +1,47 @@
 package com.crustplan.system;
 
+import java.util.List;
+
+import jakarta.servlet.http.HttpServletRequest;
+import jakarta.servlet.http.HttpServletResponse;
+
+import org.springframework.beans.factory.ObjectProvider;
 import org.springframework.beans.factory.annotation.Value;
+import org.springframework.security.web.WebAttributes;
+import org.springframework.security.web.csrf.CsrfException;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.RequestMapping;
 
 @Controller
 class SignInController {
 
 	private final boolean demo;
 
-	SignInController(@Value("${crustplan.demo.enabled:false}") boolean demo) {
+	private final ObjectProvider<PublicAccounts> publicAccounts;
+
+	SignInController(@Value("${crustplan.demo.enabled:false}") boolean demo,
+			ObjectProvider<PublicAccounts> publicAccounts) {
 		this.demo = demo;
+		this.publicAccounts = publicAccounts;
 	}
 
 	@GetMapping("/signin")
 	String signIn(Model model) {
 		model.addAttribute("demo", demo);
-		model.addAttribute("demoAccounts", demo ? DemoKitchenLoader.DEMO_ACCOUNTS : java.util.List.of());
+		PublicAccounts shown = demo ? publicAccounts.getIfAvailable() : null;
+		model.addAttribute("demoAccounts", shown == null ? List.of() : shown.accounts());
 		return "system/signin";
 	}
 
 	/** The page shown when a signed-in user's role does not allow a page. */
-	@org.springframework.web.bind.annotation.RequestMapping("/error/403")
-	String forbidden(jakarta.servlet.http.HttpServletRequest request, jakarta.servlet.http.HttpServletResponse response,
-			Model model) {
+	@RequestMapping("/error/403")
+	String forbidden(HttpServletRequest request, HttpServletResponse response, Model model) {
 		response.setStatus(403);
 		// a form sent with a stale token is not a question of role: say what to do instead
-		Object denied = request.getAttribute(org.springframework.security.web.WebAttributes.ACCESS_DENIED_403);
-		model.addAttribute("staleForm", denied instanceof org.springframework.security.web.csrf.CsrfException);
+		Object denied = request.getAttribute(WebAttributes.ACCESS_DENIED_403);
+		model.addAttribute("staleForm", denied instanceof CsrfException);
 		return "error/403";
 	}
 

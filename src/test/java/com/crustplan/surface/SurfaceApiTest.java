@@ -28,7 +28,7 @@ import com.crustplan.CrustplanTest;
 
 /**
  * JSON API v1 for saved surfaces. API clients sign in with HTTP Basic as the demo kitchen's chef and
- * cook (system/DemoKitchenLoader); a browser session still needs its CSRF token to write.
+ * cook (demo/DemoKitchenLoader); a browser session still needs its CSRF token to write.
  */
 @CrustplanTest
 class SurfaceApiTest {

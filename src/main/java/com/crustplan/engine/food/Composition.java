@@ -11,14 +11,14 @@ public record Composition(double waterPct, double proteinPct, double fatPct, dou
 		double sucrosePct, double starchPct, double fibrePct, double ashPct) {
 
 	public Composition {
-		check("waterPct", waterPct);
-		check("proteinPct", proteinPct);
-		check("fatPct", fatPct);
-		check("reducingSugarPct", reducingSugarPct);
-		check("sucrosePct", sucrosePct);
-		check("starchPct", starchPct);
-		check("fibrePct", fibrePct);
-		check("ashPct", ashPct);
+		SurfaceField.WATER.check(waterPct);
+		SurfaceField.PROTEIN.check(proteinPct);
+		SurfaceField.FAT.check(fatPct);
+		SurfaceField.REDUCING_SUGAR.check(reducingSugarPct);
+		SurfaceField.SUCROSE.check(sucrosePct);
+		SurfaceField.STARCH.check(starchPct);
+		SurfaceField.FIBRE.check(fibrePct);
+		SurfaceField.ASH.check(ashPct);
 		double sum = waterPct + proteinPct + fatPct + reducingSugarPct + sucrosePct + starchPct + fibrePct + ashPct;
 		// 0.05 percentage points of slack for rounding in typed-in compositions
 		if (sum > 100.05) {
@@ -26,12 +26,6 @@ public record Composition(double waterPct, double proteinPct, double fatPct, dou
 		}
 		if (waterPct >= 100) {
 			throw new InvalidInputException("waterPct", "a food needs some dry matter (water must be below 100 %)");
-		}
-	}
-
-	private static void check(String field, double value) {
-		if (!Double.isFinite(value) || value < 0 || value > 100) {
-			throw new InvalidInputException(field, "must be a number from 0 to 100");
 		}
 	}
 
@@ -74,6 +68,71 @@ public record Composition(double waterPct, double proteinPct, double fatPct, dou
 
 	public Composition withSucrosePct(double pct) {
 		return new Composition(waterPct, proteinPct, fatPct, reducingSugarPct, pct, starchPct, fibrePct, ashPct);
+	}
+
+	/** A composition by named parts, for tables of typical values; a part not named is 0 %. */
+	public static final class Parts {
+
+		private double water;
+
+		private double protein;
+
+		private double fat;
+
+		private double reducingSugar;
+
+		private double sucrose;
+
+		private double starch;
+
+		private double fibre;
+
+		private double ash;
+
+		public Parts water(double pct) {
+			water = pct;
+			return this;
+		}
+
+		public Parts protein(double pct) {
+			protein = pct;
+			return this;
+		}
+
+		public Parts fat(double pct) {
+			fat = pct;
+			return this;
+		}
+
+		public Parts reducingSugar(double pct) {
+			reducingSugar = pct;
+			return this;
+		}
+
+		public Parts sucrose(double pct) {
+			sucrose = pct;
+			return this;
+		}
+
+		public Parts starch(double pct) {
+			starch = pct;
+			return this;
+		}
+
+		public Parts fibre(double pct) {
+			fibre = pct;
+			return this;
+		}
+
+		public Parts ash(double pct) {
+			ash = pct;
+			return this;
+		}
+
+		public Composition build() {
+			return new Composition(water, protein, fat, reducingSugar, sucrose, starch, fibre, ash);
+		}
+
 	}
 
 }

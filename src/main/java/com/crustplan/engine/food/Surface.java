@@ -10,11 +10,7 @@ public record Surface(FoodCategory category, Composition composition, double asp
 		double surfaceWaterGPerM2, double thicknessMm, Double phOverride, double bicarbonateGPerKg, double acidGPerKg,
 		double initialTemperatureC) {
 
-	/** Thickness limits: thinner than a crisp slice or thicker than a large roast is outside the 1D model. */
-	public static final double MIN_THICKNESS_MM = 0.5;
-
-	public static final double MAX_THICKNESS_MM = 200;
-
+	/** Checks every field against its {@link SurfaceField} range. */
 	public Surface {
 		if (category == null) {
 			throw new InvalidInputException("category", "is required");
@@ -22,25 +18,15 @@ public record Surface(FoodCategory category, Composition composition, double asp
 		if (composition == null) {
 			throw new InvalidInputException("composition", "is required");
 		}
-		range("asparagineMgPerKg", asparagineMgPerKg, 0, 50_000);
-		range("surfaceWaterGPerM2", surfaceWaterGPerM2, 0, 2_000);
-		range("thicknessMm", thicknessMm, MIN_THICKNESS_MM, MAX_THICKNESS_MM);
+		SurfaceField.ASPARAGINE.check(asparagineMgPerKg);
+		SurfaceField.SURFACE_WATER.check(surfaceWaterGPerM2);
+		SurfaceField.THICKNESS.check(thicknessMm);
 		if (phOverride != null) {
-			range("pH", phOverride, 2, 10);
+			SurfaceField.PH.check(phOverride);
 		}
-		range("bicarbonateGPerKg", bicarbonateGPerKg, 0, 50);
-		range("acidGPerKg", acidGPerKg, 0, 50);
-		range("initialTemperatureC", initialTemperatureC, -20, 80);
-	}
-
-	private static void range(String field, double v, double min, double max) {
-		if (!Double.isFinite(v) || v < min || v > max) {
-			throw new InvalidInputException(field, "must be a number from " + fmt(min) + " to " + fmt(max));
-		}
-	}
-
-	private static String fmt(double v) {
-		return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
+		SurfaceField.BICARBONATE.check(bicarbonateGPerKg);
+		SurfaceField.ACID.check(acidGPerKg);
+		SurfaceField.INITIAL_TEMPERATURE.check(initialTemperatureC);
 	}
 
 	/** A surface with the category's defaults. */

@@ -1,4 +1,4 @@
-package com.crustplan.system;
+package com.crustplan.demo;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -23,7 +23,6 @@ import com.crustplan.setup.SetupForm;
 import com.crustplan.setup.SetupService;
 import com.crustplan.surface.SurfaceForm;
 import com.crustplan.surface.SurfaceService;
-import com.crustplan.user.Role;
 import com.crustplan.user.UserAccount;
 import com.crustplan.user.UserAccountRepository;
 
@@ -41,13 +40,6 @@ import tools.jackson.dataformat.yaml.YAMLMapper;
 class DemoKitchenLoader implements ApplicationRunner {
 
 	static final String FILE = "templates-demo/kitchen.yaml";
-
-	/** Demo only: shown on the sign-in page while the demo kitchen is enabled. */
-	record DemoAccount(String username, String password, Role role) {
-	}
-
-	static final List<DemoAccount> DEMO_ACCOUNTS = List.of(new DemoAccount("chef", "chef-demo", Role.CHEF),
-			new DemoAccount("cook", "cook-demo", Role.COOK));
 
 	record DemoKitchen(String kitchen, List<SurfaceForm> surfaces, List<SetupForm> setups) {
 	}
@@ -79,7 +71,7 @@ class DemoKitchenLoader implements ApplicationRunner {
 	@Override
 	public void run(ApplicationArguments args) {
 		tx.executeWithoutResult(status -> {
-			for (DemoAccount a : DEMO_ACCOUNTS) {
+			for (DemoAccounts.DemoAccount a : DemoAccounts.ALL) {
 				if (!users.existsByUsernameIgnoreCase(a.username())) {
 					users.save(new UserAccount(a.username(), encoder.encode(a.password()), a.role()));
 				}
