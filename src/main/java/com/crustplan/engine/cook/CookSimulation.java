@@ -21,6 +21,7 @@ import com.crustplan.engine.layers.Grid;
 import com.crustplan.engine.layers.HeatConduction;
 import com.crustplan.engine.layers.Layers;
 import com.crustplan.engine.layers.Tridiagonal;
+import com.crustplan.engine.message.Message;
 import com.crustplan.engine.properties.FoodComponent;
 import com.crustplan.engine.properties.ThermalProperties;
 import com.crustplan.engine.water.GabIsotherm;
@@ -312,9 +313,11 @@ public final class CookSimulation implements Layers {
 			series.add(sample());
 		}
 		Outcome outcome = outcome(reachedAt, maxSurface, everDry);
-		String explanation = outcome == Outcome.REACHED ? outcome.explanation() : explain(outcome, maxSurface);
-		List<String> assumptions = new ArrayList<>(setup.assumptions());
-		assumptions.addAll(surfaceAssumptions());
+		// explain and surfaceAssumptions still word their text here: shown as literal messages until given codes
+		Message explanation = outcome == Outcome.REACHED ? outcome.explanation()
+				: Message.of("outcome.explained", outcome.explanation(), Message.literal(explain(outcome, maxSurface)));
+		List<Message> assumptions = new ArrayList<>(setup.assumptions());
+		surfaceAssumptions().forEach(a -> assumptions.add(Message.literal(a)));
 		return new CookResult(outcome, explanation, reachedAt, targetExtent, path.colourAt(targetExtent), ph,
 				coreAtTarget - 273.15, crustAtTarget, portionAtTarget, maxSurface - 273.15, extent[0], time, series, assumptions,
 				new EnergyLedger(heatIn, vapourOut, evaporated),
@@ -353,7 +356,7 @@ public final class CookSimulation implements Layers {
 
 	private String explain(Outcome outcome, double maxSurfaceK) {
 		return String.format("%s Highest surface temperature %.0f °C; browning extent %.2f after %.0f min.",
-				outcome.explanation(), maxSurfaceK - 273.15, extent[0], time / 60);
+				"", maxSurfaceK - 273.15, extent[0], time / 60);
 	}
 
 	private List<String> surfaceAssumptions() {
