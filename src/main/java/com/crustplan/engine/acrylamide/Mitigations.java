@@ -91,7 +91,8 @@ public final class Mitigations {
 		list.add(lighterTarget(b));
 		if (potato) {
 			list.add(rawChange(b, "SOAK", Message.of("mitigation.soak.title"),
-					Message.of("mitigation.soak.change", Quantity.of(SOAK_REMOVAL.value() * 100, "%")), SOAK_REMOVAL, removePrecursors(surface, SOAK_REMOVAL.value(), SOAK_REMOVAL.value())));
+					Message.of("mitigation.soak.change", Quantity.of(SOAK_REMOVAL.value() * 100, "%")), SOAK_REMOVAL,
+					removePrecursors(surface, SOAK_REMOVAL.value(), SOAK_REMOVAL.value())));
 			list.add(rawChange(b, "BLANCH", Message.of("mitigation.blanch.title"),
 					Message.of("mitigation.blanch.change", Temperature.celsius(BLANCH_WATER_C),
 							Quantity.of(BLANCH_REMOVAL.value() * 100, "%")),
