@@ -5,6 +5,7 @@ import java.util.List;
 import com.crustplan.engine.assessment.AcrylamideEstimate;
 import com.crustplan.engine.assessment.AcrylamideZone;
 import com.crustplan.engine.assessment.Mitigation;
+import com.crustplan.engine.message.Message;
 
 /**
  * The acrylamide estimate as the plan shows it. Levels are null where the engine gives no estimate;
@@ -12,8 +13,8 @@ import com.crustplan.engine.assessment.Mitigation;
  * high) null where none can be given.
  */
 public record AcrylamideView(Double crustUgPerKg, Double portionUgPerKg, Double benchmarkUgPerKg, String zone,
-		String zoneLabel, String zoneMeaning, String product, String noBenchmarkReason, String basis,
-		List<String> cautions, List<Mitigation> mitigations) {
+		String zoneLabel, String zoneMeaning, String product, String noBenchmarkReason, Message basis,
+		List<Message> cautions, List<Mitigation> mitigations) {
 
 	public AcrylamideView {
 		cautions = List.copyOf(cautions);

@@ -17,18 +17,19 @@ import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RestController;
 
+import com.crustplan.engine.assessment.Mitigation;
 import com.crustplan.engine.cook.Sample;
 import com.crustplan.engine.food.BrowningStage;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.SurfaceField;
 import com.crustplan.surface.CategoryDefaults;
 import com.crustplan.engine.input.InvalidInputException;
-import com.crustplan.system.TemperatureUnit;
+import com.crustplan.system.MessageText;
 
 import com.fasterxml.jackson.annotation.JsonProperty;
 import tools.jackson.databind.json.JsonMapper;
 
-/** JSON API v1: categories with defaults, and computing a plan without saving it. All in °C and SI. */
+/** JSON API v1: categories with defaults, and computing a plan without saving it. All in °C and SI, text too. */
 @RestController
 @RequestMapping(path = "/api/v1", produces = MediaType.APPLICATION_JSON_VALUE)
 class PlanApiController {
@@ -39,9 +40,12 @@ class PlanApiController {
 
 	private final JsonMapper json;
 
-	PlanApiController(PlanService planner, JsonMapper json) {
+	private final MessageText text;
+
+	PlanApiController(PlanService planner, JsonMapper json, MessageText text) {
 		this.planner = planner;
 		this.json = json;
+		this.text = text;
 	}
 
 	@GetMapping("/categories")
@@ -82,8 +86,8 @@ class PlanApiController {
 	ResponseEntity<?> plan(@RequestBody(required = false) String body) {
 		PlanRequestReader.PlanRequest req = PlanRequestReader.read(body, json);
 		PlanReport r = planner.plan(req.surface(), req.product(), req.setup(), req.target(), req.horizonMinutes(),
-				TemperatureUnit.CELSIUS, req.mitigations());
-		return ResponseEntity.ok(PlanResponse.of(r));
+				req.mitigations());
+		return ResponseEntity.ok(PlanResponse.of(r, text));
 	}
 
 	@ExceptionHandler(PlanRequestReader.BadRequest.class)
@@ -116,8 +120,9 @@ class PlanApiController {
 	record Change(String code, String title, String change, boolean applicable, String reason, String basis,
 			Double beforeUgPerKg, Double afterUgPerKg, Double beforeMinutes, Double afterMinutes, String source) {
 
-		static Change of(com.crustplan.engine.assessment.Mitigation m) {
-			return new Change(m.code(), m.title(), m.change(), m.applicable(), m.reason(), m.basis().meaning(),
+		static Change of(Mitigation m, MessageText text) {
+			return new Change(m.code(), text.celsius(m.title()), text.celsius(m.change()), m.applicable(),
+					text.celsius(m.reason()), text.celsius(m.basis().meaning()),
 					PlanReport.finite(m.beforeUgPerKg()), PlanReport.finite(m.afterUgPerKg()),
 					PlanReport.finite(m.beforeMinutes()), PlanReport.finite(m.afterMinutes()), m.source());
 		}
@@ -128,11 +133,14 @@ class PlanApiController {
 			List<Double> surfaceWaterActivity, List<Double> lightness, List<String> colorHex) {
 	}
 
+	record Warning(String code, String message) {
+	}
+
 	record PlanResponse(boolean reached, String outcome, Double timeToTargetS, @JsonProperty("pH") double ph,
 			Double coreTemperatureAtTargetC, String target, String targetColorHex, Acrylamide acrylamide,
-			Series series, List<PlanWarning> warnings, List<String> cautions, List<String> assumptions) {
+			Series series, List<Warning> warnings, List<String> cautions, List<String> assumptions) {
 
-		static PlanResponse of(PlanReport r) {
+		static PlanResponse of(PlanReport r, MessageText text) {
 			List<Double> t = new ArrayList<>();
 			List<Double> surface = new ArrayList<>();
 			List<Double> core = new ArrayList<>();
@@ -148,12 +156,13 @@ class PlanApiController {
 				hex.add(s.colourHex());
 			}
 			AcrylamideView a = r.acrylamide();
-			return new PlanResponse(r.reached(), r.result().explanation(), r.timeToTargetS(), r.surface().ph(),
-					r.coreTemperatureAtTargetC(), r.targetLabel(), r.targetHex(),
+			return new PlanResponse(r.reached(), text.celsius(r.result().explanation()), r.timeToTargetS(),
+					r.surface().ph(), r.coreTemperatureAtTargetC(), text.celsius(r.targetLabel()), r.targetHex(),
 					new Acrylamide(a.crustUgPerKg(), a.portionUgPerKg(), a.benchmarkUgPerKg(), a.zone(), a.product(),
-							a.basis(), a.mitigations().stream().map(Change::of).toList()),
-					new Series(t, surface, core, aw, lightness, hex), r.warnings(), r.cautions(),
-					r.result().assumptions());
+							text.celsius(a.basis()), a.mitigations().stream().map(m -> Change.of(m, text)).toList()),
+					new Series(t, surface, core, aw, lightness, hex),
+					r.warnings().stream().map(w -> new Warning(w.code(), text.celsius(w.message()))).toList(),
+					text.celsius(r.cautions()), text.celsius(r.result().assumptions()));
 		}
 
 	}

@@ -129,7 +129,7 @@ class PlanController {
 		try {
 			PlanInputs inputs = saved.inputs(plan);
 			PlanReport report = planner.plan(inputs.surface().toSurface(), inputs.surface().toProduct(),
-					inputs.setup().toHeatSetup(), inputs.target(), inputs.horizonMinutes(), units, true);
+					inputs.setup().toHeatSetup(), inputs.target(), inputs.horizonMinutes(), true);
 			addReport(model, report, units);
 		}
 		catch (InvalidInputException e) {
@@ -193,7 +193,7 @@ class PlanController {
 			Model model) {
 		try {
 			PlanReport report = planner.plan(inputs.surface().toSurface(), inputs.surface().toProduct(),
-					inputs.setup().toHeatSetup(), inputs.target(), inputs.horizonMinutes(), units, true);
+					inputs.setup().toHeatSetup(), inputs.target(), inputs.horizonMinutes(), true);
 			addReport(model, report, units);
 			return report;
 		}

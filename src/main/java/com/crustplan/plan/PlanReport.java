@@ -6,10 +6,11 @@ import com.crustplan.engine.cook.CookResult;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.message.Message;
 
 /** Everything a plan page or the API shows, computed once by {@link PlanService}. */
-public record PlanReport(Surface surface, HeatSetup setup, String targetLabel, double horizonMinutes,
-		CookResult result, List<PlanWarning> warnings, List<String> cautions, AcrylamideView acrylamide,
+public record PlanReport(Surface surface, HeatSetup setup, Message targetLabel, double horizonMinutes,
+		CookResult result, List<PlanWarning> warnings, List<Message> cautions, AcrylamideView acrylamide,
 		List<Swatch> swatches) {
 
 	public FoodCategory category() {

@@ -23,11 +23,16 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
-import com.crustplan.system.TemperatureUnit;
+import com.crustplan.engine.message.Message;
+import com.crustplan.engine.message.PlainNumber;
+import com.crustplan.engine.message.StatedTemperature;
+import com.crustplan.engine.message.Temperature;
+import com.crustplan.engine.message.Text;
 
 /**
  * The one place the web app runs the engine: takes engine inputs (never entities), runs the cook and
- * adds what a kitchen needs around the numbers (warnings with reasons, the usual cautions, swatches).
+ * adds what a kitchen needs around the numbers (warnings with reasons, the usual cautions, swatches),
+ * all as messages that the page renders in the cook's unit.
  * A new simulation per call: nothing stateful is shared between requests.
  */
 @Service
@@ -60,9 +65,8 @@ public class PlanService {
 	static final double ALKALINE_PH = 7;
 
 	/** A plan for the category's usual product, with the acrylamide changes worked out. */
-	public PlanReport plan(Surface surface, HeatSetup setup, Target target, double horizonMinutes,
-			TemperatureUnit unit) {
-		return plan(surface, Product.defaultFor(surface.category()), setup, target, horizonMinutes, unit, true);
+	public PlanReport plan(Surface surface, HeatSetup setup, Target target, double horizonMinutes) {
+		return plan(surface, Product.defaultFor(surface.category()), setup, target, horizonMinutes, true);
 	}
 
 	/**
@@ -71,7 +75,7 @@ public class PlanService {
 	 * (a few hundred milliseconds)
 	 */
 	public PlanReport plan(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
-			TemperatureUnit unit, boolean withMitigations) {
+			boolean withMitigations) {
 		if (!Double.isFinite(horizonMinutes) || horizonMinutes < 1 || horizonMinutes > MAX_HORIZON_MINUTES) {
 			throw new InvalidInputException("horizonMinutes",
 					String.format(Locale.ROOT, "must be from 1 to %.0f minutes", MAX_HORIZON_MINUTES));
@@ -82,69 +86,56 @@ public class PlanService {
 		// where no benchmark applies (meat, fish, vegetables) acrylamide is not the kitchen's concern: no changes offered
 		List<Mitigation> mitigations = withMitigations && product.benchmark().isPresent()
 				? Mitigations.compute(surface, product, setup, target, settings) : List.of();
-		List<PlanWarning> warnings = warnings(surface, setup, result, unit);
+		List<PlanWarning> warnings = warnings(surface, result);
 		for (AcrylamideWarning a : estimate.warnings()) {
 			warnings.add(new PlanWarning(a.code().toLowerCase(Locale.ROOT).replace('_', '-'),
-					a.message() + " (" + a.basis() + ")"));
+					Message.of("warning.with-basis", a.message(), Text.of(a.basis()))));
 		}
 		return new PlanReport(surface, setup, target.describe(surface.category()), horizonMinutes, result, warnings,
 				cautions(surface, setup), AcrylamideView.of(estimate, mitigations), swatches(result));
 	}
 
-	private static List<PlanWarning> warnings(Surface surface, HeatSetup setup, CookResult result, TemperatureUnit u) {
+	private static List<PlanWarning> warnings(Surface surface, CookResult result) {
 		List<PlanWarning> w = new ArrayList<>();
 		if (!result.reached()) {
-			w.add(new PlanWarning("target-not-reached", "The target colour is not reached: " + result.explanation()));
+			w.add(new PlanWarning("target-not-reached", Message.of("warning.target-not-reached", result.explanation())));
 		}
 		double core = result.coreTemperatureAtTargetC();
 		FoodCategory c = surface.category();
 		if (result.reached() && Double.isFinite(core)) {
 			if (c == FoodCategory.POULTRY_SKIN && core < FOOD_CODE_POULTRY_C) {
-				w.add(new PlanWarning("core-below-food-code", String.format(Locale.ROOT,
-						"When the skin reaches the target colour the core is predicted at %s, below the %s poultry "
-								+ "needs (FDA Food Code 2022, 3-401.11): finish at a lower heat and probe it.",
-						u.format(core), code(u, FOOD_CODE_POULTRY_C, FOOD_CODE_POULTRY_F))));
+				w.add(new PlanWarning("core-below-food-code", Message.of("warning.food-code.poultry",
+						Temperature.celsius(core), StatedTemperature.of(FOOD_CODE_POULTRY_C, FOOD_CODE_POULTRY_F))));
 			}
 			else if ((c == FoodCategory.MEAT || c == FoodCategory.FISH) && core < FOOD_CODE_WHOLE_CUT_C) {
-				w.add(new PlanWarning("core-below-food-code", String.format(Locale.ROOT,
-						"When the surface reaches the target colour the core is predicted at %s, below %s for 15 s "
-								+ "(FDA Food Code 2022, 3-401.11, whole cuts; %s for minced). Serve it undercooked "
-								+ "only where your food code allows it, with the advisory it requires.",
-						u.format(core), code(u, FOOD_CODE_WHOLE_CUT_C, FOOD_CODE_WHOLE_CUT_F),
-						code(u, FOOD_CODE_COMMINUTED_C, FOOD_CODE_COMMINUTED_F))));
+				w.add(new PlanWarning("core-below-food-code", Message.of("warning.food-code.whole-cut",
+						Temperature.celsius(core), StatedTemperature.of(FOOD_CODE_WHOLE_CUT_C, FOOD_CODE_WHOLE_CUT_F),
+						StatedTemperature.of(FOOD_CODE_COMMINUTED_C, FOOD_CODE_COMMINUTED_F))));
 			}
 		}
 		if (surface.ph() > ALKALINE_PH) {
-			w.add(new PlanWarning("alkaline-surface", String.format(Locale.ROOT,
-					"The additions bring the surface to pH %.1f: above neutral browning runs faster and, in "
-							+ "starchy foods, more acrylamide forms.",
-					surface.ph())));
+			w.add(new PlanWarning("alkaline-surface",
+					Message.of("warning.alkaline-surface", PlainNumber.of(surface.ph(), 1))));
 		}
 		return w;
 	}
 
-	private static String code(TemperatureUnit u, double c, double f) {
-		return u == TemperatureUnit.FAHRENHEIT ? String.format(Locale.ROOT, "%.0f °F", f)
-				: String.format(Locale.ROOT, "%.0f °C", c);
-	}
-
-	private static List<String> cautions(Surface surface, HeatSetup setup) {
-		List<String> c = new ArrayList<>();
-		c.add(AcrylamideCautions.CARCINOGEN + " " + AcrylamideCautions.ESTIMATE);
-		c.add("Check the core temperature with a calibrated probe thermometer: the predicted core temperature "
-				+ "is an estimate for a slab of even thickness.");
-		c.add("Follow your local food code and licensed practice. For reference, the FDA Food Code 2022, section "
-				+ "3-401.11, asks for 63 °C (145 °F) for 15 s for whole cuts of meat and fish, 68 °C (155 °F) for "
-				+ "17 s for minced meat and fish, and 74 °C (165 °F) for under 1 s for poultry.");
+	private static List<Message> cautions(Surface surface, HeatSetup setup) {
+		List<Message> c = new ArrayList<>();
+		c.add(Message.of("caution.joined", AcrylamideCautions.CARCINOGEN, AcrylamideCautions.ESTIMATE));
+		c.add(Message.of("caution.probe"));
+		// the code's own figures in both scales: a °F page shows 155 °F, not 154 °F converted from 68 °C
+		c.add(Message.of("caution.food-code", StatedTemperature.withFahrenheit(FOOD_CODE_WHOLE_CUT_C, FOOD_CODE_WHOLE_CUT_F),
+				StatedTemperature.withFahrenheit(FOOD_CODE_COMMINUTED_C, FOOD_CODE_COMMINUTED_F),
+				StatedTemperature.withFahrenheit(FOOD_CODE_POULTRY_C, FOOD_CODE_POULTRY_F)));
 		if (setup instanceof HeatSetup.DeepFryer) {
-			c.add("Hot oil: lower food in slowly and dry, never add water, fill only to the mark, and keep a lid "
-					+ "and a fire extinguisher for cooking oil (class F / K) at hand.");
+			c.add(Message.of("caution.hot-oil"));
 		}
 		if (setup instanceof HeatSetup.PanContact) {
-			c.add("Hot pan and fat: turn food away from you and keep handles off the flame.");
+			c.add(Message.of("caution.hot-pan"));
 		}
 		if (surface.bicarbonateGPerKg() > 0) {
-			c.add("Bicarbonate raises the surface pH: colour comes faster, so check earlier than usual.");
+			c.add(Message.of("caution.bicarbonate"));
 		}
 		return c;
 	}

@@ -5,13 +5,14 @@ import java.util.List;
 
 import com.crustplan.engine.assessment.RiskMap;
 import com.crustplan.engine.colour.ColourPath;
+import com.crustplan.engine.message.Message;
 
 /**
  * The acrylamide risk map as the page shows it: set temperatures down, times across, each cell the
  * predicted colour with the acrylamide zone of the portion; the first cell at or past the target per row.
  */
-public record RiskMapView(String surfaceName, String setupName, String targetLabel, String product,
-		Double benchmarkUgPerKg, List<Double> timesS, List<Row> rows, List<String> cautions) {
+public record RiskMapView(String surfaceName, String setupName, Message targetLabel, String product,
+		Double benchmarkUgPerKg, List<Double> timesS, List<Row> rows, List<Message> cautions) {
 
 	public record Row(double temperatureC, Double targetTimeS, Double targetPortionUgPerKg, List<Cell> cells) {
 	}

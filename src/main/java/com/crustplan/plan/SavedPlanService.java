@@ -5,6 +5,7 @@ import java.util.List;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
+import com.crustplan.system.MessageText;
 import com.crustplan.system.NotFoundException;
 import com.crustplan.system.TemperatureUnit;
 
@@ -18,9 +19,12 @@ public class SavedPlanService {
 
 	private final JsonMapper json;
 
-	SavedPlanService(SavedPlanRepository plans, JsonMapper json) {
+	private final MessageText text;
+
+	SavedPlanService(SavedPlanRepository plans, JsonMapper json, MessageText text) {
 		this.plans = plans;
 		this.json = json;
+		this.text = text;
 	}
 
 	@Transactional
@@ -29,7 +33,8 @@ public class SavedPlanService {
 		PlanInputs celsius = new PlanInputs(inputs.surface().inUnit(TemperatureUnit.CELSIUS),
 				inputs.setup().inUnit(TemperatureUnit.CELSIUS), inputs.targetStage(), inputs.targetLightness(),
 				inputs.horizonMinutes());
-		return plans.save(new SavedPlan(name.trim(), surfaceName, setupName, report.targetLabel(),
+		// the label is kept as text for the list of plans; a target is a stage or an L*, never a temperature
+		return plans.save(new SavedPlan(name.trim(), surfaceName, setupName, text.celsius(report.targetLabel()),
 				json.writeValueAsString(celsius), report.reached(), report.timeToTargetS(), username));
 	}
 

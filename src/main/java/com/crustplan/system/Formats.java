@@ -97,9 +97,4 @@ public class Formats {
 		return v == null ? "–" : number(v, digits);
 	}
 
-	/** Engine prose (assumptions, explanations, warnings, changes) with temperatures in the cook's unit. */
-	public String prose(String text, TemperatureUnit unit) {
-		return unit == null ? text : unit.inText(text);
-	}
-
 }

@@ -54,27 +54,6 @@ public enum TemperatureUnit {
 		return this == CELSIUS ? dc : dc * 9 / 5;
 	}
 
-	// "220 °C", "100–103 °C": the engine and the acrylamide model word their prose in °C
-	private static final java.util.regex.Pattern CELSIUS_IN_TEXT = java.util.regex.Pattern
-		.compile("(-?\\d+(?:\\.\\d+)?)(?:(\\s?[–-]\\s?)(\\d+(?:\\.\\d+)?))?\\s?°C");
-
-	/** Prose with its temperatures (absolute ones, as the engine writes them) shown in this unit. */
-	public String inText(String text) {
-		if (this == CELSIUS || text == null) {
-			return text;
-		}
-		java.util.regex.Matcher m = CELSIUS_IN_TEXT.matcher(text);
-		StringBuilder out = new StringBuilder();
-		while (m.find()) {
-			String first = String.format(Locale.ROOT, "%.0f", fromCelsius(Double.parseDouble(m.group(1))));
-			String range = m.group(3) == null ? ""
-					: m.group(2) + String.format(Locale.ROOT, "%.0f", fromCelsius(Double.parseDouble(m.group(3))));
-			m.appendReplacement(out, java.util.regex.Matcher.quoteReplacement(first + range + " " + symbol));
-		}
-		m.appendTail(out);
-		return out.toString();
-	}
-
 	public String format(double c) {
 		if (!Double.isFinite(c)) {
 			return "–";

@@ -14,6 +14,8 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.view;
 
+import jakarta.servlet.http.Cookie;
+
 import org.junit.jupiter.api.Nested;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
@@ -69,6 +71,21 @@ class PlanPagesTest {
 			// the acrylamide section: the estimate where the engine gives one, otherwise it says so
 			.andExpect(content().string(org.hamcrest.Matchers.anyOf(containsString("Estimate not available"),
 					containsString("µg/kg</dd>"))));
+	}
+
+	@Test
+	void shouldShowTheWholeReportInFahrenheitWithoutACelsiusFigure() throws Exception {
+		// the demo's 175 °C fryer: the below-175 °C measure of Regulation (EU) 2017/2158, Annex II, and the
+		// FDA Food Code figures in the cautions are all shown in °F (°F = °C × 9/5 + 32, NIST SP 811 §B.9)
+		String page = mvc
+			.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetStage", "golden")
+				.cookie(new Cookie("crustplan-units", "F")))
+			.andExpect(status().isOk())
+			.andReturn()
+			.getResponse()
+			.getContentAsString();
+		String report = page.substring(page.indexOf("id=\"report\""));
+		assertThat(report).contains("°F", "145 °F for 15 s", "155 °F for 17 s").doesNotContain("°C", "154 °F");
 	}
 
 	@Test

@@ -12,6 +12,7 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.system.MessageText;
 import com.crustplan.system.TemperatureUnit;
 
 /** What the plan service adds around the engine's numbers: warnings, cautions, swatches. No Spring. */
@@ -19,31 +20,34 @@ class PlanServiceTest {
 
 	final PlanService planner = new PlanService();
 
+	/** The report speaks in codes; a page renders them in the cook's unit. */
+	final MessageText text = new MessageText();
+
 	/** A 60 mm skin-on piece in a 240 °C pan: the skin colours long before the core is safe. */
-	PlanReport thickChicken(TemperatureUnit unit) {
+	PlanReport thickChicken() {
 		Surface s = Surface.defaults(FoodCategory.POULTRY_SKIN).withThicknessMm(60);
-		return planner.plan(s, new HeatSetup.PanContact(240, true, 0), Target.stage("light-golden"), 30, unit);
+		return planner.plan(s, new HeatSetup.PanContact(240, true, 0), Target.stage("light-golden"), 30);
 	}
 
 	@Test
 	void shouldWarnWhenPoultryIsColouredBeforeTheFoodCodeCoreTemperature() {
-		PlanReport r = thickChicken(TemperatureUnit.FAHRENHEIT);
+		PlanReport r = thickChicken();
 		assertThat(r.reached()).isTrue();
 		assertThat(r.coreTemperatureAtTargetC()).isLessThan(74.0);
 		PlanWarning w = r.warnings().stream().filter(x -> x.code().equals("core-below-food-code")).findFirst()
 			.orElseThrow();
 		// FDA Food Code 2022, 3-401.11(A)(3): poultry 165 °F (74 °C), the code's own °F figure
-		assertThat(w.message()).contains("165 °F").contains("FDA Food Code 2022");
-		assertThat(thickChicken(TemperatureUnit.CELSIUS).warnings().stream()
+		assertThat(text.render(w.message(), TemperatureUnit.FAHRENHEIT)).contains("165 °F").contains("FDA Food Code 2022");
+		assertThat(text.render(thickChicken().warnings().stream()
 			.filter(x -> x.code().equals("core-below-food-code"))
 			.findFirst()
 			.orElseThrow()
-			.message()).contains("74 °C");
+			.message(), TemperatureUnit.CELSIUS)).contains("74 °C");
 	}
 
 	@Test
 	void shouldAlwaysCarryTheUsualCautions() {
-		List<String> c = thickChicken(TemperatureUnit.CELSIUS).cautions();
+		List<String> c = text.render(thickChicken().cautions(), TemperatureUnit.CELSIUS);
 		assertThat(c).anySatisfy(x -> assertThat(x).contains("Group 2A"));
 		assertThat(c).anySatisfy(x -> assertThat(x).contains("probe"));
 		// FDA Food Code 2022 3-401.11: 63 °C 15 s whole cuts, 68 °C 17 s minced, 74 °C < 1 s poultry
@@ -55,15 +59,14 @@ class PlanServiceTest {
 	@Test
 	void shouldCautionAboutHotOilOnlyForTheFryer() {
 		Surface chips = Surface.defaults(FoodCategory.POTATO);
-		PlanReport fried = planner.plan(chips, new HeatSetup.DeepFryer(170), Target.stage("light-golden"), 20,
-				TemperatureUnit.CELSIUS);
-		assertThat(fried.cautions()).anySatisfy(x -> assertThat(x).startsWith("Hot oil"));
-		assertThat(thickChicken(TemperatureUnit.CELSIUS).cautions()).noneSatisfy(x -> assertThat(x).startsWith("Hot oil"));
+		PlanReport fried = planner.plan(chips, new HeatSetup.DeepFryer(170), Target.stage("light-golden"), 20);
+		assertThat(text.celsius(fried.cautions())).anySatisfy(x -> assertThat(x).startsWith("Hot oil"));
+		assertThat(text.celsius(thickChicken().cautions())).noneSatisfy(x -> assertThat(x).startsWith("Hot oil"));
 	}
 
 	@Test
 	void shouldMarkExactlyOneTargetSwatchInTimeOrder() {
-		PlanReport r = thickChicken(TemperatureUnit.CELSIUS);
+		PlanReport r = thickChicken();
 		List<Swatch> s = r.swatches();
 		assertThat(s).hasSizeBetween(5, PlanService.SWATCHES);
 		assertThat(s.stream().filter(Swatch::target)).hasSize(1);
@@ -80,18 +83,18 @@ class PlanServiceTest {
 	void shouldRefuseAHorizonOutsideOneMinuteToSixHours() {
 		Surface s = Surface.defaults(FoodCategory.MEAT);
 		HeatSetup pan = new HeatSetup.PanContact(220, true, 60);
-		assertThatThrownBy(() -> planner.plan(s, pan, Target.stage("browned"), 0, TemperatureUnit.CELSIUS))
+		assertThatThrownBy(() -> planner.plan(s, pan, Target.stage("browned"), 0))
 			.isInstanceOf(InvalidInputException.class)
 			.extracting(e -> ((InvalidInputException) e).field())
 			.isEqualTo("horizonMinutes");
-		assertThatThrownBy(() -> planner.plan(s, pan, Target.stage("browned"), 361, TemperatureUnit.CELSIUS))
+		assertThatThrownBy(() -> planner.plan(s, pan, Target.stage("browned"), 361))
 			.isInstanceOf(InvalidInputException.class);
 	}
 
 	@Test
 	void shouldShowAnAcrylamideEstimateExactlyWhenTheEngineGivesOne() {
 		// the engine's acrylamide fields are NaN until its acrylamide model is in; then the page shows them
-		PlanReport r = thickChicken(TemperatureUnit.CELSIUS);
+		PlanReport r = thickChicken();
 		assertThat(r.acrylamide().available())
 			.isEqualTo(Double.isFinite(r.result().crustAcrylamideAtTargetUgPerKg())
 					|| Double.isFinite(r.result().portionAcrylamideAtTargetUgPerKg()));

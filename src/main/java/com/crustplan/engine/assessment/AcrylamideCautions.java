@@ -2,19 +2,22 @@ package com.crustplan.engine.assessment;
 
 import java.util.List;
 
+import com.crustplan.engine.message.Message;
+
 /** The cautions shown with every acrylamide estimate. */
 public final class AcrylamideCautions {
 
 	/** IARC Monographs vol. 60 (1994): acrylamide, Group 2A. */
-	public static final String CARCINOGEN = "Acrylamide is classified by the International Agency for Research on Cancer (IARC) as probably carcinogenic to humans (Group 2A).";
+	public static final Message CARCINOGEN = Message.of("caution.acrylamide.carcinogen");
 
-	public static final String ESTIMATE = "This figure is a model estimate for planning, not an analysis. Real levels depend on the variety, storage, cut, oil and equipment and can differ several-fold.";
+	public static final Message ESTIMATE = Message.of("caution.acrylamide.estimate");
 
-	public static final String AUTHORITY = "Only a laboratory analysis shows the actual level, and your local food authority decides what a business must do about it.";
+	public static final Message AUTHORITY = Message.of("caution.acrylamide.authority");
 
-	public static final String BENCHMARK_MEANING = "Benchmark levels (Regulation (EU) 2017/2158) are performance indicators for the reduction measures, not legal maximum limits.";
+	/** Regulation (EU) 2017/2158: benchmark levels are performance indicators, not limits. */
+	public static final Message BENCHMARK_MEANING = Message.of("caution.acrylamide.benchmark-meaning");
 
-	public static final List<String> ALL = List.of(CARCINOGEN, ESTIMATE, AUTHORITY, BENCHMARK_MEANING);
+	public static final List<Message> ALL = List.of(CARCINOGEN, ESTIMATE, AUTHORITY, BENCHMARK_MEANING);
 
 	private AcrylamideCautions() {
 	}

@@ -9,6 +9,7 @@ import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.message.Message;
 
 /**
  * Acrylamide for one planned cook: crust and portion levels (µg/kg as eaten), the product's benchmark,
@@ -16,10 +17,11 @@ import com.crustplan.engine.heat.HeatSetup;
  * at the end of the run ({@code atTarget} false).
  */
 public record AcrylamideEstimate(double crustUgPerKg, double portionUgPerKg, boolean atTarget, Product product,
-		BenchmarkLevel benchmarkOrNull, AcrylamideZone zone, List<AcrylamideWarning> warnings, String basis,
-		List<String> cautions) {
+		BenchmarkLevel benchmarkOrNull, AcrylamideZone zone, List<AcrylamideWarning> warnings, Message basis,
+		List<Message> cautions) {
 
-	public static final String BASIS = "µg per kg of food as eaten (fresh weight, frying oil not counted). Crust: the outer 1 mm of the surface. Portion: the whole piece, as a laboratory would analyse it; the zone uses the portion.";
+	/** What the figures are: fresh weight as eaten, crust the outer 1 mm, portion the whole piece. */
+	public static final Message BASIS = Message.of("acrylamide.basis");
 
 	public AcrylamideEstimate {
 		warnings = List.copyOf(warnings);

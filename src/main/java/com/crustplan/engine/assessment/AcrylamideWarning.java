@@ -1,10 +1,13 @@
 package com.crustplan.engine.assessment;
 
+import com.crustplan.engine.message.Message;
+
 /**
  * A setup that breaks one of the acrylamide measures of Regulation (EU) 2017/2158 Annex II (retail and
- * catering), or an estimate over its benchmark: a stable code for the page and a message a cook acts on.
+ * catering), or an estimate over its benchmark: a stable code for the page, a message a cook acts on and
+ * the citation it rests on.
  */
-public record AcrylamideWarning(String code, String message, String basis) {
+public record AcrylamideWarning(String code, Message message, String basis) {
 
 	public static final String FRYING_TOO_HOT = "FRYING_AT_175_OR_ABOVE";
 

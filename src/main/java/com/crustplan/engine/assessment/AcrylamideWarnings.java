@@ -9,6 +9,10 @@ import com.crustplan.engine.food.BrowningStage;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.message.Message;
+import com.crustplan.engine.message.Quantity;
+import com.crustplan.engine.message.Temperature;
+import com.crustplan.engine.message.Text;
 import com.crustplan.engine.model.Parameter;
 
 /** Checks a setup against the retail and catering measures of Regulation (EU) 2017/2158, Annex II. */
@@ -21,6 +25,9 @@ public final class AcrylamideWarnings {
 
 	public static final Parameter HIGH_SUGAR_PCT = Parameter.fromMemory("RS,high", "reducing sugar above which a potato is a high-sugar lot",
 			0.5, "%", "frying-quality potatoes usually hold well under 0.5 % reducing sugar fresh weight (from memory)");
+
+	/** Store potatoes above this (Regulation (EU) 2017/2158, Annex II Part A: storage above 6 °C). */
+	public static final double WARM_STORAGE_C = 6;
 
 	/** The darkest stage a colour guide for the category recommends (common practice: fries and bread cooked to golden). */
 	public static final String GUIDE_STAGE = "golden";
@@ -35,38 +42,43 @@ public final class AcrylamideWarnings {
 		FoodCategory category = surface.category();
 		if (category == FoodCategory.POTATO && setup instanceof HeatSetup.DeepFryer fryer
 				&& fryer.oilTemperatureC() >= MAX_FRYING_C.value()) {
-			list.add(new AcrylamideWarning(AcrylamideWarning.FRYING_TOO_HOT, String.format(
-					"Oil at %.0f °C: fry potato products below %.0f °C, and as low as food safety allows. Hotter oil gives a browner, higher-acrylamide fry for the same cooking.",
-					fryer.oilTemperatureC(), MAX_FRYING_C.value()), ANNEX_II + ", Part A (French fries)"));
+			list.add(new AcrylamideWarning(AcrylamideWarning.FRYING_TOO_HOT,
+					Message.of("warning.acrylamide.frying-too-hot", Temperature.celsius(fryer.oilTemperatureC()),
+							Temperature.celsius(MAX_FRYING_C.value())),
+					ANNEX_II + ", Part A (French fries)"));
 		}
 		if (guideApplies(category)) {
 			category.stage(GUIDE_STAGE).ifPresent(guide -> {
 				double guideExtent = guide.extentOn(category.colourPath());
 				double targetExtent = target.extentFor(category);
 				if (targetExtent > guideExtent + 1e-9) {
-					list.add(new AcrylamideWarning(AcrylamideWarning.DARKER_THAN_GUIDE, String.format(
-							"The target (%s) is darker than %s. Cook to %s or lighter and keep a colour guide where staff can see it.",
-							target.describe(category), guide.label().toLowerCase(), guide.label().toLowerCase()),
+					list.add(new AcrylamideWarning(AcrylamideWarning.DARKER_THAN_GUIDE,
+							Message.of("warning.acrylamide.darker-than-guide", target.describe(category),
+									Text.of(guide.label().toLowerCase())),
 							ANNEX_II + ", Part A (colour guides; bake and toast to a lighter colour)"));
 				}
 			});
 		}
 		if (category == FoodCategory.POTATO && surface.composition().reducingSugarPct() > HIGH_SUGAR_PCT.value()) {
-			list.add(new AcrylamideWarning(AcrylamideWarning.HIGH_SUGAR_POTATO, String.format(
-					"This potato has %.2f %% reducing sugar, a high-sugar lot: choose a lower-sugar variety, store potatoes above 6 °C (cold storage sweetens them) and soak or blanch the cut potatoes before frying.",
-					surface.composition().reducingSugarPct()), ANNEX_II + ", Part A (varieties, storage, soaking)"));
+			list.add(new AcrylamideWarning(AcrylamideWarning.HIGH_SUGAR_POTATO,
+					Message.of("warning.acrylamide.high-sugar-potato",
+							Quantity.of(surface.composition().reducingSugarPct(), "%", 2),
+							Temperature.celsius(WARM_STORAGE_C)),
+					ANNEX_II + ", Part A (varieties, storage, soaking)"));
 		}
 		product.benchmark().ifPresent(b -> {
 			AcrylamideZone zone = b.zoneOf(portionUgPerKg);
 			if (zone == AcrylamideZone.HIGH) {
-				list.add(new AcrylamideWarning(AcrylamideWarning.OVER_BENCHMARK, String.format(
-						"Estimated %.0f µg/kg, over the benchmark level of %.0f µg/kg for %s. See the suggested changes.",
-						portionUgPerKg, b.microgramsPerKg(), product.label().toLowerCase()), BenchmarkLevel.SOURCE));
+				list.add(new AcrylamideWarning(AcrylamideWarning.OVER_BENCHMARK,
+						Message.of("warning.acrylamide.over-benchmark", Quantity.of(portionUgPerKg, "µg/kg"),
+								Quantity.of(b.microgramsPerKg(), "µg/kg"), Text.of(product.label().toLowerCase())),
+						BenchmarkLevel.SOURCE));
 			}
 			else if (zone == AcrylamideZone.ELEVATED) {
-				list.add(new AcrylamideWarning(AcrylamideWarning.NEAR_BENCHMARK, String.format(
-						"Estimated %.0f µg/kg, more than half the benchmark level of %.0f µg/kg for %s.", portionUgPerKg,
-						b.microgramsPerKg(), product.label().toLowerCase()), BenchmarkLevel.SOURCE));
+				list.add(new AcrylamideWarning(AcrylamideWarning.NEAR_BENCHMARK,
+						Message.of("warning.acrylamide.near-benchmark", Quantity.of(portionUgPerKg, "µg/kg"),
+								Quantity.of(b.microgramsPerKg(), "µg/kg"), Text.of(product.label().toLowerCase())),
+						BenchmarkLevel.SOURCE));
 			}
 		});
 		return list;

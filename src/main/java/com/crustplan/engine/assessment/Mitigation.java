@@ -1,12 +1,13 @@
 package com.crustplan.engine.assessment;
 
+import com.crustplan.engine.message.Message;
 import com.crustplan.engine.model.Evidence;
 
 /**
  * One change a cook can make, computed by running the model again: portion acrylamide (µg/kg as eaten)
  * and cooking time before and after. {@code applicable} false with a reason where the change does not
  * apply or its run does not reach the target; an applicable change may carry a note in {@code reason}
- * (for example when the model finds no gain).
+ * (for example when the model finds no gain), null where it has none. {@code source} is the citation.
  * <p>
  * Changes of cooking ({@link Basis#SAME_COLOUR}) compare both cooks at the target colour. Changes of the
  * raw material ({@link Basis#SAME_TIME}: soaking, blanching, enzyme, acid, storage) compare both cooks
@@ -14,22 +15,21 @@ import com.crustplan.engine.model.Evidence;
  * longer (or shorter) the changed food takes to reach the same colour, and
  * {@code afterAtSameColourUgPerKg} what it holds if cooked on to that colour.
  */
-public record Mitigation(String code, String title, String change, String source, Evidence evidence, boolean applicable,
-		String reason, Basis basis, double beforeUgPerKg, double afterUgPerKg, double beforeMinutes, double afterMinutes,
+public record Mitigation(String code, Message title, Message change, String source, Evidence evidence, boolean applicable,
+		Message reason, Basis basis, double beforeUgPerKg, double afterUgPerKg, double beforeMinutes, double afterMinutes,
 		double afterAtSameColourUgPerKg) {
 
 	public enum Basis {
 
-		SAME_COLOUR("both cooked to the target colour"),
-		SAME_TIME("both cooked for the same time; the changed food comes out lighter");
+		SAME_COLOUR(Message.of("mitigation.basis.same-colour")), SAME_TIME(Message.of("mitigation.basis.same-time"));
 
-		private final String meaning;
+		private final Message meaning;
 
-		Basis(String meaning) {
+		Basis(Message meaning) {
 			this.meaning = meaning;
 		}
 
-		public String meaning() {
+		public Message meaning() {
 			return meaning;
 		}
 
@@ -50,8 +50,8 @@ public record Mitigation(String code, String title, String change, String source
 		return beforeUgPerKg > 0 ? afterUgPerKg / beforeUgPerKg - 1 : 0;
 	}
 
-	static Mitigation notApplicable(String code, String title, String change, String source, Evidence evidence, Basis basis,
-			String reason) {
+	static Mitigation notApplicable(String code, Message title, Message change, String source, Evidence evidence, Basis basis,
+			Message reason) {
 		return new Mitigation(code, title, change, source, evidence, false, reason, basis, Double.NaN, Double.NaN, Double.NaN,
 				Double.NaN, Double.NaN);
 	}

@@ -14,6 +14,11 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.message.Message;
+import com.crustplan.engine.message.PlainNumber;
+import com.crustplan.engine.message.Quantity;
+import com.crustplan.engine.message.Temperature;
+import com.crustplan.engine.message.Text;
 import com.crustplan.engine.model.Evidence;
 import com.crustplan.engine.model.Parameter;
 
@@ -56,6 +61,9 @@ public final class Mitigations {
 	public static final Parameter GRILL_STEP_C = Parameter.commonPractice("ΔT_grill", "heater temperature step for grilling lower", 100,
 			"°C", "a radiant element runs at 600–1000 °C; one step lower on the dial (common practice)");
 
+	/** Blanching water as in Pedreschi et al. 2005 (85 °C, 3.5 min), the source of {@link #BLANCH_REMOVAL}. */
+	static final double BLANCH_WATER_C = 85;
+
 	private static final String LIGHTER_SOURCE = "Regulation (EU) 2017/2158, Annex II: cook, bake and toast to a lighter colour; the stages are the category's own";
 
 	private Mitigations() {
@@ -72,29 +80,31 @@ public final class Mitigations {
 		FoodCategory category = surface.category();
 		boolean potato = category == FoodCategory.POTATO;
 		if (!baseline.reached()) {
-			list.add(Mitigation.notApplicable("NO_BASELINE", "No comparison", "—", "—", Evidence.ASSUMPTION, Mitigation.Basis.SAME_COLOUR,
-					"The planned cook does not reach the target colour, so there is no acrylamide at the target to compare."));
+			list.add(Mitigation.notApplicable("NO_BASELINE", Message.of("mitigation.no-baseline.title"),
+					Message.of("mitigation.no-baseline.change"), "—", Evidence.ASSUMPTION, Mitigation.Basis.SAME_COLOUR,
+					Message.of("mitigation.no-baseline.reason")));
 			return list;
 		}
 		Baseline b = new Baseline(surface, setup, target, settings, baseline);
 		list.add(lowerTemperature(b));
 		list.add(lighterTarget(b));
 		if (potato) {
-			list.add(rawChange(b, "SOAK", "Soak before frying", String.format(
-					"soak the cut potatoes 30 min–2 h in cold water and rinse (removes about %.0f %% of sugars and asparagine)",
-					SOAK_REMOVAL.value() * 100), SOAK_REMOVAL, removePrecursors(surface, SOAK_REMOVAL.value(), SOAK_REMOVAL.value())));
-			list.add(rawChange(b, "BLANCH", "Blanch before frying", String.format(
-					"blanch in hot water (about 85 °C, 3–4 min) before frying (removes about %.0f %% of sugars and asparagine)",
-					BLANCH_REMOVAL.value() * 100), BLANCH_REMOVAL, removePrecursors(surface, BLANCH_REMOVAL.value(), BLANCH_REMOVAL.value())));
+			list.add(rawChange(b, "SOAK", Message.of("mitigation.soak.title"),
+					Message.of("mitigation.soak.change", Quantity.of(SOAK_REMOVAL.value() * 100, "%")), SOAK_REMOVAL,
+					removePrecursors(surface, SOAK_REMOVAL.value(), SOAK_REMOVAL.value())));
+			list.add(rawChange(b, "BLANCH", Message.of("mitigation.blanch.title"),
+					Message.of("mitigation.blanch.change", Temperature.celsius(BLANCH_WATER_C),
+							Quantity.of(BLANCH_REMOVAL.value() * 100, "%")),
+					BLANCH_REMOVAL, removePrecursors(surface, BLANCH_REMOVAL.value(), BLANCH_REMOVAL.value())));
 		}
-		list.add(rawChange(b, "ASPARAGINASE", "Asparaginase", String.format(
-				"treat with asparaginase (a dip for cut potatoes, or in the dough; removes about %.0f %% of the asparagine)",
-				ASPARAGINASE_REMOVAL.value() * 100), ASPARAGINASE_REMOVAL, removePrecursors(surface, 0, ASPARAGINASE_REMOVAL.value())));
+		list.add(rawChange(b, "ASPARAGINASE", Message.of("mitigation.asparaginase.title"),
+				Message.of("mitigation.asparaginase.change", Quantity.of(ASPARAGINASE_REMOVAL.value() * 100, "%")),
+				ASPARAGINASE_REMOVAL, removePrecursors(surface, 0, ASPARAGINASE_REMOVAL.value())));
 		Surface acid = surface.withAcidGPerKg(Math.min(50, surface.acidGPerKg() + ACID_DIP_UPTAKE.value()));
-		list.add(rawChange(b, "ACID_DIP", potato ? "Acid dip" : "Acid in the recipe", String.format(
-				"%s: about %.1f g citric acid per kg food (pH %.2f → %.2f)",
-				potato ? "dip in dilute citric acid before cooking" : "add citric acid", ACID_DIP_UPTAKE.value(), surface.ph(),
-				acid.ph()), ACID_DIP_UPTAKE, acid));
+		list.add(rawChange(b, "ACID_DIP", Message.of(potato ? "mitigation.acid-dip.title" : "mitigation.acid-recipe.title"),
+				Message.of(potato ? "mitigation.acid-dip.change" : "mitigation.acid-recipe.change",
+						Quantity.of(ACID_DIP_UPTAKE.value(), "g", 1), PlainNumber.of(surface.ph(), 2), PlainNumber.of(acid.ph(), 2)),
+				ACID_DIP_UPTAKE, acid));
 		if (potato) {
 			list.add(warmStorage(b));
 		}
@@ -131,23 +141,23 @@ public final class Mitigations {
 			step = OVEN_PAN_STEP_C;
 			lower = t - step.value();
 		}
-		String title = "Lower temperature, longer cook";
-		String change = String.format("cook at %.0f °C instead of %.0f °C to the same colour", lower, t);
+		Message title = Message.of("mitigation.lower-temperature.title");
+		Message change = Message.of("mitigation.lower-temperature.change", Temperature.celsius(lower), Temperature.celsius(t));
 		HeatSetup cooler;
 		try {
 			cooler = HeatSetups.withTemperature(setup, lower);
 		}
 		catch (IllegalArgumentException e) {
 			return Mitigation.notApplicable("LOWER_TEMPERATURE", title, change, step.source(), step.evidence(),
-					Mitigation.Basis.SAME_COLOUR, "The setting is already at the lowest temperature this heat mode allows.");
+					Mitigation.Basis.SAME_COLOUR, Message.of("mitigation.lower-temperature.at-lowest"));
 		}
 		CookResult r = AcrylamideCook.run(b.surface(), cooler, b.target(), b.settings());
 		Mitigation m = sameColour(b, "LOWER_TEMPERATURE", title, change, step.source(), step.evidence(), r,
-				String.format("At %.0f °C the target colour is not reached within the time allowed.", lower));
+				Message.of("mitigation.lower-temperature.not-reached", Temperature.celsius(lower)));
 		if (m.applicable() && m.effectUgPerKg() >= 0) {
 			// an honest null result: the slower formation is offset by a longer cook that dries more of the piece
 			return new Mitigation(m.code(), m.title(), m.change(), m.source(), m.evidence(), true,
-					"No gain at the same colour for this piece: the longer cook dries more of it, which offsets the slower formation. Frying below 175 °C is still the rule for potato products.",
+					Message.of("mitigation.lower-temperature.no-gain", Temperature.celsius(AcrylamideWarnings.MAX_FRYING_C.value())),
 					m.basis(), m.beforeUgPerKg(), m.afterUgPerKg(), m.beforeMinutes(), m.afterMinutes(), m.afterAtSameColourUgPerKg());
 		}
 		return m;
@@ -160,31 +170,33 @@ public final class Mitigations {
 			.filter(s -> s.extentOn(category.colourPath()) < extent - 1e-6)
 			.max(Comparator.comparingDouble(s -> s.extentOn(category.colourPath())));
 		if (lighter.isEmpty()) {
-			return Mitigation.notApplicable("LIGHTER_TARGET", "Lighter colour", "cook one stage lighter", LIGHTER_SOURCE,
-					Evidence.PUBLISHED, Mitigation.Basis.SAME_COLOUR,
-					"The target is already the lightest stage of " + category.label() + ".");
+			return Mitigation.notApplicable("LIGHTER_TARGET", Message.of("mitigation.lighter-target.title"),
+					Message.of("mitigation.lighter-target.one-stage"), LIGHTER_SOURCE, Evidence.PUBLISHED,
+					Mitigation.Basis.SAME_COLOUR, Message.of("mitigation.lighter-target.lightest", Text.of(category.label())));
 		}
 		BrowningStage s = lighter.get();
 		CookResult r = AcrylamideCook.run(b.surface(), b.setup(), Target.stage(s.key()), b.settings());
-		return sameColour(b, "LIGHTER_TARGET", "Lighter colour",
-				"cook to " + s.label().toLowerCase() + " instead of " + b.target().describe(category).toLowerCase(), LIGHTER_SOURCE,
-				Evidence.PUBLISHED, r, "The lighter stage is not reached either.");
+		return sameColour(b, "LIGHTER_TARGET", Message.of("mitigation.lighter-target.title"),
+				Message.of("mitigation.lighter-target.change", Target.stage(s.key()).describeInText(category),
+						b.target().describeInText(category)),
+				LIGHTER_SOURCE, Evidence.PUBLISHED, r, Message.of("mitigation.lighter-target.not-reached"));
 	}
 
-	private static Mitigation sameColour(Baseline b, String code, String title, String change, String source, Evidence evidence,
-			CookResult r, String notReached) {
+	private static Mitigation sameColour(Baseline b, String code, Message title, Message change, String source,
+			Evidence evidence, CookResult r, Message notReached) {
 		if (!r.reached()) {
 			return Mitigation.notApplicable(code, title, change, source, evidence, Mitigation.Basis.SAME_COLOUR, notReached);
 		}
-		return new Mitigation(code, title, change, source, evidence, true, "", Mitigation.Basis.SAME_COLOUR, b.ug(),
+		return new Mitigation(code, title, change, source, evidence, true, null, Mitigation.Basis.SAME_COLOUR, b.ug(),
 				r.portionAcrylamideAtTargetUgPerKg(), b.minutes(), r.timeToTargetS() / 60, r.portionAcrylamideAtTargetUgPerKg());
 	}
 
 	/** A change of the raw food, compared after the baseline's cooking time. */
-	private static Mitigation rawChange(Baseline b, String code, String title, String change, Parameter fraction, Surface changed) {
+	private static Mitigation rawChange(Baseline b, String code, Message title, Message change, Parameter fraction,
+			Surface changed) {
 		double atSameTime = portionAfter(changed, b.setup(), b.settings(), b.result().timeToTargetS());
 		CookResult toColour = AcrylamideCook.run(changed, b.setup(), b.target(), b.settings());
-		return new Mitigation(code, title, change, fraction.source(), fraction.evidence(), true, "", Mitigation.Basis.SAME_TIME,
+		return new Mitigation(code, title, change, fraction.source(), fraction.evidence(), true, null, Mitigation.Basis.SAME_TIME,
 				b.ug(), atSameTime, b.minutes(), toColour.reached() ? toColour.timeToTargetS() / 60 : Double.NaN,
 				toColour.reached() ? toColour.portionAcrylamideAtTargetUgPerKg() : Double.NaN);
 	}
@@ -197,14 +209,14 @@ public final class Mitigations {
 		Composition cold = new Composition(c.waterPct(), c.proteinPct(), c.fatPct(), c.reducingSugarPct() + fromStarch,
 				c.sucrosePct(), c.starchPct() - fromStarch, c.fibrePct(), c.ashPct());
 		Surface coldStored = b.surface().withComposition(cold);
-		String title = "Store potatoes above 6 °C";
-		String change = String.format(
-				"keep potatoes above 6 °C (taken to be how these were stored): cold-stored tubers would hold about %.1f %% reducing sugar instead of %.1f %%",
-				cold.reducingSugarPct(), c.reducingSugarPct());
+		Temperature warm = Temperature.celsius(AcrylamideWarnings.WARM_STORAGE_C);
+		Message title = Message.of("mitigation.warm-storage.title", warm);
+		Message change = Message.of("mitigation.warm-storage.change", warm, Quantity.of(cold.reducingSugarPct(), "%", 1),
+				Quantity.of(c.reducingSugarPct(), "%", 1));
 		double coldAtSameTime = portionAfter(coldStored, b.setup(), b.settings(), b.result().timeToTargetS());
 		CookResult coldToColour = AcrylamideCook.run(coldStored, b.setup(), b.target(), b.settings());
 		// before: cold-stored tubers cooked as planned; after: the potatoes as entered
-		return new Mitigation("WARM_STORAGE", title, change, COLD_STORAGE_SUGAR.source(), COLD_STORAGE_SUGAR.evidence(), true, "",
+		return new Mitigation("WARM_STORAGE", title, change, COLD_STORAGE_SUGAR.source(), COLD_STORAGE_SUGAR.evidence(), true, null,
 				Mitigation.Basis.SAME_TIME, coldAtSameTime, b.ug(),
 				coldToColour.reached() ? coldToColour.timeToTargetS() / 60 : Double.NaN, b.minutes(), b.ug());
 	}

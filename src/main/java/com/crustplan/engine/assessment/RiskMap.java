@@ -14,6 +14,7 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.message.Message;
 
 /**
  * Set temperature × time for one surface and heat mode: per cell the browning stage reached and the
@@ -21,8 +22,8 @@ import com.crustplan.engine.heat.HeatSetup;
  * line). Each temperature row is one engine run recorded every time step of the map, so a cell is
  * exactly what a single run at {@link #settingsFor} shows at that time.
  */
-public record RiskMap(FoodCategory category, Product product, String mode, String targetDescription,
-		BenchmarkLevel benchmarkOrNull, double timeStepS, List<Row> rows, List<String> cautions) {
+public record RiskMap(FoodCategory category, Product product, String mode, Message targetDescription,
+		BenchmarkLevel benchmarkOrNull, double timeStepS, List<Row> rows, List<Message> cautions) {
 
 	/** Most temperatures a map may hold (one engine run each). */
 	public static final int MAX_TEMPERATURES = 60;

@@ -3,15 +3,16 @@ package com.crustplan.engine.cook;
 import java.util.List;
 
 import com.crustplan.engine.colour.Lab;
+import com.crustplan.engine.message.Message;
 
 /**
  * What a run predicts: whether and when the target colour is reached, the series for charts, and the
  * assumptions it rests on. Times are NaN where the target was not reached.
  */
-public record CookResult(Outcome outcome, String explanation, double timeToTargetS, double targetExtent,
+public record CookResult(Outcome outcome, Message explanation, double timeToTargetS, double targetExtent,
 		Lab targetColour, double ph, double coreTemperatureAtTargetC, double crustAcrylamideAtTargetUgPerKg,
 		double portionAcrylamideAtTargetUgPerKg, double maxSurfaceTemperatureC, double finalBrowningExtent,
-		double simulatedS, List<Sample> series, List<String> assumptions, EnergyLedger energy, FinalState finalState) {
+		double simulatedS, List<Sample> series, List<Message> assumptions, EnergyLedger energy, FinalState finalState) {
 
 	public CookResult {
 		series = List.copyOf(series);

@@ -9,6 +9,7 @@ import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.layers.Grid;
 import com.crustplan.engine.layers.Layers;
+import com.crustplan.engine.message.Message;
 import com.crustplan.engine.properties.ThermalProperties;
 
 /**
@@ -145,13 +146,13 @@ public final class CookSimulation {
 		}
 		start();
 		List<CookStep.Record> records = new ArrayList<>();
-		List<String> assumptions = new ArrayList<>();
+		List<Message> assumptions = new ArrayList<>();
 		double horizon = settings.horizonS();
 		for (int k = 0; k < steps.size() && state.time < horizon - 1e-9; k++) {
 			CookStep step = steps.get(k);
 			double startS = state.time;
 			heat.use(step.setup().schedule(), startS);
-			for (String a : step.setup().assumptions()) {
+			for (Message a : step.setup().assumptions()) {
 				if (!assumptions.contains(a)) {
 					assumptions.add(a);
 				}
@@ -230,15 +231,15 @@ public final class CookSimulation {
 		}
 	}
 
-	private CookResult finish(TargetRecord target, double targetExtent, List<String> heatAssumptions) {
+	private CookResult finish(TargetRecord target, double targetExtent, List<Message> heatAssumptions) {
 		for (StepListener l : listeners) {
 			l.finish(state, interpolator);
 		}
 		boolean noColourTarget = Double.isNaN(targetExtent);
 		Outcome outcome = CookSummary.outcome(target.reached(), stepper.browning().canBrown(), watch.maxSurfaceK(),
 				watch.everDry());
-		String explanation = CookSummary.explain(outcome, watch.maxSurfaceK(), state.browningExtent(0), state.time);
-		List<String> assumptions = new ArrayList<>(heatAssumptions);
+		Message explanation = CookSummary.explain(outcome, watch.maxSurfaceK(), state.browningExtent(0), state.time);
+		List<Message> assumptions = new ArrayList<>(heatAssumptions);
 		assumptions.addAll(CookSummary.surfaceAssumptions(surface));
 		return new CookResult(outcome, explanation, target.reachedAtS(), targetExtent,
 				noColourTarget ? null : surface.category().colourPath().colourAt(targetExtent), surface.ph(),

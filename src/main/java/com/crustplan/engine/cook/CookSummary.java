@@ -5,6 +5,12 @@ import java.util.List;
 
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.message.Duration;
+import com.crustplan.engine.message.Message;
+import com.crustplan.engine.message.PlainNumber;
+import com.crustplan.engine.message.Quantity;
+import com.crustplan.engine.message.Temperature;
+import com.crustplan.engine.message.Text;
 
 /** Why a cook ended as it did, and what the run assumed about the surface. */
 final class CookSummary {
@@ -29,26 +35,24 @@ final class CookSummary {
 		return Outcome.TOO_SLOW;
 	}
 
-	static String explain(Outcome outcome, double maxSurfaceK, double extent, double timeS) {
+	static Message explain(Outcome outcome, double maxSurfaceK, double extent, double timeS) {
 		if (outcome == Outcome.REACHED) {
 			return outcome.explanation();
 		}
-		return String.format("%s Highest surface temperature %.0f °C; browning extent %.2f after %.0f min.",
-				outcome.explanation(), maxSurfaceK - 273.15, extent, timeS / 60);
+		return Message.of("outcome.explained", outcome.explanation(), Temperature.kelvin(maxSurfaceK),
+				PlainNumber.of(extent, 2), new Duration(timeS, true));
 	}
 
-	static List<String> surfaceAssumptions(Surface surface) {
+	static List<Message> surfaceAssumptions(Surface surface) {
 		FoodCategory category = surface.category();
-		List<String> a = new ArrayList<>();
-		a.add(String.format(
-				"The whole %.0f mm thickness has the surface's composition; heat and water move only through the thickness (a slab).",
-				surface.thicknessMm()));
-		a.add(String.format("pH %.2f at the surface%s (buffer capacity %.0f mmol/(pH·kg)).", surface.ph(),
-				surface.bicarbonateGPerKg() > 0 || surface.acidGPerKg() > 0 ? " after the additions" : "",
-				category.bufferCapacity().value()));
-		a.add("Browning kinetics, sorption isotherm and colour path of the category " + category.label() + ".");
+		List<Message> a = new ArrayList<>();
+		a.add(Message.of("assumption.surface.slab", Quantity.of(surface.thicknessMm(), "mm")));
+		boolean added = surface.bicarbonateGPerKg() > 0 || surface.acidGPerKg() > 0;
+		a.add(Message.of(added ? "assumption.surface.ph.after-additions" : "assumption.surface.ph",
+				PlainNumber.of(surface.ph(), 2), Quantity.of(category.bufferCapacity().value(), "mmol/(pH·kg)")));
+		a.add(Message.of("assumption.surface.category", Text.of(category.label())));
 		if (surface.composition().sucrosePct() > 0) {
-			a.add("Sucrose browns only by caramelisation (it is not a reducing sugar); its inversion is not modelled.");
+			a.add(Message.of("assumption.surface.sucrose"));
 		}
 		return a;
 	}

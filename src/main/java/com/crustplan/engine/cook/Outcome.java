@@ -1,21 +1,21 @@
 package com.crustplan.engine.cook;
 
+import com.crustplan.engine.message.Message;
+
 /** Whether the target was reached, and if not, why. */
 public enum Outcome {
 
-	REACHED("The target colour is reached."),
-	NO_REACTANTS("No reducing sugar, amino groups or sucrose at the surface: it cannot brown."),
-	WET_PLATEAU("The surface never left the wet plateau: water at the surface holds it near its boiling or wet-bulb temperature, where browning barely runs."),
-	TOO_COOL("The surface dried but stayed too cool to brown quickly."),
-	TOO_SLOW("Browning runs but too slowly to reach the target within the time allowed.");
+	REACHED(Message.of("outcome.reached")), NO_REACTANTS(Message.of("outcome.no-reactants")),
+	WET_PLATEAU(Message.of("outcome.wet-plateau")), TOO_COOL(Message.of("outcome.too-cool")),
+	TOO_SLOW(Message.of("outcome.too-slow"));
 
-	private final String explanation;
+	private final Message explanation;
 
-	Outcome(String explanation) {
+	Outcome(Message explanation) {
 		this.explanation = explanation;
 	}
 
-	public String explanation() {
+	public Message explanation() {
 		return explanation;
 	}
 

@@ -4,6 +4,9 @@ import com.crustplan.engine.colour.ColourPath;
 import com.crustplan.engine.food.BrowningStage;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
+import com.crustplan.engine.message.Message;
+import com.crustplan.engine.message.PlainNumber;
+import com.crustplan.engine.message.Text;
 
 /** The colour to cook to: a CIE L* value or one of the category's named stages. */
 public record Target(Double lightness, String stage) {
@@ -40,11 +43,21 @@ public record Target(Double lightness, String stage) {
 		return e;
 	}
 
-	public String describe(FoodCategory category) {
+	/** The target as a page names it: the stage's label, or "L* 62". */
+	public Message describe(FoodCategory category) {
 		if (stage != null) {
-			return category.stage(stage).map(BrowningStage::label).orElse(stage);
+			return Message.of("target.stage", Text.of(stageLabel(category)));
 		}
-		return String.format("L* %.0f", lightness);
+		return Message.of("target.lightness", PlainNumber.of(lightness, 0));
+	}
+
+	/** The same in running text: a stage's label in lower case ("cook to golden"); L* keeps its capital. */
+	public Message describeInText(FoodCategory category) {
+		return stage != null ? Message.of("target.stage", Text.of(stageLabel(category).toLowerCase())) : describe(category);
+	}
+
+	private String stageLabel(FoodCategory category) {
+		return category.stage(stage).map(BrowningStage::label).orElse(stage);
 	}
 
 }

@@ -1,5 +1,7 @@
 package com.crustplan.engine.heat;
 
+import com.crustplan.engine.message.Message;
+
 /**
  * A face pressed on a hot pan through a thin fat film: q = h_c(T_pan − Ts). Vapour cannot leave into
  * gas here; water at the face boils off at the local boiling point instead (handled by the stepper).
@@ -10,9 +12,9 @@ final class ContactExchange implements FaceExchange {
 
 	private final double contact;
 
-	private final String description;
+	private final Message description;
 
-	ContactExchange(double panK, double contactWPerM2K, String description) {
+	ContactExchange(double panK, double contactWPerM2K, Message description) {
 		this.panK = panK;
 		this.contact = contactWPerM2K;
 		this.description = description;
@@ -26,7 +28,7 @@ final class ContactExchange implements FaceExchange {
 	}
 
 	@Override
-	public String describe() {
+	public Message describe() {
 		return description;
 	}
 

@@ -1,5 +1,7 @@
 package com.crustplan.engine.heat;
 
+import com.crustplan.engine.message.Message;
+
 /** The boundary condition of one face of the food at one moment. */
 public interface FaceExchange {
 
@@ -12,6 +14,6 @@ public interface FaceExchange {
 	void evaluate(double surfaceK, double waterActivity, double boilingFlux, FaceFlux out);
 
 	/** A short description for the result's assumptions. */
-	String describe();
+	Message describe();
 
 }

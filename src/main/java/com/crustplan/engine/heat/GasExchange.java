@@ -1,5 +1,6 @@
 package com.crustplan.engine.heat;
 
+import com.crustplan.engine.message.Message;
 import com.crustplan.engine.model.Parameter;
 import com.crustplan.engine.water.Atmosphere;
 import com.crustplan.engine.water.SaturationPressure;
@@ -30,9 +31,9 @@ public final class GasExchange implements FaceExchange {
 
 	private final double lewisFactor = Math.pow(LEWIS_NUMBER.value(), 2.0 / 3.0);
 
-	private final String description;
+	private final Message description;
 
-	public GasExchange(Atmosphere gas, double convectionWPerM2K, double radiantK, String description) {
+	public GasExchange(Atmosphere gas, double convectionWPerM2K, double radiantK, Message description) {
 		this.gas = gas;
 		this.convection = convectionWPerM2K;
 		this.radiantK = radiantK;
@@ -70,7 +71,7 @@ public final class GasExchange implements FaceExchange {
 	}
 
 	@Override
-	public String describe() {
+	public Message describe() {
 		return description;
 	}
 

@@ -3,6 +3,10 @@ package com.crustplan.engine.heat;
 import java.util.List;
 
 import com.crustplan.engine.input.InvalidInputException;
+import com.crustplan.engine.message.Duration;
+import com.crustplan.engine.message.Message;
+import com.crustplan.engine.message.Quantity;
+import com.crustplan.engine.message.Temperature;
 import com.crustplan.engine.model.Parameter;
 import com.crustplan.engine.water.Atmosphere;
 
@@ -47,7 +51,7 @@ public sealed interface HeatSetup
 	/** The set temperature a cook reads on the dial, °C. */
 	double temperatureC();
 
-	List<String> assumptions();
+	List<Message> assumptions();
 
 	static List<Parameter> parameters() {
 		return List.of(KITCHEN_AIR_C, NATURAL_CONVECTION, CONTACT_WITH_FAT, CONTACT_DRY, OVEN_STILL, OVEN_FAN, GRILL_VIEW,
@@ -66,7 +70,16 @@ public sealed interface HeatSetup
 
 	private static GasExchange kitchenAir() {
 		double room = kelvin(KITCHEN_AIR_C.value());
-		return new GasExchange(Atmosphere.kitchen(room), NATURAL_CONVECTION.value(), room, "open to kitchen air");
+		return new GasExchange(Atmosphere.kitchen(room), NATURAL_CONVECTION.value(), room, Message.of("exchange.kitchen-air"));
+	}
+
+	private static Quantity coefficient(double wPerM2K) {
+		return Quantity.of(wPerM2K, "W/m²K");
+	}
+
+	private static Message turning(double flipEverySeconds) {
+		return flipEverySeconds > 0 ? Message.of("assumption.turned", Duration.seconds(flipEverySeconds))
+				: Message.of("assumption.not-turned");
 	}
 
 	/** A pan or griddle: the face down lies on the pan, the face up loses heat and water to kitchen air. */
@@ -84,7 +97,7 @@ public sealed interface HeatSetup
 		public FaceSchedule schedule() {
 			double h = fatFilm ? CONTACT_WITH_FAT.value() : CONTACT_DRY.value();
 			return FaceSchedule.flipping(new ContactExchange(kelvin(panTemperatureC), h,
-					String.format("on the pan at %.0f °C, contact %.0f W/m²K", panTemperatureC, h)), kitchenAir(),
+					Message.of("exchange.pan", Temperature.celsius(panTemperatureC), coefficient(h))), kitchenAir(),
 					flipEverySeconds);
 		}
 
@@ -99,12 +112,13 @@ public sealed interface HeatSetup
 		}
 
 		@Override
-		public List<String> assumptions() {
-			return List.of(String.format("Pan surface held at %.0f °C (a heavy pan on a steady flame).", panTemperatureC),
-					"Contact through the " + (fatFilm ? "fat film" : "dry pan") + " taken as "
-							+ (fatFilm ? CONTACT_WITH_FAT : CONTACT_DRY).value() + " W/m²K; pressing the food raises it.",
-					flipEverySeconds > 0 ? String.format("Turned every %.0f s.", flipEverySeconds) : "Not turned.",
-					"The upper face loses heat and water to kitchen air at 25 °C.");
+		public List<Message> assumptions() {
+			// the contact value keeps the one decimal it has always been shown with
+			return List.of(Message.of("assumption.pan.held", Temperature.celsius(panTemperatureC)),
+					Message.of(fatFilm ? "assumption.pan.contact.fat" : "assumption.pan.contact.dry",
+							Quantity.of((fatFilm ? CONTACT_WITH_FAT : CONTACT_DRY).value(), "W/m²K", 1)),
+					turning(flipEverySeconds),
+					Message.of("assumption.pan.upper-face", Temperature.celsius(KITCHEN_AIR_C.value())));
 		}
 
 	}
@@ -136,7 +150,8 @@ public sealed interface HeatSetup
 		public FaceSchedule schedule() {
 			double h = fan ? OVEN_FAN.value() : OVEN_STILL.value();
 			return FaceSchedule.both(new GasExchange(atmosphere(), h, kelvin(airTemperatureC),
-					String.format("%s oven at %.0f °C, %.0f %% steam", fan ? "fan" : "still", airTemperatureC, steamPct)));
+					Message.of(fan ? "exchange.oven.fan" : "exchange.oven.still", Temperature.celsius(airTemperatureC),
+							Quantity.of(steamPct, "%"))));
 		}
 
 		@Override
@@ -150,12 +165,11 @@ public sealed interface HeatSetup
 		}
 
 		@Override
-		public List<String> assumptions() {
-			return List.of(String.format("%s oven: convection %.0f W/m²K; walls radiate at the air temperature.",
-					fan ? "Fan" : "Still", (fan ? OVEN_FAN : OVEN_STILL).value()),
-					String.format("Oven atmosphere %.1f %% steam by volume (wet-bulb %.0f °C).", steamPct,
-							WetBulb.temperatureC(atmosphere(), h())),
-					"Both faces see the same heat (on a rack, not on a tray).");
+		public List<Message> assumptions() {
+			return List.of(Message.of(fan ? "assumption.oven.fan" : "assumption.oven.still", coefficient(h())),
+					Message.of("assumption.oven.steam", Quantity.of(steamPct, "%", 1),
+							Temperature.celsius(WetBulb.temperatureC(atmosphere(), h()))),
+					Message.of("assumption.oven.rack"));
 		}
 
 		private double h() {
@@ -197,7 +211,7 @@ public sealed interface HeatSetup
 			double f = GRILL_VIEW.value();
 			double radiant = Math.pow(f * Math.pow(kelvin(heaterTemperatureC), 4) + (1 - f) * Math.pow(room, 4), 0.25);
 			GasExchange underHeater = new GasExchange(Atmosphere.kitchen(room), NATURAL_CONVECTION.value(), radiant,
-					String.format("under a radiant element at %.0f °C", heaterTemperatureC));
+					Message.of("exchange.grill", Temperature.celsius(heaterTemperatureC)));
 			return FaceSchedule.flipping(underHeater, kitchenAir(), flipEverySeconds);
 		}
 
@@ -212,11 +226,10 @@ public sealed interface HeatSetup
 		}
 
 		@Override
-		public List<String> assumptions() {
-			return List.of(String.format("Element at %.0f °C filling %.0f %% of the food's view: %.0f kW/m² on a cold surface.",
-					heaterTemperatureC, GRILL_VIEW.value() * 100, heatFluxAtRoomKwPerM2()),
-					flipEverySeconds > 0 ? String.format("Turned every %.0f s.", flipEverySeconds) : "Not turned.",
-					"The lower face rests in kitchen air.");
+		public List<Message> assumptions() {
+			return List.of(Message.of("assumption.grill.element", Temperature.celsius(heaterTemperatureC),
+					Quantity.of(GRILL_VIEW.value() * 100, "%"), Quantity.of(heatFluxAtRoomKwPerM2(), "kW/m²")),
+					turning(flipEverySeconds), Message.of("assumption.grill.lower-face"));
 		}
 
 	}
@@ -244,11 +257,10 @@ public sealed interface HeatSetup
 		}
 
 		@Override
-		public List<String> assumptions() {
-			return List.of(String.format("Oil held at %.0f °C (a fryer that recovers its temperature).", oilTemperatureC),
-					String.format("Oil-side coefficient %.0f W/m²K, up to %.0f W/m²K while water boils off vigorously.",
-							OIL_QUIET.value(), OIL_BUBBLING.value()),
-					"Oil taken up by the crust is not modelled.");
+		public List<Message> assumptions() {
+			return List.of(Message.of("assumption.fryer.oil", Temperature.celsius(oilTemperatureC)),
+					Message.of("assumption.fryer.coefficient", coefficient(OIL_QUIET.value()), coefficient(OIL_BUBBLING.value())),
+					Message.of("assumption.fryer.uptake"));
 		}
 
 	}
@@ -268,7 +280,7 @@ public sealed interface HeatSetup
 		public FaceSchedule schedule() {
 			double air = kelvin(airTemperatureC);
 			return FaceSchedule.both(new GasExchange(Atmosphere.kitchen(air), NATURAL_CONVECTION.value(), air,
-					String.format("resting in kitchen air at %.0f °C", airTemperatureC)));
+					Message.of("exchange.rest", Temperature.celsius(airTemperatureC))));
 		}
 
 		@Override
@@ -282,10 +294,9 @@ public sealed interface HeatSetup
 		}
 
 		@Override
-		public List<String> assumptions() {
-			return List.of(String.format(
-					"Resting in still kitchen air at %.0f °C: natural convection %.0f W/m²K and radiation on both faces.",
-					airTemperatureC, NATURAL_CONVECTION.value()));
+		public List<Message> assumptions() {
+			return List.of(Message.of("assumption.rest", Temperature.celsius(airTemperatureC),
+					coefficient(NATURAL_CONVECTION.value())));
 		}
 
 	}

@@ -1,5 +1,9 @@
 package com.crustplan.engine.heat;
 
+import com.crustplan.engine.message.Message;
+import com.crustplan.engine.message.PlainNumber;
+import com.crustplan.engine.message.Quantity;
+import com.crustplan.engine.message.Temperature;
 import com.crustplan.engine.water.WaterVapour;
 
 /**
@@ -39,8 +43,8 @@ final class OilExchange implements FaceExchange {
 	}
 
 	@Override
-	public String describe() {
-		return String.format("in oil at %.0f °C, h %.0f–%.0f W/m²K with bubbling", oilK - 273.15, quiet, bubbling);
+	public Message describe() {
+		return Message.of("exchange.fryer", Temperature.kelvin(oilK), PlainNumber.of(quiet, 0), Quantity.of(bubbling, "W/m²K"));
 	}
 
 }

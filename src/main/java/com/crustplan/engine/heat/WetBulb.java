@@ -1,5 +1,6 @@
 package com.crustplan.engine.heat;
 
+import com.crustplan.engine.message.Message;
 import com.crustplan.engine.water.Atmosphere;
 import com.crustplan.engine.water.WaterVapour;
 
@@ -14,7 +15,7 @@ public final class WetBulb {
 	}
 
 	public static double temperatureC(Atmosphere gas, double convectionWPerM2K) {
-		GasExchange face = new GasExchange(gas, convectionWPerM2K, gas.temperatureK(), "wet bulb");
+		GasExchange face = new GasExchange(gas, convectionWPerM2K, gas.temperatureK(), Message.of("exchange.wet-bulb"));
 		double lo = 273.16;
 		double hi = Math.min(gas.temperatureK(), 373.15 + 50);
 		FaceFlux flux = new FaceFlux();

@@ -18,9 +18,14 @@ import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.system.MessageText;
 
 /** Mitigations for 10 mm chips fried golden at 180 °C, each computed by re-running the model. */
 class AcrylamideMitigationsTest {
+
+	/** The engine speaks in codes: its text is read as the API shows it (°C). */
+	static final MessageText TEXT = new MessageText();
+
 
 	private static Map<String, Mitigation> byCode;
 
@@ -49,9 +54,9 @@ class AcrylamideMitigationsTest {
 	void lowerTemperatureTakesLongerToTheSameColour() {
 		Mitigation m = byCode.get("LOWER_TEMPERATURE");
 		assertEquals(Mitigation.Basis.SAME_COLOUR, m.basis());
-		assertTrue(m.change().contains("170 °C"), "180 °C oil steps down to 170 °C, below the 175 °C measure");
+		assertTrue(TEXT.celsius(m.change()).contains("170 °C"), "180 °C oil steps down to 170 °C, below the 175 °C measure");
 		assertTrue(m.effectMinutes() > 0);
-		assertTrue(m.effectUgPerKg() < 0 || m.reason().startsWith("No gain"), "a null result says so");
+		assertTrue(m.effectUgPerKg() < 0 || TEXT.celsius(m.reason()).startsWith("No gain"), "a null result says so");
 		assertTrue(byCode.get("LIGHTER_TARGET").effectMinutes() < 0, "a lighter colour is reached sooner");
 	}
 

@@ -15,9 +15,14 @@ import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.system.MessageText;
 
 /** Warnings from Regulation (EU) 2017/2158 Annex II (retail and catering measures) and the estimate's cautions. */
 class AcrylamideWarningsTest {
+
+	/** The engine speaks in codes: its text is read as the API shows it (°C). */
+	static final MessageText TEXT = new MessageText();
+
 
 	private static final Surface CHIPS = Surface.defaults(FoodCategory.POTATO);
 
@@ -73,9 +78,9 @@ class AcrylamideWarningsTest {
 		assertEquals(BenchmarkLevel.FRENCH_FRIES, e.benchmark().orElseThrow());
 		assertEquals(BenchmarkLevel.FRENCH_FRIES.zoneOf(e.portionUgPerKg()), e.zone());
 		// IARC Monographs vol. 60: Group 2A
-		assertTrue(e.cautions().stream().anyMatch(c -> c.contains("Group 2A") && c.contains("probably carcinogenic")));
-		assertTrue(e.cautions().stream().anyMatch(c -> c.contains("not an analysis")));
-		assertTrue(e.cautions().stream().anyMatch(c -> c.contains("laboratory analysis") && c.contains("food authority")));
+		assertTrue(TEXT.celsius(e.cautions()).stream().anyMatch(c -> c.contains("Group 2A") && c.contains("probably carcinogenic")));
+		assertTrue(TEXT.celsius(e.cautions()).stream().anyMatch(c -> c.contains("not an analysis")));
+		assertTrue(TEXT.celsius(e.cautions()).stream().anyMatch(c -> c.contains("laboratory analysis") && c.contains("food authority")));
 		AcrylamideEstimate meat = AcrylamideEstimate.of(Surface.defaults(FoodCategory.MEAT), Product.MEAT,
 				new HeatSetup.PanContact(220, true, 60), Target.stage("browned"),
 				AcrylamideCook.run(Surface.defaults(FoodCategory.MEAT), new HeatSetup.PanContact(220, true, 60), Target.stage("browned")));

@@ -25,7 +25,7 @@ class CookConvergenceTest {
 	private static double timeToTarget(Surface surface, HeatSetup setup, String stage, int nodes, double dt) {
 		CookSettings settings = CookSettings.defaults().withNodes(nodes).withTimeStepS(dt).withRecordSeries(false);
 		CookResult r = CookSimulation.run(surface, setup, Target.stage(stage), settings);
-		assertTrue(r.reached(), r.explanation());
+		assertTrue(r.reached(), String.valueOf(r.explanation()));
 		return r.timeToTargetS();
 	}
 
