@@ -4,18 +4,29 @@ import org.springframework.beans.factory.annotation.Value;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.RequestParam;
 
 @Controller
 class SignInController {
 
 	private final boolean demo;
 
-	SignInController(@Value("${crustplan.demo.enabled:false}") boolean demo) {
+	private final SignInThrottle throttle;
+
+	SignInController(@Value("${crustplan.demo.enabled:false}") boolean demo, SignInThrottle throttle) {
 		this.demo = demo;
+		this.throttle = throttle;
 	}
 
+	/** {@code locked} is the wait in minutes (from the sign-in failure); anything else shows the full period. */
 	@GetMapping("/signin")
-	String signIn(Model model) {
+	String signIn(@RequestParam(name = "locked", required = false) String locked, Model model) {
+		long full = Math.max(1, throttle.cooling().toMinutes());
+		long minutes = full;
+		if (locked != null && locked.matches("[0-9]{1,4}")) {
+			minutes = Math.min(full, Math.max(1, Long.parseLong(locked)));
+		}
+		model.addAttribute("lockMinutes", minutes);
 		model.addAttribute("demo", demo);
 		model.addAttribute("demoAccounts", demo ? DemoKitchenLoader.DEMO_ACCOUNTS : java.util.List.of());
 		return "system/signin";
