@@ -32,7 +32,7 @@ import org.springframework.security.crypto.password.PasswordEncoder;
  * precomputed tables, the short life and the size bound limit how many digests exist at any time,
  * and heap dumps of a server must be guarded as secrets anyway.
  */
-public class CredentialCheckCache implements PasswordEncoder {
+public class CredentialCheckCache {
 
 	/**
 	 * How long a successful check is remembered: an API client then pays one BCrypt check per five
@@ -78,12 +78,29 @@ public class CredentialCheckCache implements PasswordEncoder {
 		});
 	}
 
-	@Override
-	public String encode(CharSequence rawPassword) {
-		return delegate.encode(rawPassword);
+	/**
+	 * The password encoder for the sign-in check: encodes as the delegate does, matches through this
+	 * cache. Not a bean itself, so everything else keeps the plain encoder.
+	 */
+	public PasswordEncoder encoder() {
+		return new PasswordEncoder() {
+			@Override
+			public String encode(CharSequence rawPassword) {
+				return delegate.encode(rawPassword);
+			}
+
+			@Override
+			public boolean matches(CharSequence rawPassword, String encodedPassword) {
+				return CredentialCheckCache.this.matches(rawPassword, encodedPassword);
+			}
+
+			@Override
+			public boolean upgradeEncoding(String encodedPassword) {
+				return delegate.upgradeEncoding(encodedPassword);
+			}
+		};
 	}
 
-	@Override
 	public boolean matches(CharSequence rawPassword, String encodedPassword) {
 		if (rawPassword == null || encodedPassword == null || encodedPassword.isEmpty()) {
 			return delegate.matches(rawPassword, encodedPassword);
@@ -97,11 +114,6 @@ public class CredentialCheckCache implements PasswordEncoder {
 			matched.put(key, Boolean.TRUE);
 		}
 		return ok;
-	}
-
-	@Override
-	public boolean upgradeEncoding(String encodedPassword) {
-		return delegate.upgradeEncoding(encodedPassword);
 	}
 
 	/** Drops what was remembered for an account's stored hash (its password, role or state changed). */

@@ -259,7 +259,7 @@ public class SecurityConfig {
 	AuthenticationManager signInManager(UserDetailsService accounts, CredentialCheckCache checks,
 			SignInThrottle throttle) {
 		DaoAuthenticationProvider passwords = new DaoAuthenticationProvider(accounts);
-		passwords.setPasswordEncoder(checks);
+		passwords.setPasswordEncoder(checks.encoder());
 		return new ProviderManager(new SignInGuard(passwords, throttle));
 	}
 

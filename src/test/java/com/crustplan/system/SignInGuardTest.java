@@ -61,7 +61,7 @@ class SignInGuardTest {
 	void setUp() {
 		accounts.createUser(User.withUsername("api-chef").password(bcrypt.encode("line chef passphrase")).roles("CHEF").build());
 		DaoAuthenticationProvider passwords = new DaoAuthenticationProvider(accounts);
-		passwords.setPasswordEncoder(checks);
+		passwords.setPasswordEncoder(checks.encoder());
 		guard = new SignInGuard(passwords, throttle);
 	}
 
