@@ -152,7 +152,7 @@ public class SecurityConfig {
 
 	/**
 	 * Links to other sites get the origin only, never a page address with record ids
-	 * (strict-origin-when-cross-origin, W3C Referrer Policy §3); and no page may use the camera,
+	 * (strict-origin-when-cross-origin, W3C Referrer Policy); and no page may use the camera,
 	 * microphone, location or payment features (W3C Permissions Policy): Crustplan needs none.
 	 */
 	private static void privacyHeaders(HeadersConfigurer<HttpSecurity> h) {
@@ -237,10 +237,9 @@ public class SecurityConfig {
 	}
 
 	/**
-	 * Limits from common practice: 5 wrong passwords lock an account and 20 lock an address for
-	 * 15 minutes (NIST SP 800-63B §5.2.2 asks for no more than 100 consecutive failures per account;
-	 * 5 and 15 minutes are the usual settings of directory services). A lower account limit than
-	 * address limit, because a kitchen's staff share one router's address.
+	 * Limits from common practice: 5 wrong passwords pause an account and 20 pause an address for
+	 * 15 minutes, well inside NIST SP 800-63B §5.2.2 (no more than 100 consecutive failures per
+	 * account). The address limit is the higher one because a kitchen's staff share one router.
 	 */
 	@Bean
 	SignInThrottle signInThrottle(@Value("${crustplan.signin.max-failures-per-account:5}") int perAccount,

@@ -173,8 +173,8 @@ public class SignInThrottle {
 	}
 
 	/**
-	 * An IPv4 address as it is; an IPv6 address by its /64 network, since one subscriber is usually
-	 * given a whole /64 (RFC 6177) and could otherwise change address between guesses.
+	 * An IPv4 address as it is; an IPv6 address by its /64 network, since one subscriber is given at
+	 * least a whole /64 (RFC 6177) and could otherwise change address between guesses.
 	 */
 	static String addressKey(String address) {
 		if (address == null || address.isBlank()) {

@@ -20,9 +20,10 @@ public record UserForm(
 	public static final int MIN_PASSWORD = 10;
 
 	/**
-	 * BCrypt uses at most the first 72 bytes of a password (Provos &amp; Mazières 1999, "A
-	 * Future-Adaptable Password Scheme", the key schedule's 72-byte limit); Spring Security refuses
-	 * to hash more. Counted in UTF-8: an accented letter takes 2 bytes, an emoji 4.
+	 * BCrypt uses at most the first 72 bytes of a password (the 18 32-bit words of Blowfish's P-array
+	 * that its key schedule fills; the OpenBSD implementation and Spring Security's BCrypt both stop
+	 * there, and Spring Security refuses to hash more). Counted in UTF-8 (RFC 3629): an accented
+	 * letter takes 2 bytes, an emoji 4.
 	 */
 	public static final int MAX_PASSWORD_BYTES = 72;
 

@@ -26,7 +26,7 @@ import org.springframework.security.web.authentication.WebAuthenticationDetails;
 /**
  * The sign-in path as SecurityConfig builds it, with a counter on the password hash: a throttled or
  * over-long attempt must not reach the hash, and a repeated right password must reach it once.
- * BCrypt at cost 4, the lowest the format allows (Provos &amp; Mazières 1999), keeps the test quick.
+ * BCrypt at cost 4, the lowest Spring Security's BCrypt accepts, keeps the test quick.
  */
 class SignInGuardTest {
 

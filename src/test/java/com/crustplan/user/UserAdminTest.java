@@ -81,7 +81,7 @@ class UserAdminTest {
 	}
 
 	/**
-	 * BCrypt takes at most 72 bytes (Provos &amp; Mazières 1999); UTF-8 lengths per RFC 3629: an
+	 * BCrypt takes at most 72 bytes (Blowfish's 18-word P-array); UTF-8 lengths per RFC 3629: an
 	 * emoji outside the Basic Multilingual Plane is 4 bytes, so 20 of them are 80. Each refused with
 	 * a message on the password field, on a new account and on an edit, never a 500.
 	 */
