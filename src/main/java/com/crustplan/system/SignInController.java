@@ -13,6 +13,7 @@ import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.RequestMapping;
+import org.springframework.web.bind.annotation.RequestParam;
 
 @Controller
 class SignInController {
@@ -21,14 +22,24 @@ class SignInController {
 
 	private final ObjectProvider<PublicAccounts> publicAccounts;
 
+	private final SignInThrottle throttle;
+
 	SignInController(@Value("${crustplan.demo.enabled:false}") boolean demo,
-			ObjectProvider<PublicAccounts> publicAccounts) {
+			ObjectProvider<PublicAccounts> publicAccounts, SignInThrottle throttle) {
 		this.demo = demo;
 		this.publicAccounts = publicAccounts;
+		this.throttle = throttle;
 	}
 
+	/** {@code locked} is the wait in minutes (from the sign-in failure); anything else shows the full period. */
 	@GetMapping("/signin")
-	String signIn(Model model) {
+	String signIn(@RequestParam(name = "locked", required = false) String locked, Model model) {
+		long full = Math.max(1, throttle.cooling().toMinutes());
+		long minutes = full;
+		if (locked != null && locked.matches("[0-9]{1,4}")) {
+			minutes = Math.min(full, Math.max(1, Long.parseLong(locked)));
+		}
+		model.addAttribute("lockMinutes", minutes);
 		model.addAttribute("demo", demo);
 		PublicAccounts shown = demo ? publicAccounts.getIfAvailable() : null;
 		model.addAttribute("demoAccounts", shown == null ? List.of() : shown.accounts());

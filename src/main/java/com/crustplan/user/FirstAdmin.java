@@ -52,6 +52,11 @@ class FirstAdmin implements ApplicationRunner {
 			return;
 		}
 		boolean random = password == null || password.isEmpty();
+		String problem = random ? null : UserForm.passwordProblem(password);
+		if (problem != null) {
+			// stop here with the setting and the reason, rather than store a hash of part of it
+			throw new IllegalStateException("crustplan.admin.password (CRUSTPLAN_ADMIN_PASSWORD): " + problem);
+		}
 		String pw = random ? randomPassword() : password;
 		users.save(new UserAccount(username, encoder.encode(pw), Role.ADMIN));
 		if (random) {

@@ -2,6 +2,7 @@ package com.crustplan.user;
 
 import java.util.List;
 
+import org.springframework.context.ApplicationEventPublisher;
 import org.springframework.security.crypto.password.PasswordEncoder;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
@@ -32,9 +33,12 @@ public class UserService {
 
 	private final PasswordEncoder encoder;
 
-	UserService(UserAccountRepository users, PasswordEncoder encoder) {
+	private final ApplicationEventPublisher events;
+
+	UserService(UserAccountRepository users, PasswordEncoder encoder, ApplicationEventPublisher events) {
 		this.users = users;
 		this.encoder = encoder;
+		this.events = events;
 	}
 
 	@Transactional(readOnly = true)
@@ -52,8 +56,9 @@ public class UserService {
 		if (users.existsByUsernameIgnoreCase(f.username().trim())) {
 			throw new Refused("username", "that user name is taken");
 		}
-		if (!f.hasPassword() || f.password().length() < UserForm.MIN_PASSWORD) {
-			throw new Refused("password", "at least " + UserForm.MIN_PASSWORD + " characters");
+		String problem = UserForm.passwordProblem(f.password());
+		if (problem != null) {
+			throw new Refused("password", problem);
 		}
 		UserAccount a = new UserAccount(f.username().trim(), encoder.encode(f.password()), role(f));
 		a.setEnabled(f.enabled() == null || f.enabled());
@@ -69,14 +74,21 @@ public class UserService {
 		if (losesAdmin && users.findAll().stream().filter(u -> u.getRole() == Role.ADMIN && u.isEnabled()).count() <= 1) {
 			throw new Refused("role", "this is the last administrator: make another one first");
 		}
+		String oldHash = a.getPasswordHash();
+		boolean revoke = role != a.getRole() || enabled != a.isEnabled() || f.hasPassword();
 		if (f.hasPassword()) {
-			if (f.password().length() < UserForm.MIN_PASSWORD) {
-				throw new Refused("password", "at least " + UserForm.MIN_PASSWORD + " characters");
+			String problem = UserForm.passwordProblem(f.password());
+			if (problem != null) {
+				throw new Refused("password", problem);
 			}
 			a.setPasswordHash(encoder.encode(f.password()));
 		}
 		a.setRole(role);
 		a.setEnabled(enabled);
+		if (revoke) {
+			// acted on once this change is committed (AccountSessions)
+			events.publishEvent(new AccountChanged(a.getUsername(), oldHash));
+		}
 		return a;
 	}
 

@@ -1,12 +1,18 @@
 package com.crustplan.user;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.mockito.ArgumentMatchers.any;
+import static org.mockito.Mockito.mock;
+import static org.mockito.Mockito.never;
+import static org.mockito.Mockito.verify;
 
 import java.nio.file.Path;
 
 import org.junit.jupiter.api.Test;
 import org.springframework.boot.builder.SpringApplicationBuilder;
 import org.springframework.context.ConfigurableApplicationContext;
+import org.springframework.security.crypto.bcrypt.BCryptPasswordEncoder;
 import org.springframework.security.crypto.password.PasswordEncoder;
 
 import com.crustplan.CrustplanApplication;
@@ -31,6 +37,17 @@ class FirstAdminTest {
 			assertThat(users.findByUsernameIgnoreCase("chef")).isEmpty();
 			assertThat(users.count()).isEqualTo(1);
 		}
+	}
+
+	/** A configured password BCrypt cannot take whole (over 72 bytes): start-up stops and names the setting. */
+	@Test
+	void shouldRefuseAConfiguredPasswordOverSeventyTwoBytes() {
+		UserAccountRepository users = mock(UserAccountRepository.class);
+		FirstAdmin first = new FirstAdmin(users, new BCryptPasswordEncoder(4), "owner", "\uD83C\uDF5F".repeat(20));
+		assertThatThrownBy(() -> first.run(null)).isInstanceOf(IllegalStateException.class)
+			.hasMessageContaining("crustplan.admin.password")
+			.hasMessageContaining("at most 72 bytes");
+		verify(users, never()).save(any());
 	}
 
 	@Test

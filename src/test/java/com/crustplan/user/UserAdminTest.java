@@ -80,6 +80,37 @@ class UserAdminTest {
 			.andExpect(model().attributeHasFieldErrors("form", "username"));
 	}
 
+	/**
+	 * BCrypt takes at most 72 bytes (Blowfish's 18-word P-array); UTF-8 lengths per RFC 3629: an
+	 * emoji outside the Basic Multilingual Plane is 4 bytes, so 20 of them are 80. Each refused with
+	 * a message on the password field, on a new account and on an edit, never a 500.
+	 */
+	@Test
+	void shouldRefusePasswordsOverSeventyTwoBytesWithAFieldMessage() throws Exception {
+		String[] tooLong = { "k".repeat(73), "k".repeat(100), "\uD83C\uDF5F".repeat(20), "é".repeat(37) };
+		for (String pw : tooLong) {
+			mvc.perform(post("/admin/users/new").with(csrf()).param("username", "longpw").param("role", "COOK")
+				.param("password", pw))
+				.andExpect(status().isOk())
+				.andExpect(model().attributeHasFieldErrors("form", "password"))
+				.andExpect(content().string(containsString("at most 72 bytes")));
+		}
+		assertThat(users.findByUsernameIgnoreCase("longpw")).isEmpty();
+		UserAccount cook = users.findByUsernameIgnoreCase("cook").orElseThrow();
+		String before = cook.getPasswordHash();
+		mvc.perform(post("/admin/users/{id}/edit", cook.getId()).with(csrf()).param("username", "cook")
+			.param("role", "COOK").param("password", "\uD83C\uDF5F".repeat(20)).param("enabled", "true"))
+			.andExpect(status().isOk())
+			.andExpect(model().attributeHasFieldErrors("form", "password"));
+		assertThat(users.findById(cook.getId()).orElseThrow().getPasswordHash()).isEqualTo(before);
+		// exactly 72 bytes is fine: 18 emoji
+		mvc.perform(post("/admin/users/new").with(csrf()).param("username", "emoji72").param("role", "COOK")
+			.param("password", "\uD83C\uDF5F".repeat(18)).param("enabled", "true"))
+			.andExpect(redirectedUrl("/admin/users"));
+		assertThat(encoder.matches("\uD83C\uDF5F".repeat(18), users.findByUsernameIgnoreCase("emoji72").orElseThrow()
+			.getPasswordHash())).isTrue();
+	}
+
 	@Test
 	void shouldKeepTheLastAdministrator() throws Exception {
 		UserAccount admin = users.findByUsernameIgnoreCase("admin").orElseThrow();
