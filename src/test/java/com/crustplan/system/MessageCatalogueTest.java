@@ -116,6 +116,11 @@ class MessageCatalogueTest {
 		sample("assumption.turned", Duration.seconds(45));
 		sample("assumption.not-turned");
 		sample("assumption.rest", c(22), q(10, "W/m²K"));
+		sample("assumption.pan.body", c(230), Text.of("cast iron"), Quantity.of(2.3, "kg", 1), q(28, "cm"),
+				Quantity.of(2.5, "kW", 1), m("control.kept-up"), q(50, "%"));
+		sample("control.kept-up");
+		sample("control.fixed");
+		sample("assumption.fryer.body", c(175), Quantity.of(8, "L", 1), Quantity.of(3.2, "kW", 1), Quantity.of(0.5, "kg", 2));
 		sample("exchange.rest", c(22));
 		sample("assumption.surface.slab", q(12, "mm"));
 		sample("assumption.surface.ph", PlainNumber.of(5.8, 2), q(51, "mmol/(pH·kg)"));

@@ -9,14 +9,14 @@ public final class HeatSetups {
 	}
 
 	public static HeatSetup withTemperature(HeatSetup template, double temperatureC) {
-		if (template instanceof HeatSetup.DeepFryer) {
-			return new HeatSetup.DeepFryer(temperatureC);
+		if (template instanceof HeatSetup.DeepFryer f) {
+			return new HeatSetup.DeepFryer(temperatureC, f.body());
 		}
 		if (template instanceof HeatSetup.Oven o) {
 			return new HeatSetup.Oven(temperatureC, o.fan(), o.steamPct());
 		}
 		if (template instanceof HeatSetup.PanContact p) {
-			return new HeatSetup.PanContact(temperatureC, p.fatFilm(), p.flipEverySeconds());
+			return new HeatSetup.PanContact(temperatureC, p.fatFilm(), p.flipEverySeconds(), p.body());
 		}
 		if (template instanceof HeatSetup.RadiantGrill g) {
 			return new HeatSetup.RadiantGrill(temperatureC, g.flipEverySeconds());

@@ -2,6 +2,7 @@ package com.crustplan.engine.cook;
 
 import com.crustplan.engine.heat.FaceExchange;
 import com.crustplan.engine.heat.FaceSchedule;
+import com.crustplan.engine.heat.HeatedBody;
 
 /**
  * The heat the food is in now: the current step's face schedule, on a clock that starts with the step
@@ -30,6 +31,11 @@ final class ActiveHeat {
 	/** The next time after timeS (on the cook's clock) at which the faces' conditions change. */
 	double nextChangeAfter(double timeS) {
 		return startS + schedule.nextChangeAfter(timeS - startS);
+	}
+
+	/** The pan or oil of the current heat, where it is a body whose temperature moves; null otherwise. */
+	HeatedBody body() {
+		return schedule.body();
 	}
 
 }

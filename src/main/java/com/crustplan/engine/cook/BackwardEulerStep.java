@@ -1,6 +1,7 @@
 package com.crustplan.engine.cook;
 
 import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.heat.HeatedBody;
 import com.crustplan.engine.layers.HeatConduction;
 
 /**
@@ -23,6 +24,8 @@ final class BackwardEulerStep {
 
 	private final LayerReaction reaction;
 
+	private final ActiveHeat schedule;
+
 	BackwardEulerStep(CookState state, Surface surface, ActiveHeat schedule, MatrixProperties properties,
 			LayerReaction reaction, EnergyAccount account) {
 		this.state = state;
@@ -31,6 +34,7 @@ final class BackwardEulerStep {
 		this.moisture = new MoistureStep(state, schedule, properties, heat, account);
 		this.browning = new SurfaceBrowning(surface.category().browning(), surface.composition(), surface.ph());
 		this.reaction = reaction;
+		this.schedule = schedule;
 	}
 
 	SurfaceBrowning browning() {
@@ -41,10 +45,25 @@ final class BackwardEulerStep {
 		double now = state.time;
 		properties.evaluate(state);
 		heat.step(dt);
+		drawOnBody(now, dt);
 		moisture.step(dt);
 		reaction.step(state, dt);
 		browning.step(state, dt);
 		state.time = now + dt;
+	}
+
+	/** A pan or fryer with a body gives up what the faces touching it took, and its heat input answers. */
+	private void drawOnBody(double now, double dt) {
+		HeatedBody body = schedule.body();
+		if (body == null) {
+			return;
+		}
+		for (int face = 0; face < 2; face++) {
+			if (schedule.at(face, now).body() == body) {
+				body.draw(heat.faceHeatFlux[face]);
+			}
+		}
+		body.advance(dt);
 	}
 
 }

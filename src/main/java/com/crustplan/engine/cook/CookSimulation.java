@@ -6,6 +6,7 @@ import java.util.function.Consumer;
 
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.HeatedBody;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.layers.Grid;
 import com.crustplan.engine.layers.Layers;
@@ -76,6 +77,11 @@ public final class CookSimulation {
 	public CookSimulation on(CookEvent event, EventHandler handler) {
 		events.add(new Watch(event, handler));
 		return this;
+	}
+
+	/** The pan or oil of the current heat where it is a body that moves under the load (its ledger), else null. */
+	public HeatedBody heatSourceBody() {
+		return heat.body();
 	}
 
 	/** Runs to the target (and a little past it), to the horizon, or until an event handler stops it. */
@@ -152,6 +158,7 @@ public final class CookSimulation {
 			CookStep step = steps.get(k);
 			double startS = state.time;
 			heat.use(step.setup().schedule(), startS);
+			placeFood();
 			for (Message a : step.setup().assumptions()) {
 				if (!assumptions.contains(a)) {
 					assumptions.add(a);
@@ -191,14 +198,22 @@ public final class CookSimulation {
 
 	private SurfaceWatch watch;
 
+	/** Tells the current pan or fryer body how much food it carries. */
+	private void placeFood() {
+		if (heat.body() != null) {
+			heat.body().placeFood(state.massKgPerM2());
+		}
+	}
+
 	private void start() {
+		placeFood();
 		if (settings.recordSeries()) {
 			recorder = new SeriesRecorder(surface.category().colourPath(), settings.outputIntervalS());
 			listeners.add(recorder);
 		}
 		watch = new SurfaceWatch();
 		listeners.add(watch);
-		interpolator.start(state, reaction);
+		interpolator.start(state, reaction, heat);
 		for (StepListener l : listeners) {
 			l.init(state, interpolator);
 		}
@@ -214,7 +229,7 @@ public final class CookSimulation {
 			double step = Math.min(dt, next - state.time);
 			stepper.step(step);
 			checkPhysical();
-			interpolator.advance(state, reaction, step);
+			interpolator.advance(state, reaction, heat, step);
 			for (StepListener l : listeners) {
 				l.handleStep(state, interpolator);
 			}

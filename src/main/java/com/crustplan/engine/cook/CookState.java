@@ -90,6 +90,15 @@ public final class CookState implements Layers {
 		return moisture[i] > MIN_MOISTURE || (face >= 0 && faces[face].standingWater > 0);
 	}
 
+	/** Food per m² of face, kg (dry matter and water through the whole thickness). */
+	public double massKgPerM2() {
+		double m = 0;
+		for (int i = 0; i < n; i++) {
+			m += dryMass[i] * (1 + moisture[i]);
+		}
+		return m;
+	}
+
 	/** Centre temperature, K (the mid-thickness, interpolated). */
 	public double coreK() {
 		return grid.interpolate(temperature, 0.5 * grid.thickness());

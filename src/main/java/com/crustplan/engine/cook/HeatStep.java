@@ -51,6 +51,9 @@ final class HeatStep {
 
 	private final double[] evaporationSlope = new double[2];
 
+	/** Heat into each face over the last step, W/m² (what a pan or the oil gave up to it). */
+	final double[] faceHeatFlux = new double[2];
+
 	/**
 	 * Evaporation from each bare face into the gas, kg/(m²·s), as this step drew latent heat for it; the
 	 * moisture step takes the water from the face node.
@@ -93,7 +96,8 @@ final class HeatStep {
 		for (int face = 0; face < 2; face++) {
 			// the face fluxes as the solve had them (a layer that ran dry is warmed only afterwards)
 			double dT = solution[state.faceNode(face)] - linearisedAt[face];
-			account.heatIn((heatFluxAtStart[face] + heatSlope[face] * dT) * dt);
+			faceHeatFlux[face] = heatFluxAtStart[face] + heatSlope[face] * dT;
+			account.heatIn(faceHeatFlux[face] * dt);
 			faceEvaporation[face] += evaporationSlope[face] * dT;
 		}
 		for (int face = 0; face < 2; face++) {

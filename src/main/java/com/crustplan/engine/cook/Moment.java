@@ -20,7 +20,9 @@ public final class Moment {
 
 	double portionLevel;
 
-	void fill(CookState state, LayerReaction reaction) {
+	double heatSourceK = Double.NaN;
+
+	void fill(CookState state, LayerReaction reaction, ActiveHeat heat) {
 		timeS = state.time;
 		surfaceK = state.surfaceK();
 		coreK = state.coreK();
@@ -28,6 +30,12 @@ public final class Moment {
 		surfaceWaterActivity = state.faceWaterActivity(0);
 		crustLevel = reaction.crustLevel();
 		portionLevel = reaction.portionLevel();
+		heatSourceK = heat.body() == null ? Double.NaN : heat.body().temperatureK();
+	}
+
+	/** The pan's or oil's temperature where it is a body that moves under the load, K (NaN otherwise). */
+	public double heatSourceK() {
+		return heatSourceK;
 	}
 
 	public double timeS() {

@@ -55,7 +55,7 @@ final class SeriesRecorder implements StepListener {
 		double extent = s.browningExtent(0);
 		return new Sample(s.time, s.surfaceK() - 273.15, s.otherFaceK() - 273.15, m.coreK() - 273.15,
 				s.faceWaterActivity(0), s.moisture(0), s.standingWater(0) * 1000, extent, path.colourAt(extent),
-				m.crustLevel(), m.portionLevel());
+				m.crustLevel(), m.portionLevel(), m.heatSourceK() - 273.15);
 	}
 
 }

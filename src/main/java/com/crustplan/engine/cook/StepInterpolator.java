@@ -13,18 +13,18 @@ public final class StepInterpolator {
 	private double stepS;
 
 	/** Starts the record at the cook's initial state. */
-	void start(CookState state, LayerReaction reaction) {
-		current.fill(state, reaction);
-		previous.fill(state, reaction);
+	void start(CookState state, LayerReaction reaction, ActiveHeat heat) {
+		current.fill(state, reaction, heat);
+		previous.fill(state, reaction, heat);
 		stepS = 0;
 	}
 
 	/** Moves on by a step of stepS that has brought the state to its new values. */
-	void advance(CookState state, LayerReaction reaction, double stepS) {
+	void advance(CookState state, LayerReaction reaction, ActiveHeat heat, double stepS) {
 		Moment swap = previous;
 		previous = current;
 		current = swap;
-		current.fill(state, reaction);
+		current.fill(state, reaction, heat);
 		this.stepS = stepS;
 	}
 

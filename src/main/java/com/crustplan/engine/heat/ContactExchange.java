@@ -14,7 +14,15 @@ final class ContactExchange implements FaceExchange {
 
 	private final Message description;
 
+	/** The pan as a body whose temperature moves with the load; null for a pan held at panK. */
+	private final HeatedBody body;
+
 	ContactExchange(double panK, double contactWPerM2K, Message description) {
+		this(panK, contactWPerM2K, description, null);
+	}
+
+	ContactExchange(double panK, double contactWPerM2K, Message description, HeatedBody body) {
+		this.body = body;
 		this.panK = panK;
 		this.contact = contactWPerM2K;
 		this.description = description;
@@ -23,13 +31,19 @@ final class ContactExchange implements FaceExchange {
 	@Override
 	public void evaluate(double surfaceK, double waterActivity, double boilingFlux, FaceFlux out) {
 		out.clear();
-		out.heatFlux = contact * (panK - surfaceK);
+		double pan = body == null ? panK : body.temperatureK();
+		out.heatFlux = contact * (pan - surfaceK);
 		out.heatFluxSlope = -contact;
 	}
 
 	@Override
 	public Message describe() {
 		return description;
+	}
+
+	@Override
+	public HeatedBody body() {
+		return body;
 	}
 
 }

@@ -16,4 +16,9 @@ public interface FaceExchange {
 	/** A short description for the result's assumptions. */
 	Message describe();
 
+	/** The pan or oil this face touches, where it is a body whose temperature moves; null otherwise. */
+	default HeatedBody body() {
+		return null;
+	}
+
 }

@@ -16,6 +16,11 @@ public interface FaceSchedule {
 	/** Flip-free setups in which both faces see the same heat. */
 	boolean symmetric();
 
+	/** The heated body (pan, oil) of this setup, if it has one whose temperature moves; null otherwise. */
+	default HeatedBody body() {
+		return null;
+	}
+
 	/** A schedule that swaps a heated and an open exchange every {@code flipEverySeconds} (0: never). */
 	static FaceSchedule flipping(FaceExchange heated, FaceExchange open, double flipEverySeconds) {
 		return new FaceSchedule() {
@@ -44,6 +49,11 @@ public interface FaceSchedule {
 			public boolean symmetric() {
 				return false;
 			}
+
+			@Override
+			public HeatedBody body() {
+				return heated.body();
+			}
 		};
 	}
 
@@ -62,6 +72,11 @@ public interface FaceSchedule {
 			@Override
 			public boolean symmetric() {
 				return true;
+			}
+
+			@Override
+			public HeatedBody body() {
+				return exchange.body();
 			}
 		};
 	}

@@ -7,6 +7,7 @@ import com.crustplan.engine.message.Duration;
 import com.crustplan.engine.message.Message;
 import com.crustplan.engine.message.Quantity;
 import com.crustplan.engine.message.Temperature;
+import com.crustplan.engine.message.Text;
 import com.crustplan.engine.model.Parameter;
 import com.crustplan.engine.water.Atmosphere;
 
@@ -77,13 +78,27 @@ public sealed interface HeatSetup
 		return Quantity.of(wPerM2K, "W/m²K");
 	}
 
+	private static Message control(HeatedBody.Control c) {
+		return c == HeatedBody.Control.THERMOSTAT ? Message.of("control.kept-up") : Message.of("control.fixed");
+	}
+
 	private static Message turning(double flipEverySeconds) {
 		return flipEverySeconds > 0 ? Message.of("assumption.turned", Duration.seconds(flipEverySeconds))
 				: Message.of("assumption.not-turned");
 	}
 
 	/** A pan or griddle: the face down lies on the pan, the face up loses heat and water to kitchen air. */
-	record PanContact(double panTemperatureC, boolean fatFilm, double flipEverySeconds) implements HeatSetup {
+	record PanContact(double panTemperatureC, boolean fatFilm, double flipEverySeconds, PanBody body) implements HeatSetup {
+
+		/** A pan held at its set temperature whatever the load (a heavy pan on a steady flame). */
+		public PanContact(double panTemperatureC, boolean fatFilm, double flipEverySeconds) {
+			this(panTemperatureC, fatFilm, flipEverySeconds, null);
+		}
+
+		/** The same pan as a body that cools under the load and recovers as its heat allows. */
+		public PanContact withBody(PanBody b) {
+			return new PanContact(panTemperatureC, fatFilm, flipEverySeconds, b);
+		}
 
 		public PanContact {
 			range("temperatureC", panTemperatureC, 100, 320, "°C for a pan surface");
@@ -96,9 +111,10 @@ public sealed interface HeatSetup
 		@Override
 		public FaceSchedule schedule() {
 			double h = fatFilm ? CONTACT_WITH_FAT.value() : CONTACT_DRY.value();
-			return FaceSchedule.flipping(new ContactExchange(kelvin(panTemperatureC), h,
-					Message.of("exchange.pan", Temperature.celsius(panTemperatureC), coefficient(h))), kitchenAir(),
-					flipEverySeconds);
+			double set = kelvin(panTemperatureC);
+			return FaceSchedule.flipping(new ContactExchange(set, h,
+					Message.of("exchange.pan", Temperature.celsius(panTemperatureC), coefficient(h)),
+					body == null ? null : body.start(set)), kitchenAir(), flipEverySeconds);
 		}
 
 		@Override
@@ -114,7 +130,12 @@ public sealed interface HeatSetup
 		@Override
 		public List<Message> assumptions() {
 			// the contact value keeps the one decimal it has always been shown with
-			return List.of(Message.of("assumption.pan.held", Temperature.celsius(panTemperatureC)),
+			Message pan = body == null ? Message.of("assumption.pan.held", Temperature.celsius(panTemperatureC))
+					: Message.of("assumption.pan.body", Temperature.celsius(panTemperatureC), Text.of(body.material().label()),
+							Quantity.of(body.massKg(), "kg", 1), Quantity.of(body.diameterCm(), "cm"),
+							Quantity.of(body.powerKw(), "kW", 1), control(body.control()),
+							Quantity.of(body.coverPct(), "%"));
+			return List.of(pan,
 					Message.of(fatFilm ? "assumption.pan.contact.fat" : "assumption.pan.contact.dry",
 							Quantity.of((fatFilm ? CONTACT_WITH_FAT : CONTACT_DRY).value(), "W/m²K", 1)),
 					turning(flipEverySeconds),
@@ -235,7 +256,17 @@ public sealed interface HeatSetup
 	}
 
 	/** A deep fryer: both faces in oil at the set temperature. */
-	record DeepFryer(double oilTemperatureC) implements HeatSetup {
+	record DeepFryer(double oilTemperatureC, FryerBody body) implements HeatSetup {
+
+		/** Oil held at its set temperature whatever the load (a fryer that recovers at once). */
+		public DeepFryer(double oilTemperatureC) {
+			this(oilTemperatureC, null);
+		}
+
+		/** The same fryer with its oil as a body the load draws down and the thermostat brings back. */
+		public DeepFryer withBody(FryerBody b) {
+			return new DeepFryer(oilTemperatureC, b);
+		}
 
 		public DeepFryer {
 			range("temperatureC", oilTemperatureC, 120, 200, "°C for frying oil (above 200 °C oil smokes and may ignite)");
@@ -243,7 +274,9 @@ public sealed interface HeatSetup
 
 		@Override
 		public FaceSchedule schedule() {
-			return FaceSchedule.both(new OilExchange(kelvin(oilTemperatureC), OIL_QUIET.value(), OIL_BUBBLING.value()));
+			double set = kelvin(oilTemperatureC);
+			return FaceSchedule.both(new OilExchange(set, OIL_QUIET.value(), OIL_BUBBLING.value(),
+					body == null ? null : body.start(set)));
 		}
 
 		@Override
@@ -258,7 +291,10 @@ public sealed interface HeatSetup
 
 		@Override
 		public List<Message> assumptions() {
-			return List.of(Message.of("assumption.fryer.oil", Temperature.celsius(oilTemperatureC)),
+			Message oil = body == null ? Message.of("assumption.fryer.oil", Temperature.celsius(oilTemperatureC))
+					: Message.of("assumption.fryer.body", Temperature.celsius(oilTemperatureC), Quantity.of(body.oilLitres(), "L", 1),
+							Quantity.of(body.heaterKw(), "kW", 1), Quantity.of(body.loadKg(), "kg", 2));
+			return List.of(oil,
 					Message.of("assumption.fryer.coefficient", coefficient(OIL_QUIET.value()), coefficient(OIL_BUBBLING.value())),
 					Message.of("assumption.fryer.uptake"));
 		}

@@ -22,7 +22,15 @@ final class OilExchange implements FaceExchange {
 	/** Vapour flux at which bubbling is fully developed: all of h_bubbling·(T_oil − 100 °C) boiling water. */
 	private final double fullBoilingFlux;
 
+	/** The oil as a body whose temperature moves with the load; null for oil held at oilK. */
+	private final HeatedBody body;
+
 	OilExchange(double oilK, double quietWPerM2K, double bubblingWPerM2K) {
+		this(oilK, quietWPerM2K, bubblingWPerM2K, null);
+	}
+
+	OilExchange(double oilK, double quietWPerM2K, double bubblingWPerM2K, HeatedBody body) {
+		this.body = body;
 		this.oilK = oilK;
 		this.quiet = quietWPerM2K;
 		this.bubbling = bubblingWPerM2K;
@@ -38,13 +46,19 @@ final class OilExchange implements FaceExchange {
 	public void evaluate(double surfaceK, double waterActivity, double boilingFlux, FaceFlux out) {
 		out.clear();
 		double h = coefficient(boilingFlux);
-		out.heatFlux = h * (oilK - surfaceK);
+		double oil = body == null ? oilK : body.temperatureK();
+		out.heatFlux = h * (oil - surfaceK);
 		out.heatFluxSlope = -h;
 	}
 
 	@Override
 	public Message describe() {
 		return Message.of("exchange.fryer", Temperature.kelvin(oilK), PlainNumber.of(quiet, 0), Quantity.of(bubbling, "W/m²K"));
+	}
+
+	@Override
+	public HeatedBody body() {
+		return body;
 	}
 
 }
