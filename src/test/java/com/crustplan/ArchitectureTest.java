@@ -1,7 +1,6 @@
 package com.crustplan;
 
 import static com.tngtech.archunit.core.domain.JavaClass.Predicates.resideInAPackage;
-import static com.tngtech.archunit.core.domain.properties.HasName.Predicates.nameMatching;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.classes;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
@@ -47,18 +46,13 @@ class ArchitectureTest {
 		.areAnnotatedWith(jakarta.persistence.Entity.class);
 
 	/**
-	 * The feature packages (surface, setup, plan, user, demo, model) and system import each other in one
+	 * The feature packages (surface, setup, plan, user, demo, model, api) and system import each other in one
 	 * direction only. The engine counts as one slice here; its sub-packages have their own rule.
 	 */
 	@ArchTest
 	static final ArchRule featurePackagesAreFreeOfCycles = slices().matching("com.crustplan.(*)..")
 		.should()
-		.beFreeOfCycles()
-		// TOLERATED FOR NOW (lead: tighten): surface still borrows the plan API's error body and request
-		// reader (plan.ApiError, plan.PlanRequestReader) until the one API error contract replaces them;
-		// delete this line once surface no longer imports plan
-		.ignoreDependency(resideInAPackage("com.crustplan.surface.."),
-				nameMatching("com\\.crustplan\\.plan\\.(ApiError|PlanRequestReader)(\\$.*)?"));
+		.beFreeOfCycles();
 
 	/** system is the cross-cutting base (security, units, form binding, errors): it knows no feature. */
 	@ArchTest

@@ -5,19 +5,18 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-import org.slf4j.Logger;
-import org.slf4j.LoggerFactory;
-import org.springframework.http.HttpStatus;
 import org.springframework.http.MediaType;
 import org.springframework.http.ResponseEntity;
-import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RestController;
 
+import com.crustplan.api.Bound;
+import com.crustplan.api.InvalidRequestException;
 import com.crustplan.engine.assessment.Mitigation;
+import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.cook.Sample;
 import com.crustplan.engine.food.BrowningStage;
 import com.crustplan.engine.food.FoodCategory;
@@ -27,24 +26,21 @@ import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.system.MessageText;
 
 import com.fasterxml.jackson.annotation.JsonProperty;
-import tools.jackson.databind.json.JsonMapper;
 
-/** JSON API v1: categories with defaults, and computing a plan without saving it. All in °C and SI, text too. */
+/**
+ * JSON API v1: categories with defaults, and computing a plan without saving it. All in °C and SI, text
+ * too. Errors are answered as problem details by the API's one error advice ({@code api/ApiErrors}).
+ */
 @RestController
 @RequestMapping(path = "/api/v1", produces = MediaType.APPLICATION_JSON_VALUE)
 class PlanApiController {
 
-	private static final Logger log = LoggerFactory.getLogger(PlanApiController.class);
-
 	private final PlanService planner;
-
-	private final JsonMapper json;
 
 	private final MessageText text;
 
-	PlanApiController(PlanService planner, JsonMapper json, MessageText text) {
+	PlanApiController(PlanService planner, MessageText text) {
 		this.planner = planner;
-		this.json = json;
 		this.text = text;
 	}
 
@@ -63,12 +59,12 @@ class PlanApiController {
 				stages.add(m);
 			}
 			List<Map<String, Object>> products = new ArrayList<>();
-			for (com.crustplan.engine.assessment.Product p : com.crustplan.engine.assessment.Product.of(c)) {
+			for (Product p : Product.of(c)) {
 				Map<String, Object> m = new LinkedHashMap<>();
 				m.put("key", p.key());
 				m.put("label", p.label());
 				m.put("benchmarkUgPerKg", p.benchmark().map(b -> b.microgramsPerKg()).orElse(null));
-				m.put("default", p == com.crustplan.engine.assessment.Product.defaultFor(c));
+				m.put("default", p == Product.defaultFor(c));
 				products.add(m);
 			}
 			Map<String, Object> cat = new LinkedHashMap<>();
@@ -83,33 +79,20 @@ class PlanApiController {
 	}
 
 	@PostMapping("/plans")
-	ResponseEntity<?> plan(@RequestBody(required = false) String body) {
-		PlanRequestReader.PlanRequest req = PlanRequestReader.read(body, json);
-		PlanReport r = planner.plan(req.surface(), req.product(), req.setup(), req.target(), req.horizonMinutes(),
-				req.mitigations());
-		return ResponseEntity.ok(PlanResponse.of(r, text));
-	}
-
-	@ExceptionHandler(PlanRequestReader.BadRequest.class)
-	ResponseEntity<ApiError> badRequest(PlanRequestReader.BadRequest e) {
-		return ResponseEntity.badRequest().contentType(MediaType.APPLICATION_JSON).body(new ApiError(e.errors()));
-	}
-
-	/** The engine's own checks: the field gets the API's prefix where the engine did not give one. */
-	@ExceptionHandler(InvalidInputException.class)
-	ResponseEntity<ApiError> invalid(InvalidInputException e) {
-		String f = e.field();
-		String field = f.startsWith("target") || f.equals("horizonMinutes") || f.contains(".") ? f : "input." + f;
-		return ResponseEntity.badRequest().contentType(MediaType.APPLICATION_JSON).body(ApiError.of(field, e.reason()));
-	}
-
-	/** Anything else is our fault, not the caller's: logged, answered without internals. */
-	@ExceptionHandler(RuntimeException.class)
-	ResponseEntity<ApiError> unexpected(RuntimeException e) {
-		log.error("plan API failed", e);
-		return ResponseEntity.status(HttpStatus.INTERNAL_SERVER_ERROR)
-			.contentType(MediaType.APPLICATION_JSON)
-			.body(ApiError.of("server", "the plan could not be computed; the error is logged"));
+	ResponseEntity<PlanResponse> plan(@RequestBody(required = false) Bound<PlanBody> body) {
+		PlanBody.PlanRequest req = Bound.present(body, "send a JSON object with surface, heat and target")
+			.check(PlanBody::toRequest);
+		try {
+			PlanReport r = planner.plan(req.surface(), req.product(), req.setup(), req.target(), req.horizonMinutes(),
+					req.mitigations());
+			return ResponseEntity.ok().contentType(MediaType.APPLICATION_JSON).body(PlanResponse.of(r, text));
+		}
+		catch (InvalidInputException e) {
+			// the planner's checks (horizon, a lightness the path never reaches) in the request's terms
+			String f = e.field();
+			String field = f.startsWith("target") || f.equals("horizonMinutes") || f.contains(".") ? f : "input." + f;
+			throw InvalidRequestException.of(field, e.reason());
+		}
 	}
 
 	record Acrylamide(Double crustUgPerKg, Double portionUgPerKg, Double benchmarkUgPerKg, String zone,

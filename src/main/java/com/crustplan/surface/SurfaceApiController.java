@@ -4,46 +4,36 @@ import java.net.URI;
 import java.time.Instant;
 import java.util.List;
 
-import org.slf4j.Logger;
-import org.slf4j.LoggerFactory;
-import org.springframework.http.HttpStatus;
 import org.springframework.http.MediaType;
 import org.springframework.http.ResponseEntity;
-import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RestController;
-import org.springframework.web.method.annotation.MethodArgumentTypeMismatchException;
 
+import com.crustplan.api.Bound;
+import com.crustplan.api.FieldErrors;
+import com.crustplan.api.InvalidRequestException;
 import com.crustplan.engine.input.InvalidInputException;
-import com.crustplan.plan.ApiError;
-import com.crustplan.plan.PlanRequestReader;
-import com.crustplan.system.NotFoundException;
 
 import com.fasterxml.jackson.annotation.JsonProperty;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
- * JSON API v1 for saved surfaces. The body is read by the plan API's reader (same fields, same field
- * errors) and saved through {@link SurfaceService}, one transaction per save; 201 is answered only
- * after that transaction has committed. All temperatures in °C.
+ * JSON API v1 for saved surfaces. The body's {@code surface} is the same object the plan API takes
+ * ({@link SurfaceBody}); it is saved through {@link SurfaceService}, one transaction per save, and 201
+ * is answered only after that transaction has committed. Errors are answered as problem details by
+ * the API's one error advice ({@code api/ApiErrors}). All temperatures in °C.
  */
 @RestController
 @RequestMapping(path = "/api/v1/surfaces", produces = MediaType.APPLICATION_JSON_VALUE)
 class SurfaceApiController {
 
-	private static final Logger log = LoggerFactory.getLogger(SurfaceApiController.class);
-
 	private final SurfaceService surfaces;
 
-	private final JsonMapper json;
-
-	SurfaceApiController(SurfaceService surfaces, JsonMapper json) {
+	SurfaceApiController(SurfaceService surfaces) {
 		this.surfaces = surfaces;
-		this.json = json;
 	}
 
 	@GetMapping
@@ -56,54 +46,45 @@ class SurfaceApiController {
 		return SurfaceJson.of(surfaces.get(id));
 	}
 
-	@PostMapping(consumes = MediaType.ALL_VALUE)
-	ResponseEntity<SurfaceJson> create(@RequestBody(required = false) String body) {
-		PlanRequestReader.SurfaceRequest req = PlanRequestReader.readSurface(body, json);
-		SavedSurface saved = surfaces.create(form(req));
+	@PostMapping
+	ResponseEntity<SurfaceJson> create(@RequestBody(required = false) Bound<SaveBody> body) {
+		SurfaceForm form = Bound.present(body, "send a JSON object with name and surface").check(SaveBody::toForm);
+		SavedSurface saved;
+		try {
+			saved = surfaces.create(form);
+		}
+		catch (InvalidInputException e) {
+			// the engine's checks, run again inside the save: named in the request's terms
+			throw InvalidRequestException.of("surface." + e.field(), e.reason());
+		}
 		return ResponseEntity.created(URI.create("/api/v1/surfaces/" + saved.getId()))
 			.contentType(MediaType.APPLICATION_JSON)
 			.body(SurfaceJson.of(saved));
 	}
 
-	/** The page form's record of the same surface, so the API saves exactly what the form would. */
-	private static SurfaceForm form(PlanRequestReader.SurfaceRequest r) {
-		return SurfaceForm.of(r.surface(), r.name(), r.product(), r.notes());
-	}
+	/** A save body: {@code name} (required), {@code notes} and the {@code surface} as a plan takes it. */
+	record SaveBody(String name, String notes, SurfaceBody surface) {
 
-	@ExceptionHandler(PlanRequestReader.BadRequest.class)
-	ResponseEntity<ApiError> badRequest(PlanRequestReader.BadRequest e) {
-		return ResponseEntity.badRequest().contentType(MediaType.APPLICATION_JSON).body(new ApiError(e.errors()));
-	}
+		/** Longest name and notes a saved surface keeps (the columns' lengths). */
+		static final int NAME_MAX = 80;
 
-	/** The engine's checks, run again inside the save: named in the request's terms. */
-	@ExceptionHandler(InvalidInputException.class)
-	ResponseEntity<ApiError> invalid(InvalidInputException e) {
-		return ResponseEntity.badRequest()
-			.contentType(MediaType.APPLICATION_JSON)
-			.body(ApiError.of("surface." + e.field(), e.reason()));
-	}
+		static final int NOTES_MAX = 1000;
 
-	@ExceptionHandler(NotFoundException.class)
-	ResponseEntity<ApiError> notFound(NotFoundException e) {
-		return ResponseEntity.status(HttpStatus.NOT_FOUND)
-			.contentType(MediaType.APPLICATION_JSON)
-			.body(ApiError.of("id", e.getMessage()));
-	}
+		/** The page form's record of the same surface, so the API saves exactly what the form would. */
+		SurfaceForm toForm(FieldErrors errors) {
+			String n = errors.text("name", name, NAME_MAX);
+			if (n == null && !errors.has("name")) {
+				errors.add("name", "is required: give the surface a name");
+			}
+			String text = errors.text("notes", notes, NOTES_MAX);
+			SurfaceBody given = errors.requireObject("surface", surface);
+			SurfaceBody.Read read = given == null ? null : given.read(errors);
+			if (!errors.isEmpty()) {
+				return null;
+			}
+			return SurfaceForm.of(read.surface(), n, given.productKey(read), text);
+		}
 
-	@ExceptionHandler(MethodArgumentTypeMismatchException.class)
-	ResponseEntity<ApiError> badId(MethodArgumentTypeMismatchException e) {
-		return ResponseEntity.badRequest()
-			.contentType(MediaType.APPLICATION_JSON)
-			.body(ApiError.of(e.getName(), "must be a whole number"));
-	}
-
-	/** Anything else is our fault, not the caller's: logged, answered without internals. */
-	@ExceptionHandler(RuntimeException.class)
-	ResponseEntity<ApiError> unexpected(RuntimeException e) {
-		log.error("surface API failed", e);
-		return ResponseEntity.status(HttpStatus.INTERNAL_SERVER_ERROR)
-			.contentType(MediaType.APPLICATION_JSON)
-			.body(ApiError.of("server", "the surface could not be saved or read; nothing half-saved is kept; the error is logged"));
 	}
 
 	record Listed(long id, String name, String category) {

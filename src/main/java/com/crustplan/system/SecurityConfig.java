@@ -14,7 +14,7 @@ import org.springframework.context.annotation.Configuration;
 import org.springframework.core.annotation.Order;
 import org.springframework.http.HttpHeaders;
 import org.springframework.http.HttpMethod;
-import org.springframework.http.MediaType;
+import org.springframework.http.HttpStatus;
 import org.springframework.security.access.hierarchicalroles.RoleHierarchy;
 import org.springframework.security.access.hierarchicalroles.RoleHierarchyImpl;
 import org.springframework.security.access.AccessDeniedException;
@@ -43,6 +43,8 @@ import org.springframework.security.web.header.writers.ReferrerPolicyHeaderWrite
 import org.springframework.security.web.util.matcher.AndRequestMatcher;
 import org.springframework.security.web.util.matcher.AnyRequestMatcher;
 import org.springframework.security.web.util.matcher.RequestMatcher;
+
+import com.crustplan.api.Problems;
 
 /**
  * Who may do what. Reading needs a signed-in cook; writing needs a chef; user accounts need an admin.
@@ -219,11 +221,9 @@ public class SecurityConfig {
 		return h;
 	}
 
+	/** As every API error: an RFC 9457 problem detail with the {@code errors} list (api/Problems). */
 	private static void json(HttpServletResponse res, int status, String message) throws IOException {
-		res.setStatus(status);
-		res.setContentType(MediaType.APPLICATION_JSON_VALUE);
-		res.setCharacterEncoding("UTF-8");
-		res.getWriter().write("{\"errors\":[{\"field\":\"authorization\",\"message\":\"" + message + "\"}]}");
+		Problems.write(res, HttpStatus.valueOf(status), "authorization", message);
 	}
 
 	@Bean

@@ -120,7 +120,7 @@ class PlanApiTest {
 
 		void rejects(String body, String field) throws Exception {
 			plan(body).andExpect(status().isBadRequest())
-				.andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_JSON))
+				.andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_PROBLEM_JSON))
 				.andExpect(jsonPath("$.errors[*].field", hasItem(field)))
 				.andExpect(jsonPath("$.errors[0].message").isNotEmpty());
 		}

@@ -119,7 +119,7 @@ class SurfaceApiTest {
 		long before = surfaces.count();
 		mvc.perform(save(body).with(httpBasic("chef", "chef-demo")))
 			.andExpect(status().isBadRequest())
-			.andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_JSON))
+			.andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_PROBLEM_JSON))
 			.andExpect(jsonPath("$.errors[0].field").value(field))
 			.andExpect(jsonPath("$.errors[0].message").value(containsString(message == null ? "" : message)));
 		assertThat(surfaces.count()).isEqualTo(before);
@@ -162,7 +162,7 @@ class SurfaceApiTest {
 	void shouldAnswer404InJsonForAMissingSurface() throws Exception {
 		mvc.perform(get("/api/v1/surfaces/987654321").with(httpBasic("cook", "cook-demo")))
 			.andExpect(status().isNotFound())
-			.andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_JSON))
+			.andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_PROBLEM_JSON))
 			.andExpect(jsonPath("$.errors[0].field").value("id"))
 			.andExpect(jsonPath("$.errors[0].message").value(containsString("987654321")));
 		mvc.perform(get("/api/v1/surfaces/twelve").with(httpBasic("cook", "cook-demo")))

@@ -1,0 +1,87 @@
+package com.crustplan.plan;
+
+import com.crustplan.api.FieldErrors;
+import com.crustplan.engine.assessment.Product;
+import com.crustplan.engine.cook.Target;
+import com.crustplan.engine.input.InvalidInputException;
+import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.setup.HeatMode;
+import com.crustplan.setup.HeatSettings;
+import com.crustplan.surface.SurfaceBody;
+
+/**
+ * A {@code POST /api/v1/plans} body. Jackson binds it (wrong values become field errors, see
+ * {@code api/Bound}); {@link #toRequest} checks what binding cannot and builds the engine's inputs.
+ */
+record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double horizonMinutes,
+		Boolean mitigations) {
+
+	/** Longest mode or stage key read. */
+	static final int KEY_MAX = 80;
+
+	record HeatBody(String mode, Double temperatureC, Boolean fan, Boolean fatFilm, Double relativeHumidityPct,
+			Double flipEverySeconds) {
+	}
+
+	record TargetBody(String stage, Double lightness) {
+	}
+
+	record PlanRequest(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
+			boolean mitigations) {
+	}
+
+	PlanRequest toRequest(FieldErrors errors) {
+		SurfaceBody s = errors.requireObject("surface", surface);
+		HeatBody h = errors.requireObject("heat", heat);
+		TargetBody t = errors.requireObject("target", target);
+		SurfaceBody.Read read = s == null ? null : s.read(errors);
+		HeatSetup setup = h == null ? null : heat(h, errors);
+		Target goal = t == null ? null : target(t, errors);
+		if (!errors.isEmpty()) {
+			return null;
+		}
+		double horizon = horizonMinutes == null ? PlanService.DEFAULT_HORIZON_MINUTES : horizonMinutes;
+		// the reducing changes cost a dozen further runs: an API client asks for them
+		return new PlanRequest(read.surface(), read.product(), setup, goal, horizon,
+				mitigations != null && mitigations);
+	}
+
+	private static HeatSetup heat(HeatBody h, FieldErrors errors) {
+		String key = errors.text("heat.mode", h.mode(), KEY_MAX);
+		HeatMode mode = key == null ? null : HeatMode.byKey(key).orElse(null);
+		if (mode == null && !errors.has("heat.mode")) {
+			errors.add("heat.mode", key == null ? "is required: pan, oven, grill or fryer"
+					: "'" + key + "' is not a mode; use pan, oven, grill or fryer");
+		}
+		if (h.temperatureC() == null && !errors.has("heat.temperatureC")) {
+			errors.add("heat.temperatureC", "is required");
+		}
+		if (mode == null || errors.hasUnder("heat.")) {
+			return null;
+		}
+		try {
+			return HeatSettings.toHeatSetup(mode, h.temperatureC(), h.fan(), h.fatFilm(), h.relativeHumidityPct(),
+					h.flipEverySeconds());
+		}
+		catch (InvalidInputException e) {
+			errors.add("heat." + e.field(), e.reason());
+			return null;
+		}
+	}
+
+	private static Target target(TargetBody t, FieldErrors errors) {
+		String stage = errors.text("target.stage", t.stage(), KEY_MAX);
+		if (errors.hasUnder("target.")) {
+			return null;
+		}
+		try {
+			return PlanInputs.target(stage, t.lightness());
+		}
+		catch (InvalidInputException e) {
+			errors.add("target", e.reason());
+			return null;
+		}
+	}
+
+}
