@@ -89,7 +89,8 @@ class PlanController {
 	String save(@Valid @ModelAttribute("form") PlanForm form, BindingResult result,
 			@ModelAttribute("units") TemperatureUnit units, Model model, Principal principal,
 			RedirectAttributes redirect) {
-		if (form.name() == null || form.name().isBlank()) {
+		// a name refused while binding (a control character) already has its error, and no target to reject on
+		if ((form.name() == null || form.name().isBlank()) && !result.hasFieldErrors("name")) {
 			result.rejectValue("name", "required", "give the plan a name to save it");
 		}
 		if (!form.complete()) {

@@ -13,6 +13,7 @@ import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.setup.HeatMode;
 import com.crustplan.setup.HeatSettings;
+import com.crustplan.system.StoredText;
 
 import tools.jackson.core.JacksonException;
 import tools.jackson.databind.JsonNode;
@@ -290,6 +291,10 @@ public final class PlanRequestReader {
 		}
 		if (!n.isString()) {
 			error(field, "must be text");
+			return null;
+		}
+		if (!StoredText.isPlain(n.asString())) {
+			error(field, StoredText.REASON);
 			return null;
 		}
 		String v = n.asString().trim();

@@ -2,7 +2,6 @@ package com.crustplan.system;
 
 import java.beans.PropertyEditorSupport;
 
-import org.springframework.beans.propertyeditors.StringTrimmerEditor;
 import org.springframework.stereotype.Controller;
 import org.springframework.web.bind.WebDataBinder;
 import org.springframework.web.bind.annotation.ControllerAdvice;
@@ -34,7 +33,7 @@ public class FormBinding {
 	@InitBinder
 	void numbers(WebDataBinder binder) {
 		binder.registerCustomEditor(Double.class, new DecimalEditor());
-		binder.registerCustomEditor(String.class, new StringTrimmerEditor(false));
+		binder.registerCustomEditor(String.class, new PlainTextEditor());
 		// a password is taken exactly as typed: sign-in compares it untrimmed
 		binder.registerCustomEditor(String.class, "password", new PropertyEditorSupport() {
 			@Override
@@ -42,6 +41,22 @@ public class FormBinding {
 				setValue(text);
 			}
 		});
+	}
+
+	/**
+	 * Text fields: trimmed, after {@link StoredText} has checked the text as sent; a control
+	 * character becomes the field error {@code typeMismatch} (messages.properties says why).
+	 */
+	static final class PlainTextEditor extends PropertyEditorSupport {
+
+		@Override
+		public void setAsText(String text) {
+			if (!StoredText.isPlain(text)) {
+				throw new IllegalArgumentException(StoredText.REASON);
+			}
+			setValue(text == null ? null : text.trim());
+		}
+
 	}
 
 	static final class DecimalEditor extends PropertyEditorSupport {
