@@ -59,6 +59,11 @@ class StoredTextTest {
 	JsonMapper json;
 
 	static MockHttpServletRequestBuilder potato(String... overrides) {
+		return potatoTo("/surfaces/new", overrides);
+	}
+
+	/** A valid potato surface form (the category's typical composition, 100 % in all) posted to {@code url}. */
+	static MockHttpServletRequestBuilder potatoTo(String url, String... overrides) {
 		Map<String, String> p = new LinkedHashMap<>();
 		p.put("name", "Control wedges");
 		p.put("category", "potato");
@@ -80,7 +85,7 @@ class StoredTextTest {
 		for (int i = 0; i < overrides.length; i += 2) {
 			p.put(overrides[i], overrides[i + 1]);
 		}
-		MockHttpServletRequestBuilder b = post("/surfaces/new").with(csrf());
+		MockHttpServletRequestBuilder b = post(url).with(csrf());
 		p.forEach(b::param);
 		return b;
 	}
