@@ -6,9 +6,12 @@ import java.util.List;
 
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
+import org.springframework.dao.ConcurrencyFailureException;
+import org.springframework.dao.DataAccessResourceFailureException;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.MediaType;
 import org.springframework.http.ResponseEntity;
+import org.springframework.transaction.CannotCreateTransactionException;
 import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
@@ -103,6 +106,24 @@ class SurfaceApiController {
 		return ResponseEntity.badRequest()
 			.contentType(MediaType.APPLICATION_JSON)
 			.body(ApiError.of(e.getName(), "must be a whole number"));
+	}
+
+	/** Someone else changed or deleted the same surface at the same moment: read it again and retry. */
+	@ExceptionHandler(ConcurrencyFailureException.class)
+	ResponseEntity<ApiError> conflict(ConcurrencyFailureException e) {
+		return ResponseEntity.status(HttpStatus.CONFLICT)
+			.contentType(MediaType.APPLICATION_JSON)
+			.body(ApiError.of("id", "the surface was changed or deleted by someone else at the same moment; read it again and retry"));
+	}
+
+	/** The database does not answer (within the pool's 3 s): nothing was saved; worth retrying. */
+	@ExceptionHandler({ DataAccessResourceFailureException.class, CannotCreateTransactionException.class })
+	ResponseEntity<ApiError> unavailable(RuntimeException e) {
+		log.warn("surface API: database not answering: {}", e.getMessage());
+		return ResponseEntity.status(HttpStatus.SERVICE_UNAVAILABLE)
+			.contentType(MediaType.APPLICATION_JSON)
+			.header("Retry-After", "30")
+			.body(ApiError.of("server", "the database is not answering; nothing was saved; try again shortly"));
 	}
 
 	/** Anything else is our fault, not the caller's: logged, answered without internals. */
