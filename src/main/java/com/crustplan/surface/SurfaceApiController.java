@@ -8,10 +8,12 @@ import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import org.springframework.dao.ConcurrencyFailureException;
 import org.springframework.dao.DataAccessResourceFailureException;
+import org.springframework.dao.UncategorizedDataAccessException;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.MediaType;
 import org.springframework.http.ResponseEntity;
 import org.springframework.transaction.CannotCreateTransactionException;
+import org.springframework.transaction.TransactionSystemException;
 import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
@@ -116,8 +118,9 @@ class SurfaceApiController {
 			.body(ApiError.of("id", "the surface was changed or deleted by someone else at the same moment; read it again and retry"));
 	}
 
-	/** The database does not answer (within the pool's 3 s): nothing was saved; worth retrying. */
-	@ExceptionHandler({ DataAccessResourceFailureException.class, CannotCreateTransactionException.class })
+	/** The database does not answer (within the pool's 3 s) or cannot store now (disk full): nothing saved; retry. */
+	@ExceptionHandler({ DataAccessResourceFailureException.class, CannotCreateTransactionException.class,
+			UncategorizedDataAccessException.class, TransactionSystemException.class })
 	ResponseEntity<ApiError> unavailable(RuntimeException e) {
 		log.warn("surface API: database not answering: {}", e.getMessage());
 		return ResponseEntity.status(HttpStatus.SERVICE_UNAVAILABLE)

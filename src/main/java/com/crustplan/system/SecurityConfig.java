@@ -15,6 +15,7 @@ import org.springframework.security.access.hierarchicalroles.RoleHierarchy;
 import org.springframework.security.access.hierarchicalroles.RoleHierarchyImpl;
 import org.springframework.security.access.AccessDeniedException;
 import org.springframework.security.authentication.AnonymousAuthenticationToken;
+import org.springframework.security.authentication.InternalAuthenticationServiceException;
 import org.springframework.security.config.annotation.web.builders.HttpSecurity;
 import org.springframework.security.config.http.SessionCreationPolicy;
 import org.springframework.security.crypto.bcrypt.BCryptPasswordEncoder;
@@ -60,8 +61,12 @@ public class SecurityConfig {
 			String h = req.getHeader(HttpHeaders.AUTHORIZATION);
 			return h != null && h.regionMatches(true, 0, "Basic ", 0, 6);
 		};
-		AuthenticationEntryPoint unauthorized = (req, res, e) -> json(res, HttpServletResponse.SC_UNAUTHORIZED,
-				"sign in to do this");
+		// an account that could not be read (database down or full) is our fault, not wrong credentials
+		AuthenticationEntryPoint unauthorized = (req, res, e) -> json(res,
+				e instanceof InternalAuthenticationServiceException ? HttpServletResponse.SC_SERVICE_UNAVAILABLE
+						: HttpServletResponse.SC_UNAUTHORIZED,
+				e instanceof InternalAuthenticationServiceException
+						? "the account database is not answering; try again shortly" : "sign in to do this");
 		http.securityMatcher(new AndRequestMatcher(api, basic))
 			.authorizeHttpRequests(auth -> auth.requestMatchers(HttpMethod.GET, "/api/v1/categories")
 				.permitAll()
