@@ -9,6 +9,7 @@ import org.slf4j.LoggerFactory;
 import org.springframework.core.Ordered;
 import org.springframework.core.annotation.AnnotatedElementUtils;
 import org.springframework.core.annotation.Order;
+import org.springframework.dao.ConcurrencyFailureException;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.MediaType;
 import org.springframework.http.ProblemDetail;
@@ -50,6 +51,14 @@ public class ApiErrors {
 	ResponseEntity<ProblemDetail> invalidInput(InvalidInputException e, HttpServletRequest request) {
 		apiOnly(e, request);
 		return answer(Problems.of(HttpStatus.BAD_REQUEST, e.field(), e.reason()), request);
+	}
+
+	/** Someone else changed or deleted the same record at the same moment: read it again and retry. */
+	@ExceptionHandler(ConcurrencyFailureException.class)
+	ResponseEntity<ProblemDetail> conflict(ConcurrencyFailureException e, HttpServletRequest request) {
+		apiOnly(e, request);
+		return answer(Problems.of(HttpStatus.CONFLICT, "id",
+				"the record was changed or deleted by someone else at the same moment; read it again and retry"), request);
 	}
 
 	@ExceptionHandler(BodyTooLargeException.class)

@@ -1,5 +1,6 @@
 package com.crustplan.api;
 
+
 import java.util.ArrayList;
 import java.util.List;
 
@@ -42,6 +43,10 @@ public final class FieldErrors {
 
 	/** Text (already trimmed, blank read as absent) no longer than {@code maxLength}; else an error and null. */
 	public String text(String field, String value, int maxLength) {
+		if (!StoredText.isPlain(value)) {
+			add(field, StoredText.REASON);
+			return null;
+		}
 		if (value != null && value.length() > maxLength) {
 			add(field, "is too long (at most " + maxLength + " characters)");
 			return null;

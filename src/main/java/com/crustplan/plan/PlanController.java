@@ -6,6 +6,7 @@ import java.util.Optional;
 
 import jakarta.validation.Valid;
 
+import org.springframework.dao.ConcurrencyFailureException;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.validation.BindingResult;
@@ -13,6 +14,7 @@ import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.ModelAttribute;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
+import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 import com.crustplan.engine.food.FoodCategory;
@@ -24,6 +26,7 @@ import com.crustplan.surface.SavedSurface;
 import com.crustplan.surface.SurfaceForm;
 import com.crustplan.surface.SurfaceService;
 import com.crustplan.system.FormBinding;
+import com.crustplan.system.FormTokens;
 import com.crustplan.system.NotFoundException;
 import com.crustplan.system.TemperatureUnit;
 
@@ -43,8 +46,11 @@ class PlanController {
 
 	private final JsonMapper json;
 
+	private final FormTokens tokens;
+
 	PlanController(PlanService planner, SavedPlanService saved, SurfaceService surfaces, SetupService setups,
-			JsonMapper json) {
+			JsonMapper json, FormTokens tokens) {
+		this.tokens = tokens;
 		this.planner = planner;
 		this.saved = saved;
 		this.surfaces = surfaces;
@@ -87,9 +93,12 @@ class PlanController {
 
 	@PostMapping("/plans")
 	String save(@Valid @ModelAttribute("form") PlanForm form, BindingResult result,
+			@RequestParam(name = "formToken", required = false) String token,
 			@ModelAttribute("units") TemperatureUnit units, Model model, Principal principal,
 			RedirectAttributes redirect) {
-		if (form.name() == null || form.name().isBlank()) {
+		model.addAttribute("formToken", FormTokens.keep(token));
+		// a name refused while binding (a control character) already has its error, and no target to reject on
+		if ((form.name() == null || form.name().isBlank()) && !result.hasFieldErrors("name")) {
 			result.rejectValue("name", "required", "give the plan a name to save it");
 		}
 		if (!form.complete()) {
@@ -110,10 +119,12 @@ class PlanController {
 			return page(model, form, result);
 		}
 		Resolved r = resolved.get();
-		SavedPlan plan = saved.save(form.name(), r.surfaceName(), r.setupName(), r.inputs(), report,
-				principal == null ? null : principal.getName());
-		redirect.addFlashAttribute("message", "Plan “" + plan.getName() + "” saved.");
-		return "redirect:/plans/" + plan.getId();
+		// the form's one-time token: a double submit leads to the one plan it saved
+		FormTokens.Submitted plan = tokens.once("plan", token, () -> saved.save(form.name(), r.surfaceName(),
+				r.setupName(), r.inputs(), report, principal == null ? null : principal.getName()).getId());
+		redirect.addFlashAttribute("message", plan.repeat() ? "This form was sent twice; the plan was saved once."
+				: "Plan “" + form.name().trim() + "” saved.");
+		return "redirect:/plans/" + plan.id();
 	}
 
 	@GetMapping("/plans")
@@ -152,7 +163,14 @@ class PlanController {
 	@PostMapping("/plans/{id}/delete")
 	String delete(@PathVariable long id, RedirectAttributes redirect) {
 		String name = saved.get(id).getName();
-		saved.delete(id);
+		try {
+			saved.delete(id);
+		}
+		catch (ConcurrencyFailureException | NotFoundException e) {
+			// two deletes at once: the other one won
+			redirect.addFlashAttribute("message", "Plan “" + name + "” was already deleted by someone else.");
+			return "redirect:/plans";
+		}
 		redirect.addFlashAttribute("message", "Plan “" + name + "” deleted.");
 		return "redirect:/plans";
 	}
@@ -222,6 +240,9 @@ class PlanController {
 
 	private String page(Model model, PlanForm form, BindingResult result) {
 		FormBinding.put(model, form, result);
+		if (!model.containsAttribute("formToken")) {
+			model.addAttribute("formToken", FormTokens.issue());
+		}
 		model.addAttribute("surfaces", surfaces.all());
 		model.addAttribute("setups", setups.all());
 		model.addAttribute("categories", Arrays.asList(FoodCategory.values()));

@@ -76,6 +76,22 @@ public class PlanService {
 	 */
 	public PlanReport plan(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
 			boolean withMitigations) {
+		return reports.get(new ReportKey(surface, product, setup, target, horizonMinutes, withMitigations),
+				k -> compute(surface, product, setup, target, horizonMinutes, withMitigations));
+	}
+
+	/**
+	 * Repeat plan-page views reuse the work done: the report depends only on these (all value records);
+	 * its messages are worded per view, in the cook's unit, so the unit is not part of the key.
+	 */
+	private record ReportKey(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
+			boolean withMitigations) {
+	}
+
+	private final ReportCache<ReportKey, PlanReport> reports = new ReportCache<>(ReportCache.PLAN_REPORTS);
+
+	private PlanReport compute(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
+			boolean withMitigations) {
 		if (!Double.isFinite(horizonMinutes) || horizonMinutes < 1 || horizonMinutes > MAX_HORIZON_MINUTES) {
 			throw new InvalidInputException("horizonMinutes",
 					String.format(Locale.ROOT, "must be from 1 to %.0f minutes", MAX_HORIZON_MINUTES));

@@ -15,6 +15,9 @@ import jakarta.persistence.Version;
 @Table(name = "saved_plan")
 public class SavedPlan {
 
+	/** The column's length (Flyway V4): fits the inputs' JSON even when every text is escaped at its longest. */
+	static final int INPUTS_MAX = 20000;
+
 	@Id
 	@GeneratedValue(strategy = GenerationType.IDENTITY)
 	private Long id;
@@ -34,7 +37,7 @@ public class SavedPlan {
 	@Column(name = "target_label", nullable = false, length = 80)
 	private String targetLabel;
 
-	@Column(name = "inputs_json", nullable = false, length = 8000)
+	@Column(name = "inputs_json", nullable = false, length = SavedPlan.INPUTS_MAX)
 	private String inputsJson;
 
 	@Column(nullable = false)

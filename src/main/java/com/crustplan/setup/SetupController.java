@@ -4,6 +4,7 @@ import java.util.Arrays;
 
 import jakarta.validation.Valid;
 
+import org.springframework.dao.ConcurrencyFailureException;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.validation.BindingResult;
@@ -12,11 +13,16 @@ import org.springframework.web.bind.annotation.ModelAttribute;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestMapping;
+import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 import com.crustplan.engine.input.InvalidInputException;
+import com.crustplan.system.EditConflict;
 import com.crustplan.system.EngineErrors;
 import com.crustplan.system.FormBinding;
+import com.crustplan.system.FormTokens;
+import com.crustplan.system.NotFoundException;
+import com.crustplan.system.StaleEditException;
 import com.crustplan.system.TemperatureUnit;
 
 @Controller
@@ -25,8 +31,11 @@ class SetupController {
 
 	private final SetupService setups;
 
-	SetupController(SetupService setups) {
+	private final FormTokens tokens;
+
+	SetupController(SetupService setups, FormTokens tokens) {
 		this.setups = setups;
+		this.tokens = tokens;
 	}
 
 	@GetMapping
@@ -37,42 +46,73 @@ class SetupController {
 
 	@GetMapping("/new")
 	String newForm(@ModelAttribute("units") TemperatureUnit units, Model model) {
+		model.addAttribute("formToken", FormTokens.issue());
 		return form(model, SetupForm.blank(units), null, "/setups/new", "New heat setup", units);
 	}
 
 	@PostMapping("/new")
 	String create(@Valid @ModelAttribute("form") SetupForm form, BindingResult result,
+			@RequestParam(name = "formToken", required = false) String token,
 			@ModelAttribute("units") TemperatureUnit units, Model model, RedirectAttributes redirect) {
 		if (!check(form, result)) {
+			model.addAttribute("formToken", FormTokens.keep(token));
 			return form(model, form, result, "/setups/new", "New heat setup", units);
 		}
-		SavedSetup saved = setups.create(form);
-		redirect.addFlashAttribute("message", "Setup “" + saved.getName() + "” saved.");
+		FormTokens.Submitted saved = tokens.once("setup", token, () -> setups.create(form).getId());
+		redirect.addFlashAttribute("message", saved.repeat() ? "This form was sent twice; the setup was saved once."
+				: "Setup “" + form.name().trim() + "” saved.");
 		return "redirect:/setups";
 	}
 
 	@GetMapping("/{id}/edit")
 	String editForm(@PathVariable long id, @ModelAttribute("units") TemperatureUnit units, Model model) {
 		SavedSetup s = setups.get(id);
+		model.addAttribute("version", s.getVersion());
 		return form(model, SetupForm.of(s, units), null, "/setups/" + id + "/edit", "Edit " + s.getName(), units);
 	}
 
+	/** As for surfaces: a save from a stale form comes back with both versions, nothing typed lost. */
 	@PostMapping("/{id}/edit")
 	String update(@PathVariable long id, @Valid @ModelAttribute("form") SetupForm form, BindingResult result,
+			@RequestParam(name = "version", required = false) Integer version,
 			@ModelAttribute("units") TemperatureUnit units, Model model, RedirectAttributes redirect) {
-		SavedSetup existing = setups.get(id);
-		if (!check(form, result)) {
-			return form(model, form, result, "/setups/" + id + "/edit", "Edit " + existing.getName(), units);
+		try {
+			SavedSetup existing = setups.get(id);
+			if (!check(form, result)) {
+				model.addAttribute("version", version);
+				return form(model, form, result, "/setups/" + id + "/edit", "Edit " + existing.getName(), units);
+			}
+			setups.update(id, form, version);
 		}
-		setups.update(id, form);
+		catch (StaleEditException | ConcurrencyFailureException | NotFoundException e) {
+			return conflict(id, form, units, model);
+		}
 		redirect.addFlashAttribute("message", "Setup “" + form.name().trim() + "” updated.");
 		return "redirect:/setups";
+	}
+
+	private String conflict(long id, SetupForm form, TemperatureUnit units, Model model) {
+		SavedSetup now;
+		try {
+			now = setups.get(id);
+		}
+		catch (NotFoundException gone) {
+			model.addAttribute("conflict", EditConflict.deleted("setup"));
+			model.addAttribute("formToken", FormTokens.issue());
+			return form(model, form, null, "/setups/new", "New heat setup", units);
+		}
+		SetupForm yours = form.unit() == units ? form : form.inUnit(units);
+		model.addAttribute("conflict",
+				EditConflict.between("setup", now.getName(), now.getUpdatedAt(), yours, SetupForm.of(now, units)));
+		model.addAttribute("version", now.getVersion());
+		return form(model, form, null, "/setups/" + id + "/edit", "Edit " + now.getName(), units);
 	}
 
 	@GetMapping("/{id}/copy")
 	String copyForm(@PathVariable long id, @ModelAttribute("units") TemperatureUnit units, Model model) {
 		SavedSetup s = setups.get(id);
 		String name = "Copy of " + s.getName();
+		model.addAttribute("formToken", FormTokens.issue());
 		return form(model, SetupForm.of(s, units).withName(name.length() > 80 ? name.substring(0, 80) : name), null,
 				"/setups/new", name, units);
 	}
@@ -86,7 +126,16 @@ class SetupController {
 	@PostMapping("/{id}/delete")
 	String delete(@PathVariable long id, RedirectAttributes redirect) {
 		String name = setups.get(id).getName();
-		setups.delete(id);
+		try {
+			setups.delete(id);
+		}
+		catch (ConcurrencyFailureException | NotFoundException e) {
+			boolean gone = setups.all().stream().noneMatch(s -> s.getId() == id);
+			redirect.addFlashAttribute("message", gone ? "Setup “" + name + "” was already deleted by someone else."
+					: "Setup “" + name + "” was changed by someone else while you deleted it, so it was kept. "
+							+ "Delete it again if you still want to.");
+			return "redirect:/setups";
+		}
 		redirect.addFlashAttribute("message", "Setup “" + name + "” deleted. Saved plans keep their own copy.");
 		return "redirect:/setups";
 	}

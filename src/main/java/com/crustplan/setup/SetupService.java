@@ -6,6 +6,7 @@ import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
 import com.crustplan.system.NotFoundException;
+import com.crustplan.system.StaleEditException;
 
 /** Saved heat setups; each write is one transaction. */
 @Service
@@ -33,10 +34,14 @@ public class SetupService {
 		return setups.save(SavedSetup.from(form));
 	}
 
+	/** As for surfaces: refused with {@link StaleEditException} unless made on the saved version. */
 	@Transactional
-	public SavedSetup update(long id, SetupForm form) {
+	public SavedSetup update(long id, SetupForm form, Integer expectedVersion) {
 		form.toHeatSetup();
 		SavedSetup s = setups.findById(id).orElseThrow(() -> new NotFoundException("Setup", id));
+		if (expectedVersion == null || expectedVersion != s.getVersion()) {
+			throw new StaleEditException("Setup", id);
+		}
 		s.update(form);
 		return s;
 	}

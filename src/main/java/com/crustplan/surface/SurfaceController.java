@@ -8,6 +8,7 @@ import java.util.stream.Stream;
 
 import jakarta.validation.Valid;
 
+import org.springframework.dao.ConcurrencyFailureException;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.validation.BindingResult;
@@ -24,9 +25,13 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.food.SurfaceField;
+import com.crustplan.system.EditConflict;
 import com.crustplan.system.EngineErrors;
 import com.crustplan.system.FormBinding;
+import com.crustplan.system.FormTokens;
 import com.crustplan.system.JsonText;
+import com.crustplan.system.NotFoundException;
+import com.crustplan.system.StaleEditException;
 import com.crustplan.system.TemperatureUnit;
 
 @Controller
@@ -45,9 +50,12 @@ class SurfaceController {
 
 	private final JsonText json;
 
-	SurfaceController(SurfaceService surfaces, JsonText json) {
+	private final FormTokens tokens;
+
+	SurfaceController(SurfaceService surfaces, JsonText json, FormTokens tokens) {
 		this.surfaces = surfaces;
 		this.json = json;
+		this.tokens = tokens;
 	}
 
 	@GetMapping
@@ -60,18 +68,23 @@ class SurfaceController {
 	String newForm(@RequestParam(name = "category", required = false) String category,
 			@ModelAttribute("units") TemperatureUnit units, Model model) {
 		FoodCategory c = FoodCategory.byKey(category == null ? "" : category).orElse(FoodCategory.MEAT);
+		model.addAttribute("formToken", FormTokens.issue());
 		return form(model, SurfaceForm.defaults(c, "", units), null, "/surfaces/new", "New surface", units);
 	}
 
+	/** The form's one-time token makes a double submit lead to the one surface it saved. */
 	@PostMapping("/new")
 	String create(@Valid @ModelAttribute("form") SurfaceForm form, BindingResult result,
+			@RequestParam(name = "formToken", required = false) String token,
 			@ModelAttribute("units") TemperatureUnit units, Model model, RedirectAttributes redirect) {
 		if (!check(form, result)) {
+			model.addAttribute("formToken", FormTokens.keep(token));
 			return form(model, form, result, "/surfaces/new", "New surface", units);
 		}
-		SavedSurface saved = surfaces.create(form);
-		redirect.addFlashAttribute("message", "Surface “" + saved.getName() + "” saved.");
-		return "redirect:/surfaces/" + saved.getId();
+		FormTokens.Submitted saved = tokens.once("surface", token, () -> surfaces.create(form).getId());
+		redirect.addFlashAttribute("message", saved.repeat() ? "This form was sent twice; the surface was saved once."
+				: "Surface “" + form.name().trim() + "” saved.");
+		return "redirect:/surfaces/" + saved.id();
 	}
 
 	@GetMapping("/{id}")
@@ -85,19 +98,49 @@ class SurfaceController {
 	@GetMapping("/{id}/edit")
 	String editForm(@PathVariable long id, @ModelAttribute("units") TemperatureUnit units, Model model) {
 		SavedSurface s = surfaces.get(id);
+		model.addAttribute("version", s.getVersion());
 		return form(model, SurfaceForm.of(s, units), null, "/surfaces/" + id + "/edit", "Edit " + s.getName(), units);
 	}
 
+	/**
+	 * Saves an edit made on the version the form carries. If someone else saved or deleted the surface
+	 * meanwhile, the form comes back with everything typed and both versions side by side.
+	 */
 	@PostMapping("/{id}/edit")
 	String update(@PathVariable long id, @Valid @ModelAttribute("form") SurfaceForm form, BindingResult result,
+			@RequestParam(name = "version", required = false) Integer version,
 			@ModelAttribute("units") TemperatureUnit units, Model model, RedirectAttributes redirect) {
-		SavedSurface existing = surfaces.get(id);
-		if (!check(form, result)) {
-			return form(model, form, result, "/surfaces/" + id + "/edit", "Edit " + existing.getName(), units);
+		try {
+			SavedSurface existing = surfaces.get(id);
+			if (!check(form, result)) {
+				model.addAttribute("version", version);
+				return form(model, form, result, "/surfaces/" + id + "/edit", "Edit " + existing.getName(), units);
+			}
+			surfaces.update(id, form, version);
 		}
-		surfaces.update(id, form);
+		catch (StaleEditException | ConcurrencyFailureException | NotFoundException e) {
+			return conflict(id, form, units, model);
+		}
 		redirect.addFlashAttribute("message", "Surface “" + form.name().trim() + "” updated.");
 		return "redirect:/surfaces/" + id;
+	}
+
+	/** The edit form again, the chef's values kept, with the saved version (or its deletion) in words. */
+	private String conflict(long id, SurfaceForm form, TemperatureUnit units, Model model) {
+		SavedSurface now;
+		try {
+			now = surfaces.get(id);
+		}
+		catch (NotFoundException gone) {
+			model.addAttribute("conflict", EditConflict.deleted("surface"));
+			model.addAttribute("formToken", FormTokens.issue());
+			return form(model, form, null, "/surfaces/new", "New surface", units);
+		}
+		SurfaceForm yours = form.unit() == units ? form : form.inUnit(units);
+		model.addAttribute("conflict", EditConflict.between("surface", now.getName(), now.getUpdatedAt(), yours,
+				SurfaceForm.of(now, units)));
+		model.addAttribute("version", now.getVersion());
+		return form(model, form, null, "/surfaces/" + id + "/edit", "Edit " + now.getName(), units);
 	}
 
 	@GetMapping("/{id}/copy")
@@ -105,6 +148,7 @@ class SurfaceController {
 		SavedSurface s = surfaces.get(id);
 		String name = ("Copy of " + s.getName());
 		SurfaceForm copy = SurfaceForm.of(s, units).withName(name.length() > 80 ? name.substring(0, 80) : name);
+		model.addAttribute("formToken", FormTokens.issue());
 		return form(model, copy, null, "/surfaces/new", "Copy of " + s.getName(), units);
 	}
 
@@ -117,9 +161,28 @@ class SurfaceController {
 	@PostMapping("/{id}/delete")
 	String delete(@PathVariable long id, RedirectAttributes redirect) {
 		String name = surfaces.get(id).getName();
-		surfaces.delete(id);
+		try {
+			surfaces.delete(id);
+		}
+		catch (ConcurrencyFailureException | NotFoundException e) {
+			// deleted or changed by someone else in the same moment
+			return collided(id, name, redirect);
+		}
 		redirect.addFlashAttribute("message", "Surface “" + name + "” deleted. Saved plans keep their own copy.");
 		return "redirect:/surfaces";
+	}
+
+	private String collided(long id, String name, RedirectAttributes redirect) {
+		try {
+			surfaces.get(id);
+		}
+		catch (NotFoundException gone) {
+			redirect.addFlashAttribute("message", "Surface “" + name + "” was already deleted by someone else.");
+			return "redirect:/surfaces";
+		}
+		redirect.addFlashAttribute("message", "Surface “" + name
+				+ "” was changed by someone else while you deleted it, so it was kept. Look at it and delete it again if you still want to.");
+		return "redirect:/surfaces/" + id;
 	}
 
 	/** Bean Validation first, then the engine's checks; true when the form can be saved. */

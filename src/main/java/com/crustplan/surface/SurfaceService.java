@@ -6,6 +6,7 @@ import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
 import com.crustplan.system.NotFoundException;
+import com.crustplan.system.StaleEditException;
 
 /** Saved surfaces; each write is one transaction, so a failed save changes nothing. */
 @Service
@@ -35,11 +36,19 @@ public class SurfaceService {
 		return surfaces.save(SavedSurface.from(form));
 	}
 
+	/**
+	 * Saves an edit made on the version {@code expectedVersion} of the record. Throws
+	 * {@link StaleEditException} when the saved record is at another version (or none was given), and a
+	 * {@code ConcurrencyFailureException} at commit when another save got in between.
+	 */
 	@Transactional
-	public SavedSurface update(long id, SurfaceForm form) {
+	public SavedSurface update(long id, SurfaceForm form, Integer expectedVersion) {
 		form.toSurface();
 		form.toProduct();
 		SavedSurface s = surfaces.findById(id).orElseThrow(() -> new NotFoundException("Surface", id));
+		if (expectedVersion == null || expectedVersion != s.getVersion()) {
+			throw new StaleEditException("Surface", id);
+		}
 		s.update(form);
 		return s;
 	}

@@ -8,7 +8,6 @@ import java.util.regex.Pattern;
 
 import org.springframework.beans.BeanUtils;
 import org.springframework.beans.PropertyAccessException;
-import org.springframework.beans.propertyeditors.StringTrimmerEditor;
 import org.springframework.core.ResolvableType;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
@@ -20,6 +19,8 @@ import org.springframework.web.bind.WebDataBinder;
 import org.springframework.web.bind.annotation.ControllerAdvice;
 import org.springframework.web.bind.annotation.InitBinder;
 import org.springframework.web.context.request.WebRequest;
+
+import com.crustplan.api.StoredText;
 
 /**
  * How page forms read and show numbers: plain decimals only (a comma is read as a decimal point, as
@@ -50,7 +51,7 @@ public class FormBinding {
 	@InitBinder
 	void numbers(WebDataBinder binder, WebRequest request) {
 		binder.registerCustomEditor(Double.class, new DecimalEditor());
-		binder.registerCustomEditor(String.class, new StringTrimmerEditor(false));
+		binder.registerCustomEditor(String.class, new PlainTextEditor());
 		// a password is taken exactly as typed: sign-in compares it untrimmed
 		binder.registerCustomEditor(String.class, "password", new PropertyEditorSupport() {
 			@Override
@@ -82,6 +83,22 @@ public class FormBinding {
 					.orElse(null)
 				: BeanUtils.findPropertyType(name, type);
 		return field != null && field != Object.class && !field.isArray() && !Collection.class.isAssignableFrom(field);
+	}
+
+	/**
+	 * Text fields: trimmed, after {@link StoredText} has checked the text as sent; a control
+	 * character becomes the field error {@code typeMismatch} (messages.properties says why).
+	 */
+	static final class PlainTextEditor extends PropertyEditorSupport {
+
+		@Override
+		public void setAsText(String text) {
+			if (!StoredText.isPlain(text)) {
+				throw new IllegalArgumentException(StoredText.REASON);
+			}
+			setValue(text == null ? null : text.trim());
+		}
+
 	}
 
 	static final class DecimalEditor extends PropertyEditorSupport {

@@ -46,6 +46,11 @@ public abstract class KitchenRecord {
 		return id;
 	}
 
+	/** The optimistic-locking version: edit forms carry it, so a save from a stale form is refused. */
+	public int getVersion() {
+		return version;
+	}
+
 	public String getName() {
 		return name;
 	}

@@ -22,6 +22,7 @@ import org.springframework.security.authentication.AnonymousAuthenticationToken;
 import org.springframework.security.authentication.AuthenticationManager;
 import org.springframework.security.authentication.ProviderManager;
 import org.springframework.security.authentication.dao.DaoAuthenticationProvider;
+import org.springframework.security.authentication.InternalAuthenticationServiceException;
 import org.springframework.security.config.annotation.web.builders.HttpSecurity;
 import org.springframework.security.config.annotation.web.configurers.HeadersConfigurer;
 import org.springframework.security.config.http.SessionCreationPolicy;
@@ -188,6 +189,10 @@ public class SecurityConfig {
 			res.setHeader(HttpHeaders.RETRY_AFTER, Long.toString(Math.max(1, r.retryAfter().toSeconds())));
 			json(res, 429, "too many wrong passwords for this account or from this address: try again in "
 					+ r.minutes() + " minute(s)");
+		}
+		else if (e instanceof InternalAuthenticationServiceException) {
+			// an account that could not be read (database down or full) is our fault, not wrong credentials
+			json(res, HttpServletResponse.SC_SERVICE_UNAVAILABLE, "the account database is not answering; try again shortly");
 		}
 		else {
 			json(res, HttpServletResponse.SC_UNAUTHORIZED, "sign in to do this");

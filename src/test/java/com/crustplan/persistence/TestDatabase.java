@@ -29,7 +29,7 @@ final class TestDatabase {
 		}
 		else {
 			Path file = Path.of("target", "test-databases", name + "-" + System.nanoTime()).toAbsolutePath();
-			p.put("spring.datasource.url", "jdbc:h2:file:" + file + ";WRITE_DELAY=0");
+			p.put("spring.datasource.url", "jdbc:h2:file:" + file + ";WRITE_DELAY=0;DB_CLOSE_ON_EXIT=FALSE");
 			p.put("spring.datasource.username", "sa");
 			p.put("spring.datasource.password", "");
 		}

@@ -41,7 +41,7 @@ class TransactionalSaveTest {
 		SavedSurface s = service
 			.create(SurfaceForm.defaults(FoodCategory.MEAT, "Rollback steak", TemperatureUnit.CELSIUS));
 		SurfaceForm bad = SurfaceForm.defaults(FoodCategory.POTATO, TOO_LONG, TemperatureUnit.CELSIUS);
-		assertThatThrownBy(() -> service.update(s.getId(), bad)).isInstanceOf(DataIntegrityViolationException.class);
+		assertThatThrownBy(() -> service.update(s.getId(), bad, s.getVersion())).isInstanceOf(DataIntegrityViolationException.class);
 		SavedSurface after = surfaces.findById(s.getId()).orElseThrow();
 		assertThat(after.getName()).isEqualTo("Rollback steak");
 		// meat's typical water 72 % stays; the failed update wanted potato's 79 %

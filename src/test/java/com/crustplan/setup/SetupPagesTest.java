@@ -89,7 +89,8 @@ class SetupPagesTest {
 		assertThat(s.isFan()).isTrue();
 		assertThat(s.getRelativeHumidityPct()).isEqualTo(20.0);
 		mvc.perform(get("/setups/{id}/edit", s.getId())).andExpect(status().isOk());
-		mvc.perform(oven("/setups/" + s.getId() + "/edit", "name", "Test combi, steam", "relativeHumidityPct", "80"))
+		mvc.perform(oven("/setups/" + s.getId() + "/edit", "name", "Test combi, steam", "relativeHumidityPct", "80",
+				"version", String.valueOf(s.getVersion())))
 			.andExpect(status().is3xxRedirection());
 		assertThat(setups.findById(s.getId()).orElseThrow().getRelativeHumidityPct()).isEqualTo(80.0);
 		mvc.perform(get("/setups/{id}/copy", s.getId()))

@@ -126,7 +126,8 @@ class SurfacePagesTest {
 	void shouldUpdateASurface() throws Exception {
 		long id = surfaces.save(SavedSurface.from(SurfaceForm.defaults(com.crustplan.engine.food.FoodCategory.FISH,
 				"Edit me", com.crustplan.system.TemperatureUnit.CELSIUS))).getId();
-		mvc.perform(potato("/surfaces/" + id + "/edit", "name", "Edited wedges"))
+		mvc.perform(potato("/surfaces/" + id + "/edit", "name", "Edited wedges", "version",
+				String.valueOf(surfaces.findById(id).orElseThrow().getVersion())))
 			.andExpect(status().is3xxRedirection())
 			.andExpect(redirectedUrl("/surfaces/" + id))
 			.andExpect(flash().attribute("message", containsString("Edited wedges")));
