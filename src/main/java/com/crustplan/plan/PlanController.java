@@ -4,6 +4,7 @@ import java.security.Principal;
 import java.util.Arrays;
 import java.util.Optional;
 
+import tools.jackson.core.JacksonException;
 import jakarta.validation.Valid;
 
 import org.springframework.dao.ConcurrencyFailureException;
@@ -148,7 +149,7 @@ class PlanController {
 			model.addAttribute("problem", "The model no longer accepts this plan's " + e.field() + ": " + e.reason()
 					+ ". The saved values are kept unchanged.");
 		}
-		catch (tools.jackson.core.JacksonException | NullPointerException e) {
+		catch (JacksonException | NullPointerException e) {
 			model.addAttribute("problem", "The saved inputs of this plan cannot be read. They are kept unchanged.");
 		}
 		return "plan/show";

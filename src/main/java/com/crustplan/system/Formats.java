@@ -1,5 +1,8 @@
 package com.crustplan.system;
 
+import java.time.ZoneId;
+import java.time.Instant;
+import java.time.format.DateTimeFormatter;
 import java.util.Locale;
 
 import org.springframework.stereotype.Component;
@@ -61,19 +64,19 @@ public class Formats {
 		return number(v, 4);
 	}
 
-	private static final java.time.format.DateTimeFormatter DATE = java.time.format.DateTimeFormatter
+	private static final DateTimeFormatter DATE = DateTimeFormatter
 		.ofPattern("d MMM yyyy", Locale.UK);
 
-	private static final java.time.format.DateTimeFormatter DATE_TIME = java.time.format.DateTimeFormatter
+	private static final DateTimeFormatter DATE_TIME = DateTimeFormatter
 		.ofPattern("d MMM yyyy, HH:mm", Locale.UK);
 
 	/** Dates in the server's zone: a kitchen's server sits in the kitchen's time zone. */
-	public String date(java.time.Instant t) {
-		return t == null ? "–" : DATE.format(t.atZone(java.time.ZoneId.systemDefault()));
+	public String date(Instant t) {
+		return t == null ? "–" : DATE.format(t.atZone(ZoneId.systemDefault()));
 	}
 
-	public String dateTime(java.time.Instant t) {
-		return t == null ? "–" : DATE_TIME.format(t.atZone(java.time.ZoneId.systemDefault()));
+	public String dateTime(Instant t) {
+		return t == null ? "–" : DATE_TIME.format(t.atZone(ZoneId.systemDefault()));
 	}
 
 	/** A form input's value: up to 6 decimals, no trailing zeros, empty for none. */

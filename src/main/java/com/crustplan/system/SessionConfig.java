@@ -1,5 +1,6 @@
 package com.crustplan.system;
 
+import java.util.Locale;
 import java.sql.DatabaseMetaData;
 
 import javax.sql.DataSource;
@@ -28,7 +29,7 @@ class SessionConfig {
 	SessionRepositoryCustomizer<JdbcIndexedSessionRepository> sessionAttributeUpsert(DataSource dataSource)
 			throws MetaDataAccessException {
 		String product = JdbcUtils.extractDatabaseMetaData(dataSource, DatabaseMetaData::getDatabaseProductName);
-		if (product != null && product.toLowerCase(java.util.Locale.ROOT).contains("postgres")) {
+		if (product != null && product.toLowerCase(Locale.ROOT).contains("postgres")) {
 			return new PostgreSqlJdbcIndexedSessionRepositoryCustomizer();
 		}
 		if ("H2".equalsIgnoreCase(product)) {

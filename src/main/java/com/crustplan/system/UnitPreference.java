@@ -1,5 +1,6 @@
 package com.crustplan.system;
 
+import org.springframework.stereotype.Controller;
 import jakarta.servlet.http.Cookie;
 import jakarta.servlet.http.HttpServletRequest;
 import jakarta.servlet.http.HttpServletResponse;
@@ -11,7 +12,7 @@ import org.springframework.web.bind.annotation.ModelAttribute;
  * The °C/°F choice, remembered in a cookie so it holds across sessions and signed-out pages; every
  * page gets it as the model attribute {@code units}.
  */
-@ControllerAdvice(annotations = org.springframework.stereotype.Controller.class)
+@ControllerAdvice(annotations = Controller.class)
 public class UnitPreference {
 
 	static final String COOKIE = "crustplan-units";

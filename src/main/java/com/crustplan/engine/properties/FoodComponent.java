@@ -1,5 +1,6 @@
 package com.crustplan.engine.properties;
 
+import java.util.Locale;
 /**
  * Major food components with the Choi &amp; Okos temperature polynomials for conductivity, density
  * and specific heat (T in °C, valid −40…150 °C).
@@ -75,12 +76,12 @@ public enum FoodComponent {
 	}
 
 	private static String poly(double a, double b, double c) {
-		StringBuilder s = new StringBuilder(String.format(java.util.Locale.ROOT, "%.5g", a));
+		StringBuilder s = new StringBuilder(String.format(Locale.ROOT, "%.5g", a));
 		if (b != 0) {
-			s.append(b < 0 ? " − " : " + ").append(String.format(java.util.Locale.ROOT, "%.5g", Math.abs(b))).append("·T");
+			s.append(b < 0 ? " − " : " + ").append(String.format(Locale.ROOT, "%.5g", Math.abs(b))).append("·T");
 		}
 		if (c != 0) {
-			s.append(c < 0 ? " − " : " + ").append(String.format(java.util.Locale.ROOT, "%.5g", Math.abs(c))).append("·T²");
+			s.append(c < 0 ? " − " : " + ").append(String.format(Locale.ROOT, "%.5g", Math.abs(c))).append("·T²");
 		}
 		return s.toString();
 	}

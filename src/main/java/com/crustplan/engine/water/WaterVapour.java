@@ -1,5 +1,6 @@
 package com.crustplan.engine.water;
 
+import com.crustplan.engine.properties.FoodComponent;
 import com.crustplan.engine.model.Parameter;
 
 /** Ideal-gas vapour, latent heat and the kitchen's atmosphere. */
@@ -90,7 +91,7 @@ public final class WaterVapour {
 
 	/** Specific enthalpy of liquid water relative to 0 °C, J/kg (Choi–Okos water cp integrated). */
 	public static double liquidEnthalpy(double temperatureK) {
-		return com.crustplan.engine.properties.FoodComponent.WATER.enthalpy(temperatureK - 273.15);
+		return FoodComponent.WATER.enthalpy(temperatureK - 273.15);
 	}
 
 }
