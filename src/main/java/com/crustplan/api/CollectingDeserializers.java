@@ -83,7 +83,10 @@ final class CollectingDeserializers {
 
 	}
 
-	/** Text, trimmed; blank is read as absent, as the forms read it. */
+	/**
+	 * Text, trimmed; blank is read as absent, as the forms read it. Control characters are refused as
+	 * sent, before the trim (which would quietly drop a NUL at either end).
+	 */
 	static final class Texts extends StdDeserializer<String> {
 
 		Texts() {
@@ -95,7 +98,11 @@ final class CollectingDeserializers {
 			if (p.currentToken() != JsonToken.VALUE_STRING) {
 				return reject(p, ctxt, "must be text");
 			}
-			String v = p.getString().trim();
+			String raw = p.getString();
+			if (!StoredText.isPlain(raw)) {
+				return reject(p, ctxt, StoredText.REASON);
+			}
+			String v = raw.trim();
 			return v.isEmpty() ? null : v;
 		}
 
