@@ -65,6 +65,12 @@ import com.crustplan.api.Problems;
 @Configuration
 public class SecurityConfig {
 
+	/**
+	 * Longest password the hash takes, in UTF-8 bytes: BCrypt reads at most 72 bytes of its key
+	 * (Provos &amp; Mazières 1999), and Spring Security refuses longer ones.
+	 */
+	public static final int MAX_PASSWORD_BYTES = 72;
+
 	static final String CHEF = "CHEF";
 
 	static final String COOK = "COOK";

@@ -4,7 +4,10 @@ import java.nio.charset.StandardCharsets;
 
 import jakarta.validation.constraints.NotBlank;
 import jakarta.validation.constraints.Pattern;
+
 import jakarta.validation.constraints.Size;
+
+import com.crustplan.system.SecurityConfig;
 
 /**
  * An account as an administrator edits it. The password is required for a new account and optional
@@ -25,7 +28,7 @@ public record UserForm(
 	 * there, and Spring Security refuses to hash more). Counted in UTF-8 (RFC 3629): an accented
 	 * letter takes 2 bytes, an emoji 4.
 	 */
-	public static final int MAX_PASSWORD_BYTES = 72;
+	public static final int MAX_PASSWORD_BYTES = SecurityConfig.MAX_PASSWORD_BYTES;
 
 	/** What is wrong with a new password, or null if it will do. */
 	public static String passwordProblem(String password) {

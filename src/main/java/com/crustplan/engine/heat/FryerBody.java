@@ -29,19 +29,9 @@ public record FryerBody(double oilLitres, double heaterKw, double loadKg) {
 	public static final FryerBody DEFAULT = new FryerBody(DEFAULT_OIL.value(), DEFAULT_HEATER.value(), DEFAULT_LOAD.value());
 
 	public FryerBody {
-		check("oilLitres", oilLitres, 1, 60, "L");
-		check("heaterKw", heaterKw, 0.5, 40, "kW");
-		check("loadKg", loadKg, 0.01, 10, "kg");
-	}
-
-	private static void check(String field, double v, double min, double max, String unit) {
-		if (!Double.isFinite(v) || v < min || v > max) {
-			throw new InvalidInputException(field, String.format("must be from %s to %s %s", plain(min), plain(max), unit));
-		}
-	}
-
-	private static String plain(double v) {
-		return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
+		Limits.within("oilLitres", oilLitres, 1, 60, "L");
+		Limits.within("heaterKw", heaterKw, 0.5, 40, "kW");
+		Limits.within("loadKg", loadKg, 0.01, 10, "kg");
 	}
 
 	public double oilKg() {

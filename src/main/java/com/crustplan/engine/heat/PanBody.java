@@ -36,20 +36,10 @@ public record PanBody(PanMaterial material, double massKg, double diameterCm, do
 			throw new InvalidInputException("control", "say how the heat is controlled");
 		}
 		// from a small omelette pan to a griddle plate
-		check("massKg", massKg, 0.3, 60, "kg");
-		check("diameterCm", diameterCm, 12, 120, "cm");
-		check("powerKw", powerKw, 0.2, 30, "kW");
-		check("coverPct", coverPct, 1, 100, "%");
-	}
-
-	private static void check(String field, double v, double min, double max, String unit) {
-		if (!Double.isFinite(v) || v < min || v > max) {
-			throw new InvalidInputException(field, String.format("must be from %s to %s %s", plain(min), plain(max), unit));
-		}
-	}
-
-	private static String plain(double v) {
-		return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
+		Limits.within("massKg", massKg, 0.3, 60, "kg");
+		Limits.within("diameterCm", diameterCm, 12, 120, "cm");
+		Limits.within("powerKw", powerKw, 0.2, 30, "kW");
+		Limits.within("coverPct", coverPct, 1, 100, "%");
 	}
 
 	public PanBody withControl(HeatedBody.Control c) {
