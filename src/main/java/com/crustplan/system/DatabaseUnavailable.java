@@ -1,5 +1,7 @@
 package com.crustplan.system;
 
+import org.springframework.core.Ordered;
+import org.springframework.core.annotation.Order;
 import org.springframework.dao.DataAccessResourceFailureException;
 import org.springframework.dao.UncategorizedDataAccessException;
 import jakarta.servlet.http.HttpServletRequest;
@@ -23,6 +25,8 @@ import com.crustplan.api.Problems;
  * The pool keeps trying, so the next request after the database is back succeeds.
  */
 @ControllerAdvice(annotations = Controller.class)
+// before the API's catch-all advice: Spring asks advices in order and takes the first with a handler
+@Order(Ordered.LOWEST_PRECEDENCE - 1)
 class DatabaseUnavailable {
 
 	@ExceptionHandler({ DataAccessResourceFailureException.class, CannotCreateTransactionException.class,

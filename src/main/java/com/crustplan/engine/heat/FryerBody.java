@@ -2,7 +2,6 @@ package com.crustplan.engine.heat;
 
 import java.util.List;
 
-import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.model.Parameter;
 
 /** A fryer as a body: its oil, its heater, and the food that goes into it per batch. */
