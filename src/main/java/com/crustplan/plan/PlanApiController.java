@@ -87,7 +87,7 @@ class PlanApiController {
 		PlanRequestReader.PlanRequest req = PlanRequestReader.read(body, json);
 		PlanReport r = planner.plan(req.surface(), req.product(), req.setup(), req.target(), req.horizonMinutes(),
 				req.mitigations());
-		return ResponseEntity.ok(PlanResponse.of(r, text));
+		return ResponseEntity.ok(PlanResponse.of(r, text, req.deprecations()));
 	}
 
 	@ExceptionHandler(PlanRequestReader.BadRequest.class)
@@ -138,9 +138,10 @@ class PlanApiController {
 
 	record PlanResponse(boolean reached, String outcome, Double timeToTargetS, @JsonProperty("pH") double ph,
 			Double coreTemperatureAtTargetC, String target, String targetColorHex, Acrylamide acrylamide,
-			Series series, List<Warning> warnings, List<String> cautions, List<String> assumptions) {
+			Series series, List<Warning> warnings, List<String> cautions, List<String> assumptions,
+			List<String> deprecations) {
 
-		static PlanResponse of(PlanReport r, MessageText text) {
+		static PlanResponse of(PlanReport r, MessageText text, List<String> deprecations) {
 			List<Double> t = new ArrayList<>();
 			List<Double> surface = new ArrayList<>();
 			List<Double> core = new ArrayList<>();
@@ -162,7 +163,7 @@ class PlanApiController {
 							text.celsius(a.basis()), a.mitigations().stream().map(m -> Change.of(m, text)).toList()),
 					new Series(t, surface, core, aw, lightness, hex),
 					r.warnings().stream().map(w -> new Warning(w.code(), text.celsius(w.message()))).toList(),
-					text.celsius(r.cautions()), text.celsius(r.result().assumptions()));
+					text.celsius(r.cautions()), text.celsius(r.result().assumptions()), deprecations);
 		}
 
 	}

@@ -27,8 +27,14 @@ import tools.jackson.databind.json.JsonMapper;
 public final class PlanRequestReader {
 
 	record PlanRequest(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
-			boolean mitigations) {
+			boolean mitigations, List<String> deprecations) {
 	}
+
+	/** Said in the answer while the old oven field is still read (it goes in the next API version). */
+	static final String RELATIVE_HUMIDITY_DEPRECATED = "heat.relativeHumidityPct is deprecated and will be removed in the next "
+			+ "API version: send heat.steamPct, the steam share of the oven atmosphere by volume (0 = dry, kitchen air "
+			+ "about 1.6; 100 = pure steam). The old value was read as a combi oven's humidity reading: 10 or less as dry "
+			+ "kitchen air (1.6 % steam), above it 1.6 + (value − 10)·98.4/90 % steam.";
 
 	/**
 	 * A surface to save: the engine's surface (already checked) with its name, notes and product key
@@ -59,6 +65,8 @@ public final class PlanRequestReader {
 	static final int NOTES_MAX = 1000;
 
 	private final List<ApiError.FieldError> errors = new ArrayList<>();
+
+	private final List<String> deprecations = new ArrayList<>();
 
 	private PlanRequestReader() {
 	}
@@ -113,7 +121,8 @@ public final class PlanRequestReader {
 		}
 		double horizonMinutes = horizon == null ? PlanService.DEFAULT_HORIZON_MINUTES : horizon;
 		// the reducing changes cost a dozen further runs: an API client asks for them
-		return new PlanRequest(surface, product, setup, target, horizonMinutes, mitigations != null && mitigations);
+		return new PlanRequest(surface, product, setup, target, horizonMinutes, mitigations != null && mitigations,
+				List.copyOf(deprecations));
 	}
 
 	private SurfaceRequest surfaceRequest(JsonNode root) {
@@ -204,18 +213,28 @@ public final class PlanRequestReader {
 					: "'" + modeKey + "' is not a mode; use pan, oven, grill or fryer");
 		}
 		Double temperature = number(h, "temperatureC", "heat.temperatureC");
-		if (temperature == null && !hasError("heat.temperatureC")) {
+		Double flux = number(h, "heatFluxKwPerM2", "heat.heatFluxKwPerM2");
+		// a grill given by its heat flux at the food needs no element temperature
+		boolean byFlux = mode == HeatMode.GRILL && (flux != null || hasError("heat.heatFluxKwPerM2"));
+		if (temperature == null && !byFlux && !hasError("heat.temperatureC")) {
 			error("heat.temperatureC", "is required");
 		}
 		Boolean fan = bool(h, "fan", "heat.fan");
 		Boolean fatFilm = bool(h, "fatFilm", "heat.fatFilm");
+		Double steam = number(h, "steamPct", "heat.steamPct");
 		Double rh = number(h, "relativeHumidityPct", "heat.relativeHumidityPct");
+		if (rh != null) {
+			deprecations.add(RELATIVE_HUMIDITY_DEPRECATED);
+		}
 		Double flip = number(h, "flipEverySeconds", "heat.flipEverySeconds");
+		String grill = text(h, "grill", "heat.grill");
+		Double distance = number(h, "distanceMm", "heat.distanceMm");
 		if (mode == null || hasErrorUnder("heat.")) {
 			return null;
 		}
 		try {
-			return HeatSettings.toHeatSetup(mode, temperature, fan, fatFilm, rh, flip);
+			return HeatSettings.toHeatSetup(mode,
+					new HeatSettings.Values(temperature, fan, fatFilm, steam, rh, flip, grill, flux, distance));
 		}
 		catch (InvalidInputException e) {
 			error("heat." + e.field(), e.reason());

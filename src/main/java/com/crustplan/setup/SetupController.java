@@ -54,6 +54,7 @@ class SetupController {
 	@GetMapping("/{id}/edit")
 	String editForm(@PathVariable long id, @ModelAttribute("units") TemperatureUnit units, Model model) {
 		SavedSetup s = setups.get(id);
+		model.addAttribute("legacyHumidityPct", s.getLegacyHumidityPct());
 		return form(model, SetupForm.of(s, units), null, "/setups/" + id + "/edit", "Edit " + s.getName(), units);
 	}
 
@@ -111,6 +112,8 @@ class SetupController {
 		model.addAttribute("action", action);
 		model.addAttribute("title", title);
 		model.addAttribute("modes", Arrays.asList(HeatMode.values()));
+		model.addAttribute("grillKinds", SetupForm.grillKinds());
+		model.addAttribute("dewPoints", SetupForm.dewPointTable(units));
 		return "setup/form";
 	}
 
