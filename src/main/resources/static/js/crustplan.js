@@ -61,6 +61,19 @@
     }
     mode.addEventListener('change', show);
     show();
+    // the dew point beside the steam share, from the server's table at whole per cent
+    var dew = document.getElementById('dew-point');
+    var steam = form.elements.steamPct;
+    if (dew && steam) {
+      var table = dew.dataset.dewPoints.split(',').map(Number);
+      steam.addEventListener('input', function () {
+        var y = parseFloat(String(steam.value).replace(',', '.'));
+        if (!isFinite(y) || y < 0 || y > 100) { dew.textContent = '–'; return; }
+        var i = Math.min(99, Math.floor(y));
+        var t = table[i] + (table[i + 1] - table[i]) * (y - i);
+        dew.textContent = Math.round(t) + ' ' + dew.dataset.unit;
+      });
+    }
   }
 
   function planForm() {

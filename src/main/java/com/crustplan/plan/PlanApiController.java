@@ -85,7 +85,7 @@ class PlanApiController {
 		try {
 			PlanReport r = planner.plan(req.surface(), req.product(), req.setup(), req.target(), req.horizonMinutes(),
 					req.mitigations());
-			return ResponseEntity.ok().contentType(MediaType.APPLICATION_JSON).body(PlanResponse.of(r, text));
+			return ResponseEntity.ok().contentType(MediaType.APPLICATION_JSON).body(PlanResponse.of(r, text, req.deprecations()));
 		}
 		catch (InvalidInputException e) {
 			// the planner's checks (horizon, a lightness the path never reaches) in the request's terms
@@ -121,9 +121,10 @@ class PlanApiController {
 
 	record PlanResponse(boolean reached, String outcome, Double timeToTargetS, @JsonProperty("pH") double ph,
 			Double coreTemperatureAtTargetC, String target, String targetColorHex, Acrylamide acrylamide,
-			Series series, List<Warning> warnings, List<String> cautions, List<String> assumptions) {
+			Series series, List<Warning> warnings, List<String> cautions, List<String> assumptions,
+			List<String> deprecations) {
 
-		static PlanResponse of(PlanReport r, MessageText text) {
+		static PlanResponse of(PlanReport r, MessageText text, List<String> deprecations) {
 			List<Double> t = new ArrayList<>();
 			List<Double> surface = new ArrayList<>();
 			List<Double> core = new ArrayList<>();
@@ -145,7 +146,7 @@ class PlanApiController {
 							text.celsius(a.basis()), a.mitigations().stream().map(m -> Change.of(m, text)).toList()),
 					new Series(t, surface, core, aw, lightness, hex),
 					r.warnings().stream().map(w -> new Warning(w.code(), text.celsius(w.message()))).toList(),
-					text.celsius(r.cautions()), text.celsius(r.result().assumptions()));
+					text.celsius(r.cautions()), text.celsius(r.result().assumptions()), deprecations);
 		}
 
 	}

@@ -1,5 +1,7 @@
 package com.crustplan.plan;
 
+import java.util.List;
+
 import com.crustplan.api.FieldErrors;
 import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.cook.Target;
@@ -20,15 +22,25 @@ record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double ho
 	/** Longest mode or stage key read. */
 	static final int KEY_MAX = 80;
 
-	record HeatBody(String mode, Double temperatureC, Boolean fan, Boolean fatFilm, Double relativeHumidityPct,
-			Double flipEverySeconds) {
+	/**
+	 * {@code relativeHumidityPct} is round one's oven field, still read (as a combi oven's humidity
+	 * reading, converted as the migration does) and named in the answer's deprecations.
+	 */
+	record HeatBody(String mode, Double temperatureC, Boolean fan, Boolean fatFilm, Double steamPct,
+			Double relativeHumidityPct, Double flipEverySeconds, String grill, Double heatFluxKwPerM2, Double distanceMm) {
 	}
+
+	/** Said in the answer while the old oven field is still read (it goes in the next API version). */
+	static final String RELATIVE_HUMIDITY_DEPRECATED = "heat.relativeHumidityPct is deprecated and will be removed in the next "
+			+ "API version: send heat.steamPct, the steam share of the oven atmosphere by volume (0 = dry, kitchen air "
+			+ "about 1.6; 100 = pure steam). The old value was read as a combi oven's humidity reading: 10 or less as dry "
+			+ "kitchen air (1.6 % steam), above it 1.6 + (value − 10)·98.4/90 % steam.";
 
 	record TargetBody(String stage, Double lightness) {
 	}
 
 	record PlanRequest(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
-			boolean mitigations) {
+			boolean mitigations, List<String> deprecations) {
 	}
 
 	PlanRequest toRequest(FieldErrors errors) {
@@ -43,8 +55,9 @@ record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double ho
 		}
 		double horizon = horizonMinutes == null ? PlanService.DEFAULT_HORIZON_MINUTES : horizonMinutes;
 		// the reducing changes cost a dozen further runs: an API client asks for them
+		List<String> deprecations = heat.relativeHumidityPct() == null ? List.of() : List.of(RELATIVE_HUMIDITY_DEPRECATED);
 		return new PlanRequest(read.surface(), read.product(), setup, goal, horizon,
-				mitigations != null && mitigations);
+				mitigations != null && mitigations, deprecations);
 	}
 
 	private static HeatSetup heat(HeatBody h, FieldErrors errors) {
@@ -54,15 +67,18 @@ record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double ho
 			errors.add("heat.mode", key == null ? "is required: pan, oven, grill or fryer"
 					: "'" + key + "' is not a mode; use pan, oven, grill or fryer");
 		}
-		if (h.temperatureC() == null && !errors.has("heat.temperatureC")) {
+		String grill = errors.text("heat.grill", h.grill(), KEY_MAX);
+		// a grill given by its heat flux at the food needs no element temperature
+		boolean byFlux = mode == HeatMode.GRILL && h.heatFluxKwPerM2() != null;
+		if (h.temperatureC() == null && !byFlux && !errors.has("heat.temperatureC")) {
 			errors.add("heat.temperatureC", "is required");
 		}
 		if (mode == null || errors.hasUnder("heat.")) {
 			return null;
 		}
 		try {
-			return HeatSettings.toHeatSetup(mode, h.temperatureC(), h.fan(), h.fatFilm(), h.relativeHumidityPct(),
-					h.flipEverySeconds());
+			return HeatSettings.toHeatSetup(mode, new HeatSettings.Values(h.temperatureC(), h.fan(), h.fatFilm(), h.steamPct(),
+					h.relativeHumidityPct(), h.flipEverySeconds(), grill, h.heatFluxKwPerM2(), h.distanceMm()));
 		}
 		catch (InvalidInputException e) {
 			errors.add("heat." + e.field(), e.reason());

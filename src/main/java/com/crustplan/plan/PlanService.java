@@ -3,6 +3,7 @@ package com.crustplan.plan;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.TreeSet;
 
 import org.springframework.stereotype.Service;
@@ -16,6 +17,7 @@ import com.crustplan.engine.assessment.RiskMap;
 import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.cook.CookResult;
 import com.crustplan.engine.cook.CookSettings;
+import com.crustplan.engine.cook.Outcome;
 import com.crustplan.engine.assessment.AcrylamideCook;
 import com.crustplan.engine.cook.Sample;
 import com.crustplan.engine.cook.Target;
@@ -23,6 +25,7 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.message.Duration;
 import com.crustplan.engine.message.Message;
 import com.crustplan.engine.message.PlainNumber;
 import com.crustplan.engine.message.StatedTemperature;
@@ -103,12 +106,37 @@ public class PlanService {
 		List<Mitigation> mitigations = withMitigations && product.benchmark().isPresent()
 				? Mitigations.compute(surface, product, setup, target, settings) : List.of();
 		List<PlanWarning> warnings = warnings(surface, result);
+		surfaceLimit(setup, result).ifPresent(warnings::add);
 		for (AcrylamideWarning a : estimate.warnings()) {
 			warnings.add(new PlanWarning(a.code().toLowerCase(Locale.ROOT).replace('_', '-'),
 					Message.of("warning.with-basis", a.message(), Text.of(a.basis()))));
 		}
 		return new PlanReport(surface, setup, target.describe(surface.category()), horizonMinutes, result, warnings,
 				cautions(surface, setup), AcrylamideView.of(estimate, mitigations), swatches(result));
+	}
+
+	/**
+	 * A grill stops the cook where the surface would char; in the other modes a surface hotter than the
+	 * fitted range before the target is flagged.
+	 */
+	static Optional<PlanWarning> surfaceLimit(HeatSetup setup, CookResult result) {
+		double limitC = HeatSetup.RadiantGrill.CHAR_SURFACE.value();
+		if (result.outcome() == Outcome.SURFACE_LIMIT) {
+			return Optional.of(new PlanWarning("surface-limit", Message.of("warning.surface-limit",
+					Temperature.celsius(setup.surfaceLimitC()), Duration.seconds(result.simulatedS()))));
+		}
+		double until = result.reached() ? result.timeToTargetS() : Double.POSITIVE_INFINITY;
+		double hottest = result.series()
+			.stream()
+			.filter(x -> x.timeS() <= until)
+			.mapToDouble(Sample::surfaceTemperatureC)
+			.max()
+			.orElse(Double.NaN);
+		if (hottest > limitC) {
+			return Optional.of(new PlanWarning("surface-limit", Message.of("warning.surface-past-limit",
+					Temperature.celsius(hottest), Temperature.celsius(limitC))));
+		}
+		return Optional.empty();
 	}
 
 	private static List<PlanWarning> warnings(Surface surface, CookResult result) {

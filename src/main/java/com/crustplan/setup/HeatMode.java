@@ -19,16 +19,16 @@ public enum HeatMode {
 
 	private final boolean usesFan;
 
-	private final boolean usesHumidity;
+	private final boolean usesSteam;
 
 	private final boolean usesFatFilm;
 
-	HeatMode(String key, String label, boolean usesFlip, boolean usesFan, boolean usesHumidity, boolean usesFatFilm) {
+	HeatMode(String key, String label, boolean usesFlip, boolean usesFan, boolean usesSteam, boolean usesFatFilm) {
 		this.key = key;
 		this.label = label;
 		this.usesFlip = usesFlip;
 		this.usesFan = usesFan;
-		this.usesHumidity = usesHumidity;
+		this.usesSteam = usesSteam;
 		this.usesFatFilm = usesFatFilm;
 	}
 
@@ -52,8 +52,13 @@ public enum HeatMode {
 		return usesFan;
 	}
 
-	public boolean usesHumidity() {
-		return usesHumidity;
+	public boolean usesSteam() {
+		return usesSteam;
+	}
+
+	/** A grill reads its kind, and either a heat flux at the food or an element temperature with a distance. */
+	public boolean usesGrill() {
+		return this == GRILL;
 	}
 
 	public boolean usesFatFilm() {

@@ -68,6 +68,7 @@ class SetupController {
 	String editForm(@PathVariable long id, @ModelAttribute("units") TemperatureUnit units, Model model) {
 		SavedSetup s = setups.get(id);
 		model.addAttribute("version", s.getVersion());
+		model.addAttribute("legacyHumidityPct", s.getLegacyHumidityPct());
 		return form(model, SetupForm.of(s, units), null, "/setups/" + id + "/edit", "Edit " + s.getName(), units);
 	}
 
@@ -160,6 +161,8 @@ class SetupController {
 		model.addAttribute("action", action);
 		model.addAttribute("title", title);
 		model.addAttribute("modes", Arrays.asList(HeatMode.values()));
+		model.addAttribute("grillKinds", SetupForm.grillKinds());
+		model.addAttribute("dewPoints", SetupForm.dewPointTable(units));
 		return "setup/form";
 	}
 

@@ -115,8 +115,81 @@ class PlanApiTest {
 			.andExpect(jsonPath("$.acrylamide.mitigations.length()").value(0));
 	}
 
+	static String oven(String heatFields) {
+		return """
+				{ "surface": { "category": "poultry-skin" },
+				  "heat": { "mode": "oven", "temperatureC": 200, "fan": true, %s },
+				  "target": { "stage": "golden" }, "mitigations": false }""".formatted(heatFields);
+	}
+
+	@Test
+	void shouldTakeTheSteamShareAndSayItsDewPoint() throws Exception {
+		// 20 % steam: p_v = 20.27 kPa; steam tables (IAPWS-IF97) give 19.95 kPa at 60 °C, so about 60 °C
+		plan(oven("\"steamPct\": 20")).andExpect(status().isOk())
+			.andExpect(jsonPath("$.deprecations.length()").value(0))
+			.andExpect(jsonPath("$.assumptions[*]", hasItem(containsString("20.0 % steam by volume: dew point 60 °C"))));
+	}
+
+	@Test
+	void shouldStillReadTheOldHumidityFieldAsTheMigrationDoesAndSaySo() throws Exception {
+		// the V5 rule: a "dry fan, 10 %" reading is dry kitchen air, 1.6 % steam (dew point 14 °C: p_v =
+		// 1.58 kPa, saturation at 13.8 °C in the steam tables), not the pure steam RH at 200 °C made of it
+		plan(oven("\"relativeHumidityPct\": 10")).andExpect(status().isOk())
+			.andExpect(jsonPath("$.deprecations[0]", containsString("heat.relativeHumidityPct is deprecated")))
+			.andExpect(jsonPath("$.deprecations[0]", containsString("heat.steamPct")))
+			.andExpect(jsonPath("$.assumptions[*]", hasItem(containsString("1.6 % steam by volume: dew point 14 °C"))));
+		// 80 → 1.6 + 70·98.4/90 = 78.1 % steam
+		plan(oven("\"relativeHumidityPct\": 80")).andExpect(status().isOk())
+			.andExpect(jsonPath("$.assumptions[*]", hasItem(containsString("78.1 % steam by volume"))));
+	}
+
+	@Test
+	void shouldTakeAGrillByHeatFluxOrByElementAndDistanceAndTodaysFields() throws Exception {
+		String toast = """
+				{ "surface": { "category": "bread", "thicknessMm": 12 }, "heat": { "mode": "grill", %s },
+				  "target": { "stage": "golden" }, "mitigations": false }""";
+		plan(toast.formatted("\"grill\": \"salamander\", \"heatFluxKwPerM2\": 10, \"flipEverySeconds\": 0"))
+			.andExpect(status().isOk())
+			.andExpect(jsonPath("$.reached").value(true))
+			.andExpect(jsonPath("$.assumptions[*]", hasItem(containsString("10.0 kW/m² at the food"))));
+		plan(toast.formatted("\"grill\": \"broiler\", \"temperatureC\": 800, \"distanceMm\": 100"))
+			.andExpect(status().isOk())
+			.andExpect(jsonPath("$.assumptions[*]", hasItem(containsString("food 100 mm from the heater"))));
+		// round one's body: an element temperature and a flip interval
+		plan(toast.formatted("\"temperatureC\": 800, \"flipEverySeconds\": 0")).andExpect(status().isOk())
+			.andExpect(jsonPath("$.assumptions[*]", hasItem(containsString("The cook stops if the surface passes 250 °C"))));
+	}
+
+	@Test
+	void shouldStopAndWarnWhereTheSurfaceWouldChar() throws Exception {
+		// 40 kW/m² on a 12 mm slice: the surface passes 250 °C well before the slice is dark
+		plan("""
+				{ "surface": { "category": "bread", "thicknessMm": 12 },
+				  "heat": { "mode": "grill", "heatFluxKwPerM2": 40, "flipEverySeconds": 0 },
+				  "target": { "stage": "dark" }, "mitigations": false }""")
+			.andExpect(status().isOk())
+			.andExpect(jsonPath("$.reached").value(false))
+			.andExpect(jsonPath("$.warnings[*].code", hasItem("surface-limit")))
+			.andExpect(jsonPath("$.warnings[*].message", hasItem(containsString("The surface passes 250 °C"))));
+	}
+
 	@Nested
 	class BadInput {
+
+		@Test
+		void shouldNameTheOvenAndGrillFieldsThatAreWrong() throws Exception {
+			rejects(oven("\"steamPct\": 120"), "heat.steamPct");
+			rejects(oven("\"relativeHumidityPct\": -5"), "heat.relativeHumidityPct");
+			rejects(oven("\"steamPct\": 20, \"relativeHumidityPct\": 10"), "heat.relativeHumidityPct");
+			rejects(CHIPS.replace("\"mode\": \"fryer\", \"temperatureC\": 175", "\"mode\": \"grill\", \"heatFluxKwPerM2\": 90"),
+					"heat.heatFluxKwPerM2");
+			rejects(CHIPS.replace("\"mode\": \"fryer\", \"temperatureC\": 175", "\"mode\": \"grill\", \"grill\": \"toaster\", \"temperatureC\": 800"),
+					"heat.grill");
+			rejects(CHIPS.replace("\"mode\": \"fryer\", \"temperatureC\": 175", "\"mode\": \"grill\", \"temperatureC\": 800, \"distanceMm\": 5"),
+					"heat.distanceMm");
+			rejects(CHIPS.replace("\"mode\": \"fryer\", \"temperatureC\": 175", "\"mode\": \"grill\", \"grill\": \"salamander\""),
+					"heat.temperatureC");
+		}
 
 		void rejects(String body, String field) throws Exception {
 			plan(body).andExpect(status().isBadRequest())

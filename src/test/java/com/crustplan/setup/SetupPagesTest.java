@@ -50,7 +50,7 @@ class SetupPagesTest {
 		p.put("temperature", "180");
 		p.put("temperatureUnit", "C");
 		p.put("fan", "true");
-		p.put("relativeHumidityPct", "20");
+		p.put("steamPct", "20");
 		p.put("flipEverySeconds", "");
 		p.put("notes", "");
 		for (int i = 0; i < overrides.length; i += 2) {
@@ -87,12 +87,12 @@ class SetupPagesTest {
 			.andExpect(flash().attribute("message", containsString("Test combi")));
 		SavedSetup s = setups.findAll().stream().filter(x -> x.getName().equals("Test combi")).findFirst().orElseThrow();
 		assertThat(s.isFan()).isTrue();
-		assertThat(s.getRelativeHumidityPct()).isEqualTo(20.0);
+		assertThat(s.getSteamPct()).isEqualTo(20.0);
 		mvc.perform(get("/setups/{id}/edit", s.getId())).andExpect(status().isOk());
-		mvc.perform(oven("/setups/" + s.getId() + "/edit", "name", "Test combi, steam", "relativeHumidityPct", "80",
+		mvc.perform(oven("/setups/" + s.getId() + "/edit", "name", "Test combi, steam", "steamPct", "80",
 				"version", String.valueOf(s.getVersion())))
 			.andExpect(status().is3xxRedirection());
-		assertThat(setups.findById(s.getId()).orElseThrow().getRelativeHumidityPct()).isEqualTo(80.0);
+		assertThat(setups.findById(s.getId()).orElseThrow().getSteamPct()).isEqualTo(80.0);
 		mvc.perform(get("/setups/{id}/copy", s.getId()))
 			.andExpect(content().string(containsString("Copy of Test combi, steam")));
 		mvc.perform(get("/setups/{id}/delete", s.getId())).andExpect(view().name("setup/delete"));
@@ -106,8 +106,57 @@ class SetupPagesTest {
 			.andExpect(status().is3xxRedirection());
 		SavedSetup s = setups.findAll().stream().filter(x -> x.getName().equals("Fryer with a fan?")).findFirst().orElseThrow();
 		assertThat(s.isFan()).isFalse();
-		assertThat(s.getRelativeHumidityPct()).isNull();
+		assertThat(s.getSteamPct()).isNull();
 	}
+
+	@Test
+	void shouldShowTheDewPointBesideTheSteamShare() throws Exception {
+		// 50 % steam: p_v = 50.66 kPa; steam tables (IAPWS-IF97) give 47.39 kPa at 80 °C and 57.87 kPa at
+		// 85 °C, so about 81.6 °C: 82 °C, and 81.6 × 9/5 + 32 = 178.9, 179 °F
+		mvc.perform(oven("/setups/new", "name", "Half steam", "steamPct", "50")).andExpect(status().is3xxRedirection());
+		mvc.perform(get("/setups")).andExpect(content().string(containsString("50 % steam, dew point 82 °C")));
+		mvc.perform(get("/setups").cookie(new Cookie("crustplan-units", "F")))
+			.andExpect(content().string(containsString("50 % steam, dew point 179 °F")));
+		SavedSetup s = setups.findAll().stream().filter(x -> x.getName().equals("Half steam")).findFirst().orElseThrow();
+		mvc.perform(get("/setups/{id}/edit", s.getId()))
+			.andExpect(content().string(containsString("Steam in the oven air")))
+			.andExpect(content().string(containsString("0 = dry (kitchen air is about 1.6 %), 100 = pure steam")))
+			.andExpect(content().string(containsString("82 °C")));
+	}
+
+	@Test
+	void shouldReadAnOldHumidityReadingAsTheSteamShareACookMeant() throws Exception {
+		// the rule of migration V5: 10 % or less is dry kitchen air (1.6 %), 40 % → 1.6 + 30·98.4/90 = 34.4 %
+		mvc.perform(oven("/setups/new", "name", "Old dry", "steamPct", "", "relativeHumidityPct", "10"))
+			.andExpect(status().is3xxRedirection());
+		mvc.perform(oven("/setups/new", "name", "Old combi", "steamPct", "", "relativeHumidityPct", "40"))
+			.andExpect(status().is3xxRedirection());
+		assertThat(setups.findAll().stream().filter(x -> x.getName().equals("Old dry")).findFirst().orElseThrow().getSteamPct())
+			.isEqualTo(1.6);
+		assertThat(setups.findAll().stream().filter(x -> x.getName().equals("Old combi")).findFirst().orElseThrow().getSteamPct())
+			.isCloseTo(34.4, org.assertj.core.data.Offset.offset(1e-9));
+	}
+
+	@Test
+	void shouldSaveAGrillByItsHeatFluxOrByElementAndDistance() throws Exception {
+		mvc.perform(oven("/setups/new", "name", "Flux grill", "mode", "grill", "temperature", "", "grill", "salamander",
+				"heatFluxKwPerM2", "14", "flipEverySeconds", "0"))
+			.andExpect(status().is3xxRedirection());
+		mvc.perform(oven("/setups/new", "name", "Coals", "mode", "grill", "temperature", "650", "grill", "charcoal",
+				"distanceMm", "100", "flipEverySeconds", "90"))
+			.andExpect(status().is3xxRedirection());
+		SavedSetup flux = setups.findAll().stream().filter(x -> x.getName().equals("Flux grill")).findFirst().orElseThrow();
+		assertThat(flux.getHeatFluxKwPerM2()).isEqualTo(14.0);
+		assertThat(flux.getGrill()).isEqualTo("salamander");
+		SavedSetup coals = setups.findAll().stream().filter(x -> x.getName().equals("Coals")).findFirst().orElseThrow();
+		assertThat(coals.getDistanceMm()).isEqualTo(100.0);
+		assertThat(coals.getFluxAtFoodKwPerM2()).isBetween(15.0, 30.0);
+		mvc.perform(get("/setups"))
+			.andExpect(content().string(containsString("14 kW/m² at the food")))
+			.andExpect(content().string(containsString("food 100 mm below")));
+		mvc.perform(get("/setups/{id}/edit", flux.getId())).andExpect(content().string(containsString("Heat flux at the food")));
+	}
+
 
 	@Test
 	void shouldAnswer404ForAMissingSetup() throws Exception {
@@ -129,6 +178,20 @@ class SetupPagesTest {
 		}
 
 		@Test
+		void shouldNameTheGrillFieldThatIsWrong() throws Exception {
+			mvc.perform(oven("/setups/new", "mode", "grill", "grill", "salamander", "heatFluxKwPerM2", "90"))
+				.andExpect(model().attributeHasFieldErrors("form", "heatFluxKwPerM2"));
+			mvc.perform(oven("/setups/new", "mode", "grill", "grill", "toaster", "temperature", "800"))
+				.andExpect(model().attributeHasFieldErrors("form", "grill"))
+				.andExpect(content().string(containsString("salamander, broiler or charcoal")));
+			mvc.perform(oven("/setups/new", "mode", "grill", "temperature", "", "grill", "salamander"))
+				.andExpect(model().attributeHasFieldErrors("form", "temperature"));
+			// coals at 1000 °C 30 mm below: σ·0.95·0.7·F·(1273⁴ − 298⁴) with F ≈ 0.98, about 97 kW/m², over 60
+			mvc.perform(oven("/setups/new", "mode", "grill", "grill", "charcoal", "temperature", "1000", "distanceMm", "30"))
+				.andExpect(model().attributeHasFieldErrors("form", "distanceMm"));
+		}
+
+		@Test
 		void shouldRejectAnUnknownMode() throws Exception {
 			mvc.perform(oven("/setups/new", "mode", "microwave"))
 				.andExpect(status().isOk())
@@ -145,6 +208,8 @@ class SetupPagesTest {
 		void shouldRejectHumidityOverHundredAndTextForTemperature() throws Exception {
 			mvc.perform(oven("/setups/new", "relativeHumidityPct", "120"))
 				.andExpect(model().attributeHasFieldErrors("form", "relativeHumidityPct"));
+			mvc.perform(oven("/setups/new", "steamPct", "120"))
+				.andExpect(model().attributeHasFieldErrors("form", "steamPct"));
 			mvc.perform(oven("/setups/new", "temperature", "hot"))
 				.andExpect(model().attributeHasFieldErrorCode("form", "temperature", "typeMismatch"))
 				.andExpect(content().string(containsString("must be a number")));

@@ -29,6 +29,7 @@ import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.heat.GrillKind;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.message.Argument;
 import com.crustplan.engine.message.Duration;
@@ -99,6 +100,7 @@ class MessageCatalogueTest {
 		sample("outcome.wet-plateau");
 		sample("outcome.too-cool");
 		sample("outcome.too-slow");
+		sample("outcome.surface-limit");
 		sample("outcome.explained", m("outcome.too-cool"), c(128), PlainNumber.of(0.42, 2), Duration.minutes(9));
 		sample("target.stage", Text.of("Golden"));
 		sample("target.lightness", PlainNumber.of(62, 0));
@@ -129,10 +131,14 @@ class MessageCatalogueTest {
 		sample("assumption.surface.sucrose");
 		sample("assumption.oven.fan", q(40, "W/m²K"));
 		sample("assumption.oven.still", q(18, "W/m²K"));
-		sample("assumption.oven.steam", Quantity.of(20, "%", 1), c(64));
+		sample("assumption.oven.steam", Quantity.of(20, "%", 1), c(60), c(64));
 		sample("assumption.oven.rack");
 		sample("assumption.grill.element", c(815), q(50, "%"), q(37, "kW/m²"));
 		sample("assumption.grill.lower-face");
+		sample("assumption.grill.upper-face");
+		sample("assumption.grill.flux", Text.of("Salamander"), Quantity.of(14, "kW/m²", 1), c(835));
+		sample("assumption.grill.geometry", Text.of("Charcoal grill"), q(150, "mm"), PlainNumber.of(0.74, 2), q(25, "%"));
+		sample("assumption.grill.surface-limit", c(250));
 		sample("assumption.fryer.oil", c(172));
 		sample("assumption.fryer.coefficient", q(280, "W/m²K"), q(900, "W/m²K"));
 		sample("assumption.fryer.uptake");
@@ -179,6 +185,8 @@ class MessageCatalogueTest {
 		sample("warning.target-not-reached", m("outcome.too-slow"));
 		sample("warning.food-code.poultry", c(52), StatedTemperature.of(74, 165));
 		sample("warning.food-code.whole-cut", c(48), StatedTemperature.of(63, 145), StatedTemperature.of(68, 155));
+		sample("warning.surface-limit", c(250), Duration.seconds(95));
+		sample("warning.surface-past-limit", c(262), c(250));
 		sample("warning.alkaline-surface", PlainNumber.of(7.6, 1));
 		sample("caution.joined", m("caution.acrylamide.carcinogen"), m("caution.acrylamide.estimate"));
 		sample("caution.probe");
@@ -284,7 +292,11 @@ class MessageCatalogueTest {
 				planner.plan(sweetChips, Product.FRENCH_FRIES, new HeatSetup.DeepFryer(185), Target.stage("brown"), 30, true),
 				planner.plan(Surface.defaults(FoodCategory.POULTRY_SKIN).withThicknessMm(60),
 						new HeatSetup.PanContact(240, true, 0), Target.stage("light-golden"), 30),
-				planner.plan(Surface.defaults(FoodCategory.MEAT), new HeatSetup.RadiantGrill(800, 90), Target.stage("browned"), 30),
+				planner.plan(Surface.defaults(FoodCategory.MEAT), HeatSetup.RadiantGrill.fromHeatFlux(15, 90), Target.stage("browned"), 30),
+				planner.plan(Surface.defaults(FoodCategory.BREAD).withThicknessMm(12), new HeatSetup.RadiantGrill(800, 0),
+						Target.stage("dark"), 30),
+				planner.plan(Surface.defaults(FoodCategory.MEAT),
+						HeatSetup.RadiantGrill.ofElement(GrillKind.CHARCOAL, 650, 100.0, 90), Target.stage("browned"), 30),
 				planner.plan(Surface.defaults(FoodCategory.BREAD).withBicarbonateGPerKg(10), new HeatSetup.Oven(200, true, 20),
 						Target.lightness(60), 30),
 				planner.plan(Surface.defaults(FoodCategory.MEAT), new HeatSetup.Oven(60, false, 1.6), Target.stage("browned"), 10));
@@ -314,6 +326,9 @@ class MessageCatalogueTest {
 		assertThat(seen).contains("warning.acrylamide.frying-too-hot", "warning.food-code.poultry",
 				"warning.food-code.whole-cut", "warning.alkaline-surface", "mitigation.warm-storage.change",
 				"assumption.grill.element", "assumption.oven.steam", "exchange.fryer", "warning.target-not-reached");
+		// toast taken to dark under a salamander passes the surface limit; the coals heat the lower face
+		assertThat(seen).contains("assumption.grill.flux", "assumption.grill.geometry", "assumption.grill.upper-face",
+				"warning.surface-limit", "outcome.surface-limit");
 	}
 
 	/** The engine passes what the sample passes: as many arguments, of the same kinds. */

@@ -19,7 +19,7 @@ public final class HeatSetups {
 			return new HeatSetup.PanContact(temperatureC, p.fatFilm(), p.flipEverySeconds(), p.body());
 		}
 		if (template instanceof HeatSetup.RadiantGrill g) {
-			return new HeatSetup.RadiantGrill(temperatureC, g.flipEverySeconds());
+			return g.withElementTemperature(temperatureC);
 		}
 		if (template instanceof HeatSetup.Rest) {
 			return new HeatSetup.Rest(temperatureC);

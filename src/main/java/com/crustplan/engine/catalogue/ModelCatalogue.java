@@ -14,6 +14,7 @@ import com.crustplan.engine.browning.WaterActivityFactor;
 import com.crustplan.engine.cook.CookSettings;
 import com.crustplan.engine.food.Acidity;
 import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.heat.GrillKind;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.layers.Grid;
 import com.crustplan.engine.properties.FoodComponent;
@@ -117,13 +118,17 @@ public final class ModelCatalogue {
 				"Through a fat film or a dry pan; the upper face is an open face in kitchen air; a flip swaps the faces.",
 				List.of(HeatSetup.CONTACT_WITH_FAT, HeatSetup.CONTACT_DRY)));
 		eq.add(new Equation("Oven atmosphere", "p_v = y·p_atm;  humidity ratio w = 0.622·y/(1 − y)",
-				"The humidity input is the steam share y of the oven atmosphere by volume (dry kitchen air ≈ 1.6 %, pure steam 100 %). "
-						+ "A relative humidity given at the oven temperature is converted: 10 % RH at 175 °C is already about 88 % steam.",
+				"The oven input is the steam share y of the oven atmosphere by volume (dry kitchen air ≈ 1.6 %, pure steam 100 %), shown with its dew point. "
+						+ "Relative humidity at the oven temperature is no cook's scale: 10 % RH at 175 °C is already about 88 % steam.",
 				List.of(Parameter.commonPractice("y_room", "steam share of kitchen air (25 °C, 50 % RH)",
 						Atmosphere.KITCHEN_STEAM_FRACTION * 100, "%", "common practice; p_sat from IAPWS-IF97"))));
-		eq.add(new Equation("Radiant grill", "T_rad⁴ = F·T_heater⁴ + (1 − F)·T_room⁴",
-				"The heated face sees the element over a share F of its view and the kitchen over the rest.",
-				List.of(HeatSetup.GRILL_VIEW)));
+		eq.add(new Equation("Radiant grill",
+				"T_rad⁴ = q/σ + T_room⁴;  q = σ·ε_el·s·F·(T_el⁴ − T_room⁴);  F = ½·{S − [S² − 4(r_h/r_f)²]^½}, S = 1 + (1 + (r_h/L)²)/(r_f/L)²",
+				"q is the heat flux at the food as a black radiometer at room temperature reads it, given by the cook or worked out "
+						+ "from the element temperature T_el, the glowing share s of the heater face and the view factor F of coaxial "
+						+ "parallel discs (food radius r_f, heater of equal area r_h, distance L; Incropera Table 13.2). "
+						+ "The cook stops where the surface passes T_char.",
+				List.of(GrillKind.FOOD_RADIUS, HeatSetup.RadiantGrill.CHAR_SURFACE)));
 		eq.add(new Equation("Deep fryer", "q = h·(T_oil − Ts);  h = h_oil + (h_oil,boil − h_oil)·min(1, J_boil/J_full)",
 				"Bubbling stirs the oil in proportion to the vapour leaving; J_full = h_oil,boil·(T_oil − 100 °C)/h_fg. h falls back as the crust dries.",
 				List.of(HeatSetup.OIL_QUIET, HeatSetup.OIL_BUBBLING)));

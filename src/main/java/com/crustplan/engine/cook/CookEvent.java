@@ -38,6 +38,11 @@ public interface CookEvent {
 		return new Crossing(Quantity.CORE_K, coreK, true);
 	}
 
+	/** Face 0 reaches a temperature, K. */
+	static CookEvent surfaceTemperatureReached(double surfaceK) {
+		return new Crossing(Quantity.SURFACE_K, surfaceK, true);
+	}
+
 	/** Face 0 has dried: its water activity falls to the threshold (standing water gone, layer drying). */
 	static CookEvent faceDried(double waterActivity) {
 		return new Crossing(Quantity.SURFACE_WATER_ACTIVITY, waterActivity, false);
@@ -46,13 +51,14 @@ public interface CookEvent {
 	/** What an event can watch. */
 	enum Quantity {
 
-		SURFACE_EXTENT, CORE_K, SURFACE_WATER_ACTIVITY;
+		SURFACE_EXTENT, CORE_K, SURFACE_WATER_ACTIVITY, SURFACE_K;
 
 		double of(Moment m) {
 			return switch (this) {
 				case SURFACE_EXTENT -> m.surfaceExtent();
 				case CORE_K -> m.coreK();
 				case SURFACE_WATER_ACTIVITY -> m.surfaceWaterActivity();
+				case SURFACE_K -> m.surfaceK();
 			};
 		}
 

@@ -135,6 +135,7 @@ public final class CookSimulation {
 	private CookResult march(double targetExtent) {
 		TargetRecord target = new TargetRecord(settings);
 		events.add(0, new Watch(CookEvent.targetColourReached(targetExtent), target));
+		watchSurfaceLimit(setup);
 		start();
 		advance(settings.horizonS());
 		return finish(target, targetExtent, setup.assumptions());
@@ -179,6 +180,9 @@ public final class CookSimulation {
 				}));
 			}
 			events.addAll(ends);
+			int before = events.size();
+			watchSurfaceLimit(step.setup());
+			List<Watch> limit = new ArrayList<>(events.subList(before, events.size()));
 			double until = startS + step.maxDurationS();
 			if (until > horizon) {
 				until = horizon;
@@ -186,12 +190,31 @@ public final class CookSimulation {
 			}
 			advance(until);
 			events.removeAll(ends);
+			events.removeAll(limit);
 			records.add(new CookStep.Record(k, startS, state.time, endedBy[0], state.coreK() - 273.15,
 					state.surfaceK() - 273.15, state.browningExtent(0)));
+			if (!Double.isNaN(surfaceLimitAtS)) {
+				// the surface would char: no later step starts
+				break;
+			}
 		}
 		CookResult cook = finish(target, targetExtent, assumptions);
 		return new StepsResult(cook, records, coreTargetC == null ? Double.NaN : coreTargetC, core.reachedAtS(),
 				core.reached() ? core.surfaceExtent() : Double.NaN);
+	}
+
+	/** When the surface passed the setup's limit and the cook stopped, s (NaN if it did not). */
+	private double surfaceLimitAtS = Double.NaN;
+
+	/** A setup with a surface limit (a grill) stops the cook where the surface passes it. */
+	private void watchSurfaceLimit(HeatSetup s) {
+		double limitC = s.surfaceLimitC();
+		if (Double.isFinite(limitC)) {
+			events.add(new Watch(CookEvent.surfaceTemperatureReached(limitC + 273.15), (step, f) -> {
+				surfaceLimitAtS = step.timeAt(f);
+				return step.current().timeS();
+			}));
+		}
 	}
 
 	private SeriesRecorder recorder;
@@ -251,8 +274,8 @@ public final class CookSimulation {
 			l.finish(state, interpolator);
 		}
 		boolean noColourTarget = Double.isNaN(targetExtent);
-		Outcome outcome = CookSummary.outcome(target.reached(), stepper.browning().canBrown(), watch.maxSurfaceK(),
-				watch.everDry());
+		Outcome outcome = !target.reached() && !Double.isNaN(surfaceLimitAtS) ? Outcome.SURFACE_LIMIT
+				: CookSummary.outcome(target.reached(), stepper.browning().canBrown(), watch.maxSurfaceK(), watch.everDry());
 		Message explanation = CookSummary.explain(outcome, watch.maxSurfaceK(), state.browningExtent(0), state.time);
 		List<Message> assumptions = new ArrayList<>(heatAssumptions);
 		assumptions.addAll(CookSummary.surfaceAssumptions(surface));

@@ -1,10 +1,12 @@
 package com.crustplan.engine.heat;
 
 import java.util.List;
+import java.util.Locale;
 
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.message.Duration;
 import com.crustplan.engine.message.Message;
+import com.crustplan.engine.message.PlainNumber;
 import com.crustplan.engine.message.Quantity;
 import com.crustplan.engine.message.Temperature;
 import com.crustplan.engine.message.Text;
@@ -32,9 +34,6 @@ public sealed interface HeatSetup
 	Parameter OVEN_FAN = Parameter.fromMemory("h_fan", "convection in a fan oven", 40, "W/(m²·K)",
 			"20–60 W/m²K (Sakin et al. 2009; Carson et al. 2006; values from memory)");
 
-	Parameter GRILL_VIEW = Parameter.assumption("F", "share of the food's view taken by the heater", 0.5, "–",
-			"a salamander element above a plate, a typical geometry (assumption); gives ≈ 37 kW/m² at 800 °C, within measured grill fluxes up to 54 kW/m²");
-
 	Parameter OIL_QUIET = Parameter.published("h_oil", "oil-side coefficient without boiling", 280, "W/(m²·K)",
 			"250–300 W/m²K (Hubbard & Farkas 1999; Mir-Bel, Oria & Salvador 2012, J Food Eng 113:167)");
 
@@ -54,9 +53,15 @@ public sealed interface HeatSetup
 
 	List<Message> assumptions();
 
+	/** The hottest surface the cook follows, °C: it stops there and says so (no limit unless a mode sets one). */
+	default double surfaceLimitC() {
+		return Double.POSITIVE_INFINITY;
+	}
+
 	static List<Parameter> parameters() {
-		return List.of(KITCHEN_AIR_C, NATURAL_CONVECTION, CONTACT_WITH_FAT, CONTACT_DRY, OVEN_STILL, OVEN_FAN, GRILL_VIEW,
-				OIL_QUIET, OIL_BUBBLING, OVEN_WALL_EMISSIVITY, Radiation.FOOD_EMISSIVITY, GasExchange.LEWIS_NUMBER);
+		return List.of(KITCHEN_AIR_C, NATURAL_CONVECTION, CONTACT_WITH_FAT, CONTACT_DRY, OVEN_STILL, OVEN_FAN, GrillKind.FOOD_RADIUS,
+				OIL_QUIET, OIL_BUBBLING, OVEN_WALL_EMISSIVITY, Radiation.FOOD_EMISSIVITY, GasExchange.LEWIS_NUMBER,
+				RadiantGrill.CHAR_SURFACE);
 	}
 
 	private static double kelvin(double c) {
@@ -167,6 +172,11 @@ public sealed interface HeatSetup
 			return new Atmosphere(kelvin(airTemperatureC), Math.max(steamPct / 100, 0));
 		}
 
+		/** Dew point of the oven atmosphere, °C: a face below it gains water by condensation. */
+		public double dewPointC() {
+			return atmosphere().dewPointK() - 273.15;
+		}
+
 		@Override
 		public FaceSchedule schedule() {
 			double h = fan ? OVEN_FAN.value() : OVEN_STILL.value();
@@ -188,7 +198,7 @@ public sealed interface HeatSetup
 		@Override
 		public List<Message> assumptions() {
 			return List.of(Message.of(fan ? "assumption.oven.fan" : "assumption.oven.still", coefficient(h())),
-					Message.of("assumption.oven.steam", Quantity.of(steamPct, "%", 1),
+					Message.of("assumption.oven.steam", Quantity.of(steamPct, "%", 1), Temperature.celsius(dewPointC()),
 							Temperature.celsius(WetBulb.temperatureC(atmosphere(), h()))),
 					Message.of("assumption.oven.rack"));
 		}
@@ -199,38 +209,106 @@ public sealed interface HeatSetup
 
 	}
 
-	/** A radiant grill (salamander, broiler) above the food; the lower face rests in kitchen air. */
-	record RadiantGrill(double heaterTemperatureC, double flipEverySeconds) implements HeatSetup {
+	/**
+	 * A radiant grill: a salamander or broiler above the food, or coals below it; the other face rests in
+	 * kitchen air. What reaches the food is {@code heatFluxKwPerM2}: what a black radiometer at 25 °C reads
+	 * where the food sits. A cook gives it directly (measured, or a published figure for the grill), or
+	 * gives the element temperature and distance, from which the flux follows through the view factor of
+	 * {@link GrillKind}. {@code heaterTemperatureC} is the element temperature given or implied;
+	 * {@code fluxGiven} says which the cook gave. The cook stops where the surface passes
+	 * {@link #CHAR_SURFACE}: the browning rates are not fitted beyond it.
+	 */
+	record RadiantGrill(GrillKind kind, double heaterTemperatureC, double distanceMm, double heatFluxKwPerM2,
+			boolean fluxGiven, double flipEverySeconds) implements HeatSetup {
+
+		/**
+		 * The hottest surface the browning rates are used at: bread crust rates were fitted on bakes with
+		 * crust surfaces up to about 200–250 °C (Zanoni, Peri & Bruno 1995, from memory), the meat, poultry
+		 * and potato rates are calibrated on pans and oil at 175–230 °C; above it a surface pyrolyses
+		 * (chars) rather than browns (from memory).
+		 */
+		public static final Parameter CHAR_SURFACE = Parameter.fromMemory("T_char",
+				"highest surface temperature the browning rates are used at", 250, "°C",
+				"upper end of the fitted and calibrated surface temperatures; beyond it the surface chars (from memory)");
 
 		public RadiantGrill {
+			if (kind == null) {
+				throw new InvalidInputException("grill", "choose salamander, broiler or charcoal");
+			}
 			range("temperatureC", heaterTemperatureC, 300, 1200, "°C for a radiant element");
+			range("distanceMm", distanceMm, 30, 400, "mm from the heater to the food");
+			range("heatFluxKwPerM2", heatFluxKwPerM2, 1, 60,
+					"kW/m² at the food (a salamander gives about 10–20; 54 is the highest measured under a grill)");
 			range("flipEverySeconds", flipEverySeconds, 0, 3600, "s (0 for no flip)");
 			if (flipEverySeconds > 0 && flipEverySeconds < 10) {
 				throw new InvalidInputException("flipEverySeconds", "must be 0 (no flip) or at least 10 s");
 			}
 		}
 
-		/** The heater temperature that delivers {@code kwPerM2} to a food surface at 25 °C. */
+		/** A salamander's element at a temperature, the food at the usual distance (the form of round one). */
+		public RadiantGrill(double heaterTemperatureC, double flipEverySeconds) {
+			this(ofElement(GrillKind.SALAMANDER, heaterTemperatureC, null, flipEverySeconds));
+		}
+
+		private RadiantGrill(RadiantGrill g) {
+			this(g.kind, g.heaterTemperatureC, g.distanceMm, g.heatFluxKwPerM2, g.fluxGiven, g.flipEverySeconds);
+		}
+
+		/** An element temperature and distance (null for the kind's usual distance): the flux from the view factor. */
+		public static RadiantGrill ofElement(GrillKind kind, double elementTemperatureC, Double distanceMm,
+				double flipEverySeconds) {
+			GrillKind k = kind == null ? GrillKind.SALAMANDER : kind;
+			double l = distanceMm == null ? k.defaultDistanceMm() : distanceMm;
+			range("temperatureC", elementTemperatureC, 300, 1200, "°C for a radiant element");
+			range("distanceMm", l, 30, 400, "mm from the heater to the food");
+			double q = k.heatFluxWPerM2(elementTemperatureC, l, kelvin(KITCHEN_AIR_C.value())) / 1000;
+			if (q > 60) {
+				throw new InvalidInputException("distanceMm", String.format(Locale.ROOT,
+						"puts the food so close to a %.0f °C element that it gets %.0f kW/m²: more than 60 kW/m², beyond any measured grill",
+						elementTemperatureC, q));
+			}
+			return new RadiantGrill(k, elementTemperatureC, l, Math.max(q, 1), false, flipEverySeconds);
+		}
+
+		/** A heat flux at the food, kW/m²: the element temperature is implied at the kind's usual distance. */
+		public static RadiantGrill ofFlux(GrillKind kind, double kwPerM2, double flipEverySeconds) {
+			GrillKind k = kind == null ? GrillKind.SALAMANDER : kind;
+			range("heatFluxKwPerM2", kwPerM2, 1, 60,
+					"kW/m² at the food (a salamander gives about 10–20; 54 is the highest measured under a grill)");
+			double l = k.defaultDistanceMm();
+			double t = k.elementTemperatureC(kwPerM2 * 1000, l, kelvin(KITCHEN_AIR_C.value()));
+			return new RadiantGrill(k, Math.min(Math.max(t, 300), 1200), l, kwPerM2, true, flipEverySeconds);
+		}
+
+		/** A salamander giving {@code kwPerM2} at the food. */
 		public static RadiantGrill fromHeatFlux(double kwPerM2, double flipEverySeconds) {
-			range("heatFluxKwPerM2", kwPerM2, 2, 80, "kW/m²");
-			double room = kelvin(KITCHEN_AIR_C.value());
-			double t4 = kwPerM2 * 1000 / (Radiation.FOOD_EMISSIVITY.value() * Radiation.SIGMA * GRILL_VIEW.value())
-					+ Math.pow(room, 4);
-			return new RadiantGrill(Math.pow(t4, 0.25) - 273.15, flipEverySeconds);
+			return ofFlux(GrillKind.SALAMANDER, kwPerM2, flipEverySeconds);
+		}
+
+		/** The same grill and food position with the element at another temperature. */
+		public RadiantGrill withElementTemperature(double elementTemperatureC) {
+			return ofElement(kind, elementTemperatureC, distanceMm, flipEverySeconds);
+		}
+
+		/** Mean view factor from the food face to the heater face (coaxial parallel discs). */
+		public double viewFactor() {
+			return kind.viewFactor(distanceMm);
 		}
 
 		/** Radiant flux absorbed by a face at 25 °C, kW/m². */
 		public double heatFluxAtRoomKwPerM2() {
-			double room = kelvin(KITCHEN_AIR_C.value());
-			return Radiation.FOOD_EMISSIVITY.value() * Radiation.SIGMA * GRILL_VIEW.value()
-					* (Math.pow(kelvin(heaterTemperatureC), 4) - Math.pow(room, 4)) / 1000;
+			return Radiation.FOOD_EMISSIVITY.value() * heatFluxKwPerM2;
 		}
 
+		/**
+		 * The food sees irradiation G = q + σ·T_room⁴ (the radiometer's reading plus what a body at room
+		 * temperature gets back), i.e. surroundings at T_r = (q/σ + T_room⁴)^¼; it absorbs ε·G and emits
+		 * ε·σ·T_s⁴.
+		 */
 		@Override
 		public FaceSchedule schedule() {
 			double room = kelvin(KITCHEN_AIR_C.value());
-			double f = GRILL_VIEW.value();
-			double radiant = Math.pow(f * Math.pow(kelvin(heaterTemperatureC), 4) + (1 - f) * Math.pow(room, 4), 0.25);
+			double radiant = Math.pow(heatFluxKwPerM2 * 1000 / Radiation.SIGMA + Math.pow(room, 4), 0.25);
 			GasExchange underHeater = new GasExchange(Atmosphere.kitchen(room), NATURAL_CONVECTION.value(), radiant,
 					Message.of("exchange.grill", Temperature.celsius(heaterTemperatureC)));
 			return FaceSchedule.flipping(underHeater, kitchenAir(), flipEverySeconds);
@@ -247,10 +325,24 @@ public sealed interface HeatSetup
 		}
 
 		@Override
+		public double surfaceLimitC() {
+			return CHAR_SURFACE.value();
+		}
+
+		@Override
 		public List<Message> assumptions() {
-			return List.of(Message.of("assumption.grill.element", Temperature.celsius(heaterTemperatureC),
-					Quantity.of(GRILL_VIEW.value() * 100, "%"), Quantity.of(heatFluxAtRoomKwPerM2(), "kW/m²")),
-					turning(flipEverySeconds), Message.of("assumption.grill.lower-face"));
+			Message source = fluxGiven
+					? Message.of("assumption.grill.flux", Text.of(kind.label()), Quantity.of(heatFluxKwPerM2, "kW/m²", 1),
+							Temperature.celsius(heaterTemperatureC))
+					: Message.of("assumption.grill.element", Temperature.celsius(heaterTemperatureC),
+							Quantity.of(viewFactor() * kind.glowingShare() * 100, "%"),
+							Quantity.of(heatFluxAtRoomKwPerM2(), "kW/m²"));
+			return List.of(source,
+					Message.of("assumption.grill.geometry", Text.of(kind.label()), Quantity.of(distanceMm, "mm"),
+							PlainNumber.of(viewFactor(), 2), Quantity.of(kind.glowingShare() * 100, "%")),
+					Message.of("assumption.grill.surface-limit", Temperature.celsius(CHAR_SURFACE.value())),
+					turning(flipEverySeconds),
+					Message.of(kind == GrillKind.CHARCOAL ? "assumption.grill.upper-face" : "assumption.grill.lower-face"));
 		}
 
 	}
