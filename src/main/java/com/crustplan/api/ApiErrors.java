@@ -24,6 +24,7 @@ import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.ResponseStatus;
 import org.springframework.web.bind.annotation.RestControllerAdvice;
 import org.springframework.web.method.annotation.MethodArgumentTypeMismatchException;
+import org.springframework.web.servlet.NoHandlerFoundException;
 import org.springframework.web.servlet.resource.NoResourceFoundException;
 
 import com.crustplan.engine.input.InvalidInputException;
@@ -109,9 +110,9 @@ public class ApiErrors {
 					e.getMethod() + " is not allowed here" + (allowed.isEmpty() ? "" : "; use " + allowed)), request));
 	}
 
-	@ExceptionHandler(NoResourceFoundException.class)
-	ResponseEntity<ProblemDetail> noSuchAddress(NoResourceFoundException e, HttpServletRequest request)
-			throws NoResourceFoundException {
+	/** No controller and no static file at this address (static files have their own paths only). */
+	@ExceptionHandler({ NoResourceFoundException.class, NoHandlerFoundException.class })
+	ResponseEntity<ProblemDetail> noSuchAddress(Exception e, HttpServletRequest request) throws Exception {
 		apiOnly(e, request);
 		return answer(Problems.of(HttpStatus.NOT_FOUND, "path",
 				"is not an address of the API: " + request.getRequestURI()), request);
