@@ -21,14 +21,16 @@ import com.crustplan.engine.cook.Outcome;
 import com.crustplan.engine.assessment.AcrylamideCook;
 import com.crustplan.engine.cook.Sample;
 import com.crustplan.engine.cook.Target;
-import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.doneness.DonenessJudge;
+import com.crustplan.engine.doneness.DonenessWarning;
+import com.crustplan.engine.doneness.FoodCode;
+import com.crustplan.engine.doneness.FoodCode.Cut;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.message.Duration;
 import com.crustplan.engine.message.Message;
 import com.crustplan.engine.message.PlainNumber;
-import com.crustplan.engine.message.StatedTemperature;
 import com.crustplan.engine.message.Temperature;
 import com.crustplan.engine.message.Text;
 
@@ -49,20 +51,6 @@ public class PlanService {
 
 	/** Swatches in the strip: enough to see the colour change, few enough to read on a tablet. */
 	static final int SWATCHES = 10;
-
-	// FDA Food Code 2022, section 3-401.11 (A)(1)-(3): minimum internal temperatures and holding times,
-	// with both of the code's own figures, so °F shows the code's number rather than a rounded conversion.
-	static final double FOOD_CODE_WHOLE_CUT_C = 63; // 145 °F for 15 s: meat, fish, eggs
-
-	static final double FOOD_CODE_WHOLE_CUT_F = 145;
-
-	static final double FOOD_CODE_COMMINUTED_C = 68; // 155 °F for 17 s: minced meat and fish
-
-	static final double FOOD_CODE_COMMINUTED_F = 155;
-
-	static final double FOOD_CODE_POULTRY_C = 74; // 165 °F for < 1 s: poultry, stuffed foods
-
-	static final double FOOD_CODE_POULTRY_F = 165;
 
 	/** Above neutral, Maillard browning and acrylamide formation speed up (Martins, Jongen & van Boekel 2000, Trends Food Sci Technol 11:364). */
 	static final double ALKALINE_PH = 7;
@@ -105,7 +93,7 @@ public class PlanService {
 		// where no benchmark applies (meat, fish, vegetables) acrylamide is not the kitchen's concern: no changes offered
 		List<Mitigation> mitigations = withMitigations && product.benchmark().isPresent()
 				? Mitigations.compute(surface, product, setup, target, settings) : List.of();
-		List<PlanWarning> warnings = warnings(surface, result);
+		List<PlanWarning> warnings = warnings(surface, setup, result);
 		surfaceLimit(setup, result).ifPresent(warnings::add);
 		for (AcrylamideWarning a : estimate.warnings()) {
 			warnings.add(new PlanWarning(a.code().toLowerCase(Locale.ROOT).replace('_', '-'),
@@ -139,23 +127,14 @@ public class PlanService {
 		return Optional.empty();
 	}
 
-	private static List<PlanWarning> warnings(Surface surface, CookResult result) {
+	private static List<PlanWarning> warnings(Surface surface, HeatSetup setup, CookResult result) {
 		List<PlanWarning> w = new ArrayList<>();
 		if (!result.reached()) {
 			w.add(new PlanWarning("target-not-reached", Message.of("warning.target-not-reached", result.explanation())));
 		}
-		double core = result.coreTemperatureAtTargetC();
-		FoodCategory c = surface.category();
-		if (result.reached() && Double.isFinite(core)) {
-			if (c == FoodCategory.POULTRY_SKIN && core < FOOD_CODE_POULTRY_C) {
-				w.add(new PlanWarning("core-below-food-code", Message.of("warning.food-code.poultry",
-						Temperature.celsius(core), StatedTemperature.of(FOOD_CODE_POULTRY_C, FOOD_CODE_POULTRY_F))));
-			}
-			else if ((c == FoodCategory.MEAT || c == FoodCategory.FISH) && core < FOOD_CODE_WHOLE_CUT_C) {
-				w.add(new PlanWarning("core-below-food-code", Message.of("warning.food-code.whole-cut",
-						Temperature.celsius(core), StatedTemperature.of(FOOD_CODE_WHOLE_CUT_C, FOOD_CODE_WHOLE_CUT_F),
-						StatedTemperature.of(FOOD_CODE_COMMINUTED_C, FOOD_CODE_COMMINUTED_F))));
-			}
+		// both ways: short of done (food code, raw crumb, a fry's centre) and past juiciness or done long before the colour
+		for (DonenessWarning d : DonenessJudge.judge(surface, setup, result, Cut.WHOLE)) {
+			w.add(new PlanWarning(d.code(), d.message()));
 		}
 		if (surface.ph() > ALKALINE_PH) {
 			w.add(new PlanWarning("alkaline-surface",
@@ -169,9 +148,8 @@ public class PlanService {
 		c.add(Message.of("caution.joined", AcrylamideCautions.CARCINOGEN, AcrylamideCautions.ESTIMATE));
 		c.add(Message.of("caution.probe"));
 		// the code's own figures in both scales: a °F page shows 155 °F, not 154 °F converted from 68 °C
-		c.add(Message.of("caution.food-code", StatedTemperature.withFahrenheit(FOOD_CODE_WHOLE_CUT_C, FOOD_CODE_WHOLE_CUT_F),
-				StatedTemperature.withFahrenheit(FOOD_CODE_COMMINUTED_C, FOOD_CODE_COMMINUTED_F),
-				StatedTemperature.withFahrenheit(FOOD_CODE_POULTRY_C, FOOD_CODE_POULTRY_F)));
+		c.add(Message.of("caution.food-code", FoodCode.WHOLE_CUT.withFahrenheit(), FoodCode.COMMINUTED.withFahrenheit(),
+				FoodCode.POULTRY.withFahrenheit()));
 		if (setup instanceof HeatSetup.DeepFryer) {
 			c.add(Message.of("caution.hot-oil"));
 		}

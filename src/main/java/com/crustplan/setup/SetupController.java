@@ -1,6 +1,7 @@
 package com.crustplan.setup;
 
 import java.util.Arrays;
+import java.util.Locale;
 
 import jakarta.validation.Valid;
 
@@ -163,6 +164,11 @@ class SetupController {
 		model.addAttribute("modes", Arrays.asList(HeatMode.values()));
 		model.addAttribute("grillKinds", SetupForm.grillKinds());
 		model.addAttribute("dewPoints", SetupForm.dewPointTable(units));
+		// a new pan or grill setup turns at this interval unless changed: the form says so beside the field
+		model.addAttribute("flipHelp", String.format(Locale.ROOT,
+				"new setups turn every %.0f s: each face is off the heat half the time, so the crust takes nearly twice as long;"
+						+ " 0 for not turned; at least 10 s",
+				HeatSettings.DEFAULT_FLIP_EVERY_S));
 		return "setup/form";
 	}
 

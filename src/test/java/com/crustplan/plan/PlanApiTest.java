@@ -92,6 +92,18 @@ class PlanApiTest {
 	}
 
 	@Test
+	void shouldWarnThatChickenGoldenInADryOvenHasADryCore() throws Exception {
+		plan("""
+				{ "surface": { "category": "poultry-skin" },
+				  "heat": { "mode": "oven", "temperatureC": 200, "fan": true, "relativeHumidityPct": 0 },
+				  "target": { "stage": "golden" } }""")
+			.andExpect(status().isOk())
+			// poultry breast dries past about 80 °C (common practice); the core here nears 99 °C
+			.andExpect(jsonPath("$.warnings[*].code", hasItem("core-past-juiciness")))
+			.andExpect(jsonPath("$.warnings[*].message", hasItem(containsString("80 °C"))));
+	}
+
+	@Test
 	void shouldEstimateAcrylamideAgainstTheFrenchFriesBenchmark() throws Exception {
 		plan(CHIPS.replace("\"category\": \"potato\"", "\"category\": \"potato\", \"product\": \"french-fries\"")
 			.replaceFirst("\\}\\s*$", ", \"mitigations\": true }"))

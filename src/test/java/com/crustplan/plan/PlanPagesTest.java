@@ -121,6 +121,25 @@ class PlanPagesTest {
 	}
 
 	@Test
+	void shouldShowDonenessWarningsOnThePlanPage() throws Exception {
+		// the demo chicken thigh in the demo's combi oven: golden with the core at the boil, past the 80 °C at
+		// which poultry dries (common practice)
+		mvc.perform(get("/plan").param("surfaceId", String.valueOf(demo.surface("Chicken thigh, skin on")))
+			.param("setupId", String.valueOf(demo.setup("Combi oven, dry fan")))
+			.param("targetStage", "golden"))
+			.andExpect(status().isOk())
+			.andExpect(content().string(containsString("data-code=\"core-past-juiciness\"")))
+			.andExpect(content().string(containsString("poultry breast dries past about 80 °C")));
+	}
+
+	@Test
+	void shouldSayTheTurningDefaultBesideTheField() throws Exception {
+		mvc.perform(get("/setups/new"))
+			.andExpect(status().isOk())
+			.andExpect(content().string(containsString("new setups turn every 60 s")));
+	}
+
+	@Test
 	void shouldPlanToALightnessTarget() throws Exception {
 		mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetLightness", "64"))
 			.andExpect(status().isOk())

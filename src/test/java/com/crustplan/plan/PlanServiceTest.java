@@ -100,4 +100,25 @@ class PlanServiceTest {
 					|| Double.isFinite(r.result().portionAcrylamideAtTargetUgPerKg()));
 	}
 
+	@Test
+	void shouldWarnWhenChickenIsGoldenWithADryCoreAndSayHowToAvoidIt() {
+		// skin-on chicken in a dry 200 °C fan oven: golden with the core near 99 °C, past the 80 °C at which
+		// poultry breast dries (common practice); the plan used to say "Warnings: none"
+		PlanReport r = planner.plan(Surface.defaults(FoodCategory.POULTRY_SKIN), new HeatSetup.Oven(200, true, 1.6),
+				Target.stage("golden"), 60);
+		PlanWarning w = r.warnings().stream().filter(x -> x.code().equals("core-past-juiciness")).findFirst().orElseThrow();
+		String f = text.render(w.message(), TemperatureUnit.FAHRENHEIT);
+		// 80 °C = 176 °F; FDA Food Code 2022 poultry 165 °F, the code's own figure
+		assertThat(f).contains("176 °F").contains("165 °F").contains("Brown it first").doesNotContain("°C");
+	}
+
+	@Test
+	void shouldWarnWhenABaguetteIsGoldenOverARawCrumb() {
+		// a 60 mm lean loaf golden in a 230 °C deck oven while the crumb is near 22 °C; baked is 96 °C (bakers' probe)
+		PlanReport r = planner.plan(Surface.defaults(FoodCategory.BREAD).withThicknessMm(60),
+				new HeatSetup.Oven(230, false, 1.6), Target.stage("golden"), 60);
+		PlanWarning w = r.warnings().stream().filter(x -> x.code().equals("crumb-not-baked")).findFirst().orElseThrow();
+		assertThat(text.render(w.message(), TemperatureUnit.CELSIUS)).contains("96 °C").contains("Bake about 40 K cooler");
+	}
+
 }

@@ -183,8 +183,26 @@ class MessageCatalogueTest {
 		sample("warning.with-basis", m("warning.acrylamide.frying-too-hot", c(185), c(175)),
 				Text.of("Regulation (EU) 2017/2158, Annex II, Part A (French fries)"));
 		sample("warning.target-not-reached", m("outcome.too-slow"));
-		sample("warning.food-code.poultry", c(52), StatedTemperature.of(74, 165));
-		sample("warning.food-code.whole-cut", c(48), StatedTemperature.of(63, 145), StatedTemperature.of(68, 155));
+		sample("doneness.moment.colour");
+		sample("doneness.moment.end");
+		sample("warning.food-code.poultry", m("doneness.moment.colour"), c(52), StatedTemperature.of(74, 165));
+		sample("warning.food-code.whole-cut", m("doneness.moment.colour"), c(48), StatedTemperature.of(63, 145),
+				StatedTemperature.of(68, 155));
+		sample("warning.food-code.minced", m("doneness.moment.end"), c(61), StatedTemperature.of(68, 155));
+		sample("warning.doneness.crumb-raw", m("doneness.moment.colour"), c(26), c(96));
+		sample("warning.doneness.fry-centre", m("doneness.moment.colour"), c(64), c(98));
+		sample("warning.doneness.dry.meat", m("doneness.moment.colour"), c(82), c(70));
+		sample("warning.doneness.dry.poultry", m("doneness.moment.colour"), c(99), c(80));
+		sample("warning.doneness.dry.fish", m("doneness.moment.end"), c(86), c(65));
+		sample("warning.doneness.colour-late", c(96), Duration.minutes(10), Duration.minutes(38));
+		sample("warning.with-suggestion", m("warning.doneness.dry.poultry", m("doneness.moment.colour"), c(99), c(80)),
+				m("suggestion.brown-first", StatedTemperature.of(74, 165)));
+		sample("suggestion.lower-or-finish", TemperatureDifference.kelvin(20), c(180), StatedTemperature.of(74, 165));
+		sample("suggestion.lower-heat", TemperatureDifference.kelvin(30));
+		sample("suggestion.bake-lower", TemperatureDifference.kelvin(40));
+		sample("suggestion.fry-cooler-or-thinner", c(175), q(10, "mm"));
+		sample("suggestion.brown-first", StatedTemperature.of(74, 165));
+		sample("suggestion.hotter", TemperatureDifference.kelvin(30));
 		sample("warning.surface-limit", c(250), Duration.seconds(95));
 		sample("warning.surface-past-limit", c(262), c(250));
 		sample("warning.alkaline-surface", PlainNumber.of(7.6, 1));

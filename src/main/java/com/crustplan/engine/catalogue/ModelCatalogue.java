@@ -12,6 +12,7 @@ import com.crustplan.engine.browning.BrowningKinetics;
 import com.crustplan.engine.browning.Caramelisation;
 import com.crustplan.engine.browning.WaterActivityFactor;
 import com.crustplan.engine.cook.CookSettings;
+import com.crustplan.engine.doneness.DonenessChapter;
 import com.crustplan.engine.food.Acidity;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.heat.GrillKind;
@@ -42,6 +43,7 @@ public final class ModelCatalogue {
 		s.add(acidity());
 		s.add(colour());
 		s.add(AcrylamideChapter.section());
+		s.add(DonenessChapter.section());
 		return List.copyOf(s);
 	}
 
