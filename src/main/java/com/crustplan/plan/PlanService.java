@@ -28,6 +28,9 @@ import com.crustplan.engine.doneness.FoodCode.Cut;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.RadiantGrill;
+import com.crustplan.engine.heat.PanContact;
 import com.crustplan.engine.message.Duration;
 import com.crustplan.engine.message.Message;
 import com.crustplan.engine.message.PlainNumber;
@@ -108,7 +111,7 @@ public class PlanService {
 	 * fitted range before the target is flagged.
 	 */
 	static Optional<PlanWarning> surfaceLimit(HeatSetup setup, CookResult result) {
-		double limitC = HeatSetup.RadiantGrill.CHAR_SURFACE.value();
+		double limitC = RadiantGrill.CHAR_SURFACE.value();
 		if (result.outcome() == Outcome.SURFACE_LIMIT) {
 			return Optional.of(new PlanWarning("surface-limit", Message.of("warning.surface-limit",
 					Temperature.celsius(setup.surfaceLimitC()), Duration.seconds(result.simulatedS()))));
@@ -150,10 +153,10 @@ public class PlanService {
 		// the code's own figures in both scales: a °F page shows 155 °F, not 154 °F converted from 68 °C
 		c.add(Message.of("caution.food-code", FoodCode.WHOLE_CUT.withFahrenheit(), FoodCode.COMMINUTED.withFahrenheit(),
 				FoodCode.POULTRY.withFahrenheit()));
-		if (setup instanceof HeatSetup.DeepFryer) {
+		if (setup instanceof DeepFryer) {
 			c.add(Message.of("caution.hot-oil"));
 		}
-		if (setup instanceof HeatSetup.PanContact) {
+		if (setup instanceof PanContact) {
 			c.add(Message.of("caution.hot-pan"));
 		}
 		if (surface.bicarbonateGPerKg() > 0) {
@@ -186,9 +189,9 @@ public class PlanService {
 	static double[] riskMapTemperatures(HeatSetup setup) {
 		// fryer: the common frying range (EU 2017/2158 Annex II asks for below 175 °C); grill: element
 		// temperatures (from memory); pan surfaces and oven air: common practice
-		double from = setup instanceof HeatSetup.RadiantGrill ? 500 : 150;
-		double to = setup instanceof HeatSetup.DeepFryer ? 190 : setup instanceof HeatSetup.RadiantGrill ? 1000 : 250;
-		double by = setup instanceof HeatSetup.DeepFryer ? 5 : setup instanceof HeatSetup.RadiantGrill ? 50 : 10;
+		double from = setup instanceof RadiantGrill ? 500 : 150;
+		double to = setup instanceof DeepFryer ? 190 : setup instanceof RadiantGrill ? 1000 : 250;
+		double by = setup instanceof DeepFryer ? 5 : setup instanceof RadiantGrill ? 50 : 10;
 		TreeSet<Double> t = new TreeSet<>();
 		for (double v = from; v <= to + 1e-9; v += by) {
 			t.add(v);

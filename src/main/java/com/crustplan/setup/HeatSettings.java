@@ -2,6 +2,10 @@ package com.crustplan.setup;
 
 import com.crustplan.engine.heat.GrillKind;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.RadiantGrill;
+import com.crustplan.engine.heat.Oven;
+import com.crustplan.engine.heat.PanContact;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.water.Atmosphere;
 
@@ -78,9 +82,9 @@ public final class HeatSettings {
 		}
 		double t = v.temperatureC();
 		return switch (mode) {
-			case PAN -> new HeatSetup.PanContact(t, v.fatFilm() == null ? DEFAULT_FAT_FILM : v.fatFilm(), flip);
-			case OVEN -> new HeatSetup.Oven(t, v.fan() != null && v.fan(), steamPct(v));
-			case FRYER -> new HeatSetup.DeepFryer(t);
+			case PAN -> new PanContact(t, v.fatFilm() == null ? DEFAULT_FAT_FILM : v.fatFilm(), flip);
+			case OVEN -> new Oven(t, v.fan() != null && v.fan(), steamPct(v));
+			case FRYER -> new DeepFryer(t);
 			case GRILL -> throw new IllegalStateException("handled above");
 		};
 	}
@@ -108,13 +112,13 @@ public final class HeatSettings {
 				throw new InvalidInputException("distanceMm",
 						"give either the heat flux at the food or the element temperature with its distance, not both");
 			}
-			return HeatSetup.RadiantGrill.ofFlux(kind, v.heatFluxKwPerM2(), flip);
+			return RadiantGrill.ofFlux(kind, v.heatFluxKwPerM2(), flip);
 		}
 		if (v.temperatureC() == null) {
 			throw new InvalidInputException("temperatureC",
 					"is required for a grill unless the heat flux at the food is given");
 		}
-		return HeatSetup.RadiantGrill.ofElement(kind, v.temperatureC(), v.distanceMm(), flip);
+		return RadiantGrill.ofElement(kind, v.temperatureC(), v.distanceMm(), flip);
 	}
 
 }

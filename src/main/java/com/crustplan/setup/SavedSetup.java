@@ -7,7 +7,7 @@ import jakarta.persistence.Entity;
 import jakarta.persistence.Table;
 
 import com.crustplan.engine.heat.GrillKind;
-import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.RadiantGrill;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.system.KitchenRecord;
 import com.crustplan.system.TemperatureUnit;
@@ -140,12 +140,12 @@ public class SavedSetup extends KitchenRecord {
 		return grillSetup() == null ? null : grillSetup().distanceMm();
 	}
 
-	private HeatSetup.RadiantGrill grillSetup() {
+	private RadiantGrill grillSetup() {
 		if (getHeatMode() != HeatMode.GRILL) {
 			return null;
 		}
 		try {
-			return (HeatSetup.RadiantGrill) SetupForm.of(this, TemperatureUnit.CELSIUS).toHeatSetup();
+			return (RadiantGrill) SetupForm.of(this, TemperatureUnit.CELSIUS).toHeatSetup();
 		}
 		catch (InvalidInputException e) {
 			return null;

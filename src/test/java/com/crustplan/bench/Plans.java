@@ -7,6 +7,8 @@ import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.PanContact;
 
 /** The plans the benchmarks and tables run: the two everyday cooks a kitchen plans most. */
 final class Plans {
@@ -14,14 +16,14 @@ final class Plans {
 	/** A 25 mm steak (the meat defaults) in an oiled pan at 220 °C, not turned, to a browned crust. */
 	static final Surface STEAK = Surface.defaults(FoodCategory.MEAT);
 
-	static final HeatSetup PAN_220 = new HeatSetup.PanContact(220, true, 0);
+	static final HeatSetup PAN_220 = new PanContact(220, true, 0);
 
 	static final Target BROWNED = Target.stage("browned");
 
 	/** 10 mm chips (the potato defaults) in oil at 175 °C, to golden. */
 	static final Surface CHIPS = Surface.defaults(FoodCategory.POTATO);
 
-	static final HeatSetup FRYER_175 = new HeatSetup.DeepFryer(175);
+	static final HeatSetup FRYER_175 = new DeepFryer(175);
 
 	static final Target GOLDEN = Target.stage("golden");
 
@@ -64,7 +66,7 @@ final class Plans {
 	}
 
 	static double mapPoint(int i, CookSettings summary) {
-		return AcrylamideCook.run(CHIPS, new HeatSetup.DeepFryer(mapTemperatureC(i)), GOLDEN, summary).timeToTargetS();
+		return AcrylamideCook.run(CHIPS, new DeepFryer(mapTemperatureC(i)), GOLDEN, summary).timeToTargetS();
 	}
 
 }

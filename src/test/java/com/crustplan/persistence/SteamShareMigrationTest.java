@@ -18,7 +18,7 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 
-import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.Oven;
 import com.crustplan.setup.HeatSettings;
 
 /**
@@ -136,14 +136,14 @@ class SteamShareMigrationTest {
 		// a dry fan stays dry: kitchen air, 1.6 % steam, dew point about 14 °C
 		assertThat(rows.get("Combi oven, dry fan").steamPct()).isCloseTo(1.6, within(1e-9));
 		assertThat(rows.get("Oven, vent open").steamPct()).isCloseTo(1.6, within(1e-9));
-		assertThat(new HeatSetup.Oven(200, true, rows.get("Combi oven, dry fan").steamPct()).dewPointC())
+		assertThat(new Oven(200, true, rows.get("Combi oven, dry fan").steamPct()).dewPointC())
 			.isCloseTo(13.8, within(0.5));
 		// above the dry range the share rises linearly: 30 → 1.6 + 20·98.4/90 = 23.47 %, 80 → 78.13 %
 		assertThat(rows.get("Deck oven, bread").steamPct()).isCloseTo(23.47, within(0.01));
 		assertThat(rows.get("Combi, moist roast").steamPct()).isCloseTo(78.13, within(0.01));
 		// a steam oven stays steam: 100 %, dew point 100 °C (101.325 kPa)
 		assertThat(rows.get("Steam oven").steamPct()).isCloseTo(100, within(1e-9));
-		assertThat(new HeatSetup.Oven(100, true, rows.get("Steam oven").steamPct()).dewPointC()).isCloseTo(100, within(0.1));
+		assertThat(new Oven(100, true, rows.get("Steam oven").steamPct()).dewPointC()).isCloseTo(100, within(0.1));
 		// the SQL and the API's reading of the old field agree
 		for (String oven : new String[] { "Combi oven, dry fan", "Deck oven, bread", "Oven, vent open", "Combi, moist roast",
 				"Steam oven" }) {

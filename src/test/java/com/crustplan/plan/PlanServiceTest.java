@@ -12,6 +12,9 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.Oven;
+import com.crustplan.engine.heat.PanContact;
 import com.crustplan.system.MessageText;
 import com.crustplan.system.TemperatureUnit;
 
@@ -26,7 +29,7 @@ class PlanServiceTest {
 	/** A 60 mm skin-on piece in a 240 °C pan: the skin colours long before the core is safe. */
 	PlanReport thickChicken() {
 		Surface s = Surface.defaults(FoodCategory.POULTRY_SKIN).withThicknessMm(60);
-		return planner.plan(s, new HeatSetup.PanContact(240, true, 0), Target.stage("light-golden"), 30);
+		return planner.plan(s, new PanContact(240, true, 0), Target.stage("light-golden"), 30);
 	}
 
 	@Test
@@ -59,7 +62,7 @@ class PlanServiceTest {
 	@Test
 	void shouldCautionAboutHotOilOnlyForTheFryer() {
 		Surface chips = Surface.defaults(FoodCategory.POTATO);
-		PlanReport fried = planner.plan(chips, new HeatSetup.DeepFryer(170), Target.stage("light-golden"), 20);
+		PlanReport fried = planner.plan(chips, new DeepFryer(170), Target.stage("light-golden"), 20);
 		assertThat(text.celsius(fried.cautions())).anySatisfy(x -> assertThat(x).startsWith("Hot oil"));
 		assertThat(text.celsius(thickChicken().cautions())).noneSatisfy(x -> assertThat(x).startsWith("Hot oil"));
 	}
@@ -82,7 +85,7 @@ class PlanServiceTest {
 	@Test
 	void shouldRefuseAHorizonOutsideOneMinuteToSixHours() {
 		Surface s = Surface.defaults(FoodCategory.MEAT);
-		HeatSetup pan = new HeatSetup.PanContact(220, true, 60);
+		HeatSetup pan = new PanContact(220, true, 60);
 		assertThatThrownBy(() -> planner.plan(s, pan, Target.stage("browned"), 0))
 			.isInstanceOf(InvalidInputException.class)
 			.extracting(e -> ((InvalidInputException) e).field())
@@ -104,7 +107,7 @@ class PlanServiceTest {
 	void shouldWarnWhenChickenIsGoldenWithADryCoreAndSayHowToAvoidIt() {
 		// skin-on chicken in a dry 200 °C fan oven: golden with the core near 99 °C, past the 80 °C at which
 		// poultry breast dries (common practice); the plan used to say "Warnings: none"
-		PlanReport r = planner.plan(Surface.defaults(FoodCategory.POULTRY_SKIN), new HeatSetup.Oven(200, true, 1.6),
+		PlanReport r = planner.plan(Surface.defaults(FoodCategory.POULTRY_SKIN), new Oven(200, true, 1.6),
 				Target.stage("golden"), 60);
 		PlanWarning w = r.warnings().stream().filter(x -> x.code().equals("core-past-juiciness")).findFirst().orElseThrow();
 		String f = text.render(w.message(), TemperatureUnit.FAHRENHEIT);
@@ -116,7 +119,7 @@ class PlanServiceTest {
 	void shouldWarnWhenABaguetteIsGoldenOverARawCrumb() {
 		// a 60 mm lean loaf golden in a 230 °C deck oven while the crumb is near 22 °C; baked is 96 °C (bakers' probe)
 		PlanReport r = planner.plan(Surface.defaults(FoodCategory.BREAD).withThicknessMm(60),
-				new HeatSetup.Oven(230, false, 1.6), Target.stage("golden"), 60);
+				new Oven(230, false, 1.6), Target.stage("golden"), 60);
 		PlanWarning w = r.warnings().stream().filter(x -> x.code().equals("crumb-not-baked")).findFirst().orElseThrow();
 		assertThat(text.render(w.message(), TemperatureUnit.CELSIUS)).contains("96 °C").contains("Bake about 40 K cooler");
 	}

@@ -12,6 +12,7 @@ import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
 
 /** Repeat plan views reuse the finished report; the cache stays within its bound. */
 class ReportCacheTest {
@@ -23,15 +24,15 @@ class ReportCacheTest {
 		Composition c = potato.defaultComposition();
 		Surface chips = new Surface(potato, c, potato.defaultAsparagineMgPerKg(), potato.defaultSurfaceWaterGPerM2(), 10,
 				null, 0, 0, potato.defaultInitialTemperatureC());
-		HeatSetup fryer = new HeatSetup.DeepFryer(175);
+		HeatSetup fryer = new DeepFryer(175);
 		PlanReport first = planner.plan(chips, Product.defaultFor(potato), fryer, Target.stage("golden"), 10, false);
 		// equal inputs (new but equal records): the same report object, not a new run
 		Surface same = new Surface(potato, c, potato.defaultAsparagineMgPerKg(), potato.defaultSurfaceWaterGPerM2(), 10,
 				null, 0, 0, potato.defaultInitialTemperatureC());
-		assertThat(planner.plan(same, Product.defaultFor(potato), new HeatSetup.DeepFryer(175), Target.stage("golden"),
+		assertThat(planner.plan(same, Product.defaultFor(potato), new DeepFryer(175), Target.stage("golden"),
 				10, false)).isSameAs(first);
 		// another oil temperature is another plan (the unit is applied when the page words it)
-		assertThat(planner.plan(chips, Product.defaultFor(potato), new HeatSetup.DeepFryer(170), Target.stage("golden"),
+		assertThat(planner.plan(chips, Product.defaultFor(potato), new DeepFryer(170), Target.stage("golden"),
 				10, false)).isNotSameAs(first);
 	}
 

@@ -30,7 +30,10 @@ import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.GrillKind;
-import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.RadiantGrill;
+import com.crustplan.engine.heat.Oven;
+import com.crustplan.engine.heat.PanContact;
 import com.crustplan.engine.message.Argument;
 import com.crustplan.engine.message.Duration;
 import com.crustplan.engine.message.Message;
@@ -307,17 +310,17 @@ class MessageCatalogueTest {
 		Surface sweetChips = Surface.defaults(FoodCategory.POTATO)
 			.withComposition(new Composition(78, 2, 0.1, 0.8, 0.2, 15.9, 2, 1));
 		List<PlanReport> reports = List.of(
-				planner.plan(sweetChips, Product.FRENCH_FRIES, new HeatSetup.DeepFryer(185), Target.stage("brown"), 30, true),
+				planner.plan(sweetChips, Product.FRENCH_FRIES, new DeepFryer(185), Target.stage("brown"), 30, true),
 				planner.plan(Surface.defaults(FoodCategory.POULTRY_SKIN).withThicknessMm(60),
-						new HeatSetup.PanContact(240, true, 0), Target.stage("light-golden"), 30),
-				planner.plan(Surface.defaults(FoodCategory.MEAT), HeatSetup.RadiantGrill.fromHeatFlux(15, 90), Target.stage("browned"), 30),
-				planner.plan(Surface.defaults(FoodCategory.BREAD).withThicknessMm(12), new HeatSetup.RadiantGrill(800, 0),
+						new PanContact(240, true, 0), Target.stage("light-golden"), 30),
+				planner.plan(Surface.defaults(FoodCategory.MEAT), RadiantGrill.fromHeatFlux(15, 90), Target.stage("browned"), 30),
+				planner.plan(Surface.defaults(FoodCategory.BREAD).withThicknessMm(12), new RadiantGrill(800, 0),
 						Target.stage("dark"), 30),
 				planner.plan(Surface.defaults(FoodCategory.MEAT),
-						HeatSetup.RadiantGrill.ofElement(GrillKind.CHARCOAL, 650, 100.0, 90), Target.stage("browned"), 30),
-				planner.plan(Surface.defaults(FoodCategory.BREAD).withBicarbonateGPerKg(10), new HeatSetup.Oven(200, true, 20),
+						RadiantGrill.ofElement(GrillKind.CHARCOAL, 650, 100.0, 90), Target.stage("browned"), 30),
+				planner.plan(Surface.defaults(FoodCategory.BREAD).withBicarbonateGPerKg(10), new Oven(200, true, 20),
 						Target.lightness(60), 30),
-				planner.plan(Surface.defaults(FoodCategory.MEAT), new HeatSetup.Oven(60, false, 1.6), Target.stage("browned"), 10));
+				planner.plan(Surface.defaults(FoodCategory.MEAT), new Oven(60, false, 1.6), Target.stage("browned"), 10));
 		List<Message> said = new ArrayList<>();
 		for (PlanReport r : reports) {
 			said.add(r.targetLabel());

@@ -9,6 +9,7 @@ import com.crustplan.engine.food.BrowningStage;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
 import com.crustplan.engine.message.Message;
 import com.crustplan.engine.message.Quantity;
 import com.crustplan.engine.message.Temperature;
@@ -40,7 +41,7 @@ public final class AcrylamideWarnings {
 			double portionUgPerKg) {
 		List<AcrylamideWarning> list = new ArrayList<>();
 		FoodCategory category = surface.category();
-		if (category == FoodCategory.POTATO && setup instanceof HeatSetup.DeepFryer fryer
+		if (category == FoodCategory.POTATO && setup instanceof DeepFryer fryer
 				&& fryer.oilTemperatureC() >= MAX_FRYING_C.value()) {
 			list.add(new AcrylamideWarning(AcrylamideWarning.FRYING_TOO_HOT,
 					Message.of("warning.acrylamide.frying-too-hot", Temperature.celsius(fryer.oilTemperatureC()),

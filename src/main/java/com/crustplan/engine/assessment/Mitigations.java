@@ -14,6 +14,8 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.RadiantGrill;
 import com.crustplan.engine.message.Message;
 import com.crustplan.engine.message.PlainNumber;
 import com.crustplan.engine.message.Quantity;
@@ -129,11 +131,11 @@ public final class Mitigations {
 		double t = setup.temperatureC();
 		double lower;
 		Parameter step;
-		if (setup instanceof HeatSetup.DeepFryer) {
+		if (setup instanceof DeepFryer) {
 			step = FRYER_STEP_C;
 			lower = Math.min(t - step.value(), 170);
 		}
-		else if (setup instanceof HeatSetup.RadiantGrill) {
+		else if (setup instanceof RadiantGrill) {
 			step = GRILL_STEP_C;
 			lower = t - step.value();
 		}

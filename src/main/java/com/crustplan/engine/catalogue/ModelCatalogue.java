@@ -17,6 +17,8 @@ import com.crustplan.engine.food.Acidity;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.heat.GrillKind;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.RadiantGrill;
+import com.crustplan.engine.heat.Oven;
 import com.crustplan.engine.layers.Grid;
 import com.crustplan.engine.properties.FoodComponent;
 import com.crustplan.engine.properties.ThermalProperties;
@@ -130,7 +132,7 @@ public final class ModelCatalogue {
 						+ "from the element temperature T_el, the glowing share s of the heater face and the view factor F of coaxial "
 						+ "parallel discs (food radius r_f, heater of equal area r_h, distance L; Incropera Table 13.2). "
 						+ "The cook stops where the surface passes T_char.",
-				List.of(GrillKind.FOOD_RADIUS, HeatSetup.RadiantGrill.CHAR_SURFACE)));
+				List.of(GrillKind.FOOD_RADIUS, RadiantGrill.CHAR_SURFACE)));
 		eq.add(new Equation("Deep fryer", "q = h·(T_oil − Ts);  h = h_oil + (h_oil,boil − h_oil)·min(1, J_boil/J_full)",
 				"Bubbling stirs the oil in proportion to the vapour leaving; J_full = h_oil,boil·(T_oil − 100 °C)/h_fg. h falls back as the crust dries.",
 				List.of(HeatSetup.OIL_QUIET, HeatSetup.OIL_BUBBLING)));

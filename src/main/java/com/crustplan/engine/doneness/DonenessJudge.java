@@ -11,6 +11,10 @@ import com.crustplan.engine.doneness.FoodCode.Cut;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.Rest;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.RadiantGrill;
+import com.crustplan.engine.heat.PanContact;
 import com.crustplan.engine.message.Duration;
 import com.crustplan.engine.message.Message;
 import com.crustplan.engine.message.Quantity;
@@ -120,17 +124,17 @@ public final class DonenessJudge {
 		if (category == FoodCategory.BREAD || category == FoodCategory.SWEET_DOUGH) {
 			return Message.of("suggestion.bake-lower", TemperatureDifference.kelvin(DonenessLimits.LOWER_BREAD_OVEN_K.value()));
 		}
-		if (setup instanceof HeatSetup.DeepFryer fryer) {
+		if (setup instanceof DeepFryer fryer) {
 			double cap = DonenessLimits.FRY_AT_C.value();
 			double at = fryer.temperatureC() > cap ? cap : fryer.temperatureC() - DonenessLimits.LOWER_FRYER_K.value();
 			return Message.of("suggestion.fry-cooler-or-thinner", Temperature.celsius(at),
 					Quantity.of(surface.thicknessMm() * DonenessLimits.THINNER_SHARE.value(), "mm"));
 		}
-		if (code != null && (setup instanceof HeatSetup.PanContact || setup instanceof HeatSetup.RadiantGrill)) {
+		if (code != null && (setup instanceof PanContact || setup instanceof RadiantGrill)) {
 			return Message.of("suggestion.lower-or-finish", TemperatureDifference.kelvin(DonenessLimits.LOWER_PAN_K.value()),
 					Temperature.celsius(DonenessLimits.FINISH_OVEN_C.value()), code.stated());
 		}
-		double step = setup instanceof HeatSetup.PanContact || setup instanceof HeatSetup.RadiantGrill
+		double step = setup instanceof PanContact || setup instanceof RadiantGrill
 				? DonenessLimits.LOWER_PAN_K.value() : DonenessLimits.LOWER_OVEN_K.value();
 		return Message.of("suggestion.lower-heat", TemperatureDifference.kelvin(step));
 	}
@@ -169,7 +173,7 @@ public final class DonenessJudge {
 	private static HeatSetup browningSetup(List<CookStep> steps) {
 		return steps.stream()
 			.map(CookStep::setup)
-			.filter(h -> !(h instanceof HeatSetup.Rest))
+			.filter(h -> !(h instanceof Rest))
 			.findFirst()
 			.orElse(steps.get(0).setup());
 	}

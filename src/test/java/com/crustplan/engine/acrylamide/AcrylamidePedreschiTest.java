@@ -13,7 +13,7 @@ import com.crustplan.engine.cook.CookSimulation;
 import com.crustplan.engine.cook.Sample;
 import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.food.FoodCategory;
-import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
 
 /**
  * The recorded formation constants against the published fry data they were fitted on: Pedreschi,
@@ -75,7 +75,7 @@ class AcrylamidePedreschiTest {
 		// arithmetic, so 1e-9 relative)
 		LayerHistory history = new LayerHistory();
 		Target never = Target.lightness(FoodCategory.POTATO.colourPath().darkestLightness());
-		CookResult r = CookSimulation.run(PedreschiFit.blanchedStrip(), new HeatSetup.DeepFryer(175), never,
+		CookResult r = CookSimulation.run(PedreschiFit.blanchedStrip(), new DeepFryer(175), never,
 				PedreschiFit.settings().withHorizonS(480).withRecordSeries(true).withOutputIntervalS(60), AcrylamideFormation.REACTION,
 				history::accept);
 		List<Sample> series = r.series();

@@ -5,7 +5,7 @@ import com.crustplan.engine.cook.CookSimulation;
 import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
-import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
 import com.crustplan.engine.cook.Target;
 
 /**
@@ -60,7 +60,7 @@ public final class PedreschiFit {
 		LayerHistory history = new LayerHistory();
 		Surface strip = blanchedStrip();
 		Target never = Target.lightness(FoodCategory.POTATO.colourPath().darkestLightness());
-		CookSimulation.run(strip, new HeatSetup.DeepFryer(oilC), never, settings().withHorizonS(horizonFor(oilC)), AcrylamideFormation.REACTION,
+		CookSimulation.run(strip, new DeepFryer(oilC), never, settings().withHorizonS(horizonFor(oilC)), AcrylamideFormation.REACTION,
 				history::accept);
 		return history;
 	}

@@ -16,6 +16,8 @@ import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.PanContact;
 
 /** Acrylamide as the stepper computes it, through whole cooks. */
 class AcrylamideEngineTest {
@@ -30,7 +32,7 @@ class AcrylamideEngineTest {
 
 	@Test
 	void samplesAndTargetCarryAcrylamide() {
-		CookResult r = AcrylamideCook.run(CHIPS, new HeatSetup.DeepFryer(175), Target.stage("golden"));
+		CookResult r = AcrylamideCook.run(CHIPS, new DeepFryer(175), Target.stage("golden"));
 		assertTrue(r.reached());
 		List<Sample> series = r.series();
 		assertEquals(0, series.get(0).portionAcrylamideUgPerKg(), 0.0, "nothing before cooking");
@@ -52,8 +54,8 @@ class AcrylamideEngineTest {
 	void negligibleWhenTheSurfaceStaysAt120COrBelow() {
 		// Regulation (EU) 2017/2158 recital 3 (forms above ≈ 120 °C): 10 min in 120 °C oil, where no layer can
 		// pass 120 °C, gives under 1 % of a 10 min fry at 180 °C
-		double cool = afterMinutes(CHIPS, new HeatSetup.DeepFryer(120), 10);
-		double hot = afterMinutes(CHIPS, new HeatSetup.DeepFryer(180), 10);
+		double cool = afterMinutes(CHIPS, new DeepFryer(120), 10);
+		double hot = afterMinutes(CHIPS, new DeepFryer(180), 10);
 		assertTrue(cool < 0.01 * hot, () -> cool + " vs " + hot);
 	}
 
@@ -61,9 +63,9 @@ class AcrylamideEngineTest {
 	void risesSteeplyWithOilTemperature() {
 		// Pedreschi, Kaack & Granby 2006: ×2.4 from 150 to 170 °C and ×1.7 from 170 to 190 °C at the same final
 		// moisture. At the same frying time the rise is at least as steep; we ask for ×1.5 per 20 °C.
-		double a = afterMinutes(CHIPS, new HeatSetup.DeepFryer(150), 8);
-		double b = afterMinutes(CHIPS, new HeatSetup.DeepFryer(170), 8);
-		double c = afterMinutes(CHIPS, new HeatSetup.DeepFryer(190), 8);
+		double a = afterMinutes(CHIPS, new DeepFryer(150), 8);
+		double b = afterMinutes(CHIPS, new DeepFryer(170), 8);
+		double c = afterMinutes(CHIPS, new DeepFryer(190), 8);
 		assertTrue(b > 1.5 * a && c > 1.5 * b, () -> a + ", " + b + ", " + c);
 	}
 
@@ -71,7 +73,7 @@ class AcrylamideEngineTest {
 	void morePrecursorsGiveMore() {
 		// formation from asparagine and reducing sugar (Knol et al. 2005; Muttucumaru et al. 2017): doubling either
 		// raises the level; by less than double, as the other precursor is used up too
-		HeatSetup fryer = new HeatSetup.DeepFryer(175);
+		HeatSetup fryer = new DeepFryer(175);
 		double base = afterMinutes(CHIPS, fryer, 8);
 		double asparagine = afterMinutes(CHIPS.withAsparagineMgPerKg(2 * CHIPS.asparagineMgPerKg()), fryer, 8);
 		// the potato's 0.4 % reducing sugar doubled, taken from its starch
@@ -83,7 +85,7 @@ class AcrylamideEngineTest {
 	@Test
 	void lowerPhGivesLess() {
 		// acid dips lower acrylamide (Jung, Choi & Ju 2003, J Food Sci 68:1287)
-		HeatSetup fryer = new HeatSetup.DeepFryer(175);
+		HeatSetup fryer = new DeepFryer(175);
 		double base = afterMinutes(CHIPS, fryer, 8);
 		double acid = afterMinutes(CHIPS.withAcidGPerKg(2), fryer, 8);
 		assertTrue(acid < base, () -> base + " → " + acid);
@@ -92,7 +94,7 @@ class AcrylamideEngineTest {
 	@Test
 	void meatFormsAlmostNone() {
 		// little free asparagine and sugar in muscle: Annex IV sets no benchmark for meat. Under 10 µg/kg.
-		CookResult r = AcrylamideCook.run(Surface.defaults(FoodCategory.MEAT), new HeatSetup.PanContact(220, true, 60),
+		CookResult r = AcrylamideCook.run(Surface.defaults(FoodCategory.MEAT), new PanContact(220, true, 60),
 				Target.stage("browned"), SUMMARY);
 		assertTrue(r.portionAcrylamideAtTargetUgPerKg() < 10, () -> "" + r.portionAcrylamideAtTargetUgPerKg());
 	}

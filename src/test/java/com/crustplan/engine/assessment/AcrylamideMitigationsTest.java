@@ -17,7 +17,8 @@ import com.crustplan.engine.cook.CookSettings;
 import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
-import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.PanContact;
 import com.crustplan.system.MessageText;
 
 /** Mitigations for 10 mm chips fried golden at 180 °C, each computed by re-running the model. */
@@ -32,7 +33,7 @@ class AcrylamideMitigationsTest {
 	@BeforeAll
 	static void compute() {
 		List<Mitigation> list = Mitigations.compute(Surface.defaults(FoodCategory.POTATO), Product.FRENCH_FRIES,
-				new HeatSetup.DeepFryer(180), Target.stage("golden"), CookSettings.defaults());
+				new DeepFryer(180), Target.stage("golden"), CookSettings.defaults());
 		byCode = list.stream().collect(Collectors.toMap(Mitigation::code, Function.identity()));
 	}
 
@@ -65,7 +66,7 @@ class AcrylamideMitigationsTest {
 		// Annex II: fry below 175 °C. For thick-cut chips (14 mm) fried golden at 190 °C the model finds less
 		// acrylamide at 170 °C for the same colour (for thinner fries it finds about none: see the note)
 		Mitigation m = Mitigations.compute(Surface.defaults(FoodCategory.POTATO).withThicknessMm(14), Product.FRENCH_FRIES,
-				new HeatSetup.DeepFryer(190), Target.stage("golden"), CookSettings.defaults())
+				new DeepFryer(190), Target.stage("golden"), CookSettings.defaults())
 			.stream().filter(x -> x.code().equals("LOWER_TEMPERATURE")).findFirst().orElseThrow();
 		assertTrue(m.effectUgPerKg() < 0, () -> m.beforeUgPerKg() + " → " + m.afterUgPerKg());
 	}
@@ -101,14 +102,14 @@ class AcrylamideMitigationsTest {
 	@Test
 	void meatHasNoPotatoMeasures() {
 		List<Mitigation> list = Mitigations.compute(Surface.defaults(FoodCategory.MEAT), Product.MEAT,
-				new HeatSetup.PanContact(220, true, 60), Target.stage("browned"), CookSettings.defaults());
+				new PanContact(220, true, 60), Target.stage("browned"), CookSettings.defaults());
 		assertTrue(list.stream().noneMatch(m -> m.code().equals("SOAK") || m.code().equals("WARM_STORAGE")));
 	}
 
 	@Test
 	void aCookThatNeverReachesItsTargetHasNothingToCompare() {
 		List<Mitigation> list = Mitigations.compute(Surface.defaults(FoodCategory.POTATO), Product.FRENCH_FRIES,
-				new HeatSetup.DeepFryer(120), Target.stage("brown"), CookSettings.defaults().withHorizonS(300));
+				new DeepFryer(120), Target.stage("brown"), CookSettings.defaults().withHorizonS(300));
 		assertEquals(1, list.size());
 		assertFalse(list.get(0).applicable());
 	}

@@ -17,7 +17,10 @@ import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
-import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.RadiantGrill;
+import com.crustplan.engine.heat.Oven;
+import com.crustplan.engine.heat.PanContact;
 
 class AcrylamideRiskMapTest {
 
@@ -33,7 +36,7 @@ class AcrylamideRiskMapTest {
 
 	@BeforeAll
 	static void compute() {
-		map = RiskMap.compute(CHIPS, Product.FRENCH_FRIES, new HeatSetup.DeepFryer(175), GOLDEN, new double[] { 160, 190 }, STEP_S,
+		map = RiskMap.compute(CHIPS, Product.FRENCH_FRIES, new DeepFryer(175), GOLDEN, new double[] { 160, 190 }, STEP_S,
 				MAX_S, CookSettings.defaults());
 	}
 
@@ -42,7 +45,7 @@ class AcrylamideRiskMapTest {
 		// each row is one run: a single run at the map's settings must give the same numbers (same arithmetic:
 		// exact to 1e-9)
 		for (RiskMap.Row row : map.rows()) {
-			CookResult single = AcrylamideCook.run(CHIPS, new HeatSetup.DeepFryer(row.temperatureC()), GOLDEN,
+			CookResult single = AcrylamideCook.run(CHIPS, new DeepFryer(row.temperatureC()), GOLDEN,
 					RiskMap.settingsFor(CookSettings.defaults(), STEP_S, MAX_S));
 			List<Sample> series = single.series();
 			assertEquals(series.size(), row.cells().size());
@@ -63,7 +66,7 @@ class AcrylamideRiskMapTest {
 	void targetLineIsTheSingleRunsTimeToTarget() {
 		// the run-on past the target and the output interval do not change when the target is reached
 		for (RiskMap.Row row : map.rows()) {
-			CookResult plain = AcrylamideCook.run(CHIPS, new HeatSetup.DeepFryer(row.temperatureC()), GOLDEN);
+			CookResult plain = AcrylamideCook.run(CHIPS, new DeepFryer(row.temperatureC()), GOLDEN);
 			assertTrue(row.reachesTarget());
 			assertEquals(plain.timeToTargetS(), row.targetTimeS(), 1e-9);
 			assertEquals(plain.portionAcrylamideAtTargetUgPerKg(), row.targetPortionUgPerKg(), 1e-9 * plain.portionAcrylamideAtTargetUgPerKg());
@@ -85,21 +88,21 @@ class AcrylamideRiskMapTest {
 
 	@Test
 	void rowsChangeOnlyTheTemperatureOfTheHeatMode() {
-		assertEquals(new HeatSetup.Oven(180, true, 20), HeatSetups.withTemperature(new HeatSetup.Oven(220, true, 20), 180));
-		assertEquals(new HeatSetup.PanContact(160, false, 45), HeatSetups.withTemperature(new HeatSetup.PanContact(200, false, 45), 160));
-		assertEquals(new HeatSetup.RadiantGrill(600, 0), HeatSetups.withTemperature(new HeatSetup.RadiantGrill(800, 0), 600));
-		assertEquals(new HeatSetup.DeepFryer(165), HeatSetups.withTemperature(new HeatSetup.DeepFryer(180), 165));
+		assertEquals(new Oven(180, true, 20), HeatSetups.withTemperature(new Oven(220, true, 20), 180));
+		assertEquals(new PanContact(160, false, 45), HeatSetups.withTemperature(new PanContact(200, false, 45), 160));
+		assertEquals(new RadiantGrill(600, 0), HeatSetups.withTemperature(new RadiantGrill(800, 0), 600));
+		assertEquals(new DeepFryer(165), HeatSetups.withTemperature(new DeepFryer(180), 165));
 		// a row outside the mode's range is refused with the field named
 		assertEquals("temperatureC", assertThrows(InvalidInputException.class,
-				() -> HeatSetups.withTemperature(new HeatSetup.DeepFryer(180), 230)).field());
+				() -> HeatSetups.withTemperature(new DeepFryer(180), 230)).field());
 	}
 
 	@Test
 	void refusesMapsTooLargeOrForAnotherCategory() {
 		InvalidInputException e = assertThrows(InvalidInputException.class, () -> RiskMap.compute(CHIPS, Product.FRENCH_FRIES,
-				new HeatSetup.DeepFryer(175), GOLDEN, new double[] { 170 }, 1, 3600, CookSettings.defaults()));
+				new DeepFryer(175), GOLDEN, new double[] { 170 }, 1, 3600, CookSettings.defaults()));
 		assertEquals("timeStepS", e.field());
-		e = assertThrows(InvalidInputException.class, () -> RiskMap.compute(CHIPS, Product.BISCUITS, new HeatSetup.DeepFryer(175),
+		e = assertThrows(InvalidInputException.class, () -> RiskMap.compute(CHIPS, Product.BISCUITS, new DeepFryer(175),
 				GOLDEN, new double[] { 170 }, 30, 600, CookSettings.defaults()));
 		assertEquals("product", e.field());
 	}

@@ -15,6 +15,9 @@ import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.Oven;
+import com.crustplan.engine.heat.PanContact;
 import com.crustplan.system.MessageText;
 
 /** Warnings from Regulation (EU) 2017/2158 Annex II (retail and catering measures) and the estimate's cautions. */
@@ -34,21 +37,21 @@ class AcrylamideWarningsTest {
 	@Test
 	void fryingAt175OrAboveIsFlagged() {
 		// Annex II Part A: frying temperatures shall be below 175 °C
-		assertTrue(codes(CHIPS, new HeatSetup.DeepFryer(175), Target.stage("golden"), 0).contains(AcrylamideWarning.FRYING_TOO_HOT));
-		assertFalse(codes(CHIPS, new HeatSetup.DeepFryer(170), Target.stage("golden"), 0).contains(AcrylamideWarning.FRYING_TOO_HOT));
+		assertTrue(codes(CHIPS, new DeepFryer(175), Target.stage("golden"), 0).contains(AcrylamideWarning.FRYING_TOO_HOT));
+		assertFalse(codes(CHIPS, new DeepFryer(170), Target.stage("golden"), 0).contains(AcrylamideWarning.FRYING_TOO_HOT));
 		// the measure is for potato products
-		assertFalse(codes(Surface.defaults(FoodCategory.FISH), new HeatSetup.DeepFryer(180), Target.stage("golden"), 0)
+		assertFalse(codes(Surface.defaults(FoodCategory.FISH), new DeepFryer(180), Target.stage("golden"), 0)
 			.contains(AcrylamideWarning.FRYING_TOO_HOT));
 	}
 
 	@Test
 	void darkerThanTheColourGuideIsFlagged() {
 		// Annex II Part A: colour guides for fries; bake and toast to a lighter colour
-		assertTrue(codes(CHIPS, new HeatSetup.DeepFryer(170), Target.stage("brown"), 0).contains(AcrylamideWarning.DARKER_THAN_GUIDE));
-		assertFalse(codes(CHIPS, new HeatSetup.DeepFryer(170), Target.stage("golden"), 0).contains(AcrylamideWarning.DARKER_THAN_GUIDE));
-		assertTrue(codes(Surface.defaults(FoodCategory.BREAD), new HeatSetup.Oven(220, false, 1.6), Target.stage("dark"), 0)
+		assertTrue(codes(CHIPS, new DeepFryer(170), Target.stage("brown"), 0).contains(AcrylamideWarning.DARKER_THAN_GUIDE));
+		assertFalse(codes(CHIPS, new DeepFryer(170), Target.stage("golden"), 0).contains(AcrylamideWarning.DARKER_THAN_GUIDE));
+		assertTrue(codes(Surface.defaults(FoodCategory.BREAD), new Oven(220, false, 1.6), Target.stage("dark"), 0)
 			.contains(AcrylamideWarning.DARKER_THAN_GUIDE));
-		assertFalse(codes(Surface.defaults(FoodCategory.MEAT), new HeatSetup.PanContact(220, true, 60), Target.stage("charred"), 0)
+		assertFalse(codes(Surface.defaults(FoodCategory.MEAT), new PanContact(220, true, 60), Target.stage("charred"), 0)
 			.contains(AcrylamideWarning.DARKER_THAN_GUIDE), "no colour guide measure for meat");
 	}
 
@@ -56,20 +59,20 @@ class AcrylamideWarningsTest {
 	void highSugarPotatoesAreFlagged() {
 		// Annex II Part A: use lower-sugar varieties; store above 6 °C
 		Surface sweet = CHIPS.withComposition(new Composition(79, 2, 0.1, 1.2, 0.2, 14.7, 1.8, 1));
-		assertTrue(codes(sweet, new HeatSetup.DeepFryer(170), Target.stage("golden"), 0).contains(AcrylamideWarning.HIGH_SUGAR_POTATO));
-		assertFalse(codes(CHIPS, new HeatSetup.DeepFryer(170), Target.stage("golden"), 0).contains(AcrylamideWarning.HIGH_SUGAR_POTATO));
+		assertTrue(codes(sweet, new DeepFryer(170), Target.stage("golden"), 0).contains(AcrylamideWarning.HIGH_SUGAR_POTATO));
+		assertFalse(codes(CHIPS, new DeepFryer(170), Target.stage("golden"), 0).contains(AcrylamideWarning.HIGH_SUGAR_POTATO));
 	}
 
 	@Test
 	void estimatesNearOrOverTheBenchmarkAreFlagged() {
-		assertTrue(codes(CHIPS, new HeatSetup.DeepFryer(170), Target.stage("golden"), 600).contains(AcrylamideWarning.OVER_BENCHMARK));
-		assertTrue(codes(CHIPS, new HeatSetup.DeepFryer(170), Target.stage("golden"), 300).contains(AcrylamideWarning.NEAR_BENCHMARK));
-		assertEquals(List.of(), codes(CHIPS, new HeatSetup.DeepFryer(170), Target.stage("golden"), 100));
+		assertTrue(codes(CHIPS, new DeepFryer(170), Target.stage("golden"), 600).contains(AcrylamideWarning.OVER_BENCHMARK));
+		assertTrue(codes(CHIPS, new DeepFryer(170), Target.stage("golden"), 300).contains(AcrylamideWarning.NEAR_BENCHMARK));
+		assertEquals(List.of(), codes(CHIPS, new DeepFryer(170), Target.stage("golden"), 100));
 	}
 
 	@Test
 	void everyEstimateCarriesTheCautions() {
-		HeatSetup fryer = new HeatSetup.DeepFryer(170);
+		HeatSetup fryer = new DeepFryer(170);
 		Target golden = Target.stage("golden");
 		CookResult r = AcrylamideCook.run(CHIPS, fryer, golden);
 		AcrylamideEstimate e = AcrylamideEstimate.of(CHIPS, Product.FRENCH_FRIES, fryer, golden, r);
@@ -82,8 +85,8 @@ class AcrylamideWarningsTest {
 		assertTrue(TEXT.celsius(e.cautions()).stream().anyMatch(c -> c.contains("not an analysis")));
 		assertTrue(TEXT.celsius(e.cautions()).stream().anyMatch(c -> c.contains("laboratory analysis") && c.contains("food authority")));
 		AcrylamideEstimate meat = AcrylamideEstimate.of(Surface.defaults(FoodCategory.MEAT), Product.MEAT,
-				new HeatSetup.PanContact(220, true, 60), Target.stage("browned"),
-				AcrylamideCook.run(Surface.defaults(FoodCategory.MEAT), new HeatSetup.PanContact(220, true, 60), Target.stage("browned")));
+				new PanContact(220, true, 60), Target.stage("browned"),
+				AcrylamideCook.run(Surface.defaults(FoodCategory.MEAT), new PanContact(220, true, 60), Target.stage("browned")));
 		assertEquals(AcrylamideZone.NO_BENCHMARK, meat.zone());
 		assertEquals(AcrylamideCautions.ALL, meat.cautions());
 	}

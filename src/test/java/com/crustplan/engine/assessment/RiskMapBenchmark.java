@@ -18,7 +18,7 @@ import com.crustplan.engine.cook.CookSettings;
 import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
-import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
 import com.crustplan.engine.layers.Grid;
 import com.crustplan.engine.layers.Layers;
 
@@ -95,7 +95,7 @@ public class RiskMapBenchmark {
 
 	@Benchmark
 	public RiskMap fryerMap30Temperatures() {
-		return RiskMap.compute(chips, Product.FRENCH_FRIES, new HeatSetup.DeepFryer(170), Target.stage("golden"), temperatures, 30,
+		return RiskMap.compute(chips, Product.FRENCH_FRIES, new DeepFryer(170), Target.stage("golden"), temperatures, 30,
 				900, CookSettings.defaults());
 	}
 

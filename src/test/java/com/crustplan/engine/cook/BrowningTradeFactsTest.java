@@ -11,6 +11,9 @@ import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.Oven;
+import com.crustplan.engine.heat.PanContact;
 
 /**
  * Whole cooks against what every kitchen knows and the browning literature reports: wet surfaces do not
@@ -23,7 +26,7 @@ class BrowningTradeFactsTest {
 
 	private static final Surface STEAK = Surface.defaults(FoodCategory.MEAT);
 
-	private static final HeatSetup HOT_PAN = new HeatSetup.PanContact(220, true, 0);
+	private static final HeatSetup HOT_PAN = new PanContact(220, true, 0);
 
 	private static CookResult cook(Surface surface, HeatSetup setup, Target target) {
 		return CookSimulation.run(surface, setup, target, SETTINGS);
@@ -46,7 +49,7 @@ class BrowningTradeFactsTest {
 		// held wet at ≈ 100 °C (steam condenses on it) for the whole 30 min. Browning needs a drying surface
 		// (Labuza et al. 1977: rate → 0 as aw → 1); "barely browns" is taken as extent below 0.05, a tenth of a
 		// browned crust.
-		CookResult r = cook(STEAK.withSurfaceWaterGPerM2(1000).withThicknessMm(40), new HeatSetup.Oven(100, false, 100),
+		CookResult r = cook(STEAK.withSurfaceWaterGPerM2(1000).withThicknessMm(40), new Oven(100, false, 100),
 				Target.stage("light-sear"));
 		assertFalse(r.reached());
 		assertEquals(Outcome.WET_PLATEAU, r.outcome());
@@ -61,7 +64,7 @@ class BrowningTradeFactsTest {
 		// (stage "browned", extent 0.45) within minutes — common kitchen practice, 2–5 min a side. Bounds: the
 		// face between 135 and 170 °C when the target is reached, the time between 1 and 8 min.
 		for (double pan : new double[] { 170, 185, 200 }) {
-			CookResult r = cook(STEAK.withSurfaceWaterGPerM2(0), new HeatSetup.PanContact(pan, true, 0),
+			CookResult r = cook(STEAK.withSurfaceWaterGPerM2(0), new PanContact(pan, true, 0),
 					Target.stage("browned"));
 			assertTrue(r.reached(), pan + " °C pan: " + r.explanation());
 			double ts = surfaceAtTarget(r);
@@ -119,18 +122,18 @@ class BrowningTradeFactsTest {
 		Composition c = sweet.composition();
 		assertTrue(c.sucrosePct() >= 10 && c.reducingSugarPct() > 0);
 		Surface sucroseOnly = sweet.withComposition(c.withReducingSugarPct(0));
-		HeatSetup cool = new HeatSetup.Oven(150, true, 2);
+		HeatSetup cool = new Oven(150, true, 2);
 		CookResult caramelCool = cook(sucroseOnly, cool, Target.stage("golden"));
 		CookResult maillardCool = cook(sweet, cool, Target.stage("golden"));
 		assertTrue(caramelCool.maxSurfaceTemperatureC() < 160);
 		assertTrue(caramelCool.finalBrowningExtent() < 0.05, "sucrose only at 150 °C: " + caramelCool.finalBrowningExtent());
 		assertTrue(maillardCool.finalBrowningExtent() > 0.2, "with reducing sugar: " + maillardCool.finalBrowningExtent());
-		CookResult caramelHot = cook(sucroseOnly, new HeatSetup.Oven(200, true, 2), Target.stage("golden"));
+		CookResult caramelHot = cook(sucroseOnly, new Oven(200, true, 2), Target.stage("golden"));
 		assertTrue(caramelHot.finalBrowningExtent() > 5 * caramelCool.finalBrowningExtent(),
 				"200 °C " + caramelHot.finalBrowningExtent() + " vs 150 °C " + caramelCool.finalBrowningExtent());
 		// and with neither sugar the dough cannot brown at all
 		CookResult noSugar = cook(sweet.withComposition(c.withReducingSugarPct(0).withSucrosePct(0)),
-				new HeatSetup.Oven(200, true, 2), Target.stage("golden"));
+				new Oven(200, true, 2), Target.stage("golden"));
 		assertEquals(Outcome.NO_REACTANTS, noSugar.outcome());
 	}
 
@@ -152,7 +155,7 @@ class BrowningTradeFactsTest {
 		// (L* 62) in 3–15 min — single-stage frying of chips takes 5–10 min in common practice, and Krokida et
 		// al. 2001 (J Food Eng 48:219) report first-order colour change that is faster at higher oil temperature.
 		Surface chips = Surface.defaults(FoodCategory.POTATO).withThicknessMm(10);
-		CookResult r = cook(chips, new HeatSetup.DeepFryer(175), Target.lightness(62));
+		CookResult r = cook(chips, new DeepFryer(175), Target.lightness(62));
 		assertTrue(r.reached(), String.valueOf(r.explanation()));
 		assertTrue(r.timeToTargetS() >= 180 && r.timeToTargetS() <= 900, r.timeToTargetS() + " s");
 		// the face in oil stays below the oil temperature (design note §3)
@@ -168,7 +171,7 @@ class BrowningTradeFactsTest {
 		double previous = Double.MAX_VALUE;
 		double at175 = Double.NaN;
 		for (double oil : new double[] { 160, 175, 190 }) {
-			CookResult r = cook(chips, new HeatSetup.DeepFryer(oil), Target.lightness(62));
+			CookResult r = cook(chips, new DeepFryer(oil), Target.lightness(62));
 			assertTrue(r.reached(), oil + " °C: " + r.explanation());
 			assertTrue(r.timeToTargetS() < previous, oil + " °C: " + r.timeToTargetS() + " s after " + previous);
 			previous = r.timeToTargetS();
@@ -177,7 +180,7 @@ class BrowningTradeFactsTest {
 			}
 		}
 		Surface lowSugar = chips.withComposition(chips.composition().withReducingSugarPct(0.1));
-		CookResult slow = cook(lowSugar, new HeatSetup.DeepFryer(175), Target.lightness(62));
+		CookResult slow = cook(lowSugar, new DeepFryer(175), Target.lightness(62));
 		assertTrue(!slow.reached() || slow.timeToTargetS() > at175, "low sugar " + slow.timeToTargetS() + " s vs " + at175);
 	}
 

@@ -8,6 +8,10 @@ import org.junit.jupiter.api.Test;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.RadiantGrill;
+import com.crustplan.engine.heat.Oven;
+import com.crustplan.engine.heat.PanContact;
 
 /**
  * Step and grid convergence of whole cooks: the time to a target colour at the default settings (31 nodes,
@@ -44,8 +48,8 @@ class CookConvergenceTest {
 	void shouldConvergeMonotonicallyAsTheStepIsHalved() {
 		// First-order time stepping: successive halvings of Δt must change the answer by less each time
 		// (no oscillation, no drift), on a pan sear and a fry.
-		Object[][] cases = { { Surface.defaults(FoodCategory.MEAT), new HeatSetup.PanContact(220, true, 0), "browned" },
-				{ Surface.defaults(FoodCategory.POTATO), new HeatSetup.DeepFryer(175), "golden" } };
+		Object[][] cases = { { Surface.defaults(FoodCategory.MEAT), new PanContact(220, true, 0), "browned" },
+				{ Surface.defaults(FoodCategory.POTATO), new DeepFryer(175), "golden" } };
 		for (Object[] c : cases) {
 			double previousChange = Double.MAX_VALUE;
 			double previous = Double.NaN;
@@ -63,22 +67,22 @@ class CookConvergenceTest {
 
 	@Test
 	void shouldConvergeAPanSearAtTheDefaultSettings() {
-		assertConverged(Surface.defaults(FoodCategory.MEAT), new HeatSetup.PanContact(220, true, 0), "browned");
+		assertConverged(Surface.defaults(FoodCategory.MEAT), new PanContact(220, true, 0), "browned");
 	}
 
 	@Test
 	void shouldConvergeAFryAtTheDefaultSettings() {
-		assertConverged(Surface.defaults(FoodCategory.POTATO), new HeatSetup.DeepFryer(175), "golden");
+		assertConverged(Surface.defaults(FoodCategory.POTATO), new DeepFryer(175), "golden");
 	}
 
 	@Test
 	void shouldConvergeAnOvenRoastAtTheDefaultSettings() {
-		assertConverged(Surface.defaults(FoodCategory.POULTRY_SKIN), new HeatSetup.Oven(200, true, 2), "golden");
+		assertConverged(Surface.defaults(FoodCategory.POULTRY_SKIN), new Oven(200, true, 2), "golden");
 	}
 
 	@Test
 	void shouldConvergeAGrillAtTheDefaultSettings() {
-		assertConverged(Surface.defaults(FoodCategory.FISH), new HeatSetup.RadiantGrill(800, 0), "golden", GRILL_TOLERANCE);
+		assertConverged(Surface.defaults(FoodCategory.FISH), new RadiantGrill(800, 0), "golden", GRILL_TOLERANCE);
 	}
 
 }

@@ -11,6 +11,7 @@ import org.junit.jupiter.api.Test;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.PanContact;
 
 /**
  * Events and listeners of the cook, checked against the run's own series: an event fires where the
@@ -21,7 +22,7 @@ class CookEventsTest {
 
 	private static final Surface STEAK = Surface.defaults(FoodCategory.MEAT);
 
-	private static final HeatSetup PAN = new HeatSetup.PanContact(220, true, 60);
+	private static final HeatSetup PAN = new PanContact(220, true, 60);
 
 	private static final Target NEVER = Target.stage("charred");
 

@@ -11,6 +11,9 @@ import org.junit.jupiter.api.Test;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.Rest;
+import com.crustplan.engine.heat.Oven;
+import com.crustplan.engine.heat.PanContact;
 
 /** Cooks in several steps: the state carries across step boundaries, and each step ends as it says. */
 class CookStepsTest {
@@ -26,7 +29,7 @@ class CookStepsTest {
 	/** A boundary between two identical steps changes nothing: conservation of the state across it. */
 	@Test
 	void twoIdenticalStepsEqualOneStepOfTheirCombinedLength() {
-		HeatSetup pan = new HeatSetup.PanContact(230, true, 60);
+		HeatSetup pan = new PanContact(230, true, 60);
 		StepsResult one = run(List.of(CookStep.timed(pan, 240)), null);
 		StepsResult two = run(List.of(CookStep.timed(pan, 120), CookStep.timed(pan, 120)), null);
 		CookResult.FinalState a = one.cook().finalState();
@@ -48,9 +51,9 @@ class CookStepsTest {
 	 */
 	@Test
 	void searThenOvenToCoreThenRestCarriesOver() {
-		HeatSetup pan = new HeatSetup.PanContact(240, true, 60);
-		HeatSetup oven = new HeatSetup.Oven(180, true, 0);
-		HeatSetup kitchen = new HeatSetup.Rest(22);
+		HeatSetup pan = new PanContact(240, true, 60);
+		HeatSetup oven = new Oven(180, true, 0);
+		HeatSetup kitchen = new Rest(22);
 		StepsResult r = run(List.of(CookStep.timed(pan, 180), CookStep.toCore(oven, 52, 3600), CookStep.timed(kitchen, 300)),
 				55.0);
 		assertEquals(3, r.steps().size());
@@ -71,7 +74,7 @@ class CookStepsTest {
 
 	@Test
 	void aColourEndStopsTheStepAtThatColour() {
-		HeatSetup pan = new HeatSetup.PanContact(230, true, 0);
+		HeatSetup pan = new PanContact(230, true, 0);
 		StepsResult r = CookSimulation.runSteps(STEAK, List.of(CookStep.toColour(pan, Target.stage("browned"), 1800)),
 				Target.stage("browned"), null, SETTINGS, LayerReaction.NONE);
 		CookStep.Record step = r.steps().get(0);

@@ -10,6 +10,10 @@ import org.junit.jupiter.api.Test;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.RadiantGrill;
+import com.crustplan.engine.heat.Oven;
+import com.crustplan.engine.heat.PanContact;
 import com.crustplan.engine.properties.FoodComponent;
 import com.crustplan.engine.properties.ThermalProperties;
 import com.crustplan.engine.water.Atmosphere;
@@ -84,22 +88,22 @@ class EnergyBalanceTest {
 
 	@Test
 	void shouldBalanceEnergyOverAWholePanSear() {
-		assertBalanced(Surface.defaults(FoodCategory.MEAT), new HeatSetup.PanContact(220, true, 60), 900);
+		assertBalanced(Surface.defaults(FoodCategory.MEAT), new PanContact(220, true, 60), 900);
 	}
 
 	@Test
 	void shouldBalanceEnergyOverAWholeSteamOvenBake() {
-		assertBalanced(Surface.defaults(FoodCategory.BREAD), new HeatSetup.Oven(220, true, 30), 1800);
+		assertBalanced(Surface.defaults(FoodCategory.BREAD), new Oven(220, true, 30), 1800);
 	}
 
 	@Test
 	void shouldBalanceEnergyOverAWholeFry() {
-		assertBalanced(Surface.defaults(FoodCategory.POTATO), new HeatSetup.DeepFryer(175), 900);
+		assertBalanced(Surface.defaults(FoodCategory.POTATO), new DeepFryer(175), 900);
 	}
 
 	@Test
 	void shouldBalanceEnergyOverAWholeGrill() {
-		assertBalanced(Surface.defaults(FoodCategory.FISH), new HeatSetup.RadiantGrill(800, 0), 300);
+		assertBalanced(Surface.defaults(FoodCategory.FISH), new RadiantGrill(800, 0), 300);
 	}
 
 	// ---------------------------------------------------------------- phases that balance today
@@ -109,7 +113,7 @@ class EnergyBalanceTest {
 		// 100 % steam at 100 °C condenses on a 40 mm cold steak for 30 min: condensation (negative vapour out)
 		// carries nearly all the heat; the faces never dry, so no bare-face evaporation is involved.
 		assertBalanced(Surface.defaults(FoodCategory.MEAT).withSurfaceWaterGPerM2(1000).withThicknessMm(40),
-				new HeatSetup.Oven(100, false, 100), 1800);
+				new Oven(100, false, 100), 1800);
 	}
 
 	@Test
@@ -117,7 +121,7 @@ class EnergyBalanceTest {
 		// The constant-rate period: 1.5 kg/m² of standing water on a warm 50 mm piece in a dry 200 °C fan oven
 		// for 5 min (the film lasts about 8 min): convection, wall radiation and film evaporation only.
 		assertBalanced(Surface.defaults(FoodCategory.MEAT).withSurfaceWaterGPerM2(1500).withThicknessMm(50)
-			.withInitialTemperatureC(45), new HeatSetup.Oven(200, true, Atmosphere.KITCHEN_STEAM_FRACTION * 100), 300);
+			.withInitialTemperatureC(45), new Oven(200, true, Atmosphere.KITCHEN_STEAM_FRACTION * 100), 300);
 	}
 
 	@Test
@@ -125,13 +129,13 @@ class EnergyBalanceTest {
 		// 2 kg/m² of water boiling off a steak's face on a 220 °C pan for one minute: contact heat and the
 		// boiling of standing water at 100 °C.
 		assertBalanced(Surface.defaults(FoodCategory.MEAT).withSurfaceWaterGPerM2(2000),
-				new HeatSetup.PanContact(220, true, 0), 60);
+				new PanContact(220, true, 0), 60);
 	}
 
 	@Test
 	void shouldBalanceEnergyWhileAWetFaceBoilsUnderAGrill() {
 		assertBalanced(Surface.defaults(FoodCategory.FISH).withSurfaceWaterGPerM2(2000),
-				new HeatSetup.RadiantGrill(800, 0), 60);
+				new RadiantGrill(800, 0), 60);
 	}
 
 }

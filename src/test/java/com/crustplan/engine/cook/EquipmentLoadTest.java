@@ -11,6 +11,8 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.FryerBody;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.PanContact;
 import com.crustplan.engine.heat.HeatedBody;
 import com.crustplan.engine.heat.PanBody;
 
@@ -32,9 +34,9 @@ class EquipmentLoadTest {
 	void crowdedPanOnAFixedFlameFallsTensOfKelvinAndAKeptUpOneHolds() {
 		CookSettings s = CookSettings.defaults().withOutputIntervalS(30).withHorizonS(240);
 		Target never = Target.stage("charred");
-		HeatSetup fixed = new HeatSetup.PanContact(230, true, 60)
+		HeatSetup fixed = new PanContact(230, true, 60)
 			.withBody(PanBody.DEFAULT.withControl(HeatedBody.Control.FIXED_INPUT));
-		HeatSetup keptUp = new HeatSetup.PanContact(230, true, 60).withBody(PanBody.DEFAULT);
+		HeatSetup keptUp = new PanContact(230, true, 60).withBody(PanBody.DEFAULT);
 		double fixedAt2Min = panAfter(CookSimulation.run(STEAKS, fixed, never, s).series(), 120);
 		double keptAt2Min = panAfter(CookSimulation.run(STEAKS, keptUp, never, s).series(), 120);
 		assertTrue(230 - fixedAt2Min > 40 && 230 - fixedAt2Min < 110, "fixed flame: " + fixedAt2Min);
@@ -48,7 +50,7 @@ class EquipmentLoadTest {
 	@Test
 	void fryerEnergyBalancesWithTheFood() {
 		Surface frozenFries = Surface.defaults(FoodCategory.POTATO).withInitialTemperatureC(-18);
-		HeatSetup fryer = new HeatSetup.DeepFryer(175).withBody(FryerBody.DEFAULT);
+		HeatSetup fryer = new DeepFryer(175).withBody(FryerBody.DEFAULT);
 		CookSimulation sim = CookSimulation.of(frozenFries, fryer, CookSettings.defaults(), LayerReaction.NONE);
 		CookResult r = sim.run(Target.stage("golden"));
 		HeatedBody oil = sim.heatSourceBody();
@@ -63,7 +65,7 @@ class EquipmentLoadTest {
 	/** A held pan is the old model: a body is only there when the setup has one. */
 	@Test
 	void aSetupWithoutABodyKeepsItsSetTemperature() {
-		CookResult r = CookSimulation.run(STEAKS, new HeatSetup.PanContact(230, true, 60), Target.stage("browned"));
+		CookResult r = CookSimulation.run(STEAKS, new PanContact(230, true, 60), Target.stage("browned"));
 		assertTrue(r.series().stream().allMatch(x -> Double.isNaN(x.heatSourceTemperatureC())));
 	}
 

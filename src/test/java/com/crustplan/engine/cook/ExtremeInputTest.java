@@ -11,6 +11,10 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.RadiantGrill;
+import com.crustplan.engine.heat.Oven;
+import com.crustplan.engine.heat.PanContact;
 
 /**
  * Random surfaces and setups across the whole accepted input range (seeded, so a failure repeats): every run
@@ -35,11 +39,11 @@ class ExtremeInputTest {
 					rnd.nextDouble() * 500, new double[] { 0.5, 1, 5, 20, 80, 200 }[rnd.nextInt(6)], null,
 					rnd.nextDouble() * 5, rnd.nextDouble() * 5, -20 + rnd.nextDouble() * 100);
 			HeatSetup h = switch (rnd.nextInt(4)) {
-				case 0 -> new HeatSetup.PanContact(100 + rnd.nextDouble() * 220, rnd.nextBoolean(),
+				case 0 -> new PanContact(100 + rnd.nextDouble() * 220, rnd.nextBoolean(),
 						rnd.nextBoolean() ? 0 : 10 + rnd.nextDouble() * 300);
-				case 1 -> new HeatSetup.Oven(50 + rnd.nextDouble() * 270, rnd.nextBoolean(), rnd.nextDouble() * 100);
-				case 2 -> new HeatSetup.RadiantGrill(300 + rnd.nextDouble() * 900, 0);
-				default -> new HeatSetup.DeepFryer(120 + rnd.nextDouble() * 80);
+				case 1 -> new Oven(50 + rnd.nextDouble() * 270, rnd.nextBoolean(), rnd.nextDouble() * 100);
+				case 2 -> new RadiantGrill(300 + rnd.nextDouble() * 900, 0);
+				default -> new DeepFryer(120 + rnd.nextDouble() * 80);
 			};
 			Target t = Target.stage(c.stages().get(rnd.nextInt(c.stages().size())).key());
 			try {

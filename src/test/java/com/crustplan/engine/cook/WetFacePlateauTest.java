@@ -9,6 +9,8 @@ import org.junit.jupiter.api.Test;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.Oven;
+import com.crustplan.engine.heat.PanContact;
 import com.crustplan.engine.heat.WetBulb;
 import com.crustplan.engine.heat.WetBulbReference;
 import com.crustplan.engine.water.Atmosphere;
@@ -41,7 +43,7 @@ class WetFacePlateauTest {
 		// 1 K allows for the little heat conducted into the food, which the steady balance leaves out.
 		double[] cases = { Atmosphere.KITCHEN_STEAM_FRACTION * 100, 10 };
 		for (double steamPct : cases) {
-			HeatSetup.Oven oven = new HeatSetup.Oven(200, true, steamPct);
+			Oven oven = new Oven(200, true, steamPct);
 			double h = HeatSetup.OVEN_FAN.value();
 			double convective = WetBulb.temperatureC(oven.atmosphere(), h);
 			double y = steamPct / 100;
@@ -71,7 +73,7 @@ class WetFacePlateauTest {
 		double boiling = SaturationPressure.saturationTemperatureK(101_325) - 273.15;
 		int counted = 0;
 		for (Sample s : run(Surface.defaults(FoodCategory.MEAT).withSurfaceWaterGPerM2(2000),
-				new HeatSetup.PanContact(220, true, 0), 200)) {
+				new PanContact(220, true, 0), 200)) {
 			if (s.timeS() >= 40 && s.standingWaterGPerM2() > 0) {
 				assertTrue(Math.abs(s.surfaceTemperatureC() - boiling) < 0.5,
 						String.format("t %.0f s: face %.2f °C", s.timeS(), s.surfaceTemperatureC()));
@@ -86,7 +88,7 @@ class WetFacePlateauTest {
 		// A face in 200 °C air, fed heat by the air, the walls and the warmer food behind it, cannot fall below
 		// the wet-bulb temperature of the air (psychrometrics: the wet bulb is the lowest temperature
 		// evaporation can reach; ASHRAE Handbook — Fundamentals, ch. 1). Tolerance 0.5 K.
-		HeatSetup.Oven oven = new HeatSetup.Oven(200, true, Atmosphere.KITCHEN_STEAM_FRACTION * 100);
+		Oven oven = new Oven(200, true, Atmosphere.KITCHEN_STEAM_FRACTION * 100);
 		double wetBulb = WetBulb.temperatureC(oven.atmosphere(), HeatSetup.OVEN_FAN.value());
 		for (Sample s : run(WET_WARM_MEAT, oven, 900)) {
 			if (s.timeS() >= 60) {

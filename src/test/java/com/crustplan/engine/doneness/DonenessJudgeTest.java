@@ -22,6 +22,9 @@ import com.crustplan.engine.doneness.FoodCode.Cut;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.Oven;
+import com.crustplan.engine.heat.PanContact;
 import com.crustplan.engine.message.Argument;
 import com.crustplan.engine.message.Message;
 import com.crustplan.engine.message.Quantity;
@@ -87,9 +90,9 @@ class DonenessJudgeTest {
 		@Test
 		void shouldCallChickenGoldenAtANinetyNineDegreeCoreDry() {
 			// skin-on chicken in a dry 200 °C fan oven: golden at about 20 min with the core near 99 °C
-			CookResult r = AcrylamideCook.run(CHICKEN, new HeatSetup.Oven(200, true, DRY), Target.stage("golden"));
+			CookResult r = AcrylamideCook.run(CHICKEN, new Oven(200, true, DRY), Target.stage("golden"));
 			assertThat(r.coreTemperatureAtTargetC()).isGreaterThan(95);
-			DonenessWarning w = only(DonenessJudge.judge(CHICKEN, new HeatSetup.Oven(200, true, DRY), r, Cut.WHOLE),
+			DonenessWarning w = only(DonenessJudge.judge(CHICKEN, new Oven(200, true, DRY), r, Cut.WHOLE),
 					"core-past-juiciness");
 			assertThat(reason(w).code()).isEqualTo("warning.doneness.dry.poultry");
 			// poultry breast dries past about 80 °C (common practice)
@@ -103,24 +106,24 @@ class DonenessJudgeTest {
 		void shouldBringTheChickenCoreIntoTheJuicyRangeWhenBrownedFirstAndFinishedToTheFoodCode() {
 			// the suggestion as a forward run: golden in a 200 °C pan, then a 180 °C oven until the centre reads 74 °C
 			StepsResult r = steps(CHICKEN, Target.stage("golden"), 74.0,
-					CookStep.toColour(new HeatSetup.PanContact(200, true, 60), Target.stage("golden"), 3600),
-					CookStep.toCore(new HeatSetup.Oven(180, true, DRY), 74.0, 3600));
+					CookStep.toColour(new PanContact(200, true, 60), Target.stage("golden"), 3600),
+					CookStep.toCore(new Oven(180, true, DRY), 74.0, 3600));
 			assertThat(r.colourReached()).isTrue();
 			assertThat(r.coreReached()).isTrue();
 			// FDA Food Code 2022 74 °C reached, under the 80 °C juiciness limit (common practice)
 			assertThat(DonenessJudge.peakCoreC(r.cook(), r.cook().simulatedS(), Double.NaN)).isBetween(74.0, 80.0);
-			assertThat(codes(DonenessJudge.judge(CHICKEN, List.of(CookStep.timed(new HeatSetup.PanContact(200, true, 60), 1)),
+			assertThat(codes(DonenessJudge.judge(CHICKEN, List.of(CookStep.timed(new PanContact(200, true, 60), 1)),
 					r, Cut.WHOLE))).isEmpty();
 		}
 
 		@Test
 		void shouldCallASteakBrownedInTheOvenWellPastWellDoneAndFixItBySearingFirst() {
-			List<DonenessWarning> w = judge(STEAK, new HeatSetup.Oven(200, true, DRY), Target.stage("browned"));
+			List<DonenessWarning> w = judge(STEAK, new Oven(200, true, DRY), Target.stage("browned"));
 			// whole-muscle meat is well done by about 70 °C (common practice doneness words)
 			assertThat(celsius(reason(only(w, "core-past-juiciness")).args().get(2))).isEqualTo(70);
 			List<CookStep> searThenOven = List.of(
-					CookStep.toColour(new HeatSetup.PanContact(220, true, 60), Target.stage("browned"), 3600),
-					CookStep.toCore(new HeatSetup.Oven(180, true, DRY), 63.0, 3600));
+					CookStep.toColour(new PanContact(220, true, 60), Target.stage("browned"), 3600),
+					CookStep.toCore(new Oven(180, true, DRY), 63.0, 3600));
 			StepsResult r = CookSimulation.runSteps(STEAK, searThenOven, Target.stage("browned"), 63.0,
 					CookSettings.defaults(), AcrylamideFormation.REACTION);
 			// browned and at the FDA Food Code 2022 63 °C for whole cuts, not past 70 °C
@@ -130,7 +133,7 @@ class DonenessJudgeTest {
 
 		@Test
 		void shouldCallFishGoldenInAHotOvenDry() {
-			List<DonenessWarning> w = judge(FISH, new HeatSetup.Oven(200, true, DRY), Target.stage("golden"));
+			List<DonenessWarning> w = judge(FISH, new Oven(200, true, DRY), Target.stage("golden"));
 			// fish dries past about 65 °C (common practice), above the Food Code's 63 °C
 			assertThat(reason(only(w, "core-past-juiciness")).code()).isEqualTo("warning.doneness.dry.fish");
 		}
@@ -142,7 +145,7 @@ class DonenessJudgeTest {
 
 		@Test
 		void shouldWarnForChickenGoldenInAPanBeforeItsCoreReachesTheFoodCode() {
-			List<DonenessWarning> w = judge(CHICKEN, new HeatSetup.PanContact(200, true, 60), Target.stage("golden"));
+			List<DonenessWarning> w = judge(CHICKEN, new PanContact(200, true, 60), Target.stage("golden"));
 			DonenessWarning food = only(w, "core-below-food-code");
 			assertThat(reason(food).code()).isEqualTo("warning.food-code.poultry");
 			// FDA Food Code 2022, 3-401.11(A)(3): 74 °C (165 °F)
@@ -154,25 +157,25 @@ class DonenessJudgeTest {
 		@Test
 		void shouldReachTheFoodCodeWithoutDryingWhenThePanIsTwentyDegreesLower() {
 			// the suggestion's first half as a forward run: 200 → 180 °C
-			CookResult hot = AcrylamideCook.run(CHICKEN, new HeatSetup.PanContact(200, true, 60), Target.stage("golden"));
-			CookResult lower = AcrylamideCook.run(CHICKEN, new HeatSetup.PanContact(180, true, 60), Target.stage("golden"));
+			CookResult hot = AcrylamideCook.run(CHICKEN, new PanContact(200, true, 60), Target.stage("golden"));
+			CookResult lower = AcrylamideCook.run(CHICKEN, new PanContact(180, true, 60), Target.stage("golden"));
 			assertThat(lower.reached()).isTrue();
 			// FDA Food Code 2022 poultry 74 °C reached at golden, under the 80 °C juiciness limit
 			assertThat(lower.coreTemperatureAtTargetC()).isBetween(74.0, 80.0);
 			assertThat(lower.timeToTargetS()).isGreaterThan(hot.timeToTargetS());
-			assertThat(DonenessJudge.judge(CHICKEN, new HeatSetup.PanContact(180, true, 60), lower, Cut.WHOLE)).isEmpty();
+			assertThat(DonenessJudge.judge(CHICKEN, new PanContact(180, true, 60), lower, Cut.WHOLE)).isEmpty();
 		}
 
 		@Test
 		void shouldReachTheFoodCodeWhenAThickPieceIsFinishedInTheOven() {
 			// the suggestion's second half: a 60 mm piece coloured in a 240 °C pan, then a 180 °C oven to 74 °C
 			Surface thick = CHICKEN.withThicknessMm(60);
-			List<DonenessWarning> before = judge(thick, new HeatSetup.PanContact(240, true, 0), Target.stage("light-golden"));
+			List<DonenessWarning> before = judge(thick, new PanContact(240, true, 0), Target.stage("light-golden"));
 			Message s = suggestion(only(before, "core-below-food-code"));
 			assertThat(s.args().get(1)).isEqualTo(Temperature.celsius(180));
 			List<CookStep> plan = List.of(
-					CookStep.toColour(new HeatSetup.PanContact(240, true, 0), Target.stage("light-golden"), 3600),
-					CookStep.toCore(new HeatSetup.Oven(180, true, DRY), 74.0, 3 * 3600));
+					CookStep.toColour(new PanContact(240, true, 0), Target.stage("light-golden"), 3600),
+					CookStep.toCore(new Oven(180, true, DRY), 74.0, 3 * 3600));
 			StepsResult r = CookSimulation.runSteps(thick, plan, Target.stage("light-golden"), 74.0,
 					CookSettings.defaults().withHorizonS(4 * 3600), AcrylamideFormation.REACTION);
 			assertThat(r.coreReached()).isTrue();
@@ -183,7 +186,7 @@ class DonenessJudgeTest {
 		void shouldHoldMincedMeatToTheComminutedFigure() {
 			// the same run judged as a whole cut and as a burger patty (FDA Food Code 2022: 63 °C whole, 68 °C minced)
 			Surface patty = STEAK.withThicknessMm(13);
-			HeatSetup pan = new HeatSetup.PanContact(220, true, 60);
+			HeatSetup pan = new PanContact(220, true, 60);
 			CookResult r = AcrylamideCook.run(patty, pan, Target.stage("browned"));
 			assertThat(r.coreTemperatureAtTargetC()).isBetween(63.0, 68.0);
 			assertThat(codes(DonenessJudge.judge(patty, pan, r, Cut.WHOLE))).doesNotContain("core-below-food-code");
@@ -199,7 +202,7 @@ class DonenessJudgeTest {
 
 		@Test
 		void shouldCallABaguetteGoldenWithACoolCrumbRaw() {
-			HeatSetup oven = new HeatSetup.Oven(230, false, DRY);
+			HeatSetup oven = new Oven(230, false, DRY);
 			CookResult r = AcrylamideCook.run(BAGUETTE, oven, Target.stage("golden"));
 			assertThat(r.reached()).isTrue();
 			assertThat(r.coreTemperatureAtTargetC()).isLessThan(30);
@@ -212,11 +215,11 @@ class DonenessJudgeTest {
 		@Test
 		void shouldBringTheCrumbCloserToBakedWhenBakedCoolerAndFlatter() {
 			// the suggestion as forward runs: 40 K cooler raises the crumb at golden; a flatter piece as well
-			double hot = AcrylamideCook.run(BAGUETTE, new HeatSetup.Oven(230, false, DRY), Target.stage("golden"))
+			double hot = AcrylamideCook.run(BAGUETTE, new Oven(230, false, DRY), Target.stage("golden"))
 				.coreTemperatureAtTargetC();
-			double cooler = AcrylamideCook.run(BAGUETTE, new HeatSetup.Oven(190, false, DRY), Target.stage("golden"))
+			double cooler = AcrylamideCook.run(BAGUETTE, new Oven(190, false, DRY), Target.stage("golden"))
 				.coreTemperatureAtTargetC();
-			double flatter = AcrylamideCook.run(BREAD.withThicknessMm(20), new HeatSetup.Oven(190, false, DRY),
+			double flatter = AcrylamideCook.run(BREAD.withThicknessMm(20), new Oven(190, false, DRY),
 					Target.stage("golden")).coreTemperatureAtTargetC();
 			assertThat(cooler).isGreaterThan(hot);
 			// a 20 mm piece at 190 °C is baked through (≥ 96 °C, bakers' probe) when golden
@@ -225,23 +228,23 @@ class DonenessJudgeTest {
 
 		@Test
 		void shouldCallAFryColouredBeforeItsCentreBoilsSoftAndFixItAtOneSeventyFive() {
-			List<DonenessWarning> w = judge(FRIES, new HeatSetup.DeepFryer(190), Target.stage("golden"));
+			List<DonenessWarning> w = judge(FRIES, new DeepFryer(190), Target.stage("golden"));
 			DonenessWarning soft = only(w, "centre-not-cooked");
 			// a cooked centre sits at its boiling point, ≈ 100 °C (taken as 98 °C at the centre node)
 			assertThat(celsius(reason(soft).args().get(2))).isEqualTo(98);
 			// Regulation (EU) 2017/2158, Annex II: fry potato products below 175 °C
 			assertThat(suggestion(soft).args().get(0)).isEqualTo(Temperature.celsius(175));
-			assertThat(codes(judge(FRIES, new HeatSetup.DeepFryer(175), Target.stage("golden")))).isEmpty();
+			assertThat(codes(judge(FRIES, new DeepFryer(175), Target.stage("golden")))).isEmpty();
 		}
 
 		@Test
 		void shouldCallAThickFrySoftAndFixItByCuttingItToHalf() {
 			Surface thick = FRIES.withThicknessMm(20);
-			DonenessWarning soft = only(judge(thick, new HeatSetup.DeepFryer(175), Target.stage("golden")),
+			DonenessWarning soft = only(judge(thick, new DeepFryer(175), Target.stage("golden")),
 					"centre-not-cooked");
 			// half the thickness heats about four times sooner (Fourier number t·α/L²)
 			assertThat(suggestion(soft).args().get(1)).isEqualTo(Quantity.of(10, "mm"));
-			assertThat(codes(judge(FRIES.withThicknessMm(10), new HeatSetup.DeepFryer(175), Target.stage("golden"))))
+			assertThat(codes(judge(FRIES.withThicknessMm(10), new DeepFryer(175), Target.stage("golden"))))
 				.isEmpty();
 		}
 
@@ -254,13 +257,13 @@ class DonenessJudgeTest {
 		void shouldSayWhenAThinBreadIsBakedLongBeforeItColoursAndBringThemCloserWhenHotter() {
 			// a 12 mm flatbread in a 170 °C oven: the crumb passes 96 °C (bakers' probe) at about 10 min, golden only at 38
 			Surface flat = BREAD.withThicknessMm(12);
-			HeatSetup cool = new HeatSetup.Oven(170, false, DRY);
+			HeatSetup cool = new Oven(170, false, DRY);
 			CookResult r = AcrylamideCook.run(flat, cool, Target.stage("golden"));
 			DonenessWarning late = only(DonenessJudge.judge(flat, cool, r, Cut.WHOLE), "colour-after-core");
 			assertThat(suggestion(late).code()).isEqualTo("suggestion.hotter");
 			assertThat(suggestion(late).args().get(0)).isEqualTo(TemperatureDifference.kelvin(30));
 			// the suggestion as a forward run: 30 K hotter brings the colour and the baked crumb closer together
-			CookResult hotter = AcrylamideCook.run(flat, new HeatSetup.Oven(200, false, DRY), Target.stage("golden"));
+			CookResult hotter = AcrylamideCook.run(flat, new Oven(200, false, DRY), Target.stage("golden"));
 			double gapCool = r.timeToTargetS() - DonenessJudge.firstReachedS(r.series(), 96, r.timeToTargetS());
 			double gapHot = hotter.timeToTargetS() - DonenessJudge.firstReachedS(hotter.series(), 96, hotter.timeToTargetS());
 			assertThat(gapHot).isLessThan(gapCool / 2);
@@ -282,7 +285,7 @@ class DonenessJudgeTest {
 		}
 
 		List<String> judged(FoodCategory c, double coreC, Cut cut) {
-			return codes(DonenessJudge.judge(Surface.defaults(c), new HeatSetup.PanContact(200, true, 60), cook(coreC), cut));
+			return codes(DonenessJudge.judge(Surface.defaults(c), new PanContact(200, true, 60), cook(coreC), cut));
 		}
 
 		@Test
@@ -314,10 +317,10 @@ class DonenessJudgeTest {
 
 		@Test
 		void shouldJudgeNothingWhenTheColourIsNotReached() {
-			CookResult r = AcrylamideCook.run(STEAK, new HeatSetup.Oven(60, false, DRY), Target.stage("browned"),
+			CookResult r = AcrylamideCook.run(STEAK, new Oven(60, false, DRY), Target.stage("browned"),
 					CookSettings.defaults().withHorizonS(600));
 			assertThat(r.reached()).isFalse();
-			assertThat(DonenessJudge.judge(STEAK, new HeatSetup.Oven(60, false, DRY), r, Cut.WHOLE)).isEmpty();
+			assertThat(DonenessJudge.judge(STEAK, new Oven(60, false, DRY), r, Cut.WHOLE)).isEmpty();
 		}
 
 	}

@@ -44,13 +44,13 @@ class RadiantGrillTest {
 		double f = 0.5 * (s - Math.sqrt(s * s - 4 * Math.pow(r / 0.06, 2)));
 		assertThat(f).isCloseTo(0.7404, within(1e-4));
 		double q = SIGMA * 0.85 * 0.25 * f * (Math.pow(1073.15, 4) - Math.pow(298.15, 4));
-		HeatSetup.RadiantGrill g = HeatSetup.RadiantGrill.ofElement(GrillKind.SALAMANDER, 800, 150.0, 0);
+		RadiantGrill g = RadiantGrill.ofElement(GrillKind.SALAMANDER, 800, 150.0, 0);
 		assertThat(g.viewFactor()).isCloseTo(f, within(1e-12));
 		assertThat(g.heatFluxKwPerM2()).isCloseTo(q / 1000, within(1e-9)).isCloseTo(11.76, within(0.01));
 		// the round-one constructor is the same salamander at its usual distance
-		assertThat(new HeatSetup.RadiantGrill(800, 0)).isEqualTo(g);
+		assertThat(new RadiantGrill(800, 0)).isEqualTo(g);
 		// flux and element temperature are inverse of each other at the usual distance
-		HeatSetup.RadiantGrill byFlux = HeatSetup.RadiantGrill.ofFlux(GrillKind.SALAMANDER, g.heatFluxKwPerM2(), 0);
+		RadiantGrill byFlux = RadiantGrill.ofFlux(GrillKind.SALAMANDER, g.heatFluxKwPerM2(), 0);
 		assertThat(byFlux.heaterTemperatureC()).isCloseTo(800, within(1e-6));
 	}
 
@@ -59,7 +59,7 @@ class RadiantGrillTest {
 		// a face at T_s under q = 15 kW/m² (a black radiometer's reading at 25 °C) absorbs ε·(q + σ·T_room⁴)
 		// and emits ε·σ·T_s⁴, plus natural convection h·(T_room − T_s): an opaque grey
 		// surface (Kirchhoff: absorptivity = emissivity = 0.9), irradiation from a radiometer reading
-		HeatSetup.RadiantGrill g = HeatSetup.RadiantGrill.ofFlux(GrillKind.SALAMANDER, 15, 0);
+		RadiantGrill g = RadiantGrill.ofFlux(GrillKind.SALAMANDER, 15, 0);
 		FaceFlux out = new FaceFlux();
 		double ts = 273.15 + 150;
 		g.schedule().at(0, 0).evaluate(ts, 0.3, 0, out);
@@ -74,22 +74,22 @@ class RadiantGrillTest {
 	void shouldStopWhereTheSurfaceWouldCharAndSaySo() {
 		Surface toast = Surface.defaults(FoodCategory.BREAD).withThicknessMm(12);
 		// 40 kW/m²: round one's model ran such a slice past 400 °C (and failed at 900 °C elements)
-		CookResult hot = CookSimulation.run(toast, HeatSetup.RadiantGrill.fromHeatFlux(40, 0), Target.stage("dark"));
+		CookResult hot = CookSimulation.run(toast, RadiantGrill.fromHeatFlux(40, 0), Target.stage("dark"));
 		assertThat(hot.outcome()).isEqualTo(Outcome.SURFACE_LIMIT);
-		assertThat(hot.maxSurfaceTemperatureC()).isLessThan(HeatSetup.RadiantGrill.CHAR_SURFACE.value() + 15);
+		assertThat(hot.maxSurfaceTemperatureC()).isLessThan(RadiantGrill.CHAR_SURFACE.value() + 15);
 		// the default salamander browns toast golden without passing the limit
-		CookResult usual = CookSimulation.run(toast, new HeatSetup.RadiantGrill(800, 0), Target.stage("golden"));
+		CookResult usual = CookSimulation.run(toast, new RadiantGrill(800, 0), Target.stage("golden"));
 		assertThat(usual.reached()).isTrue();
 		assertThat(usual.timeToTargetS()).isBetween(60.0, 300.0);
 	}
 
 	@Test
 	void shouldNameTheFieldOfABadGrill() {
-		assertThatThrownBy(() -> HeatSetup.RadiantGrill.ofFlux(GrillKind.BROILER, 70, 0))
+		assertThatThrownBy(() -> RadiantGrill.ofFlux(GrillKind.BROILER, 70, 0))
 			.isInstanceOfSatisfying(InvalidInputException.class, e -> assertThat(e.field()).isEqualTo("heatFluxKwPerM2"));
-		assertThatThrownBy(() -> HeatSetup.RadiantGrill.ofElement(GrillKind.CHARCOAL, 650, 10.0, 0))
+		assertThatThrownBy(() -> RadiantGrill.ofElement(GrillKind.CHARCOAL, 650, 10.0, 0))
 			.isInstanceOfSatisfying(InvalidInputException.class, e -> assertThat(e.field()).isEqualTo("distanceMm"));
-		assertThatThrownBy(() -> HeatSetup.RadiantGrill.ofElement(GrillKind.SALAMANDER, 1500, null, 0))
+		assertThatThrownBy(() -> RadiantGrill.ofElement(GrillKind.SALAMANDER, 1500, null, 0))
 			.isInstanceOfSatisfying(InvalidInputException.class, e -> assertThat(e.field()).isEqualTo("temperatureC"));
 	}
 
