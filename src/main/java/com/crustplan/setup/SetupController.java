@@ -68,7 +68,8 @@ class SetupController {
 	String editForm(@PathVariable long id, @ModelAttribute("units") TemperatureUnit units, Model model) {
 		SavedSetup s = setups.get(id);
 		model.addAttribute("version", s.getVersion());
-		return form(model, SetupForm.of(s, units), null, "/setups/" + id + "/edit", "Edit " + s.getName(), units);
+		return form(model, SetupForm.of(s, units).withBodyDefaults(), null, "/setups/" + id + "/edit",
+				"Edit " + s.getName(), units);
 	}
 
 	/** As for surfaces: a save from a stale form comes back with both versions, nothing typed lost. */
@@ -102,8 +103,9 @@ class SetupController {
 			return form(model, form, null, "/setups/new", "New heat setup", units);
 		}
 		SetupForm yours = form.unit() == units ? form : form.inUnit(units);
-		model.addAttribute("conflict",
-				EditConflict.between("setup", now.getName(), now.getUpdatedAt(), yours, SetupForm.of(now, units)));
+		// unused body fields are compared as the defaults both forms show
+		model.addAttribute("conflict", EditConflict.between("setup", now.getName(), now.getUpdatedAt(),
+				yours.withBodyDefaults(), SetupForm.of(now, units).withBodyDefaults()));
 		model.addAttribute("version", now.getVersion());
 		return form(model, form, null, "/setups/" + id + "/edit", "Edit " + now.getName(), units);
 	}
@@ -113,7 +115,8 @@ class SetupController {
 		SavedSetup s = setups.get(id);
 		String name = "Copy of " + s.getName();
 		model.addAttribute("formToken", FormTokens.issue());
-		return form(model, SetupForm.of(s, units).withName(name.length() > 80 ? name.substring(0, 80) : name), null,
+		return form(model,
+				SetupForm.of(s, units).withBodyDefaults().withName(name.length() > 80 ? name.substring(0, 80) : name), null,
 				"/setups/new", name, units);
 	}
 
@@ -150,6 +153,14 @@ class SetupController {
 		}
 		catch (InvalidInputException e) {
 			EngineErrors.bind(e, result, SetupForm::formField, form.unit(), form.temperatureC(), "temperature");
+			// a wrong pan or fryer value is named as well, not only the first wrong setting
+			try {
+				form.panBody();
+				form.fryerBody();
+			}
+			catch (InvalidInputException body) {
+				EngineErrors.bind(body, result, SetupForm::formField, form.unit(), form.temperatureC(), "temperature");
+			}
 			return false;
 		}
 	}
@@ -160,6 +171,8 @@ class SetupController {
 		model.addAttribute("action", action);
 		model.addAttribute("title", title);
 		model.addAttribute("modes", Arrays.asList(HeatMode.values()));
+		model.addAttribute("materials", EquipmentSettings.materials());
+		model.addAttribute("controls", EquipmentSettings.controls());
 		return "setup/form";
 	}
 
