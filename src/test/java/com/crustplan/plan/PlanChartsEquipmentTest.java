@@ -48,6 +48,15 @@ class PlanChartsEquipmentTest {
 		// preheated to the set 175 °C; a cold basket can only take heat out of the oil (energy balance)
 		assertThat(oil.get(0)).isEqualTo(175.0);
 		assertThat(oil.stream().mapToDouble(Double::doubleValue).min().orElseThrow()).isLessThan(175.0);
+		// the assumptions say what load was assumed: the demo fryer's 8 L, 3.2 kW, 0.5 kg
+		String page = mvc
+			.perform(get("/plan").param("surfaceId", String.valueOf(demo.surface("Chips, 10 mm, blanched")))
+				.param("setupId", String.valueOf(demo.setup("Fryer, chips")))
+				.param("targetStage", "golden"))
+			.andReturn()
+			.getResponse()
+			.getContentAsString();
+		assertThat(page).contains("of food per batch drawing it down").contains("8.0 L of oil, a 3.2 kW heater").contains("0.50 kg of food per batch");
 	}
 
 	@Test
