@@ -133,13 +133,19 @@
         borderColor: INK, backgroundColor: '#ffffff', borderWidth: 2 }];
     };
 
+    var temperatures = [
+      line('Surface (' + d.unit + ')', t, d.surfaceTemperature, '#b42318'),
+      line('Other face (' + d.unit + ')', t, d.otherFaceTemperature, '#b7791f', { borderDash: [6, 4], borderWidth: 2 }),
+      line('Core (' + d.unit + ')', t, d.coreTemperature, '#1d4ed8')
+    ];
+    if (d.heatSourceTemperature) {
+      // the pan or the oil, drawn down by the load and brought back by its heat
+      temperatures.push(line(d.heatSourceLabel + ' (' + d.unit + ')', t, d.heatSourceTemperature, '#4b5563',
+        { borderDash: [2, 3], borderWidth: 2 }));
+    }
     new Chart(document.getElementById('chart-temperature'), {
       type: 'line',
-      data: { datasets: [
-        line('Surface (' + d.unit + ')', t, d.surfaceTemperature, '#b42318'),
-        line('Other face (' + d.unit + ')', t, d.otherFaceTemperature, '#b7791f', { borderDash: [6, 4], borderWidth: 2 }),
-        line('Core (' + d.unit + ')', t, d.coreTemperature, '#1d4ed8')
-      ] },
+      data: { datasets: temperatures },
       options: Object.assign({}, common, { scales: { x: x, y: axis('Temperature (' + d.unit + ')') } })
     });
 

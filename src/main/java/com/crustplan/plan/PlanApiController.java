@@ -25,6 +25,7 @@ import com.crustplan.surface.CategoryDefaults;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.system.MessageText;
 
+import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.annotation.JsonProperty;
 
 /**
@@ -112,8 +113,10 @@ class PlanApiController {
 
 	}
 
+	/** {@code heatSourceTemperatureC}, the pan's or the oil's, only when the heat has a body. */
 	record Series(List<Double> timeS, List<Double> surfaceTemperatureC, List<Double> coreTemperatureC,
-			List<Double> surfaceWaterActivity, List<Double> lightness, List<String> colorHex) {
+			List<Double> surfaceWaterActivity, List<Double> lightness, List<String> colorHex,
+			@JsonInclude(JsonInclude.Include.NON_NULL) List<Double> heatSourceTemperatureC) {
 	}
 
 	record Warning(String code, String message) {
@@ -131,7 +134,11 @@ class PlanApiController {
 			List<Double> aw = new ArrayList<>();
 			List<Double> lightness = new ArrayList<>();
 			List<String> hex = new ArrayList<>();
+			List<Double> source = new ArrayList<>();
+			boolean hasBody = false;
 			for (Sample s : r.result().series()) {
+				source.add(PlanReport.finite(s.heatSourceTemperatureC()));
+				hasBody |= Double.isFinite(s.heatSourceTemperatureC());
 				t.add(PlanReport.finite(s.timeS()));
 				surface.add(PlanReport.finite(s.surfaceTemperatureC()));
 				core.add(PlanReport.finite(s.coreTemperatureC()));
@@ -144,7 +151,7 @@ class PlanApiController {
 					r.surface().ph(), r.coreTemperatureAtTargetC(), text.celsius(r.targetLabel()), r.targetHex(),
 					new Acrylamide(a.crustUgPerKg(), a.portionUgPerKg(), a.benchmarkUgPerKg(), a.zone(), a.product(),
 							text.celsius(a.basis()), a.mitigations().stream().map(m -> Change.of(m, text)).toList()),
-					new Series(t, surface, core, aw, lightness, hex),
+					new Series(t, surface, core, aw, lightness, hex, hasBody ? source : null),
 					r.warnings().stream().map(w -> new Warning(w.code(), text.celsius(w.message()))).toList(),
 					text.celsius(r.cautions()), text.celsius(r.result().assumptions()), deprecations);
 		}

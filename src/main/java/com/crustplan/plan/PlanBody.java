@@ -7,7 +7,10 @@ import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.heat.FryerBody;
 import com.crustplan.engine.heat.HeatSetup;
+import com.crustplan.engine.heat.PanBody;
+import com.crustplan.setup.EquipmentSettings;
 import com.crustplan.setup.HeatMode;
 import com.crustplan.setup.HeatSettings;
 import com.crustplan.surface.SurfaceBody;
@@ -24,10 +27,22 @@ record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double ho
 
 	/**
 	 * {@code relativeHumidityPct} is round one's oven field, still read (as a combi oven's humidity
-	 * reading, converted as the migration does) and named in the answer's deprecations.
+	 * reading, converted as the migration does) and named in the answer's deprecations. {@code pan} and
+	 * {@code fryer} are optional: without them the pan or oil is held at its set temperature whatever the
+	 * load, as before they existed, so older requests get the same answer.
 	 */
 	record HeatBody(String mode, Double temperatureC, Boolean fan, Boolean fatFilm, Double steamPct,
-			Double relativeHumidityPct, Double flipEverySeconds, String grill, Double heatFluxKwPerM2, Double distanceMm) {
+			Double relativeHumidityPct, Double flipEverySeconds, String grill, Double heatFluxKwPerM2, Double distanceMm,
+			PanObject pan, FryerObject fryer) {
+	}
+
+	/** A pan's body; each value left out takes the default for a typical line pan. */
+	record PanObject(String material, Double massKg, Double diameterCm, Double powerKw, String control,
+			Double coverPct) {
+	}
+
+	/** A fryer's body; each value left out takes the default for a typical line fryer. */
+	record FryerObject(Double oilLitres, Double heaterKw, Double loadKg) {
 	}
 
 	/** Said in the answer while the old oven field is still read (it goes in the next API version). */
@@ -73,17 +88,48 @@ record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double ho
 		if (h.temperatureC() == null && !byFlux && !errors.has("heat.temperatureC")) {
 			errors.add("heat.temperatureC", "is required");
 		}
+		if (mode != null && h.pan() != null && mode != HeatMode.PAN && !errors.hasUnder("heat.pan")) {
+			errors.add("heat.pan", "is for mode pan only; this heat is " + mode.key());
+		}
+		if (mode != null && h.fryer() != null && mode != HeatMode.FRYER && !errors.hasUnder("heat.fryer")) {
+			errors.add("heat.fryer", "is for mode fryer only; this heat is " + mode.key());
+		}
 		if (mode == null || errors.hasUnder("heat.")) {
 			return null;
 		}
+		HeatSetup setup;
 		try {
-			return HeatSettings.toHeatSetup(mode, new HeatSettings.Values(h.temperatureC(), h.fan(), h.fatFilm(), h.steamPct(),
+			setup = HeatSettings.toHeatSetup(mode, new HeatSettings.Values(h.temperatureC(), h.fan(), h.fatFilm(), h.steamPct(),
 					h.relativeHumidityPct(), h.flipEverySeconds(), grill, h.heatFluxKwPerM2(), h.distanceMm()));
 		}
 		catch (InvalidInputException e) {
 			errors.add("heat." + e.field(), e.reason());
+			setup = null;
+		}
+		PanBody pan = null;
+		FryerBody fryer = null;
+		try {
+			pan = h.pan() == null ? null : pan(h.pan(), errors);
+			fryer = h.fryer() == null ? null : fryer(h.fryer());
+		}
+		catch (InvalidInputException e) {
+			errors.add((h.pan() != null ? "heat.pan." : "heat.fryer.") + e.field(), e.reason());
 			return null;
 		}
+		return setup == null || errors.hasUnder("heat.") ? null : EquipmentSettings.withBody(setup, pan, fryer);
+	}
+
+	private static PanBody pan(PanObject p, FieldErrors errors) {
+		String material = errors.text("heat.pan.material", p.material(), KEY_MAX);
+		String control = errors.text("heat.pan.control", p.control(), KEY_MAX);
+		if (errors.hasUnder("heat.pan.")) {
+			return null;
+		}
+		return EquipmentSettings.pan(material, p.massKg(), p.diameterCm(), p.powerKw(), control, p.coverPct());
+	}
+
+	private static FryerBody fryer(FryerObject f) {
+		return EquipmentSettings.fryer(f.oilLitres(), f.heaterKw(), f.loadKg());
 	}
 
 	private static Target target(TargetBody t, FieldErrors errors) {

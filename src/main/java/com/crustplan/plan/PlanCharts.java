@@ -22,7 +22,11 @@ final class PlanCharts {
 		List<Double> aw = new ArrayList<>();
 		List<Double> browning = new ArrayList<>();
 		List<Double> lightness = new ArrayList<>();
+		List<Double> source = new ArrayList<>();
+		boolean hasBody = false;
 		for (Sample s : report.result().series()) {
+			source.add(round(unit.fromCelsius(s.heatSourceTemperatureC()), 1));
+			hasBody |= Double.isFinite(s.heatSourceTemperatureC());
 			t.add(round(s.timeS() / 60, 3));
 			surface.add(round(unit.fromCelsius(s.surfaceTemperatureC()), 1));
 			other.add(round(unit.fromCelsius(s.otherFaceTemperatureC()), 1));
@@ -40,6 +44,11 @@ final class PlanCharts {
 		d.put("surfaceWaterActivity", aw);
 		d.put("browningPct", browning);
 		d.put("lightness", lightness);
+		if (hasBody) {
+			// the pan or the oil as the load draws it down: its own line on the temperature chart
+			d.put("heatSourceTemperature", source);
+			d.put("heatSourceLabel", "fryer".equals(report.setup().mode()) ? "Oil" : "Pan");
+		}
 		d.put("targetBrowningPct", round(report.result().targetExtent() * 100, 2));
 		d.put("targetTimeMin", report.timeToTargetS() == null ? null : round(report.timeToTargetS() / 60, 3));
 		return d;

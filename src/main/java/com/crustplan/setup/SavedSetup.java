@@ -9,6 +9,8 @@ import jakarta.persistence.Table;
 import com.crustplan.engine.heat.GrillKind;
 import com.crustplan.engine.heat.RadiantGrill;
 import com.crustplan.engine.input.InvalidInputException;
+import com.crustplan.engine.heat.FryerBody;
+import com.crustplan.engine.heat.PanBody;
 import com.crustplan.system.KitchenRecord;
 import com.crustplan.system.TemperatureUnit;
 
@@ -48,6 +50,35 @@ public class SavedSetup extends KitchenRecord {
 	@Column(name = "flip_every_seconds")
 	private Double flipEverySeconds;
 
+	// the pan's or the fryer's body, the defaults filled in (V8); null for the other modes
+
+	@Column(name = "pan_material", length = 40)
+	private String panMaterial;
+
+	@Column(name = "pan_mass_kg")
+	private Double panMassKg;
+
+	@Column(name = "pan_diameter_cm")
+	private Double panDiameterCm;
+
+	@Column(name = "pan_power_kw")
+	private Double panPowerKw;
+
+	@Column(name = "pan_control", length = 40)
+	private String panControl;
+
+	@Column(name = "pan_cover_pct")
+	private Double panCoverPct;
+
+	@Column(name = "fryer_oil_litres")
+	private Double fryerOilLitres;
+
+	@Column(name = "fryer_heater_kw")
+	private Double fryerHeaterKw;
+
+	@Column(name = "fryer_load_kg")
+	private Double fryerLoadKg;
+
 	protected SavedSetup() {
 	}
 
@@ -79,6 +110,20 @@ public class SavedSetup extends KitchenRecord {
 		}
 		flipEverySeconds = m.usesFlip()
 				? (f.flipEverySeconds() == null ? HeatSettings.DEFAULT_FLIP_EVERY_S : f.flipEverySeconds()) : null;
+		updateBody(f.panBody(), f.fryerBody());
+	}
+
+	/** Kept as the engine read it, so the list shows the pan or fryer a plan will use. */
+	private void updateBody(PanBody pan, FryerBody fryer) {
+		panMaterial = pan == null ? null : pan.material().key();
+		panMassKg = pan == null ? null : pan.massKg();
+		panDiameterCm = pan == null ? null : pan.diameterCm();
+		panPowerKw = pan == null ? null : pan.powerKw();
+		panControl = pan == null ? null : EquipmentSettings.Control.of(pan.control()).key();
+		panCoverPct = pan == null ? null : pan.coverPct();
+		fryerOilLitres = fryer == null ? null : fryer.oilLitres();
+		fryerHeaterKw = fryer == null ? null : fryer.heaterKw();
+		fryerLoadKg = fryer == null ? null : fryer.loadKg();
 	}
 
 	public HeatMode getHeatMode() {
@@ -154,6 +199,47 @@ public class SavedSetup extends KitchenRecord {
 
 	public Double getFlipEverySeconds() {
 		return flipEverySeconds;
+	}
+
+	public String getPanMaterial() {
+		return panMaterial;
+	}
+
+	public Double getPanMassKg() {
+		return panMassKg;
+	}
+
+	public Double getPanDiameterCm() {
+		return panDiameterCm;
+	}
+
+	public Double getPanPowerKw() {
+		return panPowerKw;
+	}
+
+	public String getPanControl() {
+		return panControl;
+	}
+
+	public Double getPanCoverPct() {
+		return panCoverPct;
+	}
+
+	public Double getFryerOilLitres() {
+		return fryerOilLitres;
+	}
+
+	public Double getFryerHeaterKw() {
+		return fryerHeaterKw;
+	}
+
+	public Double getFryerLoadKg() {
+		return fryerLoadKg;
+	}
+
+	/** The pan's material and control in words, for the list ("cast iron, heat kept up"); null if none. */
+	public String getBodySummary() {
+		return EquipmentSettings.summary(this);
 	}
 
 }

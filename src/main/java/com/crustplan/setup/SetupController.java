@@ -70,7 +70,7 @@ class SetupController {
 		SavedSetup s = setups.get(id);
 		model.addAttribute("version", s.getVersion());
 		model.addAttribute("legacyHumidityPct", s.getLegacyHumidityPct());
-		return form(model, SetupForm.of(s, units), null, "/setups/" + id + "/edit", "Edit " + s.getName(), units);
+		return form(model, SetupForm.of(s, units).withBodyDefaults(), null, "/setups/" + id + "/edit", "Edit " + s.getName(), units);
 	}
 
 	/** As for surfaces: a save from a stale form comes back with both versions, nothing typed lost. */
@@ -104,8 +104,9 @@ class SetupController {
 			return form(model, form, null, "/setups/new", "New heat setup", units);
 		}
 		SetupForm yours = form.unit() == units ? form : form.inUnit(units);
-		model.addAttribute("conflict",
-				EditConflict.between("setup", now.getName(), now.getUpdatedAt(), yours, SetupForm.of(now, units)));
+		// unused body fields are compared as the defaults both forms show
+		model.addAttribute("conflict", EditConflict.between("setup", now.getName(), now.getUpdatedAt(),
+				yours.withBodyDefaults(), SetupForm.of(now, units).withBodyDefaults()));
 		model.addAttribute("version", now.getVersion());
 		return form(model, form, null, "/setups/" + id + "/edit", "Edit " + now.getName(), units);
 	}
@@ -115,7 +116,8 @@ class SetupController {
 		SavedSetup s = setups.get(id);
 		String name = "Copy of " + s.getName();
 		model.addAttribute("formToken", FormTokens.issue());
-		return form(model, SetupForm.of(s, units).withName(name.length() > 80 ? name.substring(0, 80) : name), null,
+		return form(model,
+				SetupForm.of(s, units).withBodyDefaults().withName(name.length() > 80 ? name.substring(0, 80) : name), null,
 				"/setups/new", name, units);
 	}
 
@@ -152,6 +154,14 @@ class SetupController {
 		}
 		catch (InvalidInputException e) {
 			EngineErrors.bind(e, result, SetupForm::formField, form.unit(), form.temperatureC(), "temperature");
+			// a wrong pan or fryer value is named as well, not only the first wrong setting
+			try {
+				form.panBody();
+				form.fryerBody();
+			}
+			catch (InvalidInputException body) {
+				EngineErrors.bind(body, result, SetupForm::formField, form.unit(), form.temperatureC(), "temperature");
+			}
 			return false;
 		}
 	}
@@ -169,6 +179,8 @@ class SetupController {
 				"new setups turn every %.0f s: each face is off the heat half the time, so the crust takes nearly twice as long;"
 						+ " 0 for not turned; at least 10 s",
 				HeatSettings.DEFAULT_FLIP_EVERY_S));
+		model.addAttribute("materials", EquipmentSettings.materials());
+		model.addAttribute("controls", EquipmentSettings.controls());
 		return "setup/form";
 	}
 

@@ -81,7 +81,8 @@ public record EditConflict(String message, List<Difference> differences) {
 		String words = field.replaceAll("([A-Z])", " $1").toLowerCase(Locale.ROOT);
 		String unit = null;
 		for (String[] u : new String[][] { { " mg per kg", "mg/kg" }, { " g per m2", "g/m²" }, { " g per kg", "g/kg" },
-				{ " pct", "%" }, { " mm", "mm" }, { " seconds", "s" } }) {
+				{ " pct", "%" }, { " mm", "mm" }, { " seconds", "s" }, { " kg", "kg" }, { " cm", "cm" },
+				{ " kw", "kW" }, { " litres", "L" } }) {
 			if (words.endsWith(u[0])) {
 				words = words.substring(0, words.length() - u[0].length());
 				unit = u[1];
