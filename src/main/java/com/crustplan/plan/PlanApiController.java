@@ -3,6 +3,7 @@ package com.crustplan.plan;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 
 import org.slf4j.Logger;
@@ -26,6 +27,7 @@ import com.crustplan.surface.CategoryDefaults;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.system.MessageText;
 
+import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.annotation.JsonProperty;
 import tools.jackson.databind.json.JsonMapper;
 
@@ -85,8 +87,11 @@ class PlanApiController {
 	@PostMapping("/plans")
 	ResponseEntity<?> plan(@RequestBody(required = false) String body) {
 		PlanRequestReader.PlanRequest req = PlanRequestReader.read(body, json);
-		PlanReport r = planner.plan(req.surface(), req.product(), req.setup(), req.target(), req.horizonMinutes(),
-				req.mitigations());
+		PlanReport r = req.steps() != null
+				? planner.planSteps(req.surface(), req.product(), req.steps().steps(), req.steps().labels(), req.target(),
+						req.coreTargetC(), req.horizonMinutes())
+				: planner.plan(req.surface(), req.product(), req.setup(), req.target(), req.horizonMinutes(),
+						req.mitigations());
 		return ResponseEntity.ok(PlanResponse.of(r, text));
 	}
 
@@ -99,7 +104,8 @@ class PlanApiController {
 	@ExceptionHandler(InvalidInputException.class)
 	ResponseEntity<ApiError> invalid(InvalidInputException e) {
 		String f = e.field();
-		String field = f.startsWith("target") || f.equals("horizonMinutes") || f.contains(".") ? f : "input." + f;
+		String field = f.startsWith("target") || f.startsWith("steps") || f.equals("horizonMinutes") || f.contains(".") ? f
+				: "input." + f;
 		return ResponseEntity.badRequest().contentType(MediaType.APPLICATION_JSON).body(ApiError.of(field, e.reason()));
 	}
 
@@ -136,9 +142,27 @@ class PlanApiController {
 	record Warning(String code, String message) {
 	}
 
+	/** One step as run: from and to (s from the start), what ended it, and the food at its end. */
+	record StepOut(int index, String mode, double temperatureC, double startS, double endS, String endedBy,
+			double coreAtEndC, double surfaceAtEndC) {
+	}
+
+	/** Which target came first and by how much (s); the text says it, or which target was missed. */
+	record TargetOrder(String first, Double leadS, String text) {
+	}
+
+	record Checkpoint(double atS, String kind, String text) {
+	}
+
+	/** The answer; a plan in steps adds its steps, core target, target order and timeline (absent otherwise). */
 	record PlanResponse(boolean reached, String outcome, Double timeToTargetS, @JsonProperty("pH") double ph,
 			Double coreTemperatureAtTargetC, String target, String targetColorHex, Acrylamide acrylamide,
-			Series series, List<Warning> warnings, List<String> cautions, List<String> assumptions) {
+			Series series, List<Warning> warnings, List<String> cautions, List<String> assumptions,
+			@JsonInclude(JsonInclude.Include.NON_NULL) List<StepOut> steps,
+			@JsonInclude(JsonInclude.Include.NON_NULL) Double coreTargetC,
+			@JsonInclude(JsonInclude.Include.NON_NULL) Double coreTargetReachedS,
+			@JsonInclude(JsonInclude.Include.NON_NULL) TargetOrder targets,
+			@JsonInclude(JsonInclude.Include.NON_NULL) List<Checkpoint> timeline) {
 
 		static PlanResponse of(PlanReport r, MessageText text) {
 			List<Double> t = new ArrayList<>();
@@ -156,13 +180,29 @@ class PlanApiController {
 				hex.add(s.colourHex());
 			}
 			AcrylamideView a = r.acrylamide();
+			StepsReport st = r.steps();
+			List<StepOut> steps = null;
+			List<Checkpoint> timeline = null;
+			TargetOrder order = null;
+			if (st != null) {
+				steps = st.records()
+					.stream()
+					.map(x -> new StepOut(x.index(), st.steps().get(x.index()).setup().mode(),
+							st.steps().get(x.index()).setup().temperatureC(), x.startS(), x.endS(),
+							x.endedBy().name().toLowerCase(Locale.ROOT), x.coreAtEndC(), x.surfaceAtEndC()))
+					.toList();
+				timeline = st.timeline().stream().map(c -> new Checkpoint(c.timeS(), c.kind(), text.celsius(c.text()))).toList();
+				order = new TargetOrder(st.firstTarget(), st.firstTargetLeadS(),
+						st.targetOrder() == null ? null : text.celsius(st.targetOrder()));
+			}
 			return new PlanResponse(r.reached(), text.celsius(r.result().explanation()), r.timeToTargetS(),
 					r.surface().ph(), r.coreTemperatureAtTargetC(), text.celsius(r.targetLabel()), r.targetHex(),
 					new Acrylamide(a.crustUgPerKg(), a.portionUgPerKg(), a.benchmarkUgPerKg(), a.zone(), a.product(),
 							text.celsius(a.basis()), a.mitigations().stream().map(m -> Change.of(m, text)).toList()),
 					new Series(t, surface, core, aw, lightness, hex),
 					r.warnings().stream().map(w -> new Warning(w.code(), text.celsius(w.message()))).toList(),
-					text.celsius(r.cautions()), text.celsius(r.result().assumptions()));
+					text.celsius(r.cautions()), text.celsius(r.result().assumptions()), steps,
+					st == null ? null : st.coreTargetC(), st == null ? null : st.coreTargetReachedS(), order, timeline);
 		}
 
 	}

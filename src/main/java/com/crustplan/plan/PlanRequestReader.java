@@ -24,10 +24,11 @@ import tools.jackson.databind.json.JsonMapper;
  * of a binding exception. Missing optional fields take the category's defaults. The surface API's
  * save body ({@code name}, {@code notes}, {@code surface}) is read by the same code.
  */
-public final class PlanRequestReader {
+public final class PlanRequestReader implements StepsReader.Fields {
 
+	/** {@code steps} is null for a one-setup plan; a plan in steps may have a core target and no colour. */
 	record PlanRequest(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
-			boolean mitigations) {
+			boolean mitigations, StepsReader.Steps steps, Double coreTargetC) {
 	}
 
 	/**
@@ -97,6 +98,9 @@ public final class PlanRequestReader {
 		if (root == null || !root.isObject()) {
 			throw new BadRequest(List.of(new ApiError.FieldError("body", "must be a JSON object")));
 		}
+		if (root.has("steps")) {
+			return steppedRequest(root);
+		}
 		JsonNode s = object(root, "surface");
 		JsonNode h = object(root, "heat");
 		JsonNode t = object(root, "target");
@@ -113,7 +117,33 @@ public final class PlanRequestReader {
 		}
 		double horizonMinutes = horizon == null ? PlanService.DEFAULT_HORIZON_MINUTES : horizon;
 		// the reducing changes cost a dozen further runs: an API client asks for them
-		return new PlanRequest(surface, product, setup, target, horizonMinutes, mitigations != null && mitigations);
+		return new PlanRequest(surface, product, setup, target, horizonMinutes, mitigations != null && mitigations, null,
+				null);
+	}
+
+	/** A plan in steps: {@code steps} instead of {@code heat}; the target a colour, a core temperature or both. */
+	private PlanRequest steppedRequest(JsonNode root) {
+		if (root.has("heat")) {
+			error("heat", "give either heat (a one-setup plan) or steps, not both");
+		}
+		JsonNode s = object(root, "surface");
+		JsonNode t = object(root, "target");
+		Double horizon = number(root, "horizonMinutes", "horizonMinutes");
+		FoodCategory category = category(s);
+		Surface surface = category == null ? null : surface(s, category);
+		Product product = category == null ? null : product(s, category);
+		double horizonMinutes = horizon == null ? PlanService.DEFAULT_HORIZON_MINUTES : horizon;
+		StepsReader.Steps steps = StepsReader.read(root.get("steps"), category, horizonMinutes, this);
+		Target colour = t == null ? null : StepsReader.colour(t, "target", category, this);
+		Double core = t == null ? null : StepsReader.coreTarget(t, this);
+		if (t != null && colour == null && core == null && !hasErrorUnder("target")) {
+			error("target", "give a stage or lightness, a coreTemperatureC, or both");
+		}
+		if (!errors.isEmpty()) {
+			throw new BadRequest(errors);
+		}
+		return new PlanRequest(surface, product, steps.steps().get(0).setup(), colour, horizonMinutes, false, steps,
+				core);
 	}
 
 	private SurfaceRequest surfaceRequest(JsonNode root) {
@@ -197,28 +227,34 @@ public final class PlanRequestReader {
 	}
 
 	private HeatSetup heat(JsonNode h) {
-		String modeKey = text(h, "mode", "heat.mode");
+		return heat(h, "heat");
+	}
+
+	/** A heat object; its fields' errors are named under {@code at} ("heat", "steps[1].heat"). */
+	@Override
+	public HeatSetup heat(JsonNode h, String at) {
+		String modeKey = text(h, "mode", at + ".mode");
 		HeatMode mode = modeKey == null ? null : HeatMode.byKey(modeKey).orElse(null);
-		if (mode == null && !hasError("heat.mode")) {
-			error("heat.mode", modeKey == null ? "is required: pan, oven, grill or fryer"
+		if (mode == null && !hasError(at + ".mode")) {
+			error(at + ".mode", modeKey == null ? "is required: pan, oven, grill or fryer"
 					: "'" + modeKey + "' is not a mode; use pan, oven, grill or fryer");
 		}
-		Double temperature = number(h, "temperatureC", "heat.temperatureC");
-		if (temperature == null && !hasError("heat.temperatureC")) {
-			error("heat.temperatureC", "is required");
+		Double temperature = number(h, "temperatureC", at + ".temperatureC");
+		if (temperature == null && !hasError(at + ".temperatureC")) {
+			error(at + ".temperatureC", "is required");
 		}
-		Boolean fan = bool(h, "fan", "heat.fan");
-		Boolean fatFilm = bool(h, "fatFilm", "heat.fatFilm");
-		Double rh = number(h, "relativeHumidityPct", "heat.relativeHumidityPct");
-		Double flip = number(h, "flipEverySeconds", "heat.flipEverySeconds");
-		if (mode == null || hasErrorUnder("heat.")) {
+		Boolean fan = bool(h, "fan", at + ".fan");
+		Boolean fatFilm = bool(h, "fatFilm", at + ".fatFilm");
+		Double rh = number(h, "relativeHumidityPct", at + ".relativeHumidityPct");
+		Double flip = number(h, "flipEverySeconds", at + ".flipEverySeconds");
+		if (mode == null || hasErrorUnder(at + ".")) {
 			return null;
 		}
 		try {
 			return HeatSettings.toHeatSetup(mode, temperature, fan, fatFilm, rh, flip);
 		}
 		catch (InvalidInputException e) {
-			error("heat." + e.field(), e.reason());
+			error(at + "." + e.field(), e.reason());
 			return null;
 		}
 	}
@@ -252,7 +288,8 @@ public final class PlanRequestReader {
 	}
 
 	/** A finite number, or null when absent; anything else is a field error. */
-	private Double number(JsonNode parent, String name, String field) {
+	@Override
+	public Double number(JsonNode parent, String name, String field) {
 		JsonNode n = parent.get(name);
 		if (n == null || n.isNull()) {
 			return null;
@@ -279,7 +316,8 @@ public final class PlanRequestReader {
 		return null;
 	}
 
-	private String text(JsonNode parent, String name, String field) {
+	@Override
+	public String text(JsonNode parent, String name, String field) {
 		return text(parent, name, field, 80);
 	}
 
@@ -319,12 +357,18 @@ public final class PlanRequestReader {
 		return v == null ? fallback : v;
 	}
 
-	private void error(String field, String message) {
+	@Override
+	public void error(String field, String message) {
 		errors.add(new ApiError.FieldError(field, message));
 	}
 
 	private boolean hasError(String field) {
 		return errors.stream().anyMatch(e -> e.field().equals(field));
+	}
+
+	@Override
+	public int errorCount() {
+		return errors.size();
 	}
 
 	private boolean hasErrorUnder(String prefix) {
