@@ -202,9 +202,12 @@ final class StepPlanner {
 			else if (r.endedBy() == CookStep.Ending.HORIZON) {
 				out.add(new StepsReport.Checkpoint(r.endS(), "stop", Message.of("timeline.horizon")));
 			}
+			// a rest's carry-over peak; at the very end of the plan the end line says it
+			boolean last = r == records.get(records.size() - 1);
 			if (h instanceof HeatSetup.Rest) {
 				Sample peak = peakCore(series, r.startS(), r.endS());
-				if (peak != null && peak.coreTemperatureC() > coreAt(series, r.startS()) + CARRY_OVER_SHOWN_K) {
+				if (peak != null && peak.coreTemperatureC() > coreAt(series, r.startS()) + CARRY_OVER_SHOWN_K
+						&& !(last && peak.timeS() > r.endS() - 1e-6)) {
 					out.add(new StepsReport.Checkpoint(peak.timeS(), "rest",
 							Message.of("timeline.rest.peak", Temperature.celsius(peak.coreTemperatureC()))));
 				}
