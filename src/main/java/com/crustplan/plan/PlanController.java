@@ -1,7 +1,9 @@
 package com.crustplan.plan;
 
 import java.security.Principal;
+import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.List;
 import java.util.Optional;
 
 import jakarta.validation.Valid;
@@ -53,8 +55,9 @@ class PlanController {
 	}
 
 	@GetMapping("/plan")
-	String plan(@Valid @ModelAttribute("form") PlanForm form, BindingResult result,
+	String plan(@Valid @ModelAttribute("form") PlanForm bound, BindingResult result,
 			@ModelAttribute("units") TemperatureUnit units, Model model) {
+		PlanForm form = bound.inUnit(units);
 		if (form.complete() && !result.hasErrors()) {
 			resolve(form, result).ifPresent(inputs -> compute(inputs, form, result, units, model));
 		}
@@ -86,9 +89,10 @@ class PlanController {
 	}
 
 	@PostMapping("/plans")
-	String save(@Valid @ModelAttribute("form") PlanForm form, BindingResult result,
+	String save(@Valid @ModelAttribute("form") PlanForm bound, BindingResult result,
 			@ModelAttribute("units") TemperatureUnit units, Model model, Principal principal,
 			RedirectAttributes redirect) {
+		PlanForm form = bound.inUnit(units);
 		if (form.name() == null || form.name().isBlank()) {
 			result.rejectValue("name", "required", "give the plan a name to save it");
 		}
@@ -128,8 +132,7 @@ class PlanController {
 		model.addAttribute("saved", plan);
 		try {
 			PlanInputs inputs = saved.inputs(plan);
-			PlanReport report = planner.plan(inputs.surface().toSurface(), inputs.surface().toProduct(),
-					inputs.setup().toHeatSetup(), inputs.target(), inputs.horizonMinutes(), true);
+			PlanReport report = planner.plan(inputs);
 			addReport(model, report, units);
 		}
 		catch (InvalidInputException e) {
@@ -157,7 +160,7 @@ class PlanController {
 		return "redirect:/plans";
 	}
 
-	private record Resolved(PlanInputs inputs, String surfaceName, String setupName) {
+	record Resolved(PlanInputs inputs, String surfaceName, String setupName) {
 	}
 
 	/** The saved surface and setup as engine-ready form values; missing ones become field errors. */
@@ -169,6 +172,9 @@ class PlanController {
 		}
 		catch (NotFoundException e) {
 			result.rejectValue("surfaceId", "missing", "that surface no longer exists; choose another");
+		}
+		if (form.stepped()) {
+			return surface == null ? Optional.empty() : PlanStepsForm.resolve(form, surface, setups, result);
 		}
 		try {
 			setup = setups.get(form.setupId());
@@ -182,6 +188,9 @@ class PlanController {
 		PlanInputs inputs = new PlanInputs(SurfaceForm.of(surface, TemperatureUnit.CELSIUS),
 				SetupForm.of(setup, TemperatureUnit.CELSIUS), form.targetStage(), form.targetLightness(),
 				form.horizonOrDefault());
+		if (form.coreTarget() != null) {
+			inputs = PlanStepsForm.toCore(inputs, setup.getName(), form);
+		}
 		return Optional.of(new Resolved(inputs, surface.getName(), setup.getName()));
 	}
 
@@ -192,8 +201,7 @@ class PlanController {
 	private PlanReport compute(PlanInputs inputs, PlanForm form, BindingResult result, TemperatureUnit units,
 			Model model) {
 		try {
-			PlanReport report = planner.plan(inputs.surface().toSurface(), inputs.surface().toProduct(),
-					inputs.setup().toHeatSetup(), inputs.target(), inputs.horizonMinutes(), true);
+			PlanReport report = planner.plan(inputs);
 			addReport(model, report, units);
 			return report;
 		}
@@ -201,9 +209,13 @@ class PlanController {
 			String field = switch (e.field()) {
 				case "target", "target.stage", "target.lightness" -> form.targetField();
 				case "horizonMinutes" -> "horizonMinutes";
+				case "target.coreTemperatureC" -> "coreTarget";
 				default -> null;
 			};
-			if (field != null) {
+			if (e.field().startsWith("steps[")) {
+				result.reject("engine.steps", PlanStepsForm.stepError(e, inputs));
+			}
+			else if (field != null) {
 				result.rejectValue(field, "engine." + e.field(), e.reason());
 			}
 			else {
@@ -222,6 +234,11 @@ class PlanController {
 
 	private String page(Model model, PlanForm form, BindingResult result) {
 		FormBinding.put(model, form, result);
+		model.addAttribute("stepErrors", PlanStepsForm.bindingErrors(result));
+		// the filled rows and one blank one: without script a cook adds a step by planning again
+		List<StepForm> rows = new ArrayList<>(form.filledSteps());
+		rows.add(new StepForm(null, null, null, null));
+		model.addAttribute("stepRows", rows);
 		model.addAttribute("surfaces", surfaces.all());
 		model.addAttribute("setups", setups.all());
 		model.addAttribute("categories", Arrays.asList(FoodCategory.values()));

@@ -157,6 +157,28 @@ public class PlanService {
 		return StepPlanner.plan(surface, product, steps, labels, colour, coreTargetC, horizonMinutes);
 	}
 
+	/** A saved or page plan's inputs (°C): in steps when it has them, else one setup with its changes worked out. */
+	public PlanReport plan(PlanInputs in) {
+		if (!in.stepped()) {
+			return plan(in.surface().toSurface(), in.surface().toProduct(), in.setup().toHeatSetup(), in.target(),
+					in.horizonMinutes(), true);
+		}
+		List<CookStep> steps = new ArrayList<>();
+		List<String> labels = new ArrayList<>();
+		for (int i = 0; i < in.steps().size(); i++) {
+			PlanStep p = in.steps().get(i);
+			try {
+				steps.add(p.toCookStep(in.horizonMinutes()));
+			}
+			catch (InvalidInputException e) {
+				throw new InvalidInputException("steps[" + i + "]." + e.field(), e.reason());
+			}
+			labels.add(p.label());
+		}
+		return planSteps(in.surface().toSurface(), in.surface().toProduct(), steps, labels, in.colourTarget(),
+				in.coreTargetC(), in.horizonMinutes());
+	}
+
 	private static void checkHorizon(double horizonMinutes) {
 		if (!Double.isFinite(horizonMinutes) || horizonMinutes < 1 || horizonMinutes > MAX_HORIZON_MINUTES) {
 			throw new InvalidInputException("horizonMinutes",
