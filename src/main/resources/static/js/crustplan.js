@@ -97,6 +97,59 @@
     }
     surface.addEventListener('change', filter);
     filter();
+    stepRows(form, surface);
+  }
+
+  // step rows: add and remove without a round trip; names stay steps[0..n-1] so the server reads them in order
+  function stepRows(form, surface) {
+    var box = document.getElementById('steps');
+    if (!box) { return; }
+    var body = box.querySelector('tbody');
+    var add = document.getElementById('add-step');
+    var single = form.elements.setupId ? form.elements.setupId.closest('.field') : null;
+    function renumber() {
+      Array.prototype.forEach.call(body.querySelectorAll('tr.step-row'), function (tr, i) {
+        tr.querySelector('td.n').textContent = String(i + 1);
+        tr.querySelectorAll('[name]').forEach(function (el) {
+          el.name = el.name.replace(/^steps\[\d+]/, 'steps[' + i + ']');
+          el.id = el.id.replace(/^steps\d+/, 'steps' + i);
+        });
+      });
+      var stepped = Array.prototype.some.call(body.querySelectorAll('select.step-setup'), function (s) { return s.value !== ''; });
+      // with steps the one setup above is not used: say so by dimming it
+      if (single) { single.classList.toggle('unused', stepped); }
+    }
+    function stages(tr) {
+      var opt = surface.options[surface.selectedIndex];
+      var cat = opt ? opt.dataset.category : null;
+      tr.querySelectorAll('select.stage-select optgroup').forEach(function (g) {
+        var on = !cat || g.dataset.category === cat;
+        g.hidden = !on;
+        g.disabled = !on;
+      });
+    }
+    add.hidden = false;
+    add.addEventListener('click', function () {
+      var rows = body.querySelectorAll('tr.step-row');
+      var copy = rows[rows.length - 1].cloneNode(true);
+      copy.querySelectorAll('input').forEach(function (i) { i.value = ''; });
+      copy.querySelectorAll('select').forEach(function (s) { s.value = ''; });
+      body.appendChild(copy);
+      renumber();
+      stages(copy);
+      copy.querySelector('select.step-setup').focus();
+    });
+    body.addEventListener('click', function (e) {
+      if (!e.target.classList.contains('remove-step')) { return; }
+      var rows = body.querySelectorAll('tr.step-row');
+      var tr = e.target.closest('tr');
+      if (rows.length > 1) { tr.remove(); } else { tr.querySelectorAll('input, select').forEach(function (x) { x.value = ''; }); }
+      renumber();
+    });
+    body.addEventListener('change', renumber);
+    surface.addEventListener('change', function () { body.querySelectorAll('tr.step-row').forEach(stages); });
+    body.querySelectorAll('tr.step-row').forEach(stages);
+    renumber();
   }
 
   var INK = '#1f2328';
@@ -116,6 +169,34 @@
       borderWidth: 2.5, pointRadius: 0, tension: 0.15 }, extra || {});
   }
 
+  // a plan in steps: one shaded band per step behind the lines, numbered as in the steps table
+  var BAND = { pan: 'rgba(214,140,72,0.22)', oven: 'rgba(86,128,200,0.18)', fryer: 'rgba(214,180,40,0.24)',
+    grill: 'rgba(200,70,70,0.18)', rest: 'rgba(96,150,80,0.18)' };
+
+  function bandsPlugin(bands) {
+    return {
+      id: 'stepBands',
+      beforeDatasetsDraw: function (chart) {
+        var area = chart.chartArea, xs = chart.scales.x, ctx = chart.ctx;
+        ctx.save();
+        bands.forEach(function (b) {
+          var from = xs.getPixelForValue(b.fromMin), to = xs.getPixelForValue(b.toMin);
+          ctx.fillStyle = BAND[b.mode] || 'rgba(0,0,0,0.06)';
+          ctx.fillRect(from, area.top, to - from, area.bottom - area.top);
+          ctx.strokeStyle = 'rgba(31,35,40,0.35)';
+          ctx.beginPath(); ctx.moveTo(from, area.top); ctx.lineTo(from, area.bottom); ctx.stroke();
+          // the name where it fits, else the step's number
+          ctx.fillStyle = INK;
+          ctx.font = '600 11px ' + Chart.defaults.font.family;
+          var text = b.label;
+          if (ctx.measureText(text).width > to - from - 6) { text = b.label.split(' ')[0]; }
+          if (ctx.measureText(text).width <= to - from - 4) { ctx.fillText(text, from + 3, area.top + 12); }
+        });
+        ctx.restore();
+      }
+    };
+  }
+
   function charts() {
     var box = document.getElementById('charts');
     if (!box || !box.dataset.plan || typeof Chart === 'undefined') { return; }
@@ -127,6 +208,7 @@
       plugins: { legend: { position: 'bottom', labels: { boxWidth: 14, color: INK } } } };
     var x = axis('Time (min)', { type: 'linear', min: 0, max: t.length ? t[t.length - 1] : undefined });
     var targetX = d.targetTimeMin;
+    var plugins = d.steps ? [bandsPlugin(d.steps)] : [];
     var marker = function (ys, label) {
       if (targetX === null || targetX === undefined) { return []; }
       return [{ type: 'scatter', label: label, data: [{ x: targetX, y: ys }], pointRadius: 6, pointStyle: 'rectRot',
@@ -146,7 +228,8 @@
     new Chart(document.getElementById('chart-temperature'), {
       type: 'line',
       data: { datasets: temperatures },
-      options: Object.assign({}, common, { scales: { x: x, y: axis('Temperature (' + d.unit + ')') } })
+      options: Object.assign({}, common, { scales: { x: x, y: axis('Temperature (' + d.unit + ')') } }),
+      plugins: plugins
     });
 
     var target = t.map(function () { return d.targetBrowningPct; });
@@ -158,14 +241,17 @@
         line('Lightness L*', t, d.lightness, '#6b7280', { yAxisID: 'l', borderWidth: 1.5 })
       ].concat(marker(d.targetBrowningPct, 'Target reached')) },
       options: Object.assign({}, common, { scales: { x: x, y: axis('Browning (%)', { min: 0, max: 100 }),
-        l: axis('L*', { position: 'right', min: 0, max: 100, grid: { drawOnChartArea: false } }) } })
+        l: axis('L*', { position: 'right', min: 0, max: 100, grid: { drawOnChartArea: false } }) } }),
+      plugins: plugins
     });
 
     new Chart(document.getElementById('chart-water'), {
       type: 'line',
       data: { datasets: [line('Water activity at the surface', t, d.surfaceWaterActivity, '#0f766e', { fill: false })] },
-      options: Object.assign({}, common, { scales: { x: x, y: axis('Water activity a_w (0–1)', { min: 0, max: 1 }) } })
+      options: Object.assign({}, common, { scales: { x: x, y: axis('Water activity a_w (0–1)', { min: 0, max: 1 }) } }),
+      plugins: plugins
     });
+    box.dataset.bands = String(d.steps ? d.steps.length : 0);
     box.dataset.rendered = 'true';
   }
 

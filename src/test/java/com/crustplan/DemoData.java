@@ -2,6 +2,7 @@ package com.crustplan;
 
 import org.springframework.stereotype.Component;
 
+import com.crustplan.plan.SavedPlanRepository;
 import com.crustplan.setup.SetupRepository;
 import com.crustplan.surface.SurfaceRepository;
 
@@ -13,9 +14,16 @@ public class DemoData {
 
 	private final SetupRepository setups;
 
-	DemoData(SurfaceRepository surfaces, SetupRepository setups) {
+	private final SavedPlanRepository plans;
+
+	DemoData(SurfaceRepository surfaces, SetupRepository setups, SavedPlanRepository plans) {
 		this.surfaces = surfaces;
 		this.setups = setups;
+		this.plans = plans;
+	}
+
+	public long plan(String name) {
+		return plans.findAll().stream().filter(p -> p.getName().equals(name)).findFirst().orElseThrow().getId();
 	}
 
 	public long surface(String name) {

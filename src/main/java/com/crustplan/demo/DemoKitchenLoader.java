@@ -2,6 +2,7 @@ package com.crustplan.demo;
 
 import java.io.IOException;
 import java.io.InputStream;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 
@@ -19,9 +20,17 @@ import org.springframework.stereotype.Component;
 import org.springframework.transaction.support.TransactionTemplate;
 
 import com.crustplan.engine.input.InvalidInputException;
+import com.crustplan.plan.PlanInputs;
+import com.crustplan.plan.PlanReport;
+import com.crustplan.plan.PlanService;
+import com.crustplan.plan.PlanStep;
+import com.crustplan.plan.SavedPlanService;
+import com.crustplan.setup.SavedSetup;
 import com.crustplan.setup.SetupForm;
 import com.crustplan.setup.SetupService;
+import com.crustplan.surface.SavedSurface;
 import com.crustplan.surface.SurfaceForm;
+import com.crustplan.system.TemperatureUnit;
 import com.crustplan.surface.SurfaceService;
 import com.crustplan.user.UserAccount;
 import com.crustplan.user.UserAccountRepository;
@@ -41,7 +50,16 @@ class DemoKitchenLoader implements ApplicationRunner {
 
 	static final String FILE = "templates-demo/kitchen.yaml";
 
-	record DemoKitchen(String kitchen, List<SurfaceForm> surfaces, List<SetupForm> setups) {
+	record DemoKitchen(String kitchen, List<SurfaceForm> surfaces, List<SetupForm> setups, List<DemoPlan> plans) {
+	}
+
+	/** A saved plan in steps: names of the surface and setups above; temperatures in °C. */
+	record DemoPlan(String name, String surface, String targetStage, Double coreTargetC, Double horizonMinutes,
+			List<DemoStep> steps) {
+	}
+
+	/** A step: a setup's name, or {@code rest} (the air's °C); it ends after minutes, at a stage or a core °C. */
+	record DemoStep(String setup, Double rest, Double minutes, String stage, Double coreC) {
 	}
 
 	private static final Logger log = LoggerFactory.getLogger(DemoKitchenLoader.class);
@@ -58,10 +76,17 @@ class DemoKitchenLoader implements ApplicationRunner {
 
 	private final TransactionTemplate tx;
 
+	private final PlanService planner;
+
+	private final SavedPlanService plans;
+
 	DemoKitchenLoader(SurfaceService surfaces, SetupService setups, UserAccountRepository users,
-			PasswordEncoder encoder, Validator validator, TransactionTemplate tx) {
+			PasswordEncoder encoder, Validator validator, TransactionTemplate tx, PlanService planner,
+			SavedPlanService plans) {
 		this.surfaces = surfaces;
 		this.setups = setups;
+		this.planner = planner;
+		this.plans = plans;
 		this.users = users;
 		this.encoder = encoder;
 		this.validator = validator;
@@ -100,9 +125,51 @@ class DemoKitchenLoader implements ApplicationRunner {
 					throw new IllegalStateException(FILE + ": setups[" + i + "] " + e.getMessage(), e);
 				}
 			}
-			log.info("Demo kitchen '{}' loaded: {} surfaces, {} setups", k.kitchen(), k.surfaces().size(),
-					k.setups().size());
+			List<DemoPlan> demoPlans = k.plans() == null ? List.of() : k.plans();
+			for (int i = 0; i < demoPlans.size(); i++) {
+				savePlan(demoPlans.get(i), "plans[" + i + "] (" + demoPlans.get(i).name() + ")");
+			}
+			log.info("Demo kitchen '{}' loaded: {} surfaces, {} setups, {} plans", k.kitchen(), k.surfaces().size(),
+					k.setups().size(), demoPlans.size());
 		});
+	}
+
+	/** Runs a demo plan like a cook's and saves it; a step or name the kitchen lacks stops the load. */
+	private void savePlan(DemoPlan p, String where) {
+		SavedSurface surface = surfaces.all()
+			.stream()
+			.filter(s -> s.getName().equals(p.surface()))
+			.findFirst()
+			.orElseThrow(() -> new IllegalStateException(FILE + ": " + where + " no surface '" + p.surface() + "'"));
+		List<PlanStep> steps = new ArrayList<>();
+		List<String> names = new ArrayList<>();
+		SetupForm first = null;
+		for (DemoStep d : p.steps()) {
+			if (d.setup() == null) {
+				steps.add(new PlanStep(null, null, d.rest(), d.minutes(), d.stage(), null, d.coreC()));
+				names.add("Rest");
+				continue;
+			}
+			SavedSetup setup = setups.all()
+				.stream()
+				.filter(s -> s.getName().equals(d.setup()))
+				.findFirst()
+				.orElseThrow(() -> new IllegalStateException(FILE + ": " + where + " no setup '" + d.setup() + "'"));
+			SetupForm f = SetupForm.of(setup, TemperatureUnit.CELSIUS);
+			first = first == null ? f : first;
+			steps.add(new PlanStep(f, setup.getName(), null, d.minutes(), d.stage(), null, d.coreC()));
+			names.add(setup.getName());
+		}
+		PlanInputs inputs = new PlanInputs(SurfaceForm.of(surface, TemperatureUnit.CELSIUS), first, p.targetStage(), null,
+				p.horizonMinutes() == null ? PlanService.DEFAULT_HORIZON_MINUTES : p.horizonMinutes(), steps,
+				p.coreTargetC());
+		try {
+			PlanReport report = planner.plan(inputs);
+			plans.save(p.name(), surface.getName(), String.join(" → ", names), inputs, report, null);
+		}
+		catch (InvalidInputException e) {
+			throw new IllegalStateException(FILE + ": " + where + " " + e.getMessage(), e);
+		}
 	}
 
 	static DemoKitchen read() {

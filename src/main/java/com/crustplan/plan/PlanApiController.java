@@ -3,6 +3,7 @@ package com.crustplan.plan;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 
 import org.springframework.http.MediaType;
@@ -81,17 +82,23 @@ class PlanApiController {
 
 	@PostMapping("/plans")
 	ResponseEntity<PlanResponse> plan(@RequestBody(required = false) Bound<PlanBody> body) {
-		PlanBody.PlanRequest req = Bound.present(body, "send a JSON object with surface, heat and target")
+		PlanBody.PlanRequest req = Bound.present(body, "send a JSON object with surface, heat (or steps) and target")
 			.check(PlanBody::toRequest);
 		try {
-			PlanReport r = planner.plan(req.surface(), req.product(), req.setup(), req.target(), req.horizonMinutes(),
-					req.mitigations());
-			return ResponseEntity.ok().contentType(MediaType.APPLICATION_JSON).body(PlanResponse.of(r, text, req.deprecations()));
+			PlanReport r = req.steps() != null
+					? planner.planSteps(req.surface(), req.product(), req.steps().steps(), req.steps().labels(),
+							req.target(), req.coreTargetC(), req.horizonMinutes())
+					: planner.plan(req.surface(), req.product(), req.setup(), req.target(), req.horizonMinutes(),
+							req.mitigations());
+			return ResponseEntity.ok()
+				.contentType(MediaType.APPLICATION_JSON)
+				.body(PlanResponse.of(r, text, req.deprecations()));
 		}
 		catch (InvalidInputException e) {
 			// the planner's checks (horizon, a lightness the path never reaches) in the request's terms
 			String f = e.field();
-			String field = f.startsWith("target") || f.equals("horizonMinutes") || f.contains(".") ? f : "input." + f;
+			String field = f.startsWith("target") || f.startsWith("steps") || f.equals("horizonMinutes")
+					|| f.contains(".") ? f : "input." + f;
 			throw InvalidRequestException.of(field, e.reason());
 		}
 	}
@@ -122,10 +129,28 @@ class PlanApiController {
 	record Warning(String code, String message) {
 	}
 
+	/** One step as run: from and to (s from the start), what ended it, and the food at its end. */
+	record StepOut(int index, String mode, double temperatureC, double startS, double endS, String endedBy,
+			double coreAtEndC, double surfaceAtEndC) {
+	}
+
+	/** Which target came first and by how much (s); the text says it, or which target was missed. */
+	record TargetOrder(String first, Double leadS, String text) {
+	}
+
+	record Checkpoint(double atS, String kind, String text) {
+	}
+
+	/** The answer; a plan in steps adds its steps, core target, target order and timeline (absent otherwise). */
 	record PlanResponse(boolean reached, String outcome, Double timeToTargetS, @JsonProperty("pH") double ph,
 			Double coreTemperatureAtTargetC, String target, String targetColorHex, Acrylamide acrylamide,
 			Series series, List<Warning> warnings, List<String> cautions, List<String> assumptions,
-			List<String> deprecations) {
+			@JsonInclude(JsonInclude.Include.NON_EMPTY) List<String> deprecations,
+			@JsonInclude(JsonInclude.Include.NON_NULL) List<StepOut> steps,
+			@JsonInclude(JsonInclude.Include.NON_NULL) Double coreTargetC,
+			@JsonInclude(JsonInclude.Include.NON_NULL) Double coreTargetReachedS,
+			@JsonInclude(JsonInclude.Include.NON_NULL) TargetOrder targets,
+			@JsonInclude(JsonInclude.Include.NON_NULL) List<Checkpoint> timeline) {
 
 		static PlanResponse of(PlanReport r, MessageText text, List<String> deprecations) {
 			List<Double> t = new ArrayList<>();
@@ -147,13 +172,29 @@ class PlanApiController {
 				hex.add(s.colourHex());
 			}
 			AcrylamideView a = r.acrylamide();
+			StepsReport st = r.steps();
+			List<StepOut> steps = null;
+			List<Checkpoint> timeline = null;
+			TargetOrder order = null;
+			if (st != null) {
+				steps = st.records()
+					.stream()
+					.map(x -> new StepOut(x.index(), st.steps().get(x.index()).setup().mode(),
+							st.steps().get(x.index()).setup().temperatureC(), x.startS(), x.endS(),
+							x.endedBy().name().toLowerCase(Locale.ROOT), x.coreAtEndC(), x.surfaceAtEndC()))
+					.toList();
+				timeline = st.timeline().stream().map(c -> new Checkpoint(c.timeS(), c.kind(), text.celsius(c.text()))).toList();
+				order = new TargetOrder(st.firstTarget(), st.firstTargetLeadS(),
+						st.targetOrder() == null ? null : text.celsius(st.targetOrder()));
+			}
 			return new PlanResponse(r.reached(), text.celsius(r.result().explanation()), r.timeToTargetS(),
 					r.surface().ph(), r.coreTemperatureAtTargetC(), text.celsius(r.targetLabel()), r.targetHex(),
 					new Acrylamide(a.crustUgPerKg(), a.portionUgPerKg(), a.benchmarkUgPerKg(), a.zone(), a.product(),
 							text.celsius(a.basis()), a.mitigations().stream().map(m -> Change.of(m, text)).toList()),
 					new Series(t, surface, core, aw, lightness, hex, hasBody ? source : null),
 					r.warnings().stream().map(w -> new Warning(w.code(), text.celsius(w.message()))).toList(),
-					text.celsius(r.cautions()), text.celsius(r.result().assumptions()), deprecations);
+					text.celsius(r.cautions()), text.celsius(r.result().assumptions()), deprecations, steps,
+					st == null ? null : st.coreTargetC(), st == null ? null : st.coreTargetReachedS(), order, timeline);
 		}
 
 	}

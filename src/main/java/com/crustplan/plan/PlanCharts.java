@@ -5,7 +5,9 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import com.crustplan.engine.cook.CookStep;
 import com.crustplan.engine.cook.Sample;
+import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.system.TemperatureUnit;
 
 /** The series the plan page's charts draw, temperatures in the cook's unit, times in minutes. */
@@ -51,7 +53,25 @@ final class PlanCharts {
 		}
 		d.put("targetBrowningPct", round(report.result().targetExtent() * 100, 2));
 		d.put("targetTimeMin", report.timeToTargetS() == null ? null : round(report.timeToTargetS() / 60, 3));
+		if (report.stepped()) {
+			d.put("steps", bands(report.steps(), unit));
+		}
 		return d;
+	}
+
+	/** One shaded band per step: from and to in minutes, and what the cook calls it. */
+	static List<Map<String, Object>> bands(StepsReport steps, TemperatureUnit unit) {
+		List<Map<String, Object>> out = new ArrayList<>();
+		for (CookStep.Record r : steps.records()) {
+			HeatSetup h = steps.steps().get(r.index()).setup();
+			Map<String, Object> b = new LinkedHashMap<>();
+			b.put("fromMin", round(r.startS() / 60, 3));
+			b.put("toMin", round(r.endS() / 60, 3));
+			b.put("mode", h.mode());
+			b.put("label", (r.index() + 1) + " " + steps.labels().get(r.index()) + " · " + unit.format(h.temperatureC()));
+			out.add(b);
+		}
+		return out;
 	}
 
 	/** Nulls for NaN so the JSON stays valid and Chart.js leaves a gap. */

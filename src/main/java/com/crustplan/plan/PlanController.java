@@ -1,7 +1,9 @@
 package com.crustplan.plan;
 
 import java.security.Principal;
+import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.List;
 import java.util.Optional;
 
 import tools.jackson.core.JacksonException;
@@ -60,8 +62,9 @@ class PlanController {
 	}
 
 	@GetMapping("/plan")
-	String plan(@Valid @ModelAttribute("form") PlanForm form, BindingResult result,
+	String plan(@Valid @ModelAttribute("form") PlanForm bound, BindingResult result,
 			@ModelAttribute("units") TemperatureUnit units, Model model) {
+		PlanForm form = bound.inUnit(units);
 		if (form.complete() && !result.hasErrors()) {
 			resolve(form, result).ifPresent(inputs -> compute(inputs, form, result, units, model));
 		}
@@ -93,11 +96,12 @@ class PlanController {
 	}
 
 	@PostMapping("/plans")
-	String save(@Valid @ModelAttribute("form") PlanForm form, BindingResult result,
+	String save(@Valid @ModelAttribute("form") PlanForm bound, BindingResult result,
 			@RequestParam(name = "formToken", required = false) String token,
 			@ModelAttribute("units") TemperatureUnit units, Model model, Principal principal,
 			RedirectAttributes redirect) {
 		model.addAttribute("formToken", FormTokens.keep(token));
+		PlanForm form = bound.inUnit(units);
 		// a name refused while binding (a control character) already has its error, and no target to reject on
 		if ((form.name() == null || form.name().isBlank()) && !result.hasFieldErrors("name")) {
 			result.rejectValue("name", "required", "give the plan a name to save it");
@@ -140,8 +144,7 @@ class PlanController {
 		model.addAttribute("saved", plan);
 		try {
 			PlanInputs inputs = saved.inputs(plan);
-			PlanReport report = planner.plan(inputs.surface().toSurface(), inputs.surface().toProduct(),
-					inputs.setup().toHeatSetup(), inputs.target(), inputs.horizonMinutes(), true);
+			PlanReport report = planner.plan(inputs);
 			addReport(model, report, units);
 		}
 		catch (InvalidInputException e) {
@@ -176,7 +179,7 @@ class PlanController {
 		return "redirect:/plans";
 	}
 
-	private record Resolved(PlanInputs inputs, String surfaceName, String setupName) {
+	record Resolved(PlanInputs inputs, String surfaceName, String setupName) {
 	}
 
 	/** The saved surface and setup as engine-ready form values; missing ones become field errors. */
@@ -188,6 +191,9 @@ class PlanController {
 		}
 		catch (NotFoundException e) {
 			result.rejectValue("surfaceId", "missing", "that surface no longer exists; choose another");
+		}
+		if (form.stepped()) {
+			return surface == null ? Optional.empty() : PlanStepsForm.resolve(form, surface, setups, result);
 		}
 		try {
 			setup = setups.get(form.setupId());
@@ -201,6 +207,9 @@ class PlanController {
 		PlanInputs inputs = new PlanInputs(SurfaceForm.of(surface, TemperatureUnit.CELSIUS),
 				SetupForm.of(setup, TemperatureUnit.CELSIUS), form.targetStage(), form.targetLightness(),
 				form.horizonOrDefault());
+		if (form.coreTarget() != null) {
+			inputs = PlanStepsForm.toCore(inputs, setup.getName(), form);
+		}
 		return Optional.of(new Resolved(inputs, surface.getName(), setup.getName()));
 	}
 
@@ -211,8 +220,7 @@ class PlanController {
 	private PlanReport compute(PlanInputs inputs, PlanForm form, BindingResult result, TemperatureUnit units,
 			Model model) {
 		try {
-			PlanReport report = planner.plan(inputs.surface().toSurface(), inputs.surface().toProduct(),
-					inputs.setup().toHeatSetup(), inputs.target(), inputs.horizonMinutes(), true);
+			PlanReport report = planner.plan(inputs);
 			addReport(model, report, units);
 			return report;
 		}
@@ -220,9 +228,13 @@ class PlanController {
 			String field = switch (e.field()) {
 				case "target", "target.stage", "target.lightness" -> form.targetField();
 				case "horizonMinutes" -> "horizonMinutes";
+				case "target.coreTemperatureC" -> "coreTarget";
 				default -> null;
 			};
-			if (field != null) {
+			if (e.field().startsWith("steps[")) {
+				result.reject("engine.steps", PlanStepsForm.stepError(e, inputs));
+			}
+			else if (field != null) {
 				result.rejectValue(field, "engine." + e.field(), e.reason());
 			}
 			else {
@@ -244,6 +256,11 @@ class PlanController {
 		if (!model.containsAttribute("formToken")) {
 			model.addAttribute("formToken", FormTokens.issue());
 		}
+		model.addAttribute("stepErrors", PlanStepsForm.bindingErrors(result));
+		// the filled rows and one blank one: without script a cook adds a step by planning again
+		List<StepForm> rows = new ArrayList<>(form.filledSteps());
+		rows.add(new StepForm(null, null, null, null));
+		model.addAttribute("stepRows", rows);
 		model.addAttribute("surfaces", surfaces.all());
 		model.addAttribute("setups", setups.all());
 		model.addAttribute("categories", Arrays.asList(FoodCategory.values()));

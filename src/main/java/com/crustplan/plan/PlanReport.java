@@ -8,22 +8,40 @@ import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.message.Message;
 
-/** Everything a plan page or the API shows, computed once by {@link PlanService}. */
+/**
+ * Everything a plan page or the API shows, computed once by {@link PlanService}. A plan in steps carries
+ * its {@link StepsReport} ({@code setup} is then the first step's); a one-setup plan has none.
+ */
 public record PlanReport(Surface surface, HeatSetup setup, Message targetLabel, double horizonMinutes,
 		CookResult result, List<PlanWarning> warnings, List<Message> cautions, AcrylamideView acrylamide,
-		List<Swatch> swatches) {
+		List<Swatch> swatches, StepsReport steps) {
+
+	/** A one-setup plan. */
+	public PlanReport(Surface surface, HeatSetup setup, Message targetLabel, double horizonMinutes, CookResult result,
+			List<PlanWarning> warnings, List<Message> cautions, AcrylamideView acrylamide, List<Swatch> swatches) {
+		this(surface, setup, targetLabel, horizonMinutes, result, warnings, cautions, acrylamide, swatches, null);
+	}
+
+	public boolean stepped() {
+		return steps != null;
+	}
+
+	/** A plan in steps aimed at a core temperature only: its target is the core's. */
+	private boolean coreOnly() {
+		return steps != null && Double.isNaN(result.targetExtent());
+	}
 
 	public FoodCategory category() {
 		return surface.category();
 	}
 
 	public boolean reached() {
-		return result.reached();
+		return coreOnly() ? steps.result().coreReached() : result.reached();
 	}
 
-	/** Seconds to the target colour, or null when it is not reached. */
+	/** Seconds to the target colour (to the core target where that is the only one), or null when not reached. */
 	public Double timeToTargetS() {
-		return finite(result.timeToTargetS());
+		return coreOnly() ? steps.coreTargetReachedS() : finite(result.timeToTargetS());
 	}
 
 	public Double coreTemperatureAtTargetC() {

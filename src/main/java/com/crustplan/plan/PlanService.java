@@ -18,6 +18,7 @@ import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.cook.CookResult;
 import com.crustplan.engine.cook.CookSettings;
 import com.crustplan.engine.cook.Outcome;
+import com.crustplan.engine.cook.CookStep;
 import com.crustplan.engine.assessment.AcrylamideCook;
 import com.crustplan.engine.cook.Sample;
 import com.crustplan.engine.cook.Target;
@@ -130,7 +131,7 @@ public class PlanService {
 		return Optional.empty();
 	}
 
-	private static List<PlanWarning> warnings(Surface surface, HeatSetup setup, CookResult result) {
+	static List<PlanWarning> warnings(Surface surface, HeatSetup setup, CookResult result) {
 		List<PlanWarning> w = new ArrayList<>();
 		if (!result.reached()) {
 			w.add(new PlanWarning("target-not-reached", Message.of("warning.target-not-reached", result.explanation())));
@@ -146,7 +147,7 @@ public class PlanService {
 		return w;
 	}
 
-	private static List<Message> cautions(Surface surface, HeatSetup setup) {
+	static List<Message> cautions(Surface surface, HeatSetup setup) {
 		List<Message> c = new ArrayList<>();
 		c.add(Message.of("caution.joined", AcrylamideCautions.CARCINOGEN, AcrylamideCautions.ESTIMATE));
 		c.add(Message.of("caution.probe"));
@@ -163,6 +164,51 @@ public class PlanService {
 			c.add(Message.of("caution.bicarbonate"));
 		}
 		return c;
+	}
+
+	/**
+	 * A plan in steps (sear, oven, rest): each step a heat setup held until its end; the targets, a colour
+	 * and a core temperature (either may be null, not both), are recorded where they are reached.
+	 * Acrylamide is estimated without the reducing changes, which are worked out for one setup.
+	 *
+	 * @param labels each step's name for the page (a setup's name, "Rest")
+	 */
+	public PlanReport planSteps(Surface surface, Product product, List<CookStep> steps, List<String> labels,
+			Target colour, Double coreTargetC, double horizonMinutes) {
+		checkHorizon(horizonMinutes);
+		if (steps.isEmpty()) {
+			throw new InvalidInputException("steps", "a plan needs at least one step");
+		}
+		return StepPlanner.plan(surface, product, steps, labels, colour, coreTargetC, horizonMinutes);
+	}
+
+	/** A saved or page plan's inputs (°C): in steps when it has them, else one setup with its changes worked out. */
+	public PlanReport plan(PlanInputs in) {
+		if (!in.stepped()) {
+			return plan(in.surface().toSurface(), in.surface().toProduct(), in.setup().toHeatSetup(), in.target(),
+					in.horizonMinutes(), true);
+		}
+		List<CookStep> steps = new ArrayList<>();
+		List<String> labels = new ArrayList<>();
+		for (int i = 0; i < in.steps().size(); i++) {
+			PlanStep p = in.steps().get(i);
+			try {
+				steps.add(p.toCookStep(in.horizonMinutes()));
+			}
+			catch (InvalidInputException e) {
+				throw new InvalidInputException("steps[" + i + "]." + e.field(), e.reason());
+			}
+			labels.add(p.label());
+		}
+		return planSteps(in.surface().toSurface(), in.surface().toProduct(), steps, labels, in.colourTarget(),
+				in.coreTargetC(), in.horizonMinutes());
+	}
+
+	private static void checkHorizon(double horizonMinutes) {
+		if (!Double.isFinite(horizonMinutes) || horizonMinutes < 1 || horizonMinutes > MAX_HORIZON_MINUTES) {
+			throw new InvalidInputException("horizonMinutes",
+					String.format(Locale.ROOT, "must be from 1 to %.0f minutes", MAX_HORIZON_MINUTES));
+		}
 	}
 
 	/** Most time columns on the risk map: readable on a tablet. */

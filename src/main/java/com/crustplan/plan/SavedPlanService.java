@@ -30,11 +30,15 @@ public class SavedPlanService {
 	@Transactional
 	public SavedPlan save(String name, String surfaceName, String setupName, PlanInputs inputs, PlanReport report,
 			String username) {
+		// steps hold their setups' values in °C already (PlanStepsForm copies them so)
 		PlanInputs celsius = new PlanInputs(inputs.surface().inUnit(TemperatureUnit.CELSIUS),
-				inputs.setup().inUnit(TemperatureUnit.CELSIUS), inputs.targetStage(), inputs.targetLightness(),
-				inputs.horizonMinutes());
+				inputs.setup() == null ? null : inputs.setup().inUnit(TemperatureUnit.CELSIUS), inputs.targetStage(),
+				inputs.targetLightness(), inputs.horizonMinutes(), inputs.steps(), inputs.coreTargetC());
 		// the label is kept as text for the list of plans; a target is a stage or an L*, never a temperature
-		return plans.save(new SavedPlan(name.trim(), surfaceName, setupName, text.celsius(report.targetLabel()),
+		// a core-only target would be a temperature in °C: the list names it without the figure
+		String label = "target.core".equals(report.targetLabel().code()) ? "Core temperature"
+				: text.celsius(report.targetLabel());
+		return plans.save(new SavedPlan(name.trim(), surfaceName, setupName, label,
 				json.writeValueAsString(celsius), report.reached(), report.timeToTargetS(), username));
 	}
 

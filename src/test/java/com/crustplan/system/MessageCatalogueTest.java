@@ -107,6 +107,7 @@ class MessageCatalogueTest {
 		sample("outcome.explained", m("outcome.too-cool"), c(128), PlainNumber.of(0.42, 2), Duration.minutes(9));
 		sample("target.stage", Text.of("Golden"));
 		sample("target.lightness", PlainNumber.of(62, 0));
+		sample("target.core", c(52));
 		sample("exchange.kitchen-air");
 		sample("exchange.wet-bulb");
 		sample("exchange.pan", c(213), q(300, "W/m²K"));
@@ -216,6 +217,27 @@ class MessageCatalogueTest {
 		sample("caution.hot-oil");
 		sample("caution.hot-pan");
 		sample("caution.bicarbonate");
+		sample("warning.core-target-not-reached", c(74), c(68));
+		sample("targets.colour-first", m("target.stage", Text.of("golden")), Duration.seconds(95), c(52));
+		sample("targets.core-first", m("target.stage", Text.of("golden")), Duration.minutes(4), c(52));
+		sample("targets.core-not-reached", m("target.stage", Text.of("golden")), c(52));
+		sample("targets.colour-not-reached", c(52), m("target.stage", Text.of("golden")));
+		sample("targets.neither", m("target.stage", Text.of("golden")), c(52));
+		sample("targets.colour-missed", m("target.stage", Text.of("golden")));
+		sample("targets.core-missed", c(52));
+		sample("timeline.into.pan", c(240));
+		sample("timeline.into.oven", c(180));
+		sample("timeline.into.grill", c(800));
+		sample("timeline.into.fryer", c(140));
+		sample("timeline.into.rest", c(22));
+		sample("timeline.flip");
+		sample("timeline.flips", Duration.seconds(60), PlainNumber.of(12, 0));
+		sample("timeline.probe", c(47), c(52));
+		sample("timeline.pull.core", c(52));
+		sample("timeline.pull.colour", m("target.stage", Text.of("golden")));
+		sample("timeline.horizon");
+		sample("timeline.rest.peak", c(55));
+		sample("timeline.end", c(55), c(41));
 	}
 
 	/** Codes named where messages are made: the first argument of every Message.of in main code. */
