@@ -35,7 +35,10 @@ final class CollectingDeserializers {
 		return m;
 	}
 
-	/** The value's place in the request, dotted as the API names fields: {@code surface.waterPct}. */
+	/**
+	 * The value's place in the request, dotted as the API names fields ({@code surface.waterPct}), list
+	 * elements by their index ({@code steps[2].minutes}).
+	 */
 	static String path(JsonParser p) {
 		TokenStreamContext c = p.streamReadContext();
 		if (p.currentToken() == JsonToken.START_OBJECT || p.currentToken() == JsonToken.START_ARRAY) {
@@ -44,9 +47,23 @@ final class CollectingDeserializers {
 		}
 		Deque<String> names = new ArrayDeque<>();
 		for (; c != null && !c.inRoot(); c = c.getParent()) {
-			names.push(c.inObject() ? String.valueOf(c.currentName()) : String.valueOf(c.getCurrentIndex()));
+			if (c.inObject()) {
+				names.push(String.valueOf(c.currentName()));
+			}
+			else {
+				// an element of a list: its index belongs to the list's name
+				String index = "[" + Math.max(0, c.getCurrentIndex()) + "]";
+				names.push(names.isEmpty() ? index : index + "." + names.pop());
+			}
 		}
-		return names.isEmpty() ? "body" : String.join(".", names);
+		if (names.isEmpty()) {
+			return "body";
+		}
+		StringBuilder out = new StringBuilder();
+		for (String n : names) {
+			out.append(out.length() == 0 || n.startsWith("[") ? "" : ".").append(n);
+		}
+		return out.toString();
 	}
 
 	private static <T> T reject(JsonParser p, DeserializationContext ctxt, String message) {

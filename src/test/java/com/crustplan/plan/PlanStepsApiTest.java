@@ -131,7 +131,7 @@ class PlanStepsApiTest {
 			"\"minutes\": 5 }|\"minutes\": \"five\" }|steps[2].minutes",
 			"\"minutes\": 5 }|\"stage\": \"golden\" }|steps[2].stage",
 			"\"minutes\": 5 }|\"coreTemperatureC\": 300 }|steps[2].coreTemperatureC",
-			"\"minutes\": 5 }|\"heat\": 1 }|steps[2].heat",
+			"{ \"mode\": \"rest\" }, \"minutes\": 5|1, \"minutes\": 5|steps[2].heat",
 			"{ \"mode\": \"rest\" }, \"minutes\": 5|{ \"mode\": \"rest\", \"temperatureC\": 90 }, \"minutes\": 5|steps[2].heat.temperatureC",
 			"\"temperatureC\": 240|\"temperatureC\": 400|steps[0].heat.temperatureC",
 			"\"mode\": \"oven\"|\"mode\": \"kiln\"|steps[1].heat.mode",
