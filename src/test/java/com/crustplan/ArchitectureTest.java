@@ -46,15 +46,19 @@ class ArchitectureTest {
 		.areAnnotatedWith(jakarta.persistence.Entity.class);
 
 	/**
-	 * The feature packages (surface, setup, plan, user, demo, model, api) and system import each other in one
-	 * direction only. The engine counts as one slice here; its sub-packages have their own rule.
+	 * The feature packages (surface, setup, plan, user, demo, model, api) and system
+	 * import each other in one direction only. The engine counts as one slice here; its
+	 * sub-packages have their own rule.
 	 */
 	@ArchTest
 	static final ArchRule featurePackagesAreFreeOfCycles = slices().matching("com.crustplan.(*)..")
 		.should()
 		.beFreeOfCycles();
 
-	/** system is the cross-cutting base (security, units, form binding, errors): it knows no feature. */
+	/**
+	 * system is the cross-cutting base (security, units, form binding, errors): it knows
+	 * no feature.
+	 */
 	@ArchTest
 	static final ArchRule systemImportsNoFeature = noClasses().that()
 		.resideInAPackage("com.crustplan.system..")

@@ -11,8 +11,9 @@ import org.springframework.context.annotation.Import;
 import org.springframework.test.context.ActiveProfiles;
 
 /**
- * The one test configuration every Spring test uses, so the context (about 8 s to start) is built
- * once and shared: a real server on a random port for the browser tests, and MockMvc for the rest.
+ * The one test configuration every Spring test uses, so the context (about 8 s to start)
+ * is built once and shared: a real server on a random port for the browser tests, and
+ * MockMvc for the rest.
  */
 @Target(ElementType.TYPE)
 @Retention(RetentionPolicy.RUNTIME)
@@ -21,4 +22,5 @@ import org.springframework.test.context.ActiveProfiles;
 @ActiveProfiles("test")
 @Import({ SecurityMockMvc.class, DemoData.class })
 public @interface CrustplanTest {
+
 }

@@ -21,8 +21,8 @@ import tools.jackson.databind.json.JsonMapper;
 
 /**
  * How the JSON API ({@code /api/**}) reads requests and answers: bodies bound by
- * {@link BoundBodyConverter}, a size limit in front of everything else, and JSON whatever the Accept
- * header asks for.
+ * {@link BoundBodyConverter}, a size limit in front of everything else, and JSON whatever
+ * the Accept header asks for.
  */
 @Configuration(proxyBeanMethods = false)
 public class ApiConfig implements WebMvcConfigurer {
@@ -44,9 +44,9 @@ public class ApiConfig implements WebMvcConfigurer {
 	}
 
 	/**
-	 * The API has one representation, JSON; an Accept header that does not list it (a browser's
-	 * {@code text/html}) is disregarded rather than answered 406, as RFC 9110 §12.5.1 allows. Pages
-	 * negotiate from the Accept header as before.
+	 * The API has one representation, JSON; an Accept header that does not list it (a
+	 * browser's {@code text/html}) is disregarded rather than answered 406, as RFC 9110
+	 * §12.5.1 allows. Pages negotiate from the Accept header as before.
 	 */
 	@Override
 	public void configureContentNegotiation(ContentNegotiationConfigurer configurer) {
@@ -59,9 +59,10 @@ public class ApiConfig implements WebMvcConfigurer {
 	}
 
 	/**
-	 * @param maxRequestSize the largest API body: a plan or surface body is under 2 KB, and a surface's
-	 * 1000 characters of notes at most 6 KB when every one is sent as a \\u escape (RFC 8259 §7); 64 KB
-	 * leaves room for that ten times over (our own sizing)
+	 * @param maxRequestSize the largest API body: a plan or surface body is under 2 KB,
+	 * and a surface's 1000 characters of notes at most 6 KB when every one is sent as a
+	 * \\u escape (RFC 8259 §7); 64 KB leaves room for that ten times over (our own
+	 * sizing)
 	 */
 	@Bean
 	FilterRegistrationBean<RequestSizeLimit> apiRequestSizeLimit(
@@ -69,7 +70,8 @@ public class ApiConfig implements WebMvcConfigurer {
 		FilterRegistrationBean<RequestSizeLimit> r = new FilterRegistrationBean<>(
 				new RequestSizeLimit(maxRequestSize.toBytes()));
 		r.addUrlPatterns("/api/*");
-		// before sessions and security: an oversized body costs no database read and no password check
+		// before sessions and security: an oversized body costs no database read and no
+		// password check
 		r.setOrder(Ordered.HIGHEST_PRECEDENCE + 10);
 		return r;
 	}

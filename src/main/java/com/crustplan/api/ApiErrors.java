@@ -30,10 +30,11 @@ import org.springframework.web.servlet.resource.NoResourceFoundException;
 import com.crustplan.engine.input.InvalidInputException;
 
 /**
- * Every error the JSON API answers, as {@link Problems} shapes it. It sees the exceptions of every
- * request (an advice cannot be limited to a path, and an unknown API address has no controller), so
- * each handler first hands a page's exception back to Spring, which then goes on as if no handler had
- * matched: pages keep their error pages. Ordered last, so an advice made for pages is asked first.
+ * Every error the JSON API answers, as {@link Problems} shapes it. It sees the exceptions
+ * of every request (an advice cannot be limited to a path, and an unknown API address has
+ * no controller), so each handler first hands a page's exception back to Spring, which
+ * then goes on as if no handler had matched: pages keep their error pages. Ordered last,
+ * so an advice made for pages is asked first.
  */
 @RestControllerAdvice
 @Order(Ordered.LOWEST_PRECEDENCE)
@@ -47,19 +48,26 @@ public class ApiErrors {
 		return answer(Problems.of(HttpStatus.BAD_REQUEST, e.errors()), request);
 	}
 
-	/** The engine's own checks, where a controller did not already put them in the request's terms. */
+	/**
+	 * The engine's own checks, where a controller did not already put them in the
+	 * request's terms.
+	 */
 	@ExceptionHandler(InvalidInputException.class)
 	ResponseEntity<ProblemDetail> invalidInput(InvalidInputException e, HttpServletRequest request) {
 		apiOnly(e, request);
 		return answer(Problems.of(HttpStatus.BAD_REQUEST, e.field(), e.reason()), request);
 	}
 
-	/** Someone else changed or deleted the same record at the same moment: read it again and retry. */
+	/**
+	 * Someone else changed or deleted the same record at the same moment: read it again
+	 * and retry.
+	 */
 	@ExceptionHandler(ConcurrencyFailureException.class)
 	ResponseEntity<ProblemDetail> conflict(ConcurrencyFailureException e, HttpServletRequest request) {
 		apiOnly(e, request);
 		return answer(Problems.of(HttpStatus.CONFLICT, "id",
-				"the record was changed or deleted by someone else at the same moment; read it again and retry"), request);
+				"the record was changed or deleted by someone else at the same moment; read it again and retry"),
+				request);
 	}
 
 	@ExceptionHandler(BodyTooLargeException.class)
@@ -101,27 +109,34 @@ public class ApiErrors {
 	ResponseEntity<ProblemDetail> method(HttpRequestMethodNotSupportedException e, HttpServletRequest request)
 			throws HttpRequestMethodNotSupportedException {
 		apiOnly(e, request);
-		String allowed = e.getSupportedHttpMethods() == null ? "" : String.join(", ",
-				e.getSupportedHttpMethods().stream().map(Object::toString).toList());
+		String allowed = e.getSupportedHttpMethods() == null ? ""
+				: String.join(", ", e.getSupportedHttpMethods().stream().map(Object::toString).toList());
 		return ResponseEntity.status(HttpStatus.METHOD_NOT_ALLOWED)
 			.headers(e.getHeaders())
 			.contentType(MediaType.APPLICATION_PROBLEM_JSON)
-			.body(withInstance(Problems.of(HttpStatus.METHOD_NOT_ALLOWED, "method",
-					e.getMethod() + " is not allowed here" + (allowed.isEmpty() ? "" : "; use " + allowed)), request));
-	}
-
-	/** No controller and no static file at this address (static files have their own paths only). */
-	@ExceptionHandler({ NoResourceFoundException.class, NoHandlerFoundException.class })
-	ResponseEntity<ProblemDetail> noSuchAddress(Exception e, HttpServletRequest request) throws Exception {
-		apiOnly(e, request);
-		return answer(Problems.of(HttpStatus.NOT_FOUND, "path",
-				"is not an address of the API: " + request.getRequestURI()), request);
+			.body(withInstance(
+					Problems.of(HttpStatus.METHOD_NOT_ALLOWED, "method",
+							e.getMethod() + " is not allowed here" + (allowed.isEmpty() ? "" : "; use " + allowed)),
+					request));
 	}
 
 	/**
-	 * The rest: Spring's own request errors keep their status; an exception marked with a status
-	 * ({@code NotFoundException}: the record the path names does not exist) answers it on {@code id};
-	 * anything else is our fault, not the caller's, logged and answered 500 without internals.
+	 * No controller and no static file at this address (static files have their own paths
+	 * only).
+	 */
+	@ExceptionHandler({ NoResourceFoundException.class, NoHandlerFoundException.class })
+	ResponseEntity<ProblemDetail> noSuchAddress(Exception e, HttpServletRequest request) throws Exception {
+		apiOnly(e, request);
+		return answer(
+				Problems.of(HttpStatus.NOT_FOUND, "path", "is not an address of the API: " + request.getRequestURI()),
+				request);
+	}
+
+	/**
+	 * The rest: Spring's own request errors keep their status; an exception marked with a
+	 * status ({@code NotFoundException}: the record the path names does not exist)
+	 * answers it on {@code id}; anything else is our fault, not the caller's, logged and
+	 * answered 500 without internals.
 	 */
 	@ExceptionHandler(Exception.class)
 	ResponseEntity<ProblemDetail> other(Exception e, HttpServletRequest request) throws Exception {
@@ -144,8 +159,10 @@ public class ApiErrors {
 					e.getMessage()), request);
 		}
 		log.error("API request {} {} failed", request.getMethod(), request.getRequestURI(), e);
-		return answer(Problems.of(HttpStatus.INTERNAL_SERVER_ERROR, List.of(new FieldError("server",
-				"the request could not be completed; nothing half-saved is kept; the error is logged"))), request);
+		return answer(
+				Problems.of(HttpStatus.INTERNAL_SERVER_ERROR, List.of(new FieldError("server",
+						"the request could not be completed; nothing half-saved is kept; the error is logged"))),
+				request);
 	}
 
 	/** A page's exception goes back to Spring's other resolvers, untouched. */

@@ -1,6 +1,9 @@
 package com.crustplan.api;
 
-/** A request body past the API's size limit: answered 413, whoever was reading it when it overflowed. */
+/**
+ * A request body past the API's size limit: answered 413, whoever was reading it when it
+ * overflowed.
+ */
 public class BodyTooLargeException extends RuntimeException {
 
 	private final long limitBytes;

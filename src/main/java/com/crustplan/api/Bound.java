@@ -3,9 +3,10 @@ package com.crustplan.api;
 import java.util.function.BiFunction;
 
 /**
- * A request body bound into a record, with the field errors binding found (wrong types, NaN, numbers
- * too large for a double). The record holds null where a field was wrong, so the checks that follow
- * can go on and report the other fields too. Controllers take it as {@code @RequestBody Bound<X>}.
+ * A request body bound into a record, with the field errors binding found (wrong types,
+ * NaN, numbers too large for a double). The record holds null where a field was wrong, so
+ * the checks that follow can go on and report the other fields too. Controllers take it
+ * as {@code @RequestBody Bound<X>}.
  */
 public record Bound<T>(T value, FieldErrors errors) {
 
@@ -20,7 +21,10 @@ public record Bound<T>(T value, FieldErrors errors) {
 		return body;
 	}
 
-	/** Runs the checks after binding, then answers 400 with every error found, binding's included. */
+	/**
+	 * Runs the checks after binding, then answers 400 with every error found, binding's
+	 * included.
+	 */
 	public <R> R check(BiFunction<T, FieldErrors, R> reader) {
 		R result = reader.apply(this.value, this.errors);
 		this.errors.throwIfAny();

@@ -24,10 +24,11 @@ import tools.jackson.databind.ObjectReader;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * Reads a request body into {@link Bound}{@code <T>}: Jackson binds the record from the stream (never
- * the whole body into a string) and {@link CollectingDeserializers} turn each wrong value into a field
- * error. What cannot be bound at all (not JSON, not an object) is a 400 on {@code body}. Read whatever
- * the Content-Type says, as the API always has; the charset, when given, is honoured.
+ * Reads a request body into {@link Bound}{@code <T>}: Jackson binds the record from the
+ * stream (never the whole body into a string) and {@link CollectingDeserializers} turn
+ * each wrong value into a field error. What cannot be bound at all (not JSON, not an
+ * object) is a 400 on {@code body}. Read whatever the Content-Type says, as the API
+ * always has; the charset, when given, is honoured.
  */
 final class BoundBodyConverter implements SmartHttpMessageConverter<Bound<?>> {
 
@@ -36,7 +37,8 @@ final class BoundBodyConverter implements SmartHttpMessageConverter<Bound<?>> {
 	BoundBodyConverter(JsonMapper json) {
 		this.mapper = json.rebuild()
 			.addModule(CollectingDeserializers.module())
-			// unknown fields are ignored, as they always were; a field given twice is refused (RFC 8259 §4:
+			// unknown fields are ignored, as they always were; a field given twice is
+			// refused (RFC 8259 §4:
 			// names SHOULD be unique, and readers disagree on which value wins)
 			.disable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
 			.enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
@@ -68,7 +70,8 @@ final class BoundBodyConverter implements SmartHttpMessageConverter<Bound<?>> {
 		Charset charset = contentType == null ? null : contentType.getCharset();
 		JsonParser p = null;
 		try {
-			// Jackson detects UTF-8/16/32 from the bytes itself (RFC 8259 §8.1); another charset is decoded first
+			// Jackson detects UTF-8/16/32 from the bytes itself (RFC 8259 §8.1); another
+			// charset is decoded first
 			p = (charset == null || charset.equals(StandardCharsets.UTF_8)) ? reader.createParser(input.getBody())
 					: reader.createParser(new InputStreamReader(input.getBody(), charset));
 			JsonToken first = p.nextToken();
@@ -85,7 +88,8 @@ final class BoundBodyConverter implements SmartHttpMessageConverter<Bound<?>> {
 			return new Bound<>(value, errors);
 		}
 		catch (StreamConstraintsException e) {
-			// a reading limit (number length, nesting depth): named where the parser stood
+			// a reading limit (number length, nesting depth): named where the parser
+			// stood
 			throw InvalidRequestException.of(CollectingDeserializers.path(p), "is too long: " + shortMessage(e));
 		}
 		catch (JacksonException e) {

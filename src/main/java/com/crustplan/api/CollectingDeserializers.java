@@ -17,9 +17,10 @@ import tools.jackson.databind.deser.std.StdDeserializer;
 import tools.jackson.databind.module.SimpleModule;
 
 /**
- * Deserializers for request records that never fail on a value: a value of the wrong kind is added to
- * the request's {@link FieldErrors} under its JSON path and read as null, and binding goes on. Only
- * the API's request reader uses this module; the application's own mapper stays strict.
+ * Deserializers for request records that never fail on a value: a value of the wrong kind
+ * is added to the request's {@link FieldErrors} under its JSON path and read as null, and
+ * binding goes on. Only the API's request reader uses this module; the application's own
+ * mapper stays strict.
  */
 final class CollectingDeserializers {
 
@@ -36,13 +37,15 @@ final class CollectingDeserializers {
 	}
 
 	/**
-	 * The value's place in the request, dotted as the API names fields ({@code surface.waterPct}), list
-	 * elements by their index ({@code steps[2].minutes}).
+	 * The value's place in the request, dotted as the API names fields
+	 * ({@code surface.waterPct}), list elements by their index
+	 * ({@code steps[2].minutes}).
 	 */
 	static String path(JsonParser p) {
 		TokenStreamContext c = p.streamReadContext();
 		if (p.currentToken() == JsonToken.START_OBJECT || p.currentToken() == JsonToken.START_ARRAY) {
-			// the parser has already entered the value; its name is in the enclosing context
+			// the parser has already entered the value; its name is in the enclosing
+			// context
 			c = c.getParent();
 		}
 		Deque<String> names = new ArrayDeque<>();
@@ -73,7 +76,10 @@ final class CollectingDeserializers {
 		return null;
 	}
 
-	/** A finite number. Integers of any length are read exactly, so one too large for a double is named. */
+	/**
+	 * A finite number. Integers of any length are read exactly, so one too large for a
+	 * double is named.
+	 */
 	static final class Numbers extends StdDeserializer<Double> {
 
 		Numbers() {
@@ -84,8 +90,10 @@ final class CollectingDeserializers {
 		public Double deserialize(JsonParser p, DeserializationContext ctxt) {
 			JsonToken t = p.currentToken();
 			if (t == JsonToken.VALUE_NUMBER_INT || t == JsonToken.VALUE_NUMBER_FLOAT) {
-				// an integer beyond a long is read exactly; BigInteger.doubleValue() gives Infinity past about
-				// 1.8e308 (IEEE 754 binary64) where asking the parser for a double would fail
+				// an integer beyond a long is read exactly; BigInteger.doubleValue()
+				// gives Infinity past about
+				// 1.8e308 (IEEE 754 binary64) where asking the parser for a double would
+				// fail
 				double v = t == JsonToken.VALUE_NUMBER_INT && p.getNumberType() == JsonParser.NumberType.BIG_INTEGER
 						? p.getBigIntegerValue().doubleValue() : p.getDoubleValue();
 				return Double.isFinite(v) ? v : reject(p, ctxt, "is too large a number");
@@ -101,8 +109,9 @@ final class CollectingDeserializers {
 	}
 
 	/**
-	 * Text, trimmed; blank is read as absent, as the forms read it. Control characters are refused as
-	 * sent, before the trim (which would quietly drop a NUL at either end).
+	 * Text, trimmed; blank is read as absent, as the forms read it. Control characters
+	 * are refused as sent, before the trim (which would quietly drop a NUL at either
+	 * end).
 	 */
 	static final class Texts extends StdDeserializer<String> {
 
@@ -142,7 +151,10 @@ final class CollectingDeserializers {
 
 	}
 
-	/** A nested request record must come as a JSON object; anything else is named, not a failure. */
+	/**
+	 * A nested request record must come as a JSON object; anything else is named, not a
+	 * failure.
+	 */
 	static final class ObjectsOnly extends ValueDeserializerModifier {
 
 		@Override

@@ -1,12 +1,12 @@
 package com.crustplan.api;
 
-
 import java.util.ArrayList;
 import java.util.List;
 
 /**
- * The thin collector behind every API answer with field errors: binding and the checks after it add
- * to one list, so a client learns every bad field in one answer, in the order they were found.
+ * The thin collector behind every API answer with field errors: binding and the checks
+ * after it add to one list, so a client learns every bad field in one answer, in the
+ * order they were found.
  */
 public final class FieldErrors {
 
@@ -20,7 +20,10 @@ public final class FieldErrors {
 		return this.errors.stream().anyMatch(e -> e.field().equals(field));
 	}
 
-	/** Whether a field under {@code prefix} (for example {@code "surface."}) is already wrong. */
+	/**
+	 * Whether a field under {@code prefix} (for example {@code "surface."}) is already
+	 * wrong.
+	 */
 	public boolean hasUnder(String prefix) {
 		return this.errors.stream().anyMatch(e -> e.field().startsWith(prefix));
 	}
@@ -33,7 +36,10 @@ public final class FieldErrors {
 		return List.copyOf(this.errors);
 	}
 
-	/** A nested object the request must have: absent or null is an error unless binding already named it. */
+	/**
+	 * A nested object the request must have: absent or null is an error unless binding
+	 * already named it.
+	 */
 	public <T> T requireObject(String field, T value) {
 		if (value == null && !has(field)) {
 			add(field, "is required (a JSON object)");
@@ -41,7 +47,10 @@ public final class FieldErrors {
 		return value;
 	}
 
-	/** Text (already trimmed, blank read as absent) no longer than {@code maxLength}; else an error and null. */
+	/**
+	 * Text (already trimmed, blank read as absent) no longer than {@code maxLength}; else
+	 * an error and null.
+	 */
 	public String text(String field, String value, int maxLength) {
 		if (!StoredText.isPlain(value)) {
 			add(field, StoredText.REASON);
@@ -54,7 +63,9 @@ public final class FieldErrors {
 		return value;
 	}
 
-	/** Ends the request with a 400 naming every field found wrong so far, if there is one. */
+	/**
+	 * Ends the request with a 400 naming every field found wrong so far, if there is one.
+	 */
 	public void throwIfAny() {
 		if (!this.errors.isEmpty()) {
 			throw new InvalidRequestException(this.errors);

@@ -8,7 +8,8 @@ public class InvalidRequestException extends RuntimeException {
 	private final transient List<FieldError> errors;
 
 	public InvalidRequestException(List<FieldError> errors) {
-		// no stack trace: this is the caller's mistake, answered and never logged as a failure
+		// no stack trace: this is the caller's mistake, answered and never logged as a
+		// failure
 		super("invalid request", null, false, false);
 		this.errors = List.copyOf(errors);
 	}

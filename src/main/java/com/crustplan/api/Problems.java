@@ -17,14 +17,17 @@ import org.springframework.http.ProblemDetail;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * The API's error answer: an RFC 9457 problem detail ({@code application/problem+json}) whose
- * extension member {@code errors} lists each problem as {@code {field, message}}, the list API clients
- * read from the start. {@code type} is left at {@code about:blank}, so {@code title} is the status's
- * reason phrase (RFC 9457 §4.2.1); {@code detail} says the same as the list in one sentence.
+ * The API's error answer: an RFC 9457 problem detail ({@code application/problem+json})
+ * whose extension member {@code errors} lists each problem as {@code {field, message}},
+ * the list API clients read from the start. {@code type} is left at {@code about:blank},
+ * so {@code title} is the status's reason phrase (RFC 9457 §4.2.1); {@code detail} says
+ * the same as the list in one sentence.
  */
 public final class Problems {
 
-	/** Errors written outside Spring MVC (filters, security) hold only text and numbers. */
+	/**
+	 * Errors written outside Spring MVC (filters, security) hold only text and numbers.
+	 */
 	private static final JsonMapper JSON = JsonMapper.builder().build();
 
 	private Problems() {
@@ -47,7 +50,10 @@ public final class Problems {
 				"is too large: the API reads at most " + maxBytes / 1024 + " KB (" + maxBytes + " bytes) per request");
 	}
 
-	/** The request's path as the problem's {@code instance} (RFC 9457 §3.1.5), or none if it is no URI. */
+	/**
+	 * The request's path as the problem's {@code instance} (RFC 9457 §3.1.5), or none if
+	 * it is no URI.
+	 */
 	static URI instance(HttpServletRequest request) {
 		try {
 			return URI.create(request.getRequestURI());
@@ -58,8 +64,10 @@ public final class Problems {
 	}
 
 	/**
-	 * Writes a problem straight to the response, for answers given before a controller is reached.
-	 * @param request the request, for the problem's {@code instance}; null to leave it out
+	 * Writes a problem straight to the response, for answers given before a controller is
+	 * reached.
+	 * @param request the request, for the problem's {@code instance}; null to leave it
+	 * out
 	 */
 	public static void write(HttpServletRequest request, HttpServletResponse response, ProblemDetail problem)
 			throws IOException {
@@ -67,7 +75,8 @@ public final class Problems {
 			problem.setInstance(instance(request));
 		}
 		Map<String, Object> body = new LinkedHashMap<>();
-		// no type means about:blank (RFC 9457 §3.1.1), as Spring writes it in the advice's answers
+		// no type means about:blank (RFC 9457 §3.1.1), as Spring writes it in the
+		// advice's answers
 		if (problem.getType() != null && !problem.getType().toString().equals("about:blank")) {
 			body.put("type", problem.getType().toString());
 		}
@@ -86,7 +95,10 @@ public final class Problems {
 		JSON.writeValue(response.getOutputStream(), body);
 	}
 
-	/** One field's problem, as the security filters answer 401 and 403 (no instance: they have no request). */
+	/**
+	 * One field's problem, as the security filters answer 401 and 403 (no instance: they
+	 * have no request).
+	 */
 	public static void write(HttpServletResponse response, HttpStatus status, String field, String message)
 			throws IOException {
 		write(null, response, of(status, field, message));

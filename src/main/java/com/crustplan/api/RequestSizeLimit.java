@@ -17,10 +17,11 @@ import org.springframework.http.HttpHeaders;
 import org.springframework.web.filter.OncePerRequestFilter;
 
 /**
- * The API's request-size limit. A body that says it is larger (Content-Length) is refused with 413
- * before a byte of it is read; a body without a length (chunked) is counted as it is read and stops
- * being read at the limit. Tomcat swallows at most {@code server.tomcat.max-swallow-size} of what is
- * left unread and then closes the connection, so an oversized body never sits in memory.
+ * The API's request-size limit. A body that says it is larger (Content-Length) is refused
+ * with 413 before a byte of it is read; a body without a length (chunked) is counted as
+ * it is read and stops being read at the limit. Tomcat swallows at most
+ * {@code server.tomcat.max-swallow-size} of what is left unread and then closes the
+ * connection, so an oversized body never sits in memory.
  */
 final class RequestSizeLimit extends OncePerRequestFilter {
 

@@ -1,11 +1,12 @@
 package com.crustplan.api;
 
 /**
- * The one check for text a kitchen stores (names, notes, categories, user names): no control
- * characters. PostgreSQL refuses NUL in text columns, and a control character in a name is always a
- * paste accident or an attack, never a cook's intent. Tab, line feed and carriage return stay allowed
- * (notes are typed in a text area). The check runs on the text as sent, before any trimming, so
- * {@code "potato\u0000"} is refused rather than trimmed into {@code "potato"}.
+ * The one check for text a kitchen stores (names, notes, categories, user names): no
+ * control characters. PostgreSQL refuses NUL in text columns, and a control character in
+ * a name is always a paste accident or an attack, never a cook's intent. Tab, line feed
+ * and carriage return stay allowed (notes are typed in a text area). The check runs on
+ * the text as sent, before any trimming, so {@code "potato\u0000"} is refused rather than
+ * trimmed into {@code "potato"}.
  */
 public final class StoredText {
 
@@ -29,8 +30,8 @@ public final class StoredText {
 	}
 
 	/**
-	 * C0 controls except tab, LF and CR, DEL and the C1 controls: the Unicode general category Cc
-	 * (Unicode Standard, ch. 23.1) less the three whitespace controls.
+	 * C0 controls except tab, LF and CR, DEL and the C1 controls: the Unicode general
+	 * category Cc (Unicode Standard, ch. 23.1) less the three whitespace controls.
 	 */
 	static boolean disallowed(char c) {
 		return Character.getType(c) == Character.CONTROL && c != '\t' && c != '\n' && c != '\r';

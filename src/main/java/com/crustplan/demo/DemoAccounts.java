@@ -8,7 +8,10 @@ import org.springframework.stereotype.Component;
 import com.crustplan.system.PublicAccounts;
 import com.crustplan.user.Role;
 
-/** The demo kitchen's accounts: created by the loader, shown on the sign-in page while the demo is enabled. */
+/**
+ * The demo kitchen's accounts: created by the loader, shown on the sign-in page while the
+ * demo is enabled.
+ */
 @Component
 @ConditionalOnProperty(name = "crustplan.demo.enabled", havingValue = "true")
 class DemoAccounts implements PublicAccounts {

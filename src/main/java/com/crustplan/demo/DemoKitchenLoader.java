@@ -39,10 +39,10 @@ import tools.jackson.core.JacksonException;
 import tools.jackson.dataformat.yaml.YAMLMapper;
 
 /**
- * Loads the invented demo kitchen (templates-demo/kitchen.yaml) into an empty database, with demo
- * accounts whose passwords the sign-in page shows. Every entry goes through the same form validation
- * and engine checks as a cook's input; a bad entry stops the load with the entry and field named, and
- * nothing of it is saved (one transaction).
+ * Loads the invented demo kitchen (templates-demo/kitchen.yaml) into an empty database,
+ * with demo accounts whose passwords the sign-in page shows. Every entry goes through the
+ * same form validation and engine checks as a cook's input; a bad entry stops the load
+ * with the entry and field named, and nothing of it is saved (one transaction).
  */
 @Component
 @ConditionalOnProperty(name = "crustplan.demo.enabled", havingValue = "true")
@@ -53,12 +53,17 @@ class DemoKitchenLoader implements ApplicationRunner {
 	record DemoKitchen(String kitchen, List<SurfaceForm> surfaces, List<SetupForm> setups, List<DemoPlan> plans) {
 	}
 
-	/** A saved plan in steps: names of the surface and setups above; temperatures in °C. */
+	/**
+	 * A saved plan in steps: names of the surface and setups above; temperatures in °C.
+	 */
 	record DemoPlan(String name, String surface, String targetStage, Double coreTargetC, Double horizonMinutes,
 			List<DemoStep> steps) {
 	}
 
-	/** A step: a setup's name, or {@code rest} (the air's °C); it ends after minutes, at a stage or a core °C. */
+	/**
+	 * A step: a setup's name, or {@code rest} (the air's °C); it ends after minutes, at a
+	 * stage or a core °C.
+	 */
 	record DemoStep(String setup, Double rest, Double minutes, String stage, Double coreC) {
 	}
 
@@ -134,7 +139,10 @@ class DemoKitchenLoader implements ApplicationRunner {
 		});
 	}
 
-	/** Runs a demo plan like a cook's and saves it; a step or name the kitchen lacks stops the load. */
+	/**
+	 * Runs a demo plan like a cook's and saves it; a step or name the kitchen lacks stops
+	 * the load.
+	 */
 	private void savePlan(DemoPlan p, String where) {
 		SavedSurface surface = surfaces.all()
 			.stream()
@@ -160,8 +168,8 @@ class DemoKitchenLoader implements ApplicationRunner {
 			steps.add(new PlanStep(f, setup.getName(), null, d.minutes(), d.stage(), null, d.coreC()));
 			names.add(setup.getName());
 		}
-		PlanInputs inputs = new PlanInputs(SurfaceForm.of(surface, TemperatureUnit.CELSIUS), first, p.targetStage(), null,
-				p.horizonMinutes() == null ? PlanService.DEFAULT_HORIZON_MINUTES : p.horizonMinutes(), steps,
+		PlanInputs inputs = new PlanInputs(SurfaceForm.of(surface, TemperatureUnit.CELSIUS), first, p.targetStage(),
+				null, p.horizonMinutes() == null ? PlanService.DEFAULT_HORIZON_MINUTES : p.horizonMinutes(), steps,
 				p.coreTargetC());
 		try {
 			PlanReport report = planner.plan(inputs);

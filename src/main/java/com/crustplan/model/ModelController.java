@@ -6,7 +6,10 @@ import org.springframework.web.bind.annotation.GetMapping;
 
 import com.crustplan.engine.catalogue.ModelCatalogue;
 
-/** The model and its sources, generated from the engine's own catalogue of equations and constants. */
+/**
+ * The model and its sources, generated from the engine's own catalogue of equations and
+ * constants.
+ */
 @Controller
 class ModelController {
 

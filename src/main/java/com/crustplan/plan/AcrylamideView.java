@@ -8,9 +8,9 @@ import com.crustplan.engine.assessment.Mitigation;
 import com.crustplan.engine.message.Message;
 
 /**
- * The acrylamide estimate as the plan shows it. Levels are null where the engine gives no estimate;
- * {@code benchmarkUgPerKg} is null where no EU benchmark level applies, {@code zone} (low, elevated,
- * high) null where none can be given.
+ * The acrylamide estimate as the plan shows it. Levels are null where the engine gives no
+ * estimate; {@code benchmarkUgPerKg} is null where no EU benchmark level applies,
+ * {@code zone} (low, elevated, high) null where none can be given.
  */
 public record AcrylamideView(Double crustUgPerKg, Double portionUgPerKg, Double benchmarkUgPerKg, String zone,
 		String zoneLabel, String zoneMeaning, String product, String noBenchmarkReason, Message basis,

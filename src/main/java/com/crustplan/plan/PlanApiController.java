@@ -30,8 +30,9 @@ import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.annotation.JsonProperty;
 
 /**
- * JSON API v1: categories with defaults, and computing a plan without saving it. All in °C and SI, text
- * too. Errors are answered as problem details by the API's one error advice ({@code api/ApiErrors}).
+ * JSON API v1: categories with defaults, and computing a plan without saving it. All in
+ * °C and SI, text too. Errors are answered as problem details by the API's one error
+ * advice ({@code api/ApiErrors}).
  */
 @RestController
 @RequestMapping(path = "/api/v1", produces = MediaType.APPLICATION_JSON_VALUE)
@@ -95,7 +96,8 @@ class PlanApiController {
 				.body(PlanResponse.of(r, text, req.deprecations()));
 		}
 		catch (InvalidInputException e) {
-			// the planner's checks (horizon, a lightness the path never reaches) in the request's terms
+			// the planner's checks (horizon, a lightness the path never reaches) in the
+			// request's terms
 			String f = e.field();
 			String field = f.startsWith("target") || f.startsWith("steps") || f.equals("horizonMinutes")
 					|| f.contains(".") ? f : "input." + f;
@@ -103,24 +105,30 @@ class PlanApiController {
 		}
 	}
 
-	record Acrylamide(Double crustUgPerKg, Double portionUgPerKg, Double benchmarkUgPerKg, String zone,
-			String product, String basis, List<Change> mitigations) {
+	record Acrylamide(Double crustUgPerKg, Double portionUgPerKg, Double benchmarkUgPerKg, String zone, String product,
+			String basis, List<Change> mitigations) {
 	}
 
-	/** One acrylamide-reducing change, as the engine computed it (µg/kg as eaten, minutes to target). */
+	/**
+	 * One acrylamide-reducing change, as the engine computed it (µg/kg as eaten, minutes
+	 * to target).
+	 */
 	record Change(String code, String title, String change, boolean applicable, String reason, String basis,
 			Double beforeUgPerKg, Double afterUgPerKg, Double beforeMinutes, Double afterMinutes, String source) {
 
 		static Change of(Mitigation m, MessageText text) {
 			return new Change(m.code(), text.celsius(m.title()), text.celsius(m.change()), m.applicable(),
-					text.celsius(m.reason()), text.celsius(m.basis().meaning()),
-					PlanReport.finite(m.beforeUgPerKg()), PlanReport.finite(m.afterUgPerKg()),
-					PlanReport.finite(m.beforeMinutes()), PlanReport.finite(m.afterMinutes()), m.source());
+					text.celsius(m.reason()), text.celsius(m.basis().meaning()), PlanReport.finite(m.beforeUgPerKg()),
+					PlanReport.finite(m.afterUgPerKg()), PlanReport.finite(m.beforeMinutes()),
+					PlanReport.finite(m.afterMinutes()), m.source());
 		}
 
 	}
 
-	/** {@code heatSourceTemperatureC}, the pan's or the oil's, only when the heat has a body. */
+	/**
+	 * {@code heatSourceTemperatureC}, the pan's or the oil's, only when the heat has a
+	 * body.
+	 */
 	record Series(List<Double> timeS, List<Double> surfaceTemperatureC, List<Double> coreTemperatureC,
 			List<Double> surfaceWaterActivity, List<Double> lightness, List<String> colorHex,
 			@JsonInclude(JsonInclude.Include.NON_NULL) List<Double> heatSourceTemperatureC) {
@@ -129,22 +137,31 @@ class PlanApiController {
 	record Warning(String code, String message) {
 	}
 
-	/** One step as run: from and to (s from the start), what ended it, and the food at its end. */
+	/**
+	 * One step as run: from and to (s from the start), what ended it, and the food at its
+	 * end.
+	 */
 	record StepOut(int index, String mode, double temperatureC, double startS, double endS, String endedBy,
 			double coreAtEndC, double surfaceAtEndC) {
 	}
 
-	/** Which target came first and by how much (s); the text says it, or which target was missed. */
+	/**
+	 * Which target came first and by how much (s); the text says it, or which target was
+	 * missed.
+	 */
 	record TargetOrder(String first, Double leadS, String text) {
 	}
 
 	record Checkpoint(double atS, String kind, String text) {
 	}
 
-	/** The answer; a plan in steps adds its steps, core target, target order and timeline (absent otherwise). */
+	/**
+	 * The answer; a plan in steps adds its steps, core target, target order and timeline
+	 * (absent otherwise).
+	 */
 	record PlanResponse(boolean reached, String outcome, Double timeToTargetS, @JsonProperty("pH") double ph,
-			Double coreTemperatureAtTargetC, String target, String targetColorHex, Acrylamide acrylamide,
-			Series series, List<Warning> warnings, List<String> cautions, List<String> assumptions,
+			Double coreTemperatureAtTargetC, String target, String targetColorHex, Acrylamide acrylamide, Series series,
+			List<Warning> warnings, List<String> cautions, List<String> assumptions,
 			@JsonInclude(JsonInclude.Include.NON_EMPTY) List<String> deprecations,
 			@JsonInclude(JsonInclude.Include.NON_NULL) List<StepOut> steps,
 			@JsonInclude(JsonInclude.Include.NON_NULL) Double coreTargetC,
@@ -183,7 +200,10 @@ class PlanApiController {
 							st.steps().get(x.index()).setup().temperatureC(), x.startS(), x.endS(),
 							x.endedBy().name().toLowerCase(Locale.ROOT), x.coreAtEndC(), x.surfaceAtEndC()))
 					.toList();
-				timeline = st.timeline().stream().map(c -> new Checkpoint(c.timeS(), c.kind(), text.celsius(c.text()))).toList();
+				timeline = st.timeline()
+					.stream()
+					.map(c -> new Checkpoint(c.timeS(), c.kind(), text.celsius(c.text())))
+					.toList();
 				order = new TargetOrder(st.firstTarget(), st.firstTargetLeadS(),
 						st.targetOrder() == null ? null : text.celsius(st.targetOrder()));
 			}

@@ -17,24 +17,26 @@ import com.crustplan.setup.HeatSettings;
 import com.crustplan.surface.SurfaceBody;
 
 /**
- * A {@code POST /api/v1/plans} body. Jackson binds it (wrong values become field errors, see
- * {@code api/Bound}); {@link #toRequest} checks what binding cannot and builds the engine's inputs.
+ * A {@code POST /api/v1/plans} body. Jackson binds it (wrong values become field errors,
+ * see {@code api/Bound}); {@link #toRequest} checks what binding cannot and builds the
+ * engine's inputs.
  */
-record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double horizonMinutes,
-		Boolean mitigations, List<StepsReader.StepBody> steps) {
+record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double horizonMinutes, Boolean mitigations,
+		List<StepsReader.StepBody> steps) {
 
 	/** Longest mode or stage key read. */
 	static final int KEY_MAX = 80;
 
 	/**
-	 * {@code relativeHumidityPct} is round one's oven field, still read (as a combi oven's humidity
-	 * reading, converted as the migration does) and named in the answer's deprecations. {@code pan} and
-	 * {@code fryer} are optional: without them the pan or oil is held at its set temperature whatever the
-	 * load, as before they existed, so older requests get the same answer.
+	 * {@code relativeHumidityPct} is round one's oven field, still read (as a combi
+	 * oven's humidity reading, converted as the migration does) and named in the answer's
+	 * deprecations. {@code pan} and {@code fryer} are optional: without them the pan or
+	 * oil is held at its set temperature whatever the load, as before they existed, so
+	 * older requests get the same answer.
 	 */
 	record HeatBody(String mode, Double temperatureC, Boolean fan, Boolean fatFilm, Double steamPct,
-			Double relativeHumidityPct, Double flipEverySeconds, String grill, Double heatFluxKwPerM2, Double distanceMm,
-			PanObject pan, FryerObject fryer) {
+			Double relativeHumidityPct, Double flipEverySeconds, String grill, Double heatFluxKwPerM2,
+			Double distanceMm, PanObject pan, FryerObject fryer) {
 	}
 
 	/** A pan's body; each value left out takes the default for a typical line pan. */
@@ -46,17 +48,26 @@ record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double ho
 	record FryerObject(Double oilLitres, Double heaterKw, Double loadKg) {
 	}
 
-	/** Said in the answer while the old oven field is still read (it goes in the next API version). */
+	/**
+	 * Said in the answer while the old oven field is still read (it goes in the next API
+	 * version).
+	 */
 	static final String RELATIVE_HUMIDITY_DEPRECATED = "heat.relativeHumidityPct is deprecated and will be removed in the next "
 			+ "API version: send heat.steamPct, the steam share of the oven atmosphere by volume (0 = dry, kitchen air "
 			+ "about 1.6; 100 = pure steam). The old value was read as a combi oven's humidity reading: 10 or less as dry "
 			+ "kitchen air (1.6 % steam), above it 1.6 + (value − 10)·98.4/90 % steam.";
 
-	/** A colour ({@code stage} or {@code lightness}); a plan in steps may also or instead aim at a core temperature. */
+	/**
+	 * A colour ({@code stage} or {@code lightness}); a plan in steps may also or instead
+	 * aim at a core temperature.
+	 */
 	record TargetBody(String stage, Double lightness, Double coreTemperatureC) {
 	}
 
-	/** {@code steps} is null for a one-setup plan; a plan in steps may have a core target and no colour. */
+	/**
+	 * {@code steps} is null for a one-setup plan; a plan in steps may have a core target
+	 * and no colour.
+	 */
 	record PlanRequest(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
 			boolean mitigations, List<String> deprecations, StepsReader.Steps steps, Double coreTargetC) {
 	}
@@ -76,12 +87,16 @@ record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double ho
 		}
 		double horizon = horizonMinutes == null ? PlanService.DEFAULT_HORIZON_MINUTES : horizonMinutes;
 		// the reducing changes cost a dozen further runs: an API client asks for them
-		List<String> deprecations = heat.relativeHumidityPct() == null ? List.of() : List.of(RELATIVE_HUMIDITY_DEPRECATED);
-		return new PlanRequest(read.surface(), read.product(), setup, goal, horizon,
-				mitigations != null && mitigations, deprecations, null, null);
+		List<String> deprecations = heat.relativeHumidityPct() == null ? List.of()
+				: List.of(RELATIVE_HUMIDITY_DEPRECATED);
+		return new PlanRequest(read.surface(), read.product(), setup, goal, horizon, mitigations != null && mitigations,
+				deprecations, null, null);
 	}
 
-	/** A plan in steps: {@code steps} instead of {@code heat}; the target a colour, a core temperature or both. */
+	/**
+	 * A plan in steps: {@code steps} instead of {@code heat}; the target a colour, a core
+	 * temperature or both.
+	 */
 	private PlanRequest steppedRequest(FieldErrors errors) {
 		if (heat != null) {
 			errors.add("heat", "give either heat (a one-setup plan) or steps, not both");
@@ -100,12 +115,16 @@ record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double ho
 		if (!errors.isEmpty() || read2 == null) {
 			return null;
 		}
-		boolean old = steps.stream().anyMatch(x -> x != null && x.heat() != null && x.heat().relativeHumidityPct() != null);
+		boolean old = steps.stream()
+			.anyMatch(x -> x != null && x.heat() != null && x.heat().relativeHumidityPct() != null);
 		return new PlanRequest(read.surface(), read.product(), read2.steps().get(0).setup(), colour, horizon, false,
 				old ? List.of(RELATIVE_HUMIDITY_DEPRECATED) : List.of(), read2, core);
 	}
 
-	/** A heat object; its fields' errors are named under {@code at} ("heat", "steps[1].heat"). */
+	/**
+	 * A heat object; its fields' errors are named under {@code at} ("heat",
+	 * "steps[1].heat").
+	 */
 	static HeatSetup heat(HeatBody h, String at, FieldErrors errors) {
 		String key = errors.text(at + ".mode", h.mode(), KEY_MAX);
 		HeatMode mode = key == null ? null : HeatMode.byKey(key).orElse(null);
@@ -130,8 +149,9 @@ record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double ho
 		}
 		HeatSetup setup;
 		try {
-			setup = HeatSettings.toHeatSetup(mode, new HeatSettings.Values(h.temperatureC(), h.fan(), h.fatFilm(), h.steamPct(),
-					h.relativeHumidityPct(), h.flipEverySeconds(), grill, h.heatFluxKwPerM2(), h.distanceMm()));
+			setup = HeatSettings.toHeatSetup(mode,
+					new HeatSettings.Values(h.temperatureC(), h.fan(), h.fatFilm(), h.steamPct(),
+							h.relativeHumidityPct(), h.flipEverySeconds(), grill, h.heatFluxKwPerM2(), h.distanceMm()));
 		}
 		catch (InvalidInputException e) {
 			errors.add(at + "." + e.field(), e.reason());

@@ -10,7 +10,10 @@ import com.crustplan.engine.cook.Sample;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.system.TemperatureUnit;
 
-/** The series the plan page's charts draw, temperatures in the cook's unit, times in minutes. */
+/**
+ * The series the plan page's charts draw, temperatures in the cook's unit, times in
+ * minutes.
+ */
 final class PlanCharts {
 
 	private PlanCharts() {
@@ -47,7 +50,8 @@ final class PlanCharts {
 		d.put("browningPct", browning);
 		d.put("lightness", lightness);
 		if (hasBody) {
-			// the pan or the oil as the load draws it down: its own line on the temperature chart
+			// the pan or the oil as the load draws it down: its own line on the
+			// temperature chart
 			d.put("heatSourceTemperature", source);
 			d.put("heatSourceLabel", "fryer".equals(report.setup().mode()) ? "Oil" : "Pan");
 		}
@@ -68,7 +72,8 @@ final class PlanCharts {
 			b.put("fromMin", round(r.startS() / 60, 3));
 			b.put("toMin", round(r.endS() / 60, 3));
 			b.put("mode", h.mode());
-			b.put("label", (r.index() + 1) + " " + steps.labels().get(r.index()) + " · " + unit.format(h.temperatureC()));
+			b.put("label",
+					(r.index() + 1) + " " + steps.labels().get(r.index()) + " · " + unit.format(h.temperatureC()));
 			out.add(b);
 		}
 		return out;

@@ -81,8 +81,10 @@ class PlanController {
 			resolve(form, result).ifPresent(r -> {
 				PlanInputs in = r.inputs();
 				try {
-					model.addAttribute("map", planner.riskMap(in.surface().toSurface(), in.surface().toProduct(),
-							in.setup().toHeatSetup(), in.target(), in.horizonMinutes(), r.surfaceName(), r.setupName()));
+					model.addAttribute("map",
+							planner.riskMap(in.surface().toSurface(), in.surface().toProduct(),
+									in.setup().toHeatSetup(), in.target(), in.horizonMinutes(), r.surfaceName(),
+									r.setupName()));
 				}
 				catch (InvalidInputException e) {
 					result.reject("engine." + e.field(), e.field() + ": " + e.reason());
@@ -102,7 +104,8 @@ class PlanController {
 			RedirectAttributes redirect) {
 		model.addAttribute("formToken", FormTokens.keep(token));
 		PlanForm form = bound.inUnit(units);
-		// a name refused while binding (a control character) already has its error, and no target to reject on
+		// a name refused while binding (a control character) already has its error, and
+		// no target to reject on
 		if ((form.name() == null || form.name().isBlank()) && !result.hasFieldErrors("name")) {
 			result.rejectValue("name", "required", "give the plan a name to save it");
 		}
@@ -110,7 +113,8 @@ class PlanController {
 			result.reject("incomplete", "choose a surface and a setup first");
 		}
 		if (result.hasErrors()) {
-			if (form.complete() && !result.hasFieldErrors("targetLightness") && !result.hasFieldErrors("horizonMinutes")) {
+			if (form.complete() && !result.hasFieldErrors("targetLightness")
+					&& !result.hasFieldErrors("horizonMinutes")) {
 				resolve(form, result).ifPresent(inputs -> compute(inputs, form, result, units, model));
 			}
 			return page(model, form, result);
@@ -125,8 +129,11 @@ class PlanController {
 		}
 		Resolved r = resolved.get();
 		// the form's one-time token: a double submit leads to the one plan it saved
-		FormTokens.Submitted plan = tokens.once("plan", token, () -> saved.save(form.name(), r.surfaceName(),
-				r.setupName(), r.inputs(), report, principal == null ? null : principal.getName()).getId());
+		FormTokens.Submitted plan = tokens.once("plan", token,
+				() -> saved
+					.save(form.name(), r.surfaceName(), r.setupName(), r.inputs(), report,
+							principal == null ? null : principal.getName())
+					.getId());
 		redirect.addFlashAttribute("message", plan.repeat() ? "This form was sent twice; the plan was saved once."
 				: "Plan “" + form.name().trim() + "” saved.");
 		return "redirect:/plans/" + plan.id();
@@ -182,7 +189,10 @@ class PlanController {
 	record Resolved(PlanInputs inputs, String surfaceName, String setupName) {
 	}
 
-	/** The saved surface and setup as engine-ready form values; missing ones become field errors. */
+	/**
+	 * The saved surface and setup as engine-ready form values; missing ones become field
+	 * errors.
+	 */
 	private Optional<Resolved> resolve(PlanForm form, BindingResult result) {
 		SavedSurface surface = null;
 		SavedSetup setup = null;
@@ -238,7 +248,8 @@ class PlanController {
 				result.rejectValue(field, "engine." + e.field(), e.reason());
 			}
 			else {
-				// a saved surface or setup the engine no longer accepts: say which and why
+				// a saved surface or setup the engine no longer accepts: say which and
+				// why
 				result.reject("engine." + e.field(), "The saved surface or setup needs fixing (" + e.field() + ": "
 						+ e.reason() + "). Open it, correct it and plan again.");
 			}
@@ -257,7 +268,8 @@ class PlanController {
 			model.addAttribute("formToken", FormTokens.issue());
 		}
 		model.addAttribute("stepErrors", PlanStepsForm.bindingErrors(result));
-		// the filled rows and one blank one: without script a cook adds a step by planning again
+		// the filled rows and one blank one: without script a cook adds a step by
+		// planning again
 		List<StepForm> rows = new ArrayList<>(form.filledSteps());
 		rows.add(new StepForm(null, null, null, null));
 		model.addAttribute("stepRows", rows);

@@ -10,14 +10,17 @@ import jakarta.validation.constraints.Size;
 import com.crustplan.system.TemperatureUnit;
 
 /**
- * The plan picker: a saved surface, a saved setup, a target (a stage of the surface's category or an
- * L* value) and how long to simulate at most. {@code name} is only needed to save the plan. A plan in
- * steps gives {@code steps} instead of the one setup, and may aim at a {@code coreTarget}; those
- * temperatures are in {@code temperatureUnit} (the page's unit when it was filled in).
+ * The plan picker: a saved surface, a saved setup, a target (a stage of the surface's
+ * category or an L* value) and how long to simulate at most. {@code name} is only needed
+ * to save the plan. A plan in steps gives {@code steps} instead of the one setup, and may
+ * aim at a {@code coreTarget}; those temperatures are in {@code temperatureUnit} (the
+ * page's unit when it was filled in).
  */
 public record PlanForm(Long surfaceId, Long setupId, String targetStage,
-		@DecimalMin(value = "0", message = "L* runs from 0 (black) to 100 (white)") @DecimalMax(value = "100", message = "L* runs from 0 (black) to 100 (white)") Double targetLightness,
-		@DecimalMin(value = "1", message = "must be 1 to 360 minutes") @DecimalMax(value = "360", message = "must be 1 to 360 minutes") Double horizonMinutes,
+		@DecimalMin(value = "0", message = "L* runs from 0 (black) to 100 (white)") @DecimalMax(value = "100",
+				message = "L* runs from 0 (black) to 100 (white)") Double targetLightness,
+		@DecimalMin(value = "1", message = "must be 1 to 360 minutes") @DecimalMax(value = "360",
+				message = "must be 1 to 360 minutes") Double horizonMinutes,
 		@Size(max = 120, message = "at most 120 characters") String name, List<StepForm> steps, Double coreTarget,
 		String temperatureUnit) {
 
@@ -38,7 +41,10 @@ public record PlanForm(Long surfaceId, Long setupId, String targetStage,
 		return temperatureUnit == null || temperatureUnit.isBlank() ? page : TemperatureUnit.fromCode(temperatureUnit);
 	}
 
-	/** The same form with its temperatures in {@code unit}, so the page shows them in the cook's unit. */
+	/**
+	 * The same form with its temperatures in {@code unit}, so the page shows them in the
+	 * cook's unit.
+	 */
 	public PlanForm inUnit(TemperatureUnit page) {
 		TemperatureUnit from = unit(page);
 		List<StepForm> converted = filledSteps().stream()

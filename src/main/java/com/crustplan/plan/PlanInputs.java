@@ -8,10 +8,10 @@ import com.crustplan.setup.SetupForm;
 import com.crustplan.surface.SurfaceForm;
 
 /**
- * The inputs of a saved plan, copied (temperatures in °C) so that editing or deleting the surface
- * or setup later never changes a plan the kitchen relies on. Stored as JSON in {@code saved_plan}. A
- * plan in steps has {@code steps} (and {@code setup} is its first heated step's); plans saved before
- * steps existed have none and read as one-setup plans.
+ * The inputs of a saved plan, copied (temperatures in °C) so that editing or deleting the
+ * surface or setup later never changes a plan the kitchen relies on. Stored as JSON in
+ * {@code saved_plan}. A plan in steps has {@code steps} (and {@code setup} is its first
+ * heated step's); plans saved before steps existed have none and read as one-setup plans.
  */
 public record PlanInputs(SurfaceForm surface, SetupForm setup, String targetStage, Double targetLightness,
 		double horizonMinutes, List<PlanStep> steps, Double coreTargetC) {

@@ -9,8 +9,9 @@ import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.message.Message;
 
 /**
- * Everything a plan page or the API shows, computed once by {@link PlanService}. A plan in steps carries
- * its {@link StepsReport} ({@code setup} is then the first step's); a one-setup plan has none.
+ * Everything a plan page or the API shows, computed once by {@link PlanService}. A plan
+ * in steps carries its {@link StepsReport} ({@code setup} is then the first step's); a
+ * one-setup plan has none.
  */
 public record PlanReport(Surface surface, HeatSetup setup, Message targetLabel, double horizonMinutes,
 		CookResult result, List<PlanWarning> warnings, List<Message> cautions, AcrylamideView acrylamide,
@@ -39,7 +40,10 @@ public record PlanReport(Surface surface, HeatSetup setup, Message targetLabel, 
 		return coreOnly() ? steps.result().coreReached() : result.reached();
 	}
 
-	/** Seconds to the target colour (to the core target where that is the only one), or null when not reached. */
+	/**
+	 * Seconds to the target colour (to the core target where that is the only one), or
+	 * null when not reached.
+	 */
 	public Double timeToTargetS() {
 		return coreOnly() ? steps.coreTargetReachedS() : finite(result.timeToTargetS());
 	}

@@ -39,10 +39,10 @@ import com.crustplan.engine.message.Temperature;
 import com.crustplan.engine.message.Text;
 
 /**
- * The one place the web app runs the engine: takes engine inputs (never entities), runs the cook and
- * adds what a kitchen needs around the numbers (warnings with reasons, the usual cautions, swatches),
- * all as messages that the page renders in the cook's unit.
- * A new simulation per call: nothing stateful is shared between requests.
+ * The one place the web app runs the engine: takes engine inputs (never entities), runs
+ * the cook and adds what a kitchen needs around the numbers (warnings with reasons, the
+ * usual cautions, swatches), all as messages that the page renders in the cook's unit. A
+ * new simulation per call: nothing stateful is shared between requests.
  */
 @Service
 public class PlanService {
@@ -50,24 +50,35 @@ public class PlanService {
 	/** Longest plan: the engine's own limit of 6 h. */
 	public static final double MAX_HORIZON_MINUTES = CookSettings.MAX_HORIZON_S / 60;
 
-	/** An hour unless asked otherwise: longer than any sear, roast or fry in the demo kitchen (common practice). */
+	/**
+	 * An hour unless asked otherwise: longer than any sear, roast or fry in the demo
+	 * kitchen (common practice).
+	 */
 	public static final double DEFAULT_HORIZON_MINUTES = 60;
 
-	/** Swatches in the strip: enough to see the colour change, few enough to read on a tablet. */
+	/**
+	 * Swatches in the strip: enough to see the colour change, few enough to read on a
+	 * tablet.
+	 */
 	static final int SWATCHES = 10;
 
-	/** Above neutral, Maillard browning and acrylamide formation speed up (Martins, Jongen & van Boekel 2000, Trends Food Sci Technol 11:364). */
+	/**
+	 * Above neutral, Maillard browning and acrylamide formation speed up (Martins, Jongen
+	 * & van Boekel 2000, Trends Food Sci Technol 11:364).
+	 */
 	static final double ALKALINE_PH = 7;
 
-	/** A plan for the category's usual product, with the acrylamide changes worked out. */
+	/**
+	 * A plan for the category's usual product, with the acrylamide changes worked out.
+	 */
 	public PlanReport plan(Surface surface, HeatSetup setup, Target target, double horizonMinutes) {
 		return plan(surface, Product.defaultFor(surface.category()), setup, target, horizonMinutes, true);
 	}
 
 	/**
 	 * @param product what the surface is sold as (sets the acrylamide benchmark)
-	 * @param withMitigations whether to run the model again for each acrylamide-reducing change
-	 * (a few hundred milliseconds)
+	 * @param withMitigations whether to run the model again for each acrylamide-reducing
+	 * change (a few hundred milliseconds)
 	 */
 	public PlanReport plan(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
 			boolean withMitigations) {
@@ -76,8 +87,9 @@ public class PlanService {
 	}
 
 	/**
-	 * Repeat plan-page views reuse the work done: the report depends only on these (all value records);
-	 * its messages are worded per view, in the cook's unit, so the unit is not part of the key.
+	 * Repeat plan-page views reuse the work done: the report depends only on these (all
+	 * value records); its messages are worded per view, in the cook's unit, so the unit
+	 * is not part of the key.
 	 */
 	private record ReportKey(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
 			boolean withMitigations) {
@@ -94,7 +106,8 @@ public class PlanService {
 		CookSettings settings = CookSettings.defaults().withHorizonS(horizonMinutes * 60);
 		CookResult result = AcrylamideCook.run(surface, setup, target, settings);
 		AcrylamideEstimate estimate = AcrylamideEstimate.of(surface, product, setup, target, result);
-		// where no benchmark applies (meat, fish, vegetables) acrylamide is not the kitchen's concern: no changes offered
+		// where no benchmark applies (meat, fish, vegetables) acrylamide is not the
+		// kitchen's concern: no changes offered
 		List<Mitigation> mitigations = withMitigations && product.benchmark().isPresent()
 				? Mitigations.compute(surface, product, setup, target, settings) : List.of();
 		List<PlanWarning> warnings = warnings(surface, setup, result);
@@ -108,8 +121,8 @@ public class PlanService {
 	}
 
 	/**
-	 * A grill stops the cook where the surface would char; in the other modes a surface hotter than the
-	 * fitted range before the target is flagged.
+	 * A grill stops the cook where the surface would char; in the other modes a surface
+	 * hotter than the fitted range before the target is flagged.
 	 */
 	static Optional<PlanWarning> surfaceLimit(HeatSetup setup, CookResult result) {
 		double limitC = RadiantGrill.CHAR_SURFACE.value();
@@ -134,9 +147,11 @@ public class PlanService {
 	static List<PlanWarning> warnings(Surface surface, HeatSetup setup, CookResult result) {
 		List<PlanWarning> w = new ArrayList<>();
 		if (!result.reached()) {
-			w.add(new PlanWarning("target-not-reached", Message.of("warning.target-not-reached", result.explanation())));
+			w.add(new PlanWarning("target-not-reached",
+					Message.of("warning.target-not-reached", result.explanation())));
 		}
-		// both ways: short of done (food code, raw crumb, a fry's centre) and past juiciness or done long before the colour
+		// both ways: short of done (food code, raw crumb, a fry's centre) and past
+		// juiciness or done long before the colour
 		for (DonenessWarning d : DonenessJudge.judge(surface, setup, result, Cut.WHOLE)) {
 			w.add(new PlanWarning(d.code(), d.message()));
 		}
@@ -151,7 +166,8 @@ public class PlanService {
 		List<Message> c = new ArrayList<>();
 		c.add(Message.of("caution.joined", AcrylamideCautions.CARCINOGEN, AcrylamideCautions.ESTIMATE));
 		c.add(Message.of("caution.probe"));
-		// the code's own figures in both scales: a °F page shows 155 °F, not 154 °F converted from 68 °C
+		// the code's own figures in both scales: a °F page shows 155 °F, not 154 °F
+		// converted from 68 °C
 		c.add(Message.of("caution.food-code", FoodCode.WHOLE_CUT.withFahrenheit(), FoodCode.COMMINUTED.withFahrenheit(),
 				FoodCode.POULTRY.withFahrenheit()));
 		if (setup instanceof DeepFryer) {
@@ -167,10 +183,10 @@ public class PlanService {
 	}
 
 	/**
-	 * A plan in steps (sear, oven, rest): each step a heat setup held until its end; the targets, a colour
-	 * and a core temperature (either may be null, not both), are recorded where they are reached.
-	 * Acrylamide is estimated without the reducing changes, which are worked out for one setup.
-	 *
+	 * A plan in steps (sear, oven, rest): each step a heat setup held until its end; the
+	 * targets, a colour and a core temperature (either may be null, not both), are
+	 * recorded where they are reached. Acrylamide is estimated without the reducing
+	 * changes, which are worked out for one setup.
 	 * @param labels each step's name for the page (a setup's name, "Rest")
 	 */
 	public PlanReport planSteps(Surface surface, Product product, List<CookStep> steps, List<String> labels,
@@ -182,7 +198,10 @@ public class PlanService {
 		return StepPlanner.plan(surface, product, steps, labels, colour, coreTargetC, horizonMinutes);
 	}
 
-	/** A saved or page plan's inputs (°C): in steps when it has them, else one setup with its changes worked out. */
+	/**
+	 * A saved or page plan's inputs (°C): in steps when it has them, else one setup with
+	 * its changes worked out.
+	 */
 	public PlanReport plan(PlanInputs in) {
 		if (!in.stepped()) {
 			return plan(in.surface().toSurface(), in.surface().toProduct(), in.setup().toHeatSetup(), in.target(),
@@ -215,8 +234,9 @@ public class PlanService {
 	static final int RISK_MAP_COLUMNS = 24;
 
 	/**
-	 * The acrylamide risk map around a setup: the mode's usual range of set temperatures (and the setup's
-	 * own) down, times across up to twice the planned time (10 min at least, the horizon at most).
+	 * The acrylamide risk map around a setup: the mode's usual range of set temperatures
+	 * (and the setup's own) down, times across up to twice the planned time (10 min at
+	 * least, the horizon at most).
 	 */
 	public RiskMapView riskMap(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
 			String surfaceName, String setupName) {
@@ -233,7 +253,8 @@ public class PlanService {
 
 	/** The mode's usual range in even steps, with the setup's own temperature added. */
 	static double[] riskMapTemperatures(HeatSetup setup) {
-		// fryer: the common frying range (EU 2017/2158 Annex II asks for below 175 °C); grill: element
+		// fryer: the common frying range (EU 2017/2158 Annex II asks for below 175 °C);
+		// grill: element
 		// temperatures (from memory); pan surfaces and oven air: common practice
 		double from = setup instanceof RadiantGrill ? 500 : 150;
 		double to = setup instanceof DeepFryer ? 190 : setup instanceof RadiantGrill ? 1000 : 250;

@@ -8,10 +8,10 @@ import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.setup.SetupForm;
 
 /**
- * One step of a saved plan, copied like the plan's other inputs (°C): a saved setup's values, or a
- * rest in kitchen air when {@code setup} is null, and how the step ends: after {@code minutes}, at a
- * colour (a stage or an L*), at a core temperature, whichever comes first. Stored inside
- * {@link PlanInputs}.
+ * One step of a saved plan, copied like the plan's other inputs (°C): a saved setup's
+ * values, or a rest in kitchen air when {@code setup} is null, and how the step ends:
+ * after {@code minutes}, at a colour (a stage or an L*), at a core temperature, whichever
+ * comes first. Stored inside {@link PlanInputs}.
  *
  * @param setupName the setup's name when the plan was made (for the timeline and lists)
  * @param restAirC the air a rest step stands in, °C (null: the kitchen air of the model)
@@ -37,13 +37,17 @@ public record PlanStep(SetupForm setup, String setupName, Double restAirC, Doubl
 		return minutes != null || (stage != null && !stage.isBlank()) || lightness != null || coreTemperatureC != null;
 	}
 
-	/** The engine's step; a step without minutes runs to its colour or core, at most {@code horizonMinutes}. */
+	/**
+	 * The engine's step; a step without minutes runs to its colour or core, at most
+	 * {@code horizonMinutes}.
+	 */
 	public CookStep toCookStep(double horizonMinutes) {
 		if (!hasEnd()) {
-			throw new InvalidInputException("minutes", "say when the step ends: minutes, a colour or a core temperature");
+			throw new InvalidInputException("minutes",
+					"say when the step ends: minutes, a colour or a core temperature");
 		}
-		HeatSetup heat = rest()
-				? new Rest(restAirC == null ? HeatSetup.KITCHEN_AIR_C.value() : restAirC) : setup.toHeatSetup();
+		HeatSetup heat = rest() ? new Rest(restAirC == null ? HeatSetup.KITCHEN_AIR_C.value() : restAirC)
+				: setup.toHeatSetup();
 		double maxS = (minutes == null ? horizonMinutes : minutes) * 60;
 		return new CookStep(heat, maxS, colour(), coreTemperatureC);
 	}

@@ -19,8 +19,8 @@ import com.crustplan.system.NotFoundException;
 import com.crustplan.system.TemperatureUnit;
 
 /**
- * The plan page's steps: step rows resolved to saved setups and copied into {@link PlanInputs} (°C),
- * and their errors worded for the cook ("Step 2, minutes: …").
+ * The plan page's steps: step rows resolved to saved setups and copied into
+ * {@link PlanInputs} (°C), and their errors worded for the cook ("Step 2, minutes: …").
  */
 final class PlanStepsForm {
 
@@ -74,7 +74,10 @@ final class PlanStepsForm {
 		return Optional.of(new PlanController.Resolved(inputs, surface.getName(), names(names)));
 	}
 
-	/** A one-setup plan aimed at the core too: one step that ends when the core reaches it. */
+	/**
+	 * A one-setup plan aimed at the core too: one step that ends when the core reaches
+	 * it.
+	 */
 	static PlanInputs toCore(PlanInputs in, String setupName, PlanForm form) {
 		Double core = form.unit(TemperatureUnit.CELSIUS).toCelsius(form.coreTarget());
 		PlanStep step = new PlanStep(in.setup(), setupName, null, null, null, null, core);

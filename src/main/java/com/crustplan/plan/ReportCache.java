@@ -6,21 +6,26 @@ import java.util.Objects;
 import java.util.function.Function;
 
 /**
- * A small least-recently-used cache of finished plan reports. A report is a pure function of its
- * inputs and of the model, and the model is the code of this process, so a deploy of a new model
- * starts with an empty cache; the key also carries the build's version to make that explicit. Two
- * requests missing the same key at once both compute it: wasted work, never a wrong answer.
+ * A small least-recently-used cache of finished plan reports. A report is a pure function
+ * of its inputs and of the model, and the model is the code of this process, so a deploy
+ * of a new model starts with an empty cache; the key also carries the build's version to
+ * make that explicit. Two requests missing the same key at once both compute it: wasted
+ * work, never a wrong answer.
  */
 final class ReportCache<K, V> {
 
 	/**
-	 * Reports kept: the demo kitchen has a few dozen surface × setup pairs; a report with its series
-	 * is about 100 kB, so 128 stay within about 13 MB of heap (calibrated to the demo plans).
+	 * Reports kept: the demo kitchen has a few dozen surface × setup pairs; a report with
+	 * its series is about 100 kB, so 128 stay within about 13 MB of heap (calibrated to
+	 * the demo plans).
 	 */
 	static final int PLAN_REPORTS = 128;
 
-	/** The build that computed the reports (jar manifest; "dev" when run from classes). */
-	static final String MODEL_VERSION = Objects.requireNonNullElse(ReportCache.class.getPackage().getImplementationVersion(), "dev");
+	/**
+	 * The build that computed the reports (jar manifest; "dev" when run from classes).
+	 */
+	static final String MODEL_VERSION = Objects
+		.requireNonNullElse(ReportCache.class.getPackage().getImplementationVersion(), "dev");
 
 	private record Entry<K>(K key, String modelVersion) {
 	}

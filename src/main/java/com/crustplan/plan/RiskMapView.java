@@ -8,8 +8,9 @@ import com.crustplan.engine.colour.ColourPath;
 import com.crustplan.engine.message.Message;
 
 /**
- * The acrylamide risk map as the page shows it: set temperatures down, times across, each cell the
- * predicted colour with the acrylamide zone of the portion; the first cell at or past the target per row.
+ * The acrylamide risk map as the page shows it: set temperatures down, times across, each
+ * cell the predicted colour with the acrylamide zone of the portion; the first cell at or
+ * past the target per row.
  */
 public record RiskMapView(String surfaceName, String setupName, Message targetLabel, String product,
 		Double benchmarkUgPerKg, List<Double> timesS, List<Row> rows, List<Message> cautions) {
@@ -42,11 +43,12 @@ public record RiskMapView(String surfaceName, String setupName, Message targetLa
 				cells.add(new Cell(path.colourAt(c.browningExtent()).hex(), c.stageLabel(), c.portionUgPerKg(), zone,
 						target));
 			}
-			rows.add(new Row(r.temperatureC(), PlanReport.finite(r.targetTimeS()), PlanReport.finite(r.targetPortionUgPerKg()),
-					cells));
+			rows.add(new Row(r.temperatureC(), PlanReport.finite(r.targetTimeS()),
+					PlanReport.finite(r.targetPortionUgPerKg()), cells));
 		}
 		return new RiskMapView(surfaceName, setupName, map.targetDescription(), map.product().label(),
-				map.benchmarkOrNull() == null ? null : map.benchmarkOrNull().microgramsPerKg(), times, rows, map.cautions());
+				map.benchmarkOrNull() == null ? null : map.benchmarkOrNull().microgramsPerKg(), times, rows,
+				map.cautions());
 	}
 
 }

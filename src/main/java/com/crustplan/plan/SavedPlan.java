@@ -15,7 +15,10 @@ import jakarta.persistence.Version;
 @Table(name = "saved_plan")
 public class SavedPlan {
 
-	/** The column's length (Flyway V4): fits the inputs' JSON even when every text is escaped at its longest. */
+	/**
+	 * The column's length (Flyway V4): fits the inputs' JSON even when every text is
+	 * escaped at its longest.
+	 */
 	static final int INPUTS_MAX = 20000;
 
 	@Id

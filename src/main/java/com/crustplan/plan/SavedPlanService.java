@@ -11,7 +11,9 @@ import com.crustplan.system.TemperatureUnit;
 
 import tools.jackson.databind.json.JsonMapper;
 
-/** Saved plans; a save is one transaction of one row, so it is there whole or not at all. */
+/**
+ * Saved plans; a save is one transaction of one row, so it is there whole or not at all.
+ */
 @Service
 public class SavedPlanService {
 
@@ -34,12 +36,14 @@ public class SavedPlanService {
 		PlanInputs celsius = new PlanInputs(inputs.surface().inUnit(TemperatureUnit.CELSIUS),
 				inputs.setup() == null ? null : inputs.setup().inUnit(TemperatureUnit.CELSIUS), inputs.targetStage(),
 				inputs.targetLightness(), inputs.horizonMinutes(), inputs.steps(), inputs.coreTargetC());
-		// the label is kept as text for the list of plans; a target is a stage or an L*, never a temperature
-		// a core-only target would be a temperature in °C: the list names it without the figure
+		// the label is kept as text for the list of plans; a target is a stage or an L*,
+		// never a temperature
+		// a core-only target would be a temperature in °C: the list names it without the
+		// figure
 		String label = "target.core".equals(report.targetLabel().code()) ? "Core temperature"
 				: text.celsius(report.targetLabel());
-		return plans.save(new SavedPlan(name.trim(), surfaceName, setupName, label,
-				json.writeValueAsString(celsius), report.reached(), report.timeToTargetS(), username));
+		return plans.save(new SavedPlan(name.trim(), surfaceName, setupName, label, json.writeValueAsString(celsius),
+				report.reached(), report.timeToTargetS(), username));
 	}
 
 	@Transactional(readOnly = true)

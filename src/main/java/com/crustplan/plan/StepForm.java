@@ -1,9 +1,10 @@
 package com.crustplan.plan;
 
 /**
- * One step row of the plan page: {@code setup} is a saved setup's id or {@link #REST}, and the step
- * ends after {@code minutes}, at a {@code stage}, or at a {@code core} temperature (in the form's unit),
- * whichever comes first. A row with no setup is left out.
+ * One step row of the plan page: {@code setup} is a saved setup's id or {@link #REST},
+ * and the step ends after {@code minutes}, at a {@code stage}, or at a {@code core}
+ * temperature (in the form's unit), whichever comes first. A row with no setup is left
+ * out.
  */
 public record StepForm(String setup, Double minutes, String stage, Double core) {
 

@@ -38,19 +38,28 @@ import com.crustplan.engine.message.Temperature;
 import com.crustplan.engine.message.Text;
 
 /**
- * Plans a cook in steps for {@link PlanService}: runs the steps, and turns the run into what the line
- * works from: a timeline of checkpoints (flip, into the oven, probe, pull, rest) and which target came
- * first. No Spring; a new simulation per call.
+ * Plans a cook in steps for {@link PlanService}: runs the steps, and turns the run into
+ * what the line works from: a timeline of checkpoints (flip, into the oven, probe, pull,
+ * rest) and which target came first. No Spring; a new simulation per call.
  */
 final class StepPlanner {
 
-	/** Start probing this far below the pull temperature: a probe reading lags and a cut cooks on (common practice). */
+	/**
+	 * Start probing this far below the pull temperature: a probe reading lags and a cut
+	 * cooks on (common practice).
+	 */
 	static final double PROBE_AHEAD_K = 5;
 
-	/** More flips than this in one step are one line ("turn every 60 s"), not one line each (readability). */
+	/**
+	 * More flips than this in one step are one line ("turn every 60 s"), not one line
+	 * each (readability).
+	 */
 	static final int FLIPS_LISTED = 4;
 
-	/** A rise of the core after the pull smaller than this is not worth a line (about a probe's resolution, common practice). */
+	/**
+	 * A rise of the core after the pull smaller than this is not worth a line (about a
+	 * probe's resolution, common practice).
+	 */
 	static final double CARRY_OVER_SHOWN_K = 0.5;
 
 	private StepPlanner() {
@@ -62,7 +71,8 @@ final class StepPlanner {
 			throw new InvalidInputException("target", "give a colour (stage or L*), a core temperature, or both");
 		}
 		if (coreTargetC != null && !(coreTargetC > -20 && coreTargetC <= 120)) {
-			throw new InvalidInputException("target.coreTemperatureC", "a core target lies above −20 °C and at most 120 °C");
+			throw new InvalidInputException("target.coreTemperatureC",
+					"a core target lies above −20 °C and at most 120 °C");
 		}
 		FoodCategory category = surface.category();
 		if (colour != null) {
@@ -81,7 +91,8 @@ final class StepPlanner {
 		CookSettings settings = CookSettings.defaults().withHorizonS(horizonMinutes * 60);
 		StepsResult run = AcrylamideCook.runSteps(surface, steps, colour, coreTargetC, settings);
 		CookResult result = run.cook();
-		// a plan with no colour target is never flagged darker than the colour guide: judge it at the lightest stage
+		// a plan with no colour target is never flagged darker than the colour guide:
+		// judge it at the lightest stage
 		Target judged = colour != null ? colour : Target.stage(category.stages().get(0).key());
 		List<HeatSetup> heats = steps.stream().map(CookStep::setup).filter(h -> !(h instanceof Rest)).toList();
 		HeatSetup first = heats.isEmpty() ? steps.get(0).setup() : heats.get(0);
@@ -110,7 +121,8 @@ final class StepPlanner {
 				: Message.of("target.core", Temperature.celsius(coreTargetC));
 		StepsReport report = new StepsReport(steps, labels, run, coreTargetC, timeline(steps, run, category),
 				targetOrder(run, colour, coreTargetC, category));
-		// acrylamide changes are worked out for one setup; a plan in steps shows the estimate without them
+		// acrylamide changes are worked out for one setup; a plan in steps shows the
+		// estimate without them
 		return new PlanReport(surface, first, label, horizonMinutes, result, warnings, cautions,
 				AcrylamideView.of(estimate, List.of()), PlanService.swatches(result), report);
 	}
@@ -120,14 +132,16 @@ final class StepPlanner {
 		CookResult result = run.cook();
 		List<PlanWarning> w = new ArrayList<>();
 		if (colour != null && !result.reached()) {
-			w.add(new PlanWarning("target-not-reached", Message.of("warning.target-not-reached", result.explanation())));
+			w.add(new PlanWarning("target-not-reached",
+					Message.of("warning.target-not-reached", result.explanation())));
 		}
 		double peak = result.series().stream().mapToDouble(Sample::coreTemperatureC).max().orElse(Double.NaN);
 		if (coreTargetC != null && !run.coreReached()) {
 			w.add(new PlanWarning("core-target-not-reached", Message.of("warning.core-target-not-reached",
 					Temperature.celsius(coreTargetC), Temperature.celsius(peak))));
 		}
-		// doneness both ways (food code, juiciness, crumb, fry centre), judged at the end of the last step
+		// doneness both ways (food code, juiciness, crumb, fry centre), judged at the end
+		// of the last step
 		for (DonenessWarning d : DonenessJudge.judge(surface, steps, run, Cut.WHOLE)) {
 			w.add(new PlanWarning(d.code(), d.message()));
 		}
@@ -138,7 +152,10 @@ final class StepPlanner {
 		return w;
 	}
 
-	/** Which target came first and by how much; or which was missed. Null for one target that was reached. */
+	/**
+	 * Which target came first and by how much; or which was missed. Null for one target
+	 * that was reached.
+	 */
 	static Message targetOrder(StepsResult run, Target colour, Double coreTargetC, FoodCategory category) {
 		boolean colourReached = colour != null && run.colourReached();
 		boolean coreReached = coreTargetC != null && run.coreReached();
@@ -155,8 +172,8 @@ final class StepPlanner {
 		Temperature core = Temperature.celsius(coreTargetC);
 		if (colourReached && coreReached) {
 			double lead = run.colourLeadOverCoreS();
-			return Message.of(lead <= 0 ? "targets.colour-first" : "targets.core-first", crust, duration(Math.abs(lead)),
-					core);
+			return Message.of(lead <= 0 ? "targets.colour-first" : "targets.core-first", crust,
+					duration(Math.abs(lead)), core);
 		}
 		if (colourReached) {
 			return Message.of("targets.core-not-reached", crust, core);
@@ -173,8 +190,9 @@ final class StepPlanner {
 	}
 
 	/**
-	 * The checkpoints of a run in time order: each step's start, the flips within it, a probe reading
-	 * before a pull on the core, the pull, the carry-over peak of a rest, and the end.
+	 * The checkpoints of a run in time order: each step's start, the flips within it, a
+	 * probe reading before a pull on the core, the pull, the carry-over peak of a rest,
+	 * and the end.
 	 */
 	static List<StepsReport.Checkpoint> timeline(List<CookStep> steps, StepsResult run, FoodCategory category) {
 		List<StepsReport.Checkpoint> out = new ArrayList<>();
@@ -186,11 +204,12 @@ final class StepPlanner {
 			out.add(new StepsReport.Checkpoint(r.startS(), "step", into(h)));
 			flips(h.schedule(), r, out);
 			if (r.endedBy() == CookStep.Ending.CORE) {
-				double probeAt = firstTimeCoreAbove(series, r.startS(), r.endS(), step.coreTemperatureC() - PROBE_AHEAD_K);
+				double probeAt = firstTimeCoreAbove(series, r.startS(), r.endS(),
+						step.coreTemperatureC() - PROBE_AHEAD_K);
 				if (Double.isFinite(probeAt) && probeAt > r.startS() + 1) {
-					out.add(new StepsReport.Checkpoint(probeAt, "probe", Message.of("timeline.probe",
-							Temperature.celsius(step.coreTemperatureC() - PROBE_AHEAD_K),
-							Temperature.celsius(step.coreTemperatureC()))));
+					out.add(new StepsReport.Checkpoint(probeAt, "probe",
+							Message.of("timeline.probe", Temperature.celsius(step.coreTemperatureC() - PROBE_AHEAD_K),
+									Temperature.celsius(step.coreTemperatureC()))));
 				}
 				out.add(new StepsReport.Checkpoint(r.endS(), "pull",
 						Message.of("timeline.pull.core", Temperature.celsius(step.coreTemperatureC()))));

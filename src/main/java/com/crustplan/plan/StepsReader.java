@@ -14,14 +14,17 @@ import com.crustplan.engine.input.InvalidInputException;
 
 /**
  * Reads the {@code steps} of a {@code POST /api/v1/plans} body and the plan target's
- * {@code coreTemperatureC}: each step a {@code heat} (as a one-setup plan's, or {@code mode: "rest"}
- * with an optional air {@code temperatureC}) and its end ({@code minutes}, {@code stage} or
- * {@code lightness}, {@code coreTemperatureC}; whichever comes first). Every error names its JSON path
- * ({@code steps[1].minutes}).
+ * {@code coreTemperatureC}: each step a {@code heat} (as a one-setup plan's, or
+ * {@code mode: "rest"} with an optional air {@code temperatureC}) and its end
+ * ({@code minutes}, {@code stage} or {@code lightness}, {@code coreTemperatureC};
+ * whichever comes first). Every error names its JSON path ({@code steps[1].minutes}).
  */
 final class StepsReader {
 
-	/** Most steps in one plan: more than any kitchen sequence needs (common practice), few enough to chart. */
+	/**
+	 * Most steps in one plan: more than any kitchen sequence needs (common practice), few
+	 * enough to chart.
+	 */
 	static final int MAX_STEPS = 12;
 
 	/** One step as the body gives it. */
@@ -35,7 +38,10 @@ final class StepsReader {
 	private StepsReader() {
 	}
 
-	/** The steps, or null where any of them has an error (all errors are reported to {@code errors}). */
+	/**
+	 * The steps, or null where any of them has an error (all errors are reported to
+	 * {@code errors}).
+	 */
 	static Steps read(List<StepBody> body, FoodCategory category, double horizonMinutes, FieldErrors errors) {
 		if (body.isEmpty() || body.size() > MAX_STEPS) {
 			errors.add("steps", "give 1 to " + MAX_STEPS + " steps");
@@ -54,7 +60,8 @@ final class StepsReader {
 		return errors.hasUnder("steps") && !before ? null : new Steps(steps, labels);
 	}
 
-	private static CookStep step(StepBody s, String at, FoodCategory category, double horizonMinutes, FieldErrors errors) {
+	private static CookStep step(StepBody s, String at, FoodCategory category, double horizonMinutes,
+			FieldErrors errors) {
 		if (s == null) {
 			errors.add(at, "must be a JSON object with a heat and an end");
 			return null;
@@ -62,7 +69,8 @@ final class StepsReader {
 		PlanBody.HeatBody h = s.heat();
 		HeatSetup heat = null;
 		if (h == null) {
-			errors.add(at + ".heat", "is required (a JSON object, as a one-setup plan's heat, or {\"mode\": \"rest\"})");
+			errors.add(at + ".heat",
+					"is required (a JSON object, as a one-setup plan's heat, or {\"mode\": \"rest\"})");
 		}
 		else if (h.mode() != null && "rest".equalsIgnoreCase(h.mode().trim())) {
 			Double air = h.temperatureC();
@@ -83,7 +91,10 @@ final class StepsReader {
 		return engine(() -> new CookStep(setup, maxS, colour, s.coreTemperatureC()), at, errors);
 	}
 
-	/** A colour end of a step or of the plan target, checked against the category; null when none is given. */
+	/**
+	 * A colour end of a step or of the plan target, checked against the category; null
+	 * when none is given.
+	 */
 	static Target colour(String stageGiven, Double lightness, String at, FoodCategory category, FieldErrors errors) {
 		String stage = errors.text(at + ".stage", stageGiven, PlanBody.KEY_MAX);
 		if (lightness == null && stage == null) {
@@ -116,7 +127,9 @@ final class StepsReader {
 		return c;
 	}
 
-	/** An error on the step itself or on one of its fields (steps[1] is not steps[10]). */
+	/**
+	 * An error on the step itself or on one of its fields (steps[1] is not steps[10]).
+	 */
 	private static boolean wrong(FieldErrors errors, String at) {
 		return errors.has(at) || errors.hasUnder(at + ".");
 	}
@@ -128,7 +141,8 @@ final class StepsReader {
 		}
 		catch (InvalidInputException e) {
 			String f = e.field();
-			errors.add(at + "." + (f.equals("temperatureC") && !at.endsWith(".heat") ? "heat.temperatureC" : f), e.reason());
+			errors.add(at + "." + (f.equals("temperatureC") && !at.endsWith(".heat") ? "heat.temperatureC" : f),
+					e.reason());
 			return null;
 		}
 	}

@@ -2,7 +2,10 @@ package com.crustplan.plan;
 
 import java.util.Locale;
 
-/** The predicted surface colour at one time; {@code target} marks the swatch at the target time. */
+/**
+ * The predicted surface colour at one time; {@code target} marks the swatch at the target
+ * time.
+ */
 public record Swatch(double timeS, String hex, double lightness, boolean target) {
 
 	/** For screen readers: the time as a kitchen timer shows it and the lightness. */

@@ -15,10 +15,11 @@ import com.crustplan.engine.heat.PanMaterial;
 import com.crustplan.engine.input.InvalidInputException;
 
 /**
- * The pan's or fryer's body from what a cook sets: a missing value takes the engine's default for a
- * typical line pan or fryer ({@link PanBody#DEFAULT}, {@link FryerBody#DEFAULT}). Shared by the setup
- * form, saved plans and the JSON API. The engine checks the ranges and names the field
- * (massKg, diameterCm, powerKw, coverPct, oilLitres, heaterKw, loadKg; material and control here).
+ * The pan's or fryer's body from what a cook sets: a missing value takes the engine's
+ * default for a typical line pan or fryer ({@link PanBody#DEFAULT},
+ * {@link FryerBody#DEFAULT}). Shared by the setup form, saved plans and the JSON API. The
+ * engine checks the ranges and names the field (massKg, diameterCm, powerKw, coverPct,
+ * oilLitres, heaterKw, loadKg; material and control here).
  */
 public final class EquipmentSettings {
 
@@ -87,7 +88,10 @@ public final class EquipmentSettings {
 		return new FryerBody(or(oilLitres, d.oilLitres()), or(heaterKw, d.heaterKw()), or(loadKg, d.loadKg()));
 	}
 
-	/** The setup with the pan's or the fryer's body; other modes have none and come back as they are. */
+	/**
+	 * The setup with the pan's or the fryer's body; other modes have none and come back
+	 * as they are.
+	 */
 	public static HeatSetup withBody(HeatSetup setup, PanBody pan, FryerBody fryer) {
 		if (setup instanceof PanContact p && pan != null) {
 			return p.withBody(pan);
@@ -98,7 +102,10 @@ public final class EquipmentSettings {
 		return setup;
 	}
 
-	/** The body in a line for the setup list: "cast iron, 2.3 kg, 28 cm, 2.5 kW, heat kept up, 50 % covered". */
+	/**
+	 * The body in a line for the setup list: "cast iron, 2.3 kg, 28 cm, 2.5 kW, heat kept
+	 * up, 50 % covered".
+	 */
 	static String summary(SavedSetup s) {
 		if (s.getHeatMode() == HeatMode.PAN && s.getPanMassKg() != null) {
 			String material = Arrays.stream(PanMaterial.values())
@@ -106,9 +113,10 @@ public final class EquipmentSettings {
 				.map(PanMaterial::label)
 				.findFirst()
 				.orElse(s.getPanMaterial());
-			String control = s.getPanControl() == null ? "" : Control.byKey(s.getPanControl())
-				.map(c -> c == Control.KEPT_UP ? "heat kept up" : "flame left as set")
-				.orElse(s.getPanControl());
+			String control = s.getPanControl() == null ? ""
+					: Control.byKey(s.getPanControl())
+						.map(c -> c == Control.KEPT_UP ? "heat kept up" : "flame left as set")
+						.orElse(s.getPanControl());
 			return material + ", " + plain(s.getPanMassKg()) + " kg, " + plain(s.getPanDiameterCm()) + " cm, "
 					+ plain(s.getPanPowerKw()) + " kW, " + control + ", " + plain(s.getPanCoverPct()) + " % covered";
 		}
@@ -143,8 +151,8 @@ public final class EquipmentSettings {
 		}
 		return Control.byKey(key)
 			.map(c -> c.engine)
-			.orElseThrow(() -> new InvalidInputException("control",
-					"'" + key.trim() + "' is not a control; use thermostat (heat kept up) or fixed-input (flame left as set)"));
+			.orElseThrow(() -> new InvalidInputException("control", "'" + key.trim()
+					+ "' is not a control; use thermostat (heat kept up) or fixed-input (flame left as set)"));
 	}
 
 	private static String keys(PanMaterial[] all) {

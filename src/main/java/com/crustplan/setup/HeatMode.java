@@ -3,7 +3,10 @@ package com.crustplan.setup;
 import java.util.Arrays;
 import java.util.Optional;
 
-/** The four ways heat reaches food, with the words a cook uses and which settings each one reads. */
+/**
+ * The four ways heat reaches food, with the words a cook uses and which settings each one
+ * reads.
+ */
 public enum HeatMode {
 
 	PAN("pan", "Pan or griddle (contact)", true, false, false, true),
@@ -56,7 +59,10 @@ public enum HeatMode {
 		return usesSteam;
 	}
 
-	/** A grill reads its kind, and either a heat flux at the food or an element temperature with a distance. */
+	/**
+	 * A grill reads its kind, and either a heat flux at the food or an element
+	 * temperature with a distance.
+	 */
 	public boolean usesGrill() {
 		return this == GRILL;
 	}

@@ -10,28 +10,37 @@ import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.water.Atmosphere;
 
 /**
- * Builds the engine's heat setup from what a cook sets, in °C. Shared by the setup form, saved plans
- * and the JSON API so all three read the settings the same way. Settings a mode does not use are
- * ignored; missing ones take the defaults below.
+ * Builds the engine's heat setup from what a cook sets, in °C. Shared by the setup form,
+ * saved plans and the JSON API so all three read the settings the same way. Settings a
+ * mode does not use are ignored; missing ones take the defaults below.
  */
 public final class HeatSettings {
 
 	/** Oiled pan unless told otherwise: how most searing is done (common practice). */
 	public static final boolean DEFAULT_FAT_FILM = true;
 
-	/** Dry oven air when no steam is given: kitchen air drawn in, about 1.6 % steam by volume. */
+	/**
+	 * Dry oven air when no steam is given: kitchen air drawn in, about 1.6 % steam by
+	 * volume.
+	 */
 	public static final double DEFAULT_STEAM_PCT = Math.round(Atmosphere.KITCHEN_STEAM_FRACTION * 1000) / 10.0;
 
-	/** Turned once a minute in a pan or under a grill unless told otherwise (common practice). */
+	/**
+	 * Turned once a minute in a pan or under a grill unless told otherwise (common
+	 * practice).
+	 */
 	public static final double DEFAULT_FLIP_EVERY_S = 60;
 
-	/** A grill is a salamander unless told otherwise: the kitchen's usual radiant grill. */
+	/**
+	 * A grill is a salamander unless told otherwise: the kitchen's usual radiant grill.
+	 */
 	public static final GrillKind DEFAULT_GRILL = GrillKind.SALAMANDER;
 
 	/**
-	 * The old "humidity %" that a cook read off a combi oven: readings at or below this are its dry,
-	 * vented range (the moisture the food gives off, no steam added) and stay dry kitchen air.
-	 * Assumption: combi ovens show 0 % for hot air with the vent open (common practice).
+	 * The old "humidity %" that a cook read off a combi oven: readings at or below this
+	 * are its dry, vented range (the moisture the food gives off, no steam added) and
+	 * stay dry kitchen air. Assumption: combi ovens show 0 % for hot air with the vent
+	 * open (common practice).
 	 */
 	public static final double LEGACY_DRY_READING_PCT = 10;
 
@@ -39,11 +48,12 @@ public final class HeatSettings {
 	}
 
 	/**
-	 * The steam share a cook meant by a round-one "humidity %" (as migration V5 converts saved setups):
-	 * a combi oven's humidity scale runs from hot air with the vent open to pure steam, so a reading of
-	 * up to 10 % is dry kitchen air (1.6 %) and above it the share rises linearly to 100 % steam at 100:
-	 * y = 1.6 + (h − 10)·98.4/90. Relative humidity at the oven temperature, which the old field was
-	 * read as, made even 10 % pure steam above about 180 °C.
+	 * The steam share a cook meant by a round-one "humidity %" (as migration V5 converts
+	 * saved setups): a combi oven's humidity scale runs from hot air with the vent open
+	 * to pure steam, so a reading of up to 10 % is dry kitchen air (1.6 %) and above it
+	 * the share rises linearly to 100 % steam at 100: y = 1.6 + (h − 10)·98.4/90.
+	 * Relative humidity at the oven temperature, which the old field was read as, made
+	 * even 10 % pure steam above about 180 °C.
 	 */
 	public static double steamPctFromLegacyHumidity(double humidityPct) {
 		if (!Double.isFinite(humidityPct) || humidityPct < 0 || humidityPct > 100) {
@@ -52,23 +62,32 @@ public final class HeatSettings {
 		if (humidityPct <= LEGACY_DRY_READING_PCT) {
 			return DEFAULT_STEAM_PCT;
 		}
-		return DEFAULT_STEAM_PCT + (humidityPct - LEGACY_DRY_READING_PCT) * (100 - DEFAULT_STEAM_PCT)
-				/ (100 - LEGACY_DRY_READING_PCT);
+		return DEFAULT_STEAM_PCT
+				+ (humidityPct - LEGACY_DRY_READING_PCT) * (100 - DEFAULT_STEAM_PCT) / (100 - LEGACY_DRY_READING_PCT);
 	}
 
-	/** As set by a cook, every setting optional but the mode (and, except for a grill given by flux, the temperature). */
+	/**
+	 * As set by a cook, every setting optional but the mode (and, except for a grill
+	 * given by flux, the temperature).
+	 */
 	public record Values(Double temperatureC, Boolean fan, Boolean fatFilm, Double steamPct, Double legacyHumidityPct,
 			Double flipEverySeconds, String grill, Double heatFluxKwPerM2, Double distanceMm) {
 	}
 
-	/** Round one's settings: {@code relativeHumidityPct} is the old humidity reading, converted as the migration does. */
+	/**
+	 * Round one's settings: {@code relativeHumidityPct} is the old humidity reading,
+	 * converted as the migration does.
+	 */
 	public static HeatSetup toHeatSetup(HeatMode mode, Double temperatureC, Boolean fan, Boolean fatFilm,
 			Double relativeHumidityPct, Double flipEverySeconds) {
 		return toHeatSetup(mode,
 				new Values(temperatureC, fan, fatFilm, null, relativeHumidityPct, flipEverySeconds, null, null, null));
 	}
 
-	/** Throws {@link InvalidInputException} naming the engine field (temperatureC, steamPct, heatFluxKwPerM2 ...). */
+	/**
+	 * Throws {@link InvalidInputException} naming the engine field (temperatureC,
+	 * steamPct, heatFluxKwPerM2 ...).
+	 */
 	public static HeatSetup toHeatSetup(HeatMode mode, Values v) {
 		if (mode == null) {
 			throw new InvalidInputException("mode", "choose pan, oven, grill or fryer");

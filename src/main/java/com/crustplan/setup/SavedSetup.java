@@ -14,7 +14,10 @@ import com.crustplan.engine.heat.PanBody;
 import com.crustplan.system.KitchenRecord;
 import com.crustplan.system.TemperatureUnit;
 
-/** A piece of the kitchen's equipment at a setting ("Plancha, high"). Never handed to the engine. */
+/**
+ * A piece of the kitchen's equipment at a setting ("Plancha, high"). Never handed to the
+ * engine.
+ */
 @Entity
 @Table(name = "heat_setup")
 public class SavedSetup extends KitchenRecord {
@@ -34,7 +37,10 @@ public class SavedSetup extends KitchenRecord {
 	@Column(name = "steam_pct")
 	private Double steamPct;
 
-	/** Round one's "humidity %" as it was saved, kept by migration V5 so the page can say what it changed. */
+	/**
+	 * Round one's "humidity %" as it was saved, kept by migration V5 so the page can say
+	 * what it changed.
+	 */
 	@Column(name = "relative_humidity_pct")
 	private Double legacyHumidityPct;
 
@@ -50,7 +56,8 @@ public class SavedSetup extends KitchenRecord {
 	@Column(name = "flip_every_seconds")
 	private Double flipEverySeconds;
 
-	// the pan's or the fryer's body, the defaults filled in (V8); null for the other modes
+	// the pan's or the fryer's body, the defaults filled in (V8); null for the other
+	// modes
 
 	@Column(name = "pan_material", length = 40)
 	private String panMaterial;
@@ -88,7 +95,9 @@ public class SavedSetup extends KitchenRecord {
 		return s;
 	}
 
-	/** Only the settings the mode uses are kept, so a list never shows a fryer with a fan. */
+	/**
+	 * Only the settings the mode uses are kept, so a list never shows a fryer with a fan.
+	 */
 	public void update(SetupForm f) {
 		HeatMode m = f.heatMode();
 		rename(f.name(), f.notes());
@@ -97,7 +106,8 @@ public class SavedSetup extends KitchenRecord {
 		fan = m.usesFan() && Boolean.TRUE.equals(f.fan());
 		fatFilm = m.usesFatFilm() ? (f.fatFilm() == null ? HeatSettings.DEFAULT_FAT_FILM : f.fatFilm()) : false;
 		steamPct = m.usesSteam() ? f.effectiveSteamPct() : null;
-		// saved through the form: the cook has seen the steam share, the round-one reading has done its job
+		// saved through the form: the cook has seen the steam share, the round-one
+		// reading has done its job
 		legacyHumidityPct = null;
 		boolean byFlux = m.usesGrill() && f.heatFluxKwPerM2() != null;
 		grill = m.usesGrill() ? (f.grill() == null || f.grill().isBlank() ? HeatSettings.DEFAULT_GRILL.key()
@@ -105,7 +115,8 @@ public class SavedSetup extends KitchenRecord {
 		heatFluxKwPerM2 = byFlux ? f.heatFluxKwPerM2() : null;
 		distanceMm = m.usesGrill() && !byFlux ? f.distanceMm() : null;
 		if (byFlux) {
-			// the column needs a temperature: the element temperature the flux implies at the usual distance
+			// the column needs a temperature: the element temperature the flux implies at
+			// the usual distance
 			temperatureC = f.toHeatSetup().temperatureC();
 		}
 		flipEverySeconds = m.usesFlip()
@@ -175,7 +186,10 @@ public class SavedSetup extends KitchenRecord {
 		return distanceMm;
 	}
 
-	/** For a grill: the heat flux at the food, given or worked out from the element temperature, kW/m². */
+	/**
+	 * For a grill: the heat flux at the food, given or worked out from the element
+	 * temperature, kW/m².
+	 */
 	public Double getFluxAtFoodKwPerM2() {
 		return grillSetup() == null ? null : grillSetup().heatFluxKwPerM2();
 	}
@@ -237,7 +251,10 @@ public class SavedSetup extends KitchenRecord {
 		return fryerLoadKg;
 	}
 
-	/** The pan's material and control in words, for the list ("cast iron, heat kept up"); null if none. */
+	/**
+	 * The pan's material and control in words, for the list ("cast iron, heat kept up");
+	 * null if none.
+	 */
 	public String getBodySummary() {
 		return EquipmentSettings.summary(this);
 	}

@@ -70,10 +70,14 @@ class SetupController {
 		SavedSetup s = setups.get(id);
 		model.addAttribute("version", s.getVersion());
 		model.addAttribute("legacyHumidityPct", s.getLegacyHumidityPct());
-		return form(model, SetupForm.of(s, units).withBodyDefaults(), null, "/setups/" + id + "/edit", "Edit " + s.getName(), units);
+		return form(model, SetupForm.of(s, units).withBodyDefaults(), null, "/setups/" + id + "/edit",
+				"Edit " + s.getName(), units);
 	}
 
-	/** As for surfaces: a save from a stale form comes back with both versions, nothing typed lost. */
+	/**
+	 * As for surfaces: a save from a stale form comes back with both versions, nothing
+	 * typed lost.
+	 */
 	@PostMapping("/{id}/edit")
 	String update(@PathVariable long id, @Valid @ModelAttribute("form") SetupForm form, BindingResult result,
 			@RequestParam(name = "version", required = false) Integer version,
@@ -117,8 +121,8 @@ class SetupController {
 		String name = "Copy of " + s.getName();
 		model.addAttribute("formToken", FormTokens.issue());
 		return form(model,
-				SetupForm.of(s, units).withBodyDefaults().withName(name.length() > 80 ? name.substring(0, 80) : name), null,
-				"/setups/new", name, units);
+				SetupForm.of(s, units).withBodyDefaults().withName(name.length() > 80 ? name.substring(0, 80) : name),
+				null, "/setups/new", name, units);
 	}
 
 	@GetMapping("/{id}/delete")
@@ -135,9 +139,10 @@ class SetupController {
 		}
 		catch (ConcurrencyFailureException | NotFoundException e) {
 			boolean gone = setups.all().stream().noneMatch(s -> s.getId() == id);
-			redirect.addFlashAttribute("message", gone ? "Setup “" + name + "” was already deleted by someone else."
-					: "Setup “" + name + "” was changed by someone else while you deleted it, so it was kept. "
-							+ "Delete it again if you still want to.");
+			redirect.addFlashAttribute("message",
+					gone ? "Setup “" + name + "” was already deleted by someone else."
+							: "Setup “" + name + "” was changed by someone else while you deleted it, so it was kept. "
+									+ "Delete it again if you still want to.");
 			return "redirect:/setups";
 		}
 		redirect.addFlashAttribute("message", "Setup “" + name + "” deleted. Saved plans keep their own copy.");
@@ -154,7 +159,8 @@ class SetupController {
 		}
 		catch (InvalidInputException e) {
 			EngineErrors.bind(e, result, SetupForm::formField, form.unit(), form.temperatureC(), "temperature");
-			// a wrong pan or fryer value is named as well, not only the first wrong setting
+			// a wrong pan or fryer value is named as well, not only the first wrong
+			// setting
 			try {
 				form.panBody();
 				form.fryerBody();
@@ -174,7 +180,8 @@ class SetupController {
 		model.addAttribute("modes", Arrays.asList(HeatMode.values()));
 		model.addAttribute("grillKinds", SetupForm.grillKinds());
 		model.addAttribute("dewPoints", SetupForm.dewPointTable(units));
-		// a new pan or grill setup turns at this interval unless changed: the form says so beside the field
+		// a new pan or grill setup turns at this interval unless changed: the form says
+		// so beside the field
 		model.addAttribute("flipHelp", String.format(Locale.ROOT,
 				"new setups turn every %.0f s: each face is off the heat half the time, so the crust takes nearly twice as long;"
 						+ " 0 for not turned; at least 10 s",

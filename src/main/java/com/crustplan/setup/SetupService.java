@@ -34,7 +34,10 @@ public class SetupService {
 		return setups.save(SavedSetup.from(form));
 	}
 
-	/** As for surfaces: refused with {@link StaleEditException} unless made on the saved version. */
+	/**
+	 * As for surfaces: refused with {@link StaleEditException} unless made on the saved
+	 * version.
+	 */
 	@Transactional
 	public SavedSetup update(long id, SetupForm form, Integer expectedVersion) {
 		form.toHeatSetup();

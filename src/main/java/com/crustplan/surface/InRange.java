@@ -20,9 +20,10 @@ import jakarta.validation.Payload;
 import com.crustplan.engine.food.SurfaceField;
 
 /**
- * A form number within the engine's range for a surface field, read from {@link SurfaceField} so the
- * form and the engine cannot disagree. Empty passes (pair it with {@code @NotNull} where a value is
- * required). The message names the range and unit, e.g. "must be 0.5 to 200 mm".
+ * A form number within the engine's range for a surface field, read from
+ * {@link SurfaceField} so the form and the engine cannot disagree. Empty passes (pair it
+ * with {@code @NotNull} where a value is required). The message names the range and unit,
+ * e.g. "must be 0.5 to 200 mm".
  */
 @Documented
 @Constraint(validatedBy = InRange.Check.class)
@@ -75,7 +76,10 @@ public @interface InRange {
 			return SurfaceField.plain(field.min()) + " to " + SurfaceField.plain(field.max()) + unit;
 		}
 
-		/** The message as a literal template: braces, $ and \ would otherwise be interpolated. */
+		/**
+		 * The message as a literal template: braces, $ and \ would otherwise be
+		 * interpolated.
+		 */
 		private static String escaped(String text) {
 			return text.replaceAll("([{}$\\\\])", "\\\\$1");
 		}

@@ -1,6 +1,5 @@
 package com.crustplan.surface;
 
-
 import jakarta.persistence.Column;
 import jakarta.persistence.Entity;
 import jakarta.persistence.Table;
@@ -9,7 +8,10 @@ import com.crustplan.system.KitchenRecord;
 import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.food.FoodCategory;
 
-/** A surface the kitchen keeps (a cut, a dough, a batch of potatoes). Never handed to the engine. */
+/**
+ * A surface the kitchen keeps (a cut, a dough, a batch of potatoes). Never handed to the
+ * engine.
+ */
 @Entity
 @Table(name = "surface")
 public class SavedSurface extends KitchenRecord {
@@ -109,7 +111,9 @@ public class SavedSurface extends KitchenRecord {
 		return product;
 	}
 
-	/** What it is sold as, for pages: the category's usual product when none was chosen. */
+	/**
+	 * What it is sold as, for pages: the category's usual product when none was chosen.
+	 */
 	public String getProductLabel() {
 		return FoodCategory.byKey(category).map(c -> {
 			try {

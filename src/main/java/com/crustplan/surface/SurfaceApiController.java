@@ -21,10 +21,11 @@ import com.crustplan.engine.input.InvalidInputException;
 import com.fasterxml.jackson.annotation.JsonProperty;
 
 /**
- * JSON API v1 for saved surfaces. The body's {@code surface} is the same object the plan API takes
- * ({@link SurfaceBody}); it is saved through {@link SurfaceService}, one transaction per save, and 201
- * is answered only after that transaction has committed. Errors are answered as problem details by
- * the API's one error advice ({@code api/ApiErrors}). All temperatures in °C.
+ * JSON API v1 for saved surfaces. The body's {@code surface} is the same object the plan
+ * API takes ({@link SurfaceBody}); it is saved through {@link SurfaceService}, one
+ * transaction per save, and 201 is answered only after that transaction has committed.
+ * Errors are answered as problem details by the API's one error advice
+ * ({@code api/ApiErrors}). All temperatures in °C.
  */
 @RestController
 @RequestMapping(path = "/api/v1/surfaces", produces = MediaType.APPLICATION_JSON_VALUE)
@@ -54,7 +55,8 @@ class SurfaceApiController {
 			saved = surfaces.create(form);
 		}
 		catch (InvalidInputException e) {
-			// the engine's checks, run again inside the save: named in the request's terms
+			// the engine's checks, run again inside the save: named in the request's
+			// terms
 			throw InvalidRequestException.of("surface." + e.field(), e.reason());
 		}
 		return ResponseEntity.created(URI.create("/api/v1/surfaces/" + saved.getId()))
@@ -62,7 +64,10 @@ class SurfaceApiController {
 			.body(SurfaceJson.of(saved));
 	}
 
-	/** A save body: {@code name} (required), {@code notes} and the {@code surface} as a plan takes it. */
+	/**
+	 * A save body: {@code name} (required), {@code notes} and the {@code surface} as a
+	 * plan takes it.
+	 */
 	record SaveBody(String name, String notes, SurfaceBody surface) {
 
 		/** Longest name and notes a saved surface keeps (the columns' lengths). */
@@ -70,7 +75,10 @@ class SurfaceApiController {
 
 		static final int NOTES_MAX = 1000;
 
-		/** The page form's record of the same surface, so the API saves exactly what the form would. */
+		/**
+		 * The page form's record of the same surface, so the API saves exactly what the
+		 * form would.
+		 */
 		SurfaceForm toForm(FieldErrors errors) {
 			String n = errors.text("name", name, NAME_MAX);
 			if (n == null && !errors.has("name")) {
@@ -90,12 +98,13 @@ class SurfaceApiController {
 	record Listed(long id, String name, String category) {
 	}
 
-	/** A saved surface in the same field names as the request's {@code surface} object. */
+	/**
+	 * A saved surface in the same field names as the request's {@code surface} object.
+	 */
 	record SurfaceJson(long id, String name, String category, String product, double waterPct, double proteinPct,
-			double fatPct, double reducingSugarPct, double sucrosePct, double starchPct, double fibrePct,
-			double ashPct, double asparagineMgPerKg, double surfaceWaterGPerM2, double thicknessMm,
-			@JsonProperty("pH") Double ph, double bicarbonateGPerKg, double acidGPerKg, double initialTemperatureC,
-			String notes, Instant updatedAt) {
+			double fatPct, double reducingSugarPct, double sucrosePct, double starchPct, double fibrePct, double ashPct,
+			double asparagineMgPerKg, double surfaceWaterGPerM2, double thicknessMm, @JsonProperty("pH") Double ph,
+			double bicarbonateGPerKg, double acidGPerKg, double initialTemperatureC, String notes, Instant updatedAt) {
 
 		static SurfaceJson of(SavedSurface s) {
 			return new SurfaceJson(s.getId(), s.getName(), s.getCategory(), s.getProduct(), s.getWaterPct(),

@@ -13,8 +13,8 @@ import com.crustplan.engine.food.Surface;
 import com.fasterxml.jackson.annotation.JsonProperty;
 
 /**
- * The API's {@code surface} object, as the plans and surfaces APIs both take it. Left-out values take
- * the category's defaults; every error is named {@code surface.<field>}.
+ * The API's {@code surface} object, as the plans and surfaces APIs both take it. Left-out
+ * values take the category's defaults; every error is named {@code surface.<field>}.
  */
 public record SurfaceBody(String category, String product, Double waterPct, Double proteinPct, Double fatPct,
 		Double reducingSugarPct, Double sucrosePct, Double starchPct, Double fibrePct, Double ashPct,
@@ -24,7 +24,9 @@ public record SurfaceBody(String category, String product, Double waterPct, Doub
 	/** Longest category or product key read (the longest key is far shorter). */
 	static final int KEY_MAX = 80;
 
-	/** The engine's surface, checked, and its product; both null where a field is wrong. */
+	/**
+	 * The engine's surface, checked, and its product; both null where a field is wrong.
+	 */
 	public record Read(Surface surface, Product product) {
 	}
 
@@ -49,7 +51,8 @@ public record SurfaceBody(String category, String product, Double waterPct, Doub
 							or(starchPct, d.starchPct()), or(fibrePct, d.fibrePct()), or(ashPct, d.ashPct())),
 					or(asparagineMgPerKg, c.defaultAsparagineMgPerKg()),
 					or(surfaceWaterGPerM2, c.defaultSurfaceWaterGPerM2()), or(thicknessMm, c.defaultThicknessMm()), ph,
-					or(bicarbonateGPerKg, 0), or(acidGPerKg, 0), or(initialTemperatureC, c.defaultInitialTemperatureC()));
+					or(bicarbonateGPerKg, 0), or(acidGPerKg, 0),
+					or(initialTemperatureC, c.defaultInitialTemperatureC()));
 		}
 		catch (InvalidInputException e) {
 			errors.add("surface." + e.field(), e.reason());
@@ -57,7 +60,10 @@ public record SurfaceBody(String category, String product, Double waterPct, Doub
 		}
 	}
 
-	/** The product key as sent (null: the category's usual product), once {@link #read} found it valid. */
+	/**
+	 * The product key as sent (null: the category's usual product), once {@link #read}
+	 * found it valid.
+	 */
 	public String productKey(Read read) {
 		return product == null || read.product() == null ? null : read.product().key();
 	}

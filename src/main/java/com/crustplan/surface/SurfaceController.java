@@ -40,7 +40,10 @@ class SurfaceController {
 
 	private static final String FORM = "surface/form";
 
-	/** What the form's defaults button fills in: the composition and size, not the cook's additions. */
+	/**
+	 * What the form's defaults button fills in: the composition and size, not the cook's
+	 * additions.
+	 */
 	private static final List<SurfaceField> FILLED_BY_DEFAULTS = Stream
 		.concat(SurfaceField.COMPOSITION.stream(),
 				Stream.of(SurfaceField.ASPARAGINE, SurfaceField.SURFACE_WATER, SurfaceField.THICKNESS))
@@ -72,7 +75,9 @@ class SurfaceController {
 		return form(model, SurfaceForm.defaults(c, "", units), null, "/surfaces/new", "New surface", units);
 	}
 
-	/** The form's one-time token makes a double submit lead to the one surface it saved. */
+	/**
+	 * The form's one-time token makes a double submit lead to the one surface it saved.
+	 */
 	@PostMapping("/new")
 	String create(@Valid @ModelAttribute("form") SurfaceForm form, BindingResult result,
 			@RequestParam(name = "formToken", required = false) String token,
@@ -103,8 +108,9 @@ class SurfaceController {
 	}
 
 	/**
-	 * Saves an edit made on the version the form carries. If someone else saved or deleted the surface
-	 * meanwhile, the form comes back with everything typed and both versions side by side.
+	 * Saves an edit made on the version the form carries. If someone else saved or
+	 * deleted the surface meanwhile, the form comes back with everything typed and both
+	 * versions side by side.
 	 */
 	@PostMapping("/{id}/edit")
 	String update(@PathVariable long id, @Valid @ModelAttribute("form") SurfaceForm form, BindingResult result,
@@ -125,7 +131,10 @@ class SurfaceController {
 		return "redirect:/surfaces/" + id;
 	}
 
-	/** The edit form again, the chef's values kept, with the saved version (or its deletion) in words. */
+	/**
+	 * The edit form again, the chef's values kept, with the saved version (or its
+	 * deletion) in words.
+	 */
 	private String conflict(long id, SurfaceForm form, TemperatureUnit units, Model model) {
 		SavedSurface now;
 		try {
@@ -137,8 +146,8 @@ class SurfaceController {
 			return form(model, form, null, "/surfaces/new", "New surface", units);
 		}
 		SurfaceForm yours = form.unit() == units ? form : form.inUnit(units);
-		model.addAttribute("conflict", EditConflict.between("surface", now.getName(), now.getUpdatedAt(), yours,
-				SurfaceForm.of(now, units)));
+		model.addAttribute("conflict",
+				EditConflict.between("surface", now.getName(), now.getUpdatedAt(), yours, SurfaceForm.of(now, units)));
 		model.addAttribute("version", now.getVersion());
 		return form(model, form, null, "/surfaces/" + id + "/edit", "Edit " + now.getName(), units);
 	}
@@ -185,7 +194,9 @@ class SurfaceController {
 		return "redirect:/surfaces/" + id;
 	}
 
-	/** Bean Validation first, then the engine's checks; true when the form can be saved. */
+	/**
+	 * Bean Validation first, then the engine's checks; true when the form can be saved.
+	 */
 	private static boolean check(SurfaceForm form, BindingResult result) {
 		if (result.hasErrors()) {
 			return false;
@@ -236,7 +247,10 @@ class SurfaceController {
 	record Derived(Double remainderPct, Double ph, Double basePh) {
 	}
 
-	/** Category defaults for the form's "fill in defaults" button, temperatures in the cook's unit. */
+	/**
+	 * Category defaults for the form's "fill in defaults" button, temperatures in the
+	 * cook's unit.
+	 */
 	private static Map<String, Map<String, Object>> defaultsByKey(TemperatureUnit units) {
 		Map<String, Map<String, Object>> all = new LinkedHashMap<>();
 		for (FoodCategory c : FoodCategory.values()) {

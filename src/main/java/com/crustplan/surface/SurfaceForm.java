@@ -13,9 +13,10 @@ import com.crustplan.engine.food.SurfaceField;
 import com.crustplan.system.TemperatureUnit;
 
 /**
- * What a cook types in for a surface. The ranges, the engine's own ({@link SurfaceField}), give every
- * field its message at once; the engine's checks across fields (the composition sum) run after them in
- * {@link #toSurface()} and are the final word. {@code initialTemperature} is in the unit named by {@code temperatureUnit}.
+ * What a cook types in for a surface. The ranges, the engine's own
+ * ({@link SurfaceField}), give every field its message at once; the engine's checks
+ * across fields (the composition sum) run after them in {@link #toSurface()} and are the
+ * final word. {@code initialTemperature} is in the unit named by {@code temperatureUnit}.
  */
 public record SurfaceForm(
 		@NotBlank(message = "give the surface a name") @Size(max = 80, message = "at most 80 characters") String name,
@@ -35,8 +36,7 @@ public record SurfaceForm(
 		@InRange(value = SurfaceField.PH, orElse = "or empty for the category's typical pH") Double ph,
 		@NotNull(message = "required (0 for none)") @InRange(SurfaceField.BICARBONATE) Double bicarbonateGPerKg,
 		@NotNull(message = "required (0 for none)") @InRange(SurfaceField.ACID) Double acidGPerKg,
-		@NotNull(message = "required") Double initialTemperature,
-		String temperatureUnit,
+		@NotNull(message = "required") Double initialTemperature, String temperatureUnit,
 		@Size(max = 1000, message = "at most 1000 characters") String notes) {
 
 	/** A new form with the category's defaults. */
@@ -44,7 +44,10 @@ public record SurfaceForm(
 		return of(Surface.defaults(c), name, null, null).inUnit(unit);
 	}
 
-	/** The form of an engine surface (temperatures in °C), so a surface read elsewhere saves as the form would. */
+	/**
+	 * The form of an engine surface (temperatures in °C), so a surface read elsewhere
+	 * saves as the form would.
+	 */
 	public static SurfaceForm of(Surface s, String name, String product, String notes) {
 		Composition k = s.composition();
 		return new SurfaceForm(name, s.category().key(), product, k.waterPct(), k.proteinPct(), k.fatPct(),
@@ -54,9 +57,9 @@ public record SurfaceForm(
 	}
 
 	public static SurfaceForm of(SavedSurface s, TemperatureUnit unit) {
-		return new SurfaceForm(s.getName(), s.getCategory(), s.getProduct(), s.getWaterPct(), s.getProteinPct(), s.getFatPct(),
-				s.getReducingSugarPct(), s.getSucrosePct(), s.getStarchPct(), s.getFibrePct(), s.getAshPct(),
-				s.getAsparagineMgPerKg(), s.getSurfaceWaterGPerM2(), s.getThicknessMm(), s.getPh(),
+		return new SurfaceForm(s.getName(), s.getCategory(), s.getProduct(), s.getWaterPct(), s.getProteinPct(),
+				s.getFatPct(), s.getReducingSugarPct(), s.getSucrosePct(), s.getStarchPct(), s.getFibrePct(),
+				s.getAshPct(), s.getAsparagineMgPerKg(), s.getSurfaceWaterGPerM2(), s.getThicknessMm(), s.getPh(),
 				s.getBicarbonateGPerKg(), s.getAcidGPerKg(), round1(unit.fromCelsius(s.getInitialTemperatureC())),
 				unit.code(), s.getNotes());
 	}
@@ -65,13 +68,19 @@ public record SurfaceForm(
 		return with(newName, initialTemperature, temperatureUnit);
 	}
 
-	/** The same form with temperatures in another unit (for re-rendering after a °C/°F switch). */
+	/**
+	 * The same form with temperatures in another unit (for re-rendering after a °C/°F
+	 * switch).
+	 */
 	public SurfaceForm inUnit(TemperatureUnit unit) {
 		Double c = initialTemperatureC();
 		return with(name, c == null ? null : round1(unit.fromCelsius(c)), unit.code());
 	}
 
-	/** The one copy that changes what is not the surface itself: its name and the unit of its temperature. */
+	/**
+	 * The one copy that changes what is not the surface itself: its name and the unit of
+	 * its temperature.
+	 */
 	private SurfaceForm with(String newName, Double temperature, String unitCode) {
 		return new SurfaceForm(newName, category, product, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct,
 				starchPct, fibrePct, ashPct, asparagineMgPerKg, surfaceWaterGPerM2, thicknessMm, ph, bicarbonateGPerKg,
@@ -88,7 +97,8 @@ public record SurfaceForm(
 
 	/**
 	 * The engine's input. Throws {@link InvalidInputException} naming the engine's field
-	 * ({@code waterPct}, {@code composition}, {@code pH}, {@code initialTemperatureC} ...).
+	 * ({@code waterPct}, {@code composition}, {@code pH}, {@code initialTemperatureC}
+	 * ...).
 	 */
 	public Surface toSurface() {
 		FoodCategory c = FoodCategory.byKey(category == null ? "" : category)
@@ -103,9 +113,9 @@ public record SurfaceForm(
 	}
 
 	/**
-	 * What the surface is sold as, which sets its acrylamide benchmark; empty means the category's
-	 * usual product. Throws {@link InvalidInputException} (field {@code product}) for a product of
-	 * another category.
+	 * What the surface is sold as, which sets its acrylamide benchmark; empty means the
+	 * category's usual product. Throws {@link InvalidInputException} (field
+	 * {@code product}) for a product of another category.
 	 */
 	public Product toProduct() {
 		FoodCategory c = FoodCategory.byKey(category == null ? "" : category)

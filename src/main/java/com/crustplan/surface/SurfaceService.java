@@ -38,8 +38,9 @@ public class SurfaceService {
 
 	/**
 	 * Saves an edit made on the version {@code expectedVersion} of the record. Throws
-	 * {@link StaleEditException} when the saved record is at another version (or none was given), and a
-	 * {@code ConcurrencyFailureException} at commit when another save got in between.
+	 * {@link StaleEditException} when the saved record is at another version (or none was
+	 * given), and a {@code ConcurrencyFailureException} at commit when another save got
+	 * in between.
 	 */
 	@Transactional
 	public SavedSurface update(long id, SurfaceForm form, Integer expectedVersion) {

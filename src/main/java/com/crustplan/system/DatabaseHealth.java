@@ -13,10 +13,11 @@ import org.springframework.transaction.PlatformTransactionManager;
 import org.springframework.transaction.support.TransactionTemplate;
 
 /**
- * Whether the app can serve: a real write and read in one transaction (table {@code health_probe}),
- * not just an open connection, since signing in and saving both write. Reported by
- * {@code /actuator/health} as {@code databaseWrite}, and checked once at startup, so a read-only data
- * folder or a full disk stops the start with a message saying so instead of failing sign-ins later.
+ * Whether the app can serve: a real write and read in one transaction (table
+ * {@code health_probe}), not just an open connection, since signing in and saving both
+ * write. Reported by {@code /actuator/health} as {@code databaseWrite}, and checked once
+ * at startup, so a read-only data folder or a full disk stops the start with a message
+ * saying so instead of failing sign-ins later.
  */
 @Component("databaseWrite")
 class DatabaseHealth implements HealthIndicator, ApplicationRunner {
@@ -38,8 +39,9 @@ class DatabaseHealth implements HealthIndicator, ApplicationRunner {
 		}
 		catch (RuntimeException e) {
 			return Health.down()
-				.withDetail("reason", "the database refused a write or read (read-only data folder, full disk or no "
-						+ "database server?): " + rootMessage(e))
+				.withDetail("reason",
+						"the database refused a write or read (read-only data folder, full disk or no "
+								+ "database server?): " + rootMessage(e))
 				.build();
 		}
 	}
@@ -58,7 +60,8 @@ class DatabaseHealth implements HealthIndicator, ApplicationRunner {
 
 	private void probe() {
 		tx.executeWithoutResult(s -> {
-			int rows = jdbc.update("UPDATE health_probe SET checked_at = ? WHERE id = 1", Timestamp.from(Instant.now()));
+			int rows = jdbc.update("UPDATE health_probe SET checked_at = ? WHERE id = 1",
+					Timestamp.from(Instant.now()));
 			Integer read = jdbc.queryForObject("SELECT COUNT(*) FROM health_probe WHERE id = 1", Integer.class);
 			if (rows != 1 || read == null || read != 1) {
 				throw new IllegalStateException("the health probe row is missing");

@@ -20,12 +20,14 @@ import org.springframework.web.servlet.ModelAndView;
 import com.crustplan.api.Problems;
 
 /**
- * A page whose database does not answer (server down, no free connection within the pool's 3 s) or
- * cannot store anything now (disk full) shows the 503 page: try again shortly, nothing half-saved.
- * The pool keeps trying, so the next request after the database is back succeeds.
+ * A page whose database does not answer (server down, no free connection within the
+ * pool's 3 s) or cannot store anything now (disk full) shows the 503 page: try again
+ * shortly, nothing half-saved. The pool keeps trying, so the next request after the
+ * database is back succeeds.
  */
 @ControllerAdvice(annotations = Controller.class)
-// before the API's catch-all advice: Spring asks advices in order and takes the first with a handler
+// before the API's catch-all advice: Spring asks advices in order and takes the first
+// with a handler
 @Order(Ordered.LOWEST_PRECEDENCE - 1)
 class DatabaseUnavailable {
 
@@ -33,7 +35,8 @@ class DatabaseUnavailable {
 			UncategorizedDataAccessException.class, TransactionSystemException.class })
 	Object unavailable(HttpServletRequest request) {
 		if (request.getRequestURI().startsWith(request.getContextPath() + "/api/")) {
-			// this advice also sees the API's controllers: answer them in the API's one error shape
+			// this advice also sees the API's controllers: answer them in the API's one
+			// error shape
 			return ResponseEntity.status(HttpStatus.SERVICE_UNAVAILABLE)
 				.contentType(MediaType.APPLICATION_PROBLEM_JSON)
 				.header(HttpHeaders.RETRY_AFTER, "30")

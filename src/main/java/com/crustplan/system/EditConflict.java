@@ -10,9 +10,9 @@ import java.util.Locale;
 import java.util.Objects;
 
 /**
- * What a chef sees when the record they edited was saved or deleted by someone else meanwhile: in
- * words, and field by field their value beside the saved one. Shown above the form, which keeps
- * everything they typed.
+ * What a chef sees when the record they edited was saved or deleted by someone else
+ * meanwhile: in words, and field by field their value beside the saved one. Shown above
+ * the form, which keeps everything they typed.
  */
 public record EditConflict(String message, List<Difference> differences) {
 
@@ -23,8 +23,8 @@ public record EditConflict(String message, List<Difference> differences) {
 		.withZone(ZoneOffset.UTC);
 
 	/**
-	 * Both versions of one form record (the same record type), compared field by field as the page
-	 * shows them; the temperature unit is a display choice, not a value.
+	 * Both versions of one form record (the same record type), compared field by field as
+	 * the page shows them; the temperature unit is a display choice, not a value.
 	 */
 	public static EditConflict between(String what, String savedName, Instant savedAt, Record yours, Record saved) {
 		List<Difference> d = new ArrayList<>();
@@ -47,10 +47,15 @@ public record EditConflict(String message, List<Difference> differences) {
 		return new EditConflict(message, List.copyOf(d));
 	}
 
-	/** The record was deleted while the chef edited it: their values are kept to save as a new one. */
+	/**
+	 * The record was deleted while the chef edited it: their values are kept to save as a
+	 * new one.
+	 */
 	public static EditConflict deleted(String what) {
-		return new EditConflict("This " + what + " was deleted by someone else while you were editing it. "
-				+ "Your values are kept in the form below: save to keep them as a new " + what + ", or Cancel.", List.of());
+		return new EditConflict(
+				"This " + what + " was deleted by someone else while you were editing it. "
+						+ "Your values are kept in the form below: save to keep them as a new " + what + ", or Cancel.",
+				List.of());
 	}
 
 	private static Object value(RecordComponent c, Record r) {
@@ -62,7 +67,9 @@ public record EditConflict(String message, List<Difference> differences) {
 		}
 	}
 
-	/** As a form shows it: empty text and no value alike, numbers without a trailing .0. */
+	/**
+	 * As a form shows it: empty text and no value alike, numbers without a trailing .0.
+	 */
 	static String show(Object v) {
 		if (v == null || (v instanceof String s && s.isBlank())) {
 			return "(empty)";

@@ -10,9 +10,9 @@ import org.springframework.context.annotation.Bean;
 import org.springframework.context.annotation.Configuration;
 
 /**
- * {@code /error} is where the container sends a request that failed. Opened directly it has no
- * error to show (the framework would say "Status 999"): it is then simply an address with nothing
- * at it, and answers with the not-found page.
+ * {@code /error} is where the container sends a request that failed. Opened directly it
+ * has no error to show (the framework would say "Status 999"): it is then simply an
+ * address with nothing at it, and answers with the not-found page.
  */
 @Configuration
 class ErrorPages {
@@ -29,7 +29,8 @@ class ErrorPages {
 		};
 		FilterRegistrationBean<Filter> r = new FilterRegistrationBean<>(notFound);
 		r.addUrlPatterns("/error");
-		// only requests that arrive from outside; the container's own error dispatch passes
+		// only requests that arrive from outside; the container's own error dispatch
+		// passes
 		r.setDispatcherTypes(DispatcherType.REQUEST);
 		return r;
 	}

@@ -23,11 +23,11 @@ import org.springframework.web.context.request.WebRequest;
 import com.crustplan.api.StoredText;
 
 /**
- * How page forms read and show numbers: plain decimals only (a comma is read as a decimal point, as
- * many kitchens type it), no NaN or Infinity. Unreadable input becomes
- * the field error "must be a number" (messages.properties), never an exception. A field sent more
- * than once is refused by name: Spring would join the values with a comma ({@code 1,2}), which the
- * decimal comma would then read as 1.2.
+ * How page forms read and show numbers: plain decimals only (a comma is read as a decimal
+ * point, as many kitchens type it), no NaN or Infinity. Unreadable input becomes the
+ * field error "must be a number" (messages.properties), never an exception. A field sent
+ * more than once is refused by name: Spring would join the values with a comma
+ * ({@code 1,2}), which the decimal comma would then read as 1.2.
  */
 @ControllerAdvice(annotations = Controller.class)
 public class FormBinding {
@@ -36,8 +36,9 @@ public class FormBinding {
 	static final String REPEATED = "repeated";
 
 	/**
-	 * Puts a form and its errors in the model for a page. A fresh binding result is needed because a
-	 * record whose constructor binding failed (text in a number field) leaves none to render from.
+	 * Puts a form and its errors in the model for a page. A fresh binding result is
+	 * needed because a record whose constructor binding failed (text in a number field)
+	 * leaves none to render from.
 	 */
 	public static void put(Model model, Object form, BindingResult errors) {
 		BeanPropertyBindingResult r = new BeanPropertyBindingResult(form, "form");
@@ -75,19 +76,18 @@ public class FormBinding {
 		if (type == null) {
 			return false;
 		}
-		Class<?> field = type.isRecord()
-				? Arrays.stream(type.getRecordComponents())
-					.filter(c -> c.getName().equals(name))
-					.map(RecordComponent::getType)
-					.findFirst()
-					.orElse(null)
-				: BeanUtils.findPropertyType(name, type);
+		Class<?> field = type.isRecord() ? Arrays.stream(type.getRecordComponents())
+			.filter(c -> c.getName().equals(name))
+			.map(RecordComponent::getType)
+			.findFirst()
+			.orElse(null) : BeanUtils.findPropertyType(name, type);
 		return field != null && field != Object.class && !field.isArray() && !Collection.class.isAssignableFrom(field);
 	}
 
 	/**
-	 * Text fields: trimmed, after {@link StoredText} has checked the text as sent; a control
-	 * character becomes the field error {@code typeMismatch} (messages.properties says why).
+	 * Text fields: trimmed, after {@link StoredText} has checked the text as sent; a
+	 * control character becomes the field error {@code typeMismatch} (messages.properties
+	 * says why).
 	 */
 	static final class PlainTextEditor extends PropertyEditorSupport {
 
@@ -124,7 +124,10 @@ public class FormBinding {
 
 	}
 
-	/** Registered only for a field that came more than once: whatever it was joined into is refused. */
+	/**
+	 * Registered only for a field that came more than once: whatever it was joined into
+	 * is refused.
+	 */
 	static final class RepeatedEditor extends PropertyEditorSupport {
 
 		@Override
@@ -134,7 +137,9 @@ public class FormBinding {
 
 	}
 
-	/** Names a repeated field's error {@code repeated} instead of the usual type mismatch. */
+	/**
+	 * Names a repeated field's error {@code repeated} instead of the usual type mismatch.
+	 */
 	static final class RepeatedFieldErrors extends DefaultBindingErrorProcessor {
 
 		@Override

@@ -16,19 +16,24 @@ import org.springframework.transaction.PlatformTransactionManager;
 import org.springframework.transaction.support.TransactionTemplate;
 
 /**
- * One-time tokens for page forms that create a record. A form carries a fresh token; the save and the
- * token's row (table {@code form_submission}, primary key on the token) commit in one transaction, so
- * of two submits of the same form only one can commit: the other's insert fails on the key and its
- * save rolls back, and both answers lead to the one record. Works across instances and survives a
- * restart because it lives in the database, not in memory or the session.
+ * One-time tokens for page forms that create a record. A form carries a fresh token; the
+ * save and the token's row (table {@code form_submission}, primary key on the token)
+ * commit in one transaction, so of two submits of the same form only one can commit: the
+ * other's insert fails on the key and its save rolls back, and both answers lead to the
+ * one record. Works across instances and survives a restart because it lives in the
+ * database, not in memory or the session.
  */
 @Service
 public class FormTokens {
 
-	/** Kept for a day: longer than any form stays open in a kitchen (common practice for idempotency keys). */
+	/**
+	 * Kept for a day: longer than any form stays open in a kitchen (common practice for
+	 * idempotency keys).
+	 */
 	static final Duration KEEP = Duration.ofDays(1);
 
-	private static final Pattern TOKEN = Pattern.compile("[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}");
+	private static final Pattern TOKEN = Pattern
+		.compile("[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}");
 
 	private final JdbcTemplate jdbc;
 
@@ -39,7 +44,10 @@ public class FormTokens {
 		this.tx = new TransactionTemplate(transactions);
 	}
 
-	/** The result of a submit: the record's id, and whether an earlier submit of the same form made it. */
+	/**
+	 * The result of a submit: the record's id, and whether an earlier submit of the same
+	 * form made it.
+	 */
 	public record Submitted(long id, boolean repeat) {
 	}
 
@@ -48,7 +56,10 @@ public class FormTokens {
 		return UUID.randomUUID().toString();
 	}
 
-	/** The token to show again in a re-rendered form: the one it carried if well formed, else a fresh one. */
+	/**
+	 * The token to show again in a re-rendered form: the one it carried if well formed,
+	 * else a fresh one.
+	 */
 	public static String keep(String token) {
 		return valid(token) ? token : issue();
 	}
@@ -58,8 +69,8 @@ public class FormTokens {
 	}
 
 	/**
-	 * Runs {@code save} (returning the new record's id) at most once per token. Without a well-formed
-	 * token (an API client, an old page) it simply saves.
+	 * Runs {@code save} (returning the new record's id) at most once per token. Without a
+	 * well-formed token (an API client, an old page) it simply saves.
 	 */
 	public Submitted once(String kind, String token, Supplier<Long> save) {
 		if (!valid(token)) {
@@ -72,15 +83,16 @@ public class FormTokens {
 		try {
 			Long id = tx.execute(status -> {
 				long saved = save.get();
-				jdbc.update("INSERT INTO form_submission (token, kind, record_id, created_at) VALUES (?, ?, ?, ?)", token,
-						kind, saved, Timestamp.from(Instant.now()));
+				jdbc.update("INSERT INTO form_submission (token, kind, record_id, created_at) VALUES (?, ?, ?, ?)",
+						token, kind, saved, Timestamp.from(Instant.now()));
 				return saved;
 			});
 			purge();
 			return new Submitted(id, false);
 		}
 		catch (DataAccessException e) {
-			// the same form committed first (duplicate key, or its lock held until it did): lead to its record
+			// the same form committed first (duplicate key, or its lock held until it
+			// did): lead to its record
 			return earlier(kind, token).map(id -> new Submitted(id, true)).orElseThrow(() -> e);
 		}
 	}

@@ -55,20 +55,23 @@ public class Formats {
 		return s.equals("-0") ? "0" : s;
 	}
 
-	/** Four significant figures for model constants (1.6e+05 stays readable next to 0.85). */
+	/**
+	 * Four significant figures for model constants (1.6e+05 stays readable next to 0.85).
+	 */
 	public String sig(double v) {
 		if (v != 0 && (Math.abs(v) >= 1e5 || Math.abs(v) < 1e-3)) {
-			return String.format(Locale.ROOT, "%.3g", v).replace("e+0", "×10^").replace("e-0", "×10^-").replace("e+", "×10^")
+			return String.format(Locale.ROOT, "%.3g", v)
+				.replace("e+0", "×10^")
+				.replace("e-0", "×10^-")
+				.replace("e+", "×10^")
 				.replace("e-", "×10^-");
 		}
 		return number(v, 4);
 	}
 
-	private static final DateTimeFormatter DATE = DateTimeFormatter
-		.ofPattern("d MMM yyyy", Locale.UK);
+	private static final DateTimeFormatter DATE = DateTimeFormatter.ofPattern("d MMM yyyy", Locale.UK);
 
-	private static final DateTimeFormatter DATE_TIME = DateTimeFormatter
-		.ofPattern("d MMM yyyy, HH:mm", Locale.UK);
+	private static final DateTimeFormatter DATE_TIME = DateTimeFormatter.ofPattern("d MMM yyyy, HH:mm", Locale.UK);
 
 	/** Dates in the server's zone: a kitchen's server sits in the kitchen's time zone. */
 	public String date(Instant t) {

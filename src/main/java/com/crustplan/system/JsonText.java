@@ -5,8 +5,9 @@ import org.springframework.stereotype.Component;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * JSON for data attributes that page scripts read ({@code @jsonText.write(x)} in templates); Thymeleaf
- * escapes it as an attribute value, so no user text can break out into the page.
+ * JSON for data attributes that page scripts read ({@code @jsonText.write(x)} in
+ * templates); Thymeleaf escapes it as an attribute value, so no user text can break out
+ * into the page.
  */
 @Component("jsonText")
 public class JsonText {

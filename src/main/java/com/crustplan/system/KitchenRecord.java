@@ -10,8 +10,8 @@ import jakarta.persistence.MappedSuperclass;
 import jakarta.persistence.Version;
 
 /**
- * What every named record of the kitchen has: an id, an optimistic-locking version, a name, notes and
- * when it was created and last changed.
+ * What every named record of the kitchen has: an id, an optimistic-locking version, a
+ * name, notes and when it was created and last changed.
  */
 @MappedSuperclass
 public abstract class KitchenRecord {
@@ -35,7 +35,10 @@ public abstract class KitchenRecord {
 	@Column(name = "updated_at", nullable = false)
 	private Instant updatedAt;
 
-	/** Sets the name and notes as a cook typed them (trimmed; blank notes become none) and stamps the change. */
+	/**
+	 * Sets the name and notes as a cook typed them (trimmed; blank notes become none) and
+	 * stamps the change.
+	 */
 	protected void rename(String newName, String newNotes) {
 		name = newName.trim();
 		notes = newNotes == null || newNotes.isBlank() ? null : newNotes.trim();
@@ -46,7 +49,10 @@ public abstract class KitchenRecord {
 		return id;
 	}
 
-	/** The optimistic-locking version: edit forms carry it, so a save from a stale form is refused. */
+	/**
+	 * The optimistic-locking version: edit forms carry it, so a save from a stale form is
+	 * refused.
+	 */
 	public int getVersion() {
 		return version;
 	}

@@ -17,22 +17,27 @@ import com.crustplan.engine.message.TemperatureDifference;
 import com.crustplan.engine.message.Text;
 
 /**
- * Engine and planner messages as a cook reads them: the wording from {@code messages.properties}, each
- * typed value formatted in the cook's unit. Called from templates as {@code @text}; the JSON API renders
- * in °C. Figures are formatted here, so patterns take each argument as finished text. Thread-safe: one
- * instance serves every request.
+ * Engine and planner messages as a cook reads them: the wording from
+ * {@code messages.properties}, each typed value formatted in the cook's unit. Called from
+ * templates as {@code @text}; the JSON API renders in °C. Figures are formatted here, so
+ * patterns take each argument as finished text. Thread-safe: one instance serves every
+ * request.
  */
 @Component("text")
 public class MessageText {
 
-	/** The wording is English; numbers use a point for decimals whatever the server's locale. */
+	/**
+	 * The wording is English; numbers use a point for decimals whatever the server's
+	 * locale.
+	 */
 	static final Locale LOCALE = Locale.ENGLISH;
 
 	private final ResourceBundleMessageSource source = new ResourceBundleMessageSource();
 
 	/**
-	 * Its own source over {@code messages.properties}, so every pattern goes through MessageFormat (an
-	 * apostrophe is written '' in each), while form errors keep their default texts as written.
+	 * Its own source over {@code messages.properties}, so every pattern goes through
+	 * MessageFormat (an apostrophe is written '' in each), while form errors keep their
+	 * default texts as written.
 	 */
 	public MessageText() {
 		source.setBasename("messages");
@@ -71,7 +76,8 @@ public class MessageText {
 			return unit.format(t.celsius());
 		}
 		if (a instanceof StatedTemperature s) {
-			// the code's own figure in each scale; in °C the °F figure may follow, never the other way round
+			// the code's own figure in each scale; in °C the °F figure may follow, never
+			// the other way round
 			if (unit == TemperatureUnit.FAHRENHEIT) {
 				return whole(s.fahrenheit()) + " °F";
 			}

@@ -3,8 +3,9 @@ package com.crustplan.system;
 import java.util.List;
 
 /**
- * Accounts whose passwords the sign-in page shows openly. Only the demo kitchen supplies them (its
- * accounts are invented and public); without a bean of this type the page shows none.
+ * Accounts whose passwords the sign-in page shows openly. Only the demo kitchen supplies
+ * them (its accounts are invented and public); without a bean of this type the page shows
+ * none.
  */
 public interface PublicAccounts {
 

@@ -48,26 +48,27 @@ import org.springframework.security.web.util.matcher.RequestMatcher;
 import com.crustplan.api.Problems;
 
 /**
- * Who may do what. Reading needs a signed-in cook; writing needs a chef; user accounts need an admin.
- * Computing an unsaved plan through the API changes nothing and is open. Pages send strangers to the
- * sign-in page; the API answers 401/403 in JSON.
+ * Who may do what. Reading needs a signed-in cook; writing needs a chef; user accounts
+ * need an admin. Computing an unsaved plan through the API changes nothing and is open.
+ * Pages send strangers to the sign-in page; the API answers 401/403 in JSON.
  * <p>
- * API clients sign in with HTTP Basic on each request (same accounts and passwords as the sign-in
- * page). Only requests to {@code /api/**} that carry Basic credentials go to that chain: it keeps no
- * session, so no cookie can act for the caller and CSRF tokens have nothing to protect there. Every
- * other request, a browser's API call on its session included, goes through the page chain with form
- * sign-in and CSRF exactly as before.
+ * API clients sign in with HTTP Basic on each request (same accounts and passwords as the
+ * sign-in page). Only requests to {@code /api/**} that carry Basic credentials go to that
+ * chain: it keeps no session, so no cookie can act for the caller and CSRF tokens have
+ * nothing to protect there. Every other request, a browser's API call on its session
+ * included, goes through the page chain with form sign-in and CSRF exactly as before.
  * <p>
- * Both chains sign in through one {@link SignInGuard}: wrong passwords are counted per account and
- * per address ({@link SignInThrottle}), and a right password is remembered for a few minutes
- * ({@link CredentialCheckCache}) so Basic clients do not pay the slow hash on every request.
+ * Both chains sign in through one {@link SignInGuard}: wrong passwords are counted per
+ * account and per address ({@link SignInThrottle}), and a right password is remembered
+ * for a few minutes ({@link CredentialCheckCache}) so Basic clients do not pay the slow
+ * hash on every request.
  */
 @Configuration
 public class SecurityConfig {
 
 	/**
-	 * Longest password the hash takes, in UTF-8 bytes: BCrypt reads at most 72 bytes of its key
-	 * (Provos &amp; Mazières 1999), and Spring Security refuses longer ones.
+	 * Longest password the hash takes, in UTF-8 bytes: BCrypt reads at most 72 bytes of
+	 * its key (Provos &amp; Mazières 1999), and Spring Security refuses longer ones.
 	 */
 	public static final int MAX_PASSWORD_BYTES = 72;
 
@@ -98,7 +99,8 @@ public class SecurityConfig {
 			.authenticationManager(signIn)
 			.httpBasic(b -> b.authenticationEntryPoint(unauthorized))
 			.sessionManagement(sm -> sm.sessionCreationPolicy(SessionCreationPolicy.STATELESS))
-			// stateless and credentials in every request: nothing a forged cross-site request could borrow
+			// stateless and credentials in every request: nothing a forged cross-site
+			// request could borrow
 			.csrf(csrf -> csrf.disable())
 			.exceptionHandling(ex -> ex.authenticationEntryPoint(unauthorized)
 				.accessDeniedHandler(
@@ -143,11 +145,10 @@ public class SecurityConfig {
 				.permitAll())
 			.logout(out -> out.logoutUrl("/signout").logoutSuccessUrl("/signin?signedout").permitAll())
 			// the open plan API keeps no session state, so it carries no CSRF token
-			.csrf(csrf -> csrf.ignoringRequestMatchers(PathPatternRequestMatcher.withDefaults()
-				.matcher(HttpMethod.POST, "/api/v1/plans"), PathPatternRequestMatcher.withDefaults()
-				.matcher(HttpMethod.GET, "/api/v1/categories")))
-			.exceptionHandling(ex -> ex
-				.defaultAuthenticationEntryPointFor(SecurityConfig::apiUnauthorized, api)
+			.csrf(csrf -> csrf.ignoringRequestMatchers(
+					PathPatternRequestMatcher.withDefaults().matcher(HttpMethod.POST, "/api/v1/plans"),
+					PathPatternRequestMatcher.withDefaults().matcher(HttpMethod.GET, "/api/v1/categories")))
+			.exceptionHandling(ex -> ex.defaultAuthenticationEntryPointFor(SecurityConfig::apiUnauthorized, api)
 				.defaultAccessDeniedHandlerFor(SecurityConfig::apiDenied, api)
 				// pages always go to the sign-in page, whatever the Accept header says
 				.defaultAuthenticationEntryPointFor(signInPage(), AnyRequestMatcher.INSTANCE)
@@ -161,18 +162,19 @@ public class SecurityConfig {
 
 	/**
 	 * Links to other sites get the origin only, never a page address with record ids
-	 * (strict-origin-when-cross-origin, W3C Referrer Policy); and no page may use the camera,
-	 * microphone, location or payment features (W3C Permissions Policy): Crustplan needs none.
+	 * (strict-origin-when-cross-origin, W3C Referrer Policy); and no page may use the
+	 * camera, microphone, location or payment features (W3C Permissions Policy):
+	 * Crustplan needs none.
 	 */
 	private static void privacyHeaders(HeadersConfigurer<HttpSecurity> h) {
 		h.referrerPolicy(r -> r.policy(ReferrerPolicy.STRICT_ORIGIN_WHEN_CROSS_ORIGIN))
-			.permissionsPolicyHeader(p -> p.policy(
-					"camera=(), microphone=(), geolocation=(), payment=(), usb=()"));
+			.permissionsPolicyHeader(p -> p.policy("camera=(), microphone=(), geolocation=(), payment=(), usb=()"));
 	}
 
 	/**
-	 * The sign-in redirect as a path only ("/signin"), never built from the request's Host header,
-	 * which a client can forge (with server.tomcat.use-relative-redirects the container keeps it so).
+	 * The sign-in redirect as a path only ("/signin"), never built from the request's
+	 * Host header, which a client can forge (with server.tomcat.use-relative-redirects
+	 * the container keeps it so).
 	 */
 	private static LoginUrlAuthenticationEntryPoint signInPage() {
 		LoginUrlAuthenticationEntryPoint e = new LoginUrlAuthenticationEntryPoint("/signin");
@@ -180,7 +182,10 @@ public class SecurityConfig {
 		return e;
 	}
 
-	/** A throttled sign-in says so and for how long; any other failure is the usual "do not match". */
+	/**
+	 * A throttled sign-in says so and for how long; any other failure is the usual "do
+	 * not match".
+	 */
 	private static AuthenticationFailureHandler signInFailed() {
 		return (req, res, e) -> {
 			String to = e instanceof SignInThrottle.Refused r ? "/signin?locked=" + r.minutes() : "/signin?error";
@@ -191,14 +196,17 @@ public class SecurityConfig {
 	private static void apiUnauthorized(HttpServletRequest req, HttpServletResponse res, AuthenticationException e)
 			throws IOException {
 		if (e instanceof SignInThrottle.Refused r) {
-			// RFC 6585 §4: 429 Too Many Requests, with Retry-After in seconds (RFC 9110 §10.2.3)
+			// RFC 6585 §4: 429 Too Many Requests, with Retry-After in seconds (RFC 9110
+			// §10.2.3)
 			res.setHeader(HttpHeaders.RETRY_AFTER, Long.toString(Math.max(1, r.retryAfter().toSeconds())));
-			json(res, 429, "too many wrong passwords for this account or from this address: try again in "
-					+ r.minutes() + " minute(s)");
+			json(res, 429, "too many wrong passwords for this account or from this address: try again in " + r.minutes()
+					+ " minute(s)");
 		}
 		else if (e instanceof InternalAuthenticationServiceException) {
-			// an account that could not be read (database down or full) is our fault, not wrong credentials
-			json(res, HttpServletResponse.SC_SERVICE_UNAVAILABLE, "the account database is not answering; try again shortly");
+			// an account that could not be read (database down or full) is our fault, not
+			// wrong credentials
+			json(res, HttpServletResponse.SC_SERVICE_UNAVAILABLE,
+					"the account database is not answering; try again shortly");
 		}
 		else {
 			json(res, HttpServletResponse.SC_UNAUTHORIZED, "sign in to do this");
@@ -206,8 +214,9 @@ public class SecurityConfig {
 	}
 
 	/**
-	 * An API request refused on the page chain. A write without a CSRF token from someone not signed in
-	 * is a missing sign-in (401); from a signed-in session it is the missing token; else the role.
+	 * An API request refused on the page chain. A write without a CSRF token from someone
+	 * not signed in is a missing sign-in (401); from a signed-in session it is the
+	 * missing token; else the role.
 	 */
 	private static void apiDenied(HttpServletRequest req, HttpServletResponse res, AccessDeniedException e)
 			throws IOException {
@@ -225,32 +234,34 @@ public class SecurityConfig {
 		}
 	}
 
-	/** What {@code accessDeniedPage("/error/403")} sets up, as a handler the CSRF filter also uses. */
+	/**
+	 * What {@code accessDeniedPage("/error/403")} sets up, as a handler the CSRF filter
+	 * also uses.
+	 */
 	private static AccessDeniedHandler pageDenied() {
 		AccessDeniedHandlerImpl h = new AccessDeniedHandlerImpl();
 		h.setErrorPage("/error/403");
 		return h;
 	}
 
-	/** As every API error: an RFC 9457 problem detail with the {@code errors} list (api/Problems). */
+	/**
+	 * As every API error: an RFC 9457 problem detail with the {@code errors} list
+	 * (api/Problems).
+	 */
 	private static void json(HttpServletResponse res, int status, String message) throws IOException {
 		Problems.write(res, HttpStatus.valueOf(status), "authorization", message);
 	}
 
 	@Bean
 	static RoleHierarchy roleHierarchy() {
-		return RoleHierarchyImpl.withDefaultRolePrefix()
-			.role(ADMIN)
-			.implies(CHEF)
-			.role(CHEF)
-			.implies(COOK)
-			.build();
+		return RoleHierarchyImpl.withDefaultRolePrefix().role(ADMIN).implies(CHEF).role(CHEF).implies(COOK).build();
 	}
 
 	/**
-	 * Limits from common practice: 5 wrong passwords pause an account and 20 pause an address for
-	 * 15 minutes, well inside NIST SP 800-63B §5.2.2 (no more than 100 consecutive failures per
-	 * account). The address limit is the higher one because a kitchen's staff share one router.
+	 * Limits from common practice: 5 wrong passwords pause an account and 20 pause an
+	 * address for 15 minutes, well inside NIST SP 800-63B §5.2.2 (no more than 100
+	 * consecutive failures per account). The address limit is the higher one because a
+	 * kitchen's staff share one router.
 	 */
 	@Bean
 	SignInThrottle signInThrottle(@Value("${crustplan.signin.max-failures-per-account:5}") int perAccount,
@@ -264,7 +275,10 @@ public class SecurityConfig {
 		return new CredentialCheckCache(passwordEncoder, Ticker.systemTicker());
 	}
 
-	/** The one sign-in both chains use: throttle, then the stored hash (through the check cache). */
+	/**
+	 * The one sign-in both chains use: throttle, then the stored hash (through the check
+	 * cache).
+	 */
 	@Bean
 	AuthenticationManager signInManager(UserDetailsService accounts, CredentialCheckCache checks,
 			SignInThrottle throttle) {
@@ -275,7 +289,8 @@ public class SecurityConfig {
 
 	@Bean
 	PasswordEncoder passwordEncoder() {
-		// BCrypt cost 10: Spring Security's default, about 0.1 s per check on a server core
+		// BCrypt cost 10: Spring Security's default, about 0.1 s per check on a server
+		// core
 		return new BCryptPasswordEncoder();
 	}
 

@@ -14,9 +14,10 @@ import org.springframework.session.jdbc.JdbcIndexedSessionRepository;
 import org.springframework.session.jdbc.PostgreSqlJdbcIndexedSessionRepositoryCustomizer;
 
 /**
- * Sessions in the database (Spring Session JDBC) so instances share sign-ins. Two requests of one
- * session can add the same attribute at once (a flash message from each of two quick saves); a plain
- * INSERT then fails on the key, so attributes are written as an upsert in each database's dialect.
+ * Sessions in the database (Spring Session JDBC) so instances share sign-ins. Two
+ * requests of one session can add the same attribute at once (a flash message from each
+ * of two quick saves); a plain INSERT then fails on the key, so attributes are written as
+ * an upsert in each database's dialect.
  */
 @Configuration
 class SessionConfig {

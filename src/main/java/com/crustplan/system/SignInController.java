@@ -31,7 +31,10 @@ class SignInController {
 		this.throttle = throttle;
 	}
 
-	/** {@code locked} is the wait in minutes (from the sign-in failure); anything else shows the full period. */
+	/**
+	 * {@code locked} is the wait in minutes (from the sign-in failure); anything else
+	 * shows the full period.
+	 */
 	@GetMapping("/signin")
 	String signIn(@RequestParam(name = "locked", required = false) String locked, Model model) {
 		long full = Math.max(1, throttle.cooling().toMinutes());
@@ -50,7 +53,8 @@ class SignInController {
 	@RequestMapping("/error/403")
 	String forbidden(HttpServletRequest request, HttpServletResponse response, Model model) {
 		response.setStatus(403);
-		// a form sent with a stale token is not a question of role: say what to do instead
+		// a form sent with a stale token is not a question of role: say what to do
+		// instead
 		Object denied = request.getAttribute(WebAttributes.ACCESS_DENIED_403);
 		model.addAttribute("staleForm", denied instanceof CsrfException);
 		return "error/403";

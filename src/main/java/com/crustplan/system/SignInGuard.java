@@ -8,13 +8,12 @@ import org.springframework.security.authentication.UsernamePasswordAuthenticatio
 import org.springframework.security.core.Authentication;
 import org.springframework.security.web.authentication.WebAuthenticationDetails;
 
-
 /**
- * Every password sign-in (the form and HTTP Basic) passes here before the password hash is
- * computed: a throttled account or address is refused at once, and a password longer than any
- * stored one could be (72 bytes, see {@link SecurityConfig#MAX_PASSWORD_BYTES}) is wrong without hashing.
- * Then the usual check against the stored hash (Spring Security's DaoAuthenticationProvider), whose
- * outcome feeds the throttle.
+ * Every password sign-in (the form and HTTP Basic) passes here before the password hash
+ * is computed: a throttled account or address is refused at once, and a password longer
+ * than any stored one could be (72 bytes, see {@link SecurityConfig#MAX_PASSWORD_BYTES})
+ * is wrong without hashing. Then the usual check against the stored hash (Spring
+ * Security's DaoAuthenticationProvider), whose outcome feeds the throttle.
  */
 class SignInGuard implements AuthenticationProvider {
 
@@ -33,7 +32,8 @@ class SignInGuard implements AuthenticationProvider {
 		String address = presented.getDetails() instanceof WebAuthenticationDetails d ? d.getRemoteAddress() : null;
 		throttle.check(account, address);
 		Object credentials = presented.getCredentials();
-		if (credentials != null && credentials.toString().getBytes(StandardCharsets.UTF_8).length > SecurityConfig.MAX_PASSWORD_BYTES) {
+		if (credentials != null
+				&& credentials.toString().getBytes(StandardCharsets.UTF_8).length > SecurityConfig.MAX_PASSWORD_BYTES) {
 			throttle.failed(account, address);
 			throw new BadCredentialsException("Bad credentials");
 		}

@@ -13,18 +13,19 @@ import com.github.benmanes.caffeine.cache.Ticker;
 import org.springframework.security.core.AuthenticationException;
 
 /**
- * Counts wrong passwords per account and per client address and refuses further sign-ins for a
- * cooling period once either count reaches its limit. A refused attempt costs a map lookup, never a
- * password hash, so a flood of guesses cannot take the processor from other clients.
+ * Counts wrong passwords per account and per client address and refuses further sign-ins
+ * for a cooling period once either count reaches its limit. A refused attempt costs a map
+ * lookup, never a password hash, so a flood of guesses cannot take the processor from
+ * other clients.
  * <p>
- * Both tallies are Caffeine caches with a size bound: a flood of made-up user names or addresses
- * cannot grow memory, and the frequency-aware eviction keeps the busy entries (the account under
- * attack, the attacking address) rather than the newest ones.
+ * Both tallies are Caffeine caches with a size bound: a flood of made-up user names or
+ * addresses cannot grow memory, and the frequency-aware eviction keeps the busy entries
+ * (the account under attack, the attacking address) rather than the newest ones.
  * <p>
- * The trade-off of any lock-out: someone who knows a user name can lock that account for a cooling
- * period, and everyone behind one address (a kitchen's router) shares that address's tally. The
- * account limit is therefore low and the address limit higher; neither stops a right password
- * from being accepted once the cooling period is over.
+ * The trade-off of any lock-out: someone who knows a user name can lock that account for
+ * a cooling period, and everyone behind one address (a kitchen's router) shares that
+ * address's tally. The account limit is therefore low and the address limit higher;
+ * neither stops a right password from being accepted once the cooling period is over.
  */
 public class SignInThrottle {
 
@@ -49,13 +50,17 @@ public class SignInThrottle {
 
 	}
 
-	/** Failures since {@code first} (nanoseconds of the ticker); locked until {@code lockedUntil}. */
+	/**
+	 * Failures since {@code first} (nanoseconds of the ticker); locked until
+	 * {@code lockedUntil}.
+	 */
 	private record Tally(int failures, long first, long lockedUntil) {
 	}
 
 	/**
-	 * Entries per tally: 10 000 accounts or addresses at about 200 bytes each is 2 MB (calibrated to
-	 * stay small; a kitchen has tens of accounts, a flood is cut off by the address tally).
+	 * Entries per tally: 10 000 accounts or addresses at about 200 bytes each is 2 MB
+	 * (calibrated to stay small; a kitchen has tens of accounts, a flood is cut off by
+	 * the address tally).
 	 */
 	static final int MAX_ENTRIES = 10_000;
 
@@ -82,8 +87,10 @@ public class SignInThrottle {
 		this.addressLimit = addressLimit;
 		this.coolingNanos = cooling.toNanos();
 		this.ticker = ticker;
-		// a tally lives through its counting window and the lock that may follow it; evictions run on
-		// the calling thread (a few map operations), so the bound holds without a pool thread
+		// a tally lives through its counting window and the lock that may follow it;
+		// evictions run on
+		// the calling thread (a few map operations), so the bound holds without a pool
+		// thread
 		this.accounts = Caffeine.newBuilder()
 			.maximumSize(MAX_ENTRIES)
 			.expireAfterWrite(cooling.multipliedBy(2))
@@ -120,8 +127,9 @@ public class SignInThrottle {
 	}
 
 	/**
-	 * A right password clears the account's tally. The address keeps its tally, or one valid account
-	 * would let its holder reset the count between guesses at other accounts.
+	 * A right password clears the account's tally. The address keeps its tally, or one
+	 * valid account would let its holder reset the count between guesses at other
+	 * accounts.
 	 */
 	public void succeeded(String account) {
 		String key = accountKey(account);
@@ -163,7 +171,10 @@ public class SignInThrottle {
 		});
 	}
 
-	/** User names are looked up trimmed and ignoring case (AccountDetailsService), so counted that way. */
+	/**
+	 * User names are looked up trimmed and ignoring case (AccountDetailsService), so
+	 * counted that way.
+	 */
 	static String accountKey(String account) {
 		if (account == null) {
 			return null;
@@ -173,8 +184,9 @@ public class SignInThrottle {
 	}
 
 	/**
-	 * An IPv4 address as it is; an IPv6 address by its /64 network, since one subscriber is given at
-	 * least a whole /64 (RFC 6177) and could otherwise change address between guesses.
+	 * An IPv4 address as it is; an IPv6 address by its /64 network, since one subscriber
+	 * is given at least a whole /64 (RFC 6177) and could otherwise change address between
+	 * guesses.
 	 */
 	static String addressKey(String address) {
 		if (address == null || address.isBlank()) {
@@ -184,7 +196,8 @@ public class SignInThrottle {
 			return address;
 		}
 		try {
-			// in brackets the JDK takes it as an IPv6 literal only: parsed, never looked up in DNS
+			// in brackets the JDK takes it as an IPv6 literal only: parsed, never looked
+			// up in DNS
 			byte[] b = InetAddress.getByName("[" + address + "]").getAddress();
 			return b.length == 16 ? "v6:" + Arrays.toString(Arrays.copyOf(b, 8)) : address;
 		}

@@ -1,8 +1,9 @@
 package com.crustplan.system;
 
 /**
- * A save made from a form showing an older version of the record than the one saved now: refused,
- * so one chef's change never silently overwrites another's. The page shows both versions.
+ * A save made from a form showing an older version of the record than the one saved now:
+ * refused, so one chef's change never silently overwrites another's. The page shows both
+ * versions.
  */
 public class StaleEditException extends RuntimeException {
 

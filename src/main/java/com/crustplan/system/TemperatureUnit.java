@@ -2,7 +2,10 @@ package com.crustplan.system;
 
 import java.util.Locale;
 
-/** The unit a cook reads temperatures in. Inside the app everything is °C; only the edges convert. */
+/**
+ * The unit a cook reads temperatures in. Inside the app everything is °C; only the edges
+ * convert.
+ */
 public enum TemperatureUnit {
 
 	CELSIUS("C", "°C"), FAHRENHEIT("F", "°F");
@@ -36,7 +39,10 @@ public enum TemperatureUnit {
 		return this == CELSIUS ? FAHRENHEIT : CELSIUS;
 	}
 
-	/** A Celsius temperature in this unit (°F = °C × 9/5 + 32, the definition of the Fahrenheit scale). */
+	/**
+	 * A Celsius temperature in this unit (°F = °C × 9/5 + 32, the definition of the
+	 * Fahrenheit scale).
+	 */
 	public double fromCelsius(double c) {
 		return this == CELSIUS ? c : c * 9 / 5 + 32;
 	}

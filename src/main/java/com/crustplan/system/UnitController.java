@@ -19,7 +19,9 @@ class UnitController {
 		return "redirect:" + safeLocalPath(back);
 	}
 
-	/** Only paths on this site, so the switch cannot be used to send someone elsewhere. */
+	/**
+	 * Only paths on this site, so the switch cannot be used to send someone elsewhere.
+	 */
 	static String safeLocalPath(String back) {
 		if (back == null || !back.startsWith("/") || back.startsWith("//") || back.contains("\\")
 				|| back.chars().anyMatch(ch -> ch < 0x20)) {

@@ -9,8 +9,8 @@ import org.springframework.web.bind.annotation.ControllerAdvice;
 import org.springframework.web.bind.annotation.ModelAttribute;
 
 /**
- * The °C/°F choice, remembered in a cookie so it holds across sessions and signed-out pages; every
- * page gets it as the model attribute {@code units}.
+ * The °C/°F choice, remembered in a cookie so it holds across sessions and signed-out
+ * pages; every page gets it as the model attribute {@code units}.
  */
 @ControllerAdvice(annotations = Controller.class)
 public class UnitPreference {
@@ -47,7 +47,10 @@ public class UnitPreference {
 		return of(request);
 	}
 
-	/** Where the °C/°F switch returns to: this page, for GET requests; the list pages otherwise. */
+	/**
+	 * Where the °C/°F switch returns to: this page, for GET requests; the list pages
+	 * otherwise.
+	 */
 	@ModelAttribute("currentPath")
 	String currentPath(HttpServletRequest request) {
 		String path = request.getRequestURI().substring(request.getContextPath().length());

@@ -9,15 +9,19 @@ import org.springframework.web.servlet.config.annotation.WebMvcConfigurer;
 import org.springframework.web.servlet.resource.LiteWebJarsResourceResolver;
 
 /**
- * Static files and webjars under their own paths only (spring.web.resources.add-mappings=false drops
- * Boot's catch-all "/**" handler). With the catch-all, every link a page writes (/plans/4, /surfaces …)
- * was looked up as a possible file inside the jar on every view, which cost more than the page itself
- * under load.
+ * Static files and webjars under their own paths only
+ * (spring.web.resources.add-mappings=false drops Boot's catch-all "/**" handler). With
+ * the catch-all, every link a page writes (/plans/4, /surfaces …) was looked up as a
+ * possible file inside the jar on every view, which cost more than the page itself under
+ * load.
  */
 @Configuration(proxyBeanMethods = false)
 class WebResources implements WebMvcConfigurer {
 
-	/** Browsers may keep the app's own CSS, script and images for an hour (they change with releases). */
+	/**
+	 * Browsers may keep the app's own CSS, script and images for an hour (they change
+	 * with releases).
+	 */
 	private static final CacheControl OWN_FILES = CacheControl.maxAge(Duration.ofHours(1));
 
 	@Override
@@ -28,7 +32,8 @@ class WebResources implements WebMvcConfigurer {
 				.setCacheControl(OWN_FILES)
 				.resourceChain(true);
 		}
-		// version-less webjar paths (/webjars/chart.js/dist/chart.umd.js) resolved to the jar's version
+		// version-less webjar paths (/webjars/chart.js/dist/chart.umd.js) resolved to the
+		// jar's version
 		registry.addResourceHandler("/webjars/**")
 			.addResourceLocations("classpath:/META-INF/resources/webjars/")
 			.setCacheControl(CacheControl.maxAge(Duration.ofDays(365)))

@@ -13,14 +13,15 @@ import org.springframework.transaction.event.TransactionalEventListener;
 import com.crustplan.system.CredentialCheckCache;
 
 /**
- * Ends a user's open sessions once a change to their role, state or password is committed, so the
- * change counts from their next request: the sessions live in the shared database (Spring Session
- * JDBC), so this reaches every instance. The next request finds no session, is anonymous, and is
- * asked to sign in again, which reads the account afresh. HTTP Basic clients keep no session: their
- * account is read on every request anyway, and the remembered password checks are dropped here.
+ * Ends a user's open sessions once a change to their role, state or password is
+ * committed, so the change counts from their next request: the sessions live in the
+ * shared database (Spring Session JDBC), so this reaches every instance. The next request
+ * finds no session, is anonymous, and is asked to sign in again, which reads the account
+ * afresh. HTTP Basic clients keep no session: their account is read on every request
+ * anyway, and the remembered password checks are dropped here.
  * <p>
- * After the commit, not before: a sign-in between the deletion and the commit would otherwise read
- * the old role into a new session.
+ * After the commit, not before: a sign-in between the deletion and the commit would
+ * otherwise read the old role into a new session.
  */
 @Component
 class AccountSessions {

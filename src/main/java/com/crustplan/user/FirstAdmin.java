@@ -15,7 +15,8 @@ import org.springframework.transaction.annotation.Transactional;
 /**
  * On a database without an administrator, creates one: name and password from
  * {@code crustplan.admin.username} / {@code crustplan.admin.password} (environment
- * CRUSTPLAN_ADMIN_USERNAME / CRUSTPLAN_ADMIN_PASSWORD), or a random password printed once to the log.
+ * CRUSTPLAN_ADMIN_USERNAME / CRUSTPLAN_ADMIN_PASSWORD), or a random password printed once
+ * to the log.
  */
 @Component
 @Order(0)
@@ -54,15 +55,16 @@ class FirstAdmin implements ApplicationRunner {
 		boolean random = password == null || password.isEmpty();
 		String problem = random ? null : UserForm.passwordProblem(password);
 		if (problem != null) {
-			// stop here with the setting and the reason, rather than store a hash of part of it
+			// stop here with the setting and the reason, rather than store a hash of part
+			// of it
 			throw new IllegalStateException("crustplan.admin.password (CRUSTPLAN_ADMIN_PASSWORD): " + problem);
 		}
 		String pw = random ? randomPassword() : password;
 		users.save(new UserAccount(username, encoder.encode(pw), Role.ADMIN));
 		if (random) {
 			// printed once: it is not stored anywhere but as a hash
-			log.warn("First administrator '{}' created with the random password {} — sign in and change it.",
-					username, pw);
+			log.warn("First administrator '{}' created with the random password {} — sign in and change it.", username,
+					pw);
 		}
 		else {
 			log.info("First administrator '{}' created from the configured password.", username);

@@ -1,6 +1,9 @@
 package com.crustplan.user;
 
-/** What a signed-in person may do; chef includes cook, admin includes chef (see SecurityConfig). */
+/**
+ * What a signed-in person may do; chef includes cook, admin includes chef (see
+ * SecurityConfig).
+ */
 public enum Role {
 
 	COOK("Cook", "views surfaces, setups and plans; records test cooks"),

@@ -16,7 +16,10 @@ import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 import com.crustplan.system.FormBinding;
 
-/** User management for administrators (the security rules keep everyone else out of /admin). */
+/**
+ * User management for administrators (the security rules keep everyone else out of
+ * /admin).
+ */
 @Controller
 @RequestMapping("/admin/users")
 class UserController {

@@ -10,23 +10,26 @@ import jakarta.validation.constraints.Size;
 import com.crustplan.system.SecurityConfig;
 
 /**
- * An account as an administrator edits it. The password is required for a new account and optional
- * on an edit (empty keeps the current one); it is hashed before it is stored and never shown.
+ * An account as an administrator edits it. The password is required for a new account and
+ * optional on an edit (empty keeps the current one); it is hashed before it is stored and
+ * never shown.
  */
 public record UserForm(
-		@NotBlank(message = "give a user name") @Size(min = 2, max = 60, message = "2 to 60 characters") @Pattern(regexp = "[A-Za-z0-9._-]*", message = "letters, digits, dot, dash and underscore only") String username,
-		@NotBlank(message = "choose a role") String role,
-		String password,
-		Boolean enabled) {
+		@NotBlank(message = "give a user name") @Size(min = 2, max = 60, message = "2 to 60 characters") @Pattern(
+				regexp = "[A-Za-z0-9._-]*", message = "letters, digits, dot, dash and underscore only") String username,
+		@NotBlank(message = "choose a role") String role, String password, Boolean enabled) {
 
-	/** NIST SP 800-63B (2017) asks for at least 8 characters; 10 leaves a margin for a shared kitchen. */
+	/**
+	 * NIST SP 800-63B (2017) asks for at least 8 characters; 10 leaves a margin for a
+	 * shared kitchen.
+	 */
 	public static final int MIN_PASSWORD = 10;
 
 	/**
-	 * BCrypt uses at most the first 72 bytes of a password (the 18 32-bit words of Blowfish's P-array
-	 * that its key schedule fills; the OpenBSD implementation and Spring Security's BCrypt both stop
-	 * there, and Spring Security refuses to hash more). Counted in UTF-8 (RFC 3629): an accented
-	 * letter takes 2 bytes, an emoji 4.
+	 * BCrypt uses at most the first 72 bytes of a password (the 18 32-bit words of
+	 * Blowfish's P-array that its key schedule fills; the OpenBSD implementation and
+	 * Spring Security's BCrypt both stop there, and Spring Security refuses to hash
+	 * more). Counted in UTF-8 (RFC 3629): an accented letter takes 2 bytes, an emoji 4.
 	 */
 	public static final int MAX_PASSWORD_BYTES = SecurityConfig.MAX_PASSWORD_BYTES;
 

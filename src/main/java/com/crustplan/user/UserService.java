@@ -71,7 +71,8 @@ public class UserService {
 		Role role = role(f);
 		boolean enabled = f.enabled() != null && f.enabled();
 		boolean losesAdmin = a.getRole() == Role.ADMIN && a.isEnabled() && (role != Role.ADMIN || !enabled);
-		if (losesAdmin && users.findAll().stream().filter(u -> u.getRole() == Role.ADMIN && u.isEnabled()).count() <= 1) {
+		if (losesAdmin
+				&& users.findAll().stream().filter(u -> u.getRole() == Role.ADMIN && u.isEnabled()).count() <= 1) {
 			throw new Refused("role", "this is the last administrator: make another one first");
 		}
 		String oldHash = a.getPasswordHash();

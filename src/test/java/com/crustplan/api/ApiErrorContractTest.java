@@ -34,9 +34,10 @@ import com.crustplan.CrustplanTest;
 import com.crustplan.surface.SurfaceRepository;
 
 /**
- * The API's error contract: RFC 9457 problem details ({@code application/problem+json}, members
- * type/title/status/detail/instance, §3.1) carrying the {@code errors: [{field, message}]} list as an
- * extension member (§3.2). Each test reproduces one hostile request from the robustness issue.
+ * The API's error contract: RFC 9457 problem details ({@code application/problem+json},
+ * members type/title/status/detail/instance, §3.1) carrying the {@code errors: [{field,
+ * message}]} list as an extension member (§3.2). Each test reproduces one hostile request
+ * from the robustness issue.
  */
 @CrustplanTest
 class ApiErrorContractTest {
@@ -56,11 +57,13 @@ class ApiErrorContractTest {
 			  "horizonMinutes": 10 }""";
 
 	ResultActions plan(String body) throws Exception {
-		return mvc.perform(post("/api/v1/plans").with(anonymous()).contentType(MediaType.APPLICATION_JSON).content(body));
+		return mvc
+			.perform(post("/api/v1/plans").with(anonymous()).contentType(MediaType.APPLICATION_JSON).content(body));
 	}
 
 	static ResultActions isProblem(ResultActions r, int status) throws Exception {
-		// RFC 9457 §3: the media type, and the members a client can rely on; "type" absent means about:blank
+		// RFC 9457 §3: the media type, and the members a client can rely on; "type"
+		// absent means about:blank
 		return r.andExpect(status().is(status))
 			.andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_PROBLEM_JSON))
 			.andExpect(jsonPath("$.status").value(status))
@@ -74,7 +77,8 @@ class ApiErrorContractTest {
 	void shouldAnswerEveryBadFieldInOneProblemDetail() throws Exception {
 		isProblem(plan(CHIPS.replace("\"waterPct\": 78", "\"waterPct\": \"lots\"")
 			.replace("\"mode\": \"fryer\"", "\"mode\": \"microwave\"")), 400)
-			// RFC 9457 §4.2.1: with type about:blank the title is the status's reason phrase
+			// RFC 9457 §4.2.1: with type about:blank the title is the status's reason
+			// phrase
 			.andExpect(jsonPath("$.type").doesNotExist())
 			.andExpect(jsonPath("$.title").value("Bad Request"))
 			.andExpect(jsonPath("$.instance").value("/api/v1/plans"))
@@ -84,19 +88,24 @@ class ApiErrorContractTest {
 			.andExpect(jsonPath("$.detail", containsString("surface.waterPct must be a number, not text")));
 	}
 
-	/** Reproduces the 500 for a thickness of 309 nines: no decimal point, beyond a double's 1.8e308. */
+	/**
+	 * Reproduces the 500 for a thickness of 309 nines: no decimal point, beyond a
+	 * double's 1.8e308.
+	 */
 	@Test
 	void shouldNameTheFieldOfAnIntegerTooLargeForADouble() throws Exception {
 		String nines = "9".repeat(309);
 		isProblem(plan(CHIPS.replace("\"thicknessMm\": 10", "\"thicknessMm\": " + nines)), 400)
 			.andExpect(jsonPath("$.errors[0].field").value("surface.thicknessMm"))
 			.andExpect(jsonPath("$.errors[0].message").value("is too large a number"));
-		// 308 nines still fit a double (Double.MAX_VALUE ≈ 1.798e308): the engine's own range check answers
+		// 308 nines still fit a double (Double.MAX_VALUE ≈ 1.798e308): the engine's own
+		// range check answers
 		isProblem(plan(CHIPS.replace("\"thicknessMm\": 10", "\"thicknessMm\": " + "9".repeat(308))), 400)
 			.andExpect(jsonPath("$.errors[0].field").value("surface.thicknessMm"));
 		isProblem(plan(CHIPS.replace("\"horizonMinutes\": 10", "\"horizonMinutes\": 1e999")), 400)
 			.andExpect(jsonPath("$.errors[0].field").value("horizonMinutes"));
-		// longer than the JSON reader's number limit (1000 digits): still a 400 naming the field
+		// longer than the JSON reader's number limit (1000 digits): still a 400 naming
+		// the field
 		isProblem(plan(CHIPS.replace("\"thicknessMm\": 10", "\"thicknessMm\": " + "9".repeat(5000))), 400)
 			.andExpect(jsonPath("$.errors[0].field").value("surface.thicknessMm"));
 		long before = surfaces.count();
@@ -107,7 +116,10 @@ class ApiErrorContractTest {
 		assertThat(surfaces.count()).isEqualTo(before);
 	}
 
-	/** Reproduces the heap exhaustion: a body that says it is 200 MB is refused before it is read. */
+	/**
+	 * Reproduces the heap exhaustion: a body that says it is 200 MB is refused before it
+	 * is read.
+	 */
 	@Test
 	void shouldRefuseABodyOverTheLimitWith413BeforeReadingIt() throws Exception {
 		CountingBody body = new CountingBody(200L * 1024 * 1024);
@@ -118,7 +130,10 @@ class ApiErrorContractTest {
 		assertThat(body.read).as("bytes read of a body announced as 200 MB").isZero();
 	}
 
-	/** Without a Content-Length (chunked), the body is read only up to the limit, never whole. */
+	/**
+	 * Without a Content-Length (chunked), the body is read only up to the limit, never
+	 * whole.
+	 */
 	@Test
 	void shouldStopReadingAChunkedBodyAtTheLimit() throws Exception {
 		CountingBody body = new CountingBody(200L * 1024 * 1024);
@@ -134,20 +149,25 @@ class ApiErrorContractTest {
 		plan(CHIPS.replace("\"horizonMinutes\"", padding + "\"horizonMinutes\"")).andExpect(status().isOk());
 	}
 
-	/** Reproduces the 415 in the framework's default shape for a charset Java does not know. */
+	/**
+	 * Reproduces the 415 in the framework's default shape for a charset Java does not
+	 * know.
+	 */
 	@Test
 	void shouldAnswerABogusCharsetWithOurProblemDetail() throws Exception {
 		isProblem(mvc.perform(post("/api/v1/plans").with(anonymous())
 			.header(HttpHeaders.CONTENT_TYPE, "application/json;charset=bogus")
-			.content(CHIPS)), 415)
-			.andExpect(jsonPath("$.errors[0].field").value("Content-Type"))
+			.content(CHIPS)), 415).andExpect(jsonPath("$.errors[0].field").value("Content-Type"))
 			.andExpect(jsonPath("$.errors[0].message", containsString("bogus")));
 		isProblem(mvc.perform(post("/api/v1/surfaces").with(httpBasic("chef", "chef-demo"))
 			.header(HttpHeaders.CONTENT_TYPE, "application/json;charset=bogus")
 			.content("{}")), 415);
 	}
 
-	/** Reproduces the 406 for a browser's Accept header: RFC 9110 §12.5.1 lets the API disregard it. */
+	/**
+	 * Reproduces the 406 for a browser's Accept header: RFC 9110 §12.5.1 lets the API
+	 * disregard it.
+	 */
 	@Test
 	void shouldAnswerJsonWhateverTheAcceptHeaderAsks() throws Exception {
 		mvc.perform(post("/api/v1/plans").with(anonymous())
@@ -186,7 +206,10 @@ class ApiErrorContractTest {
 			.content("{}")), 403).andExpect(jsonPath("$.errors[0].field").value("authorization"));
 	}
 
-	/** RFC 8259 §4: names within an object SHOULD be unique; a field given twice is not guessed at. */
+	/**
+	 * RFC 8259 §4: names within an object SHOULD be unique; a field given twice is not
+	 * guessed at.
+	 */
 	@Test
 	void shouldRefuseAFieldGivenTwiceInJson() throws Exception {
 		isProblem(plan(CHIPS.replace("\"waterPct\": 78", "\"waterPct\": 1, \"waterPct\": 2")), 400)
@@ -196,14 +219,15 @@ class ApiErrorContractTest {
 
 	@Test
 	void shouldKeepPageErrorsAsPages() throws Exception {
-		// the API's advice hands page errors back: a missing surface is still the 404 page
+		// the API's advice hands page errors back: a missing surface is still the 404
+		// page
 		String type = mvc.perform(get("/surfaces/987654321/edit").with(user("chef").roles("CHEF")))
 			.andExpect(status().isNotFound())
 			.andReturn()
 			.getResponse()
 			.getContentType();
-		assertThat(type).as("a page's 404 is not a problem detail").satisfiesAnyOf(t -> assertThat(t).isNull(),
-				t -> assertThat(t).doesNotContain("problem"));
+		assertThat(type).as("a page's 404 is not a problem detail")
+			.satisfiesAnyOf(t -> assertThat(t).isNull(), t -> assertThat(t).doesNotContain("problem"));
 	}
 
 	static MockHttpServletRequest endless(ServletContext context, CountingBody body, long announced) {
@@ -227,7 +251,10 @@ class ApiErrorContractTest {
 		return r;
 	}
 
-	/** A JSON body of a notes string that goes on for {@code size} bytes, produced as it is read. */
+	/**
+	 * A JSON body of a notes string that goes on for {@code size} bytes, produced as it
+	 * is read.
+	 */
 	static final class CountingBody extends ServletInputStream {
 
 		private final InputStream head = new ByteArrayInputStream(

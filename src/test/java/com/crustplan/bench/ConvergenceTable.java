@@ -9,17 +9,22 @@ import com.crustplan.engine.cook.CookResult;
 import com.crustplan.engine.cook.CookSettings;
 
 /**
- * Grid and time-step convergence of the full CookSimulation (heat, moisture, local boiling, browning)
- * for the two everyday plans: time to target and core temperature at target for half, the default and
- * twice the default nodes and 2/1/0.5/0.25 s steps, against a reference refined 4× in both (4·(n − 1) + 1
- * nodes, a quarter of the default step), with an 8× run to show how far the reference itself is from
- * converged; then the step alone, the grid alone and both together, with the observed order.
+ * Grid and time-step convergence of the full CookSimulation (heat, moisture, local
+ * boiling, browning) for the two everyday plans: time to target and core temperature at
+ * target for half, the default and twice the default nodes and 2/1/0.5/0.25 s steps,
+ * against a reference refined 4× in both (4·(n − 1) + 1 nodes, a quarter of the default
+ * step), with an 8× run to show how far the reference itself is from converged; then the
+ * step alone, the grid alone and both together, with the observed order.
  * <p>
- * Run: {@code mvn -o -Pbench test-compile exec:exec -Dbench.main=com.crustplan.bench.ConvergenceTable}
+ * Run:
+ * {@code mvn -o -Pbench test-compile exec:exec -Dbench.main=com.crustplan.bench.ConvergenceTable}
  */
 public final class ConvergenceTable {
 
-	/** Half, the default and twice the default resolution (every coarser node kept on the finer grids). */
+	/**
+	 * Half, the default and twice the default resolution (every coarser node kept on the
+	 * finer grids).
+	 */
 	static final int[] NODES = { (CookSettings.DEFAULT_NODES - 1) / 2 + 1, CookSettings.DEFAULT_NODES,
 			2 * (CookSettings.DEFAULT_NODES - 1) + 1 };
 
@@ -67,16 +72,21 @@ public final class ConvergenceTable {
 		return rows;
 	}
 
-	/** Time to target along a sequence of settings, with successive differences and the observed order. */
+	/**
+	 * Time to target along a sequence of settings, with successive differences and the
+	 * observed order.
+	 */
 	static void sequence(Plan plan, String title, int[] nodes, double[] steps) {
-		System.out.printf(Locale.ROOT, "%n%s%n| nodes | step s | time to target s | change s | observed order |%n|---:|---:|---:|---:|---:|%n",
+		System.out.printf(Locale.ROOT,
+				"%n%s%n| nodes | step s | time to target s | change s | observed order |%n|---:|---:|---:|---:|---:|%n",
 				title);
 		double previous = Double.NaN;
 		double previousChange = Double.NaN;
 		for (int k = 0; k < nodes.length; k++) {
 			double t = run(plan, nodes[k], steps[k]).timeToTargetS();
 			double change = t - previous;
-			// halving the step (and the spacing, on the diagonal) divides the change by 2^p
+			// halving the step (and the spacing, on the diagonal) divides the change by
+			// 2^p
 			double order = Math.log(previousChange / change) / Math.log(2);
 			System.out.printf(Locale.ROOT, "| %d | %.5g | %.2f | %s | %s |%n", nodes[k], steps[k], t,
 					Double.isNaN(change) ? "" : String.format(Locale.ROOT, "%+.2f", change),
@@ -88,13 +98,15 @@ public final class ConvergenceTable {
 
 	public static void main(String[] args) {
 		for (Plan plan : List.of(STEAK, CHIPS)) {
-			System.out.printf(Locale.ROOT, "%n## %s%n%ngrid x step, against the 4x refined reference (%d nodes, %.4g s)%n", plan.name(),
+			System.out.printf(Locale.ROOT,
+					"%n## %s%n%ngrid x step, against the 4x refined reference (%d nodes, %.4g s)%n", plan.name(),
 					REFERENCE_NODES, REFERENCE_STEP_S);
-			System.out.printf(Locale.ROOT, "| nodes | step s | time to target s | error s | error %% | core at target °C | core error K |%n");
+			System.out.printf(Locale.ROOT,
+					"| nodes | step s | time to target s | error s | error %% | core at target °C | core error K |%n");
 			System.out.printf(Locale.ROOT, "|---:|---:|---:|---:|---:|---:|---:|%n");
 			for (Row r : table(plan)) {
-				System.out.printf(Locale.ROOT, "| %d | %.4g | %.2f | %+.2f | %+.2f | %.2f | %+.2f |%n", r.nodes(), r.stepS(),
-						r.timeToTargetS(), r.errorS(), r.errorPct(), r.coreAtTargetC(), r.coreErrorK());
+				System.out.printf(Locale.ROOT, "| %d | %.4g | %.2f | %+.2f | %+.2f | %.2f | %+.2f |%n", r.nodes(),
+						r.stepS(), r.timeToTargetS(), r.errorS(), r.errorPct(), r.coreAtTargetC(), r.coreErrorK());
 			}
 			int[] atDefault = new int[8];
 			double[] halving = new double[8];

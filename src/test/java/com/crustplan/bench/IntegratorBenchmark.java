@@ -17,12 +17,14 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 
 /**
- * Side by side in one run: the engine's backward-Euler conduction step against Hipparchus'
- * Dormand–Prince 5(4) on the same equations and grid ({@link OvenSlab}), each at the loosest setting
- * that stays within 0.5 K of the 4× refined reference. The settings are found in the trial setup from
- * the accuracy table ({@link IntegratorComparison}), not typed in, so they follow the model if it
- * changes. Goal (issue 6): own solver ≥ 10× faster at equal accuracy. Sampling mode, so the median
- * (p0.50) is reported: the machine is shared and the mean is pulled up by other processes.
+ * Side by side in one run: the engine's backward-Euler conduction step against
+ * Hipparchus' Dormand–Prince 5(4) on the same equations and grid ({@link OvenSlab}), each
+ * at the loosest setting that stays within 0.5 K of the 4× refined reference. The
+ * settings are found in the trial setup from the accuracy table
+ * ({@link IntegratorComparison}), not typed in, so they follow the model if it changes.
+ * Goal (issue 6): own solver ≥ 10× faster at equal accuracy. Sampling mode, so the median
+ * (p0.50) is reported: the machine is shared and the mean is pulled up by other
+ * processes.
  */
 @BenchmarkMode(Mode.SampleTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)

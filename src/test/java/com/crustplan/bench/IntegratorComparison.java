@@ -8,17 +8,22 @@ import com.crustplan.engine.cook.CookSettings;
 
 /**
  * Prints the accuracy table of the side-by-side comparison: backward Euler (the engine's
- * HeatConduction step) at several steps and Dormand–Prince 5(4) at several tolerances, on the same
- * default grid (CookSettings.DEFAULT_NODES) and the same equations ({@link OvenSlab}), each against a reference on the 4× refined grid
- * (4·(n − 1) + 1 nodes, integrated to 1e-7 K tolerance, so its time error is far below anything measured). The
- * timings printed here are a rough median of repeated runs; the figures for the README come from
- * {@link IntegratorBenchmark}.
+ * HeatConduction step) at several steps and Dormand–Prince 5(4) at several tolerances, on
+ * the same default grid (CookSettings.DEFAULT_NODES) and the same equations
+ * ({@link OvenSlab}), each against a reference on the 4× refined grid (4·(n − 1) + 1
+ * nodes, integrated to 1e-7 K tolerance, so its time error is far below anything
+ * measured). The timings printed here are a rough median of repeated runs; the figures
+ * for the README come from {@link IntegratorBenchmark}.
  * <p>
- * Run: {@code mvn -o -Pbench test-compile exec:exec -Dbench.main=com.crustplan.bench.IntegratorComparison}
+ * Run:
+ * {@code mvn -o -Pbench test-compile exec:exec -Dbench.main=com.crustplan.bench.IntegratorComparison}
  */
 public final class IntegratorComparison {
 
-	/** Accuracy goal of issue 6: both solvers within 0.5 K of the reference everywhere, at every sample. */
+	/**
+	 * Accuracy goal of issue 6: both solvers within 0.5 K of the reference everywhere, at
+	 * every sample.
+	 */
 	static final double GOAL_K = 0.5;
 
 	/** Profiles are compared every 20 s: every step tried below divides it. */
@@ -71,14 +76,20 @@ public final class IntegratorComparison {
 		return ref;
 	}
 
-	/** The same grid, integrated to the reference tolerance: what is left of an error is then the grid's. */
+	/**
+	 * The same grid, integrated to the reference tolerance: what is left of an error is
+	 * then the grid's.
+	 */
 	static double[][] sameGridConverged(Case c) {
 		double[][] s = new double[samples(c)][];
 		SlabSolvers.dormandPrince(c.coarse(), REFERENCE_TOLERANCE_K, c.endS(), SAMPLE_S, s, null);
 		return s;
 	}
 
-	/** Largest |T − T_ref| over all coarse nodes and samples; the fine grid keeps every coarse node. */
+	/**
+	 * Largest |T − T_ref| over all coarse nodes and samples; the fine grid keeps every
+	 * coarse node.
+	 */
 	static double maxError(double[][] coarse, double[][] fine, int stride) {
 		double max = 0;
 		for (int k = 0; k < coarse.length; k++) {
@@ -106,8 +117,8 @@ public final class IntegratorComparison {
 		double[][] same = sameGridConverged(c);
 		OvenSlab slab = c.coarse();
 		List<Row> rows = new ArrayList<>();
-		rows.add(new Row("grid only (time-converged)", REFERENCE_TOLERANCE_K, maxError(same, ref, REFINEMENT), 0,
-				0, Double.NaN));
+		rows.add(new Row("grid only (time-converged)", REFERENCE_TOLERANCE_K, maxError(same, ref, REFINEMENT), 0, 0,
+				Double.NaN));
 		for (double dt : STEPS_S) {
 			double[][] s = backwardEuler(c, slab, dt);
 			double ms = timed ? time(() -> SlabSolvers.backwardEuler(slab, dt, c.endS(), 0, null)) : Double.NaN;
@@ -121,7 +132,8 @@ public final class IntegratorComparison {
 			rows.add(new Row("Dormand-Prince 5(4), abs tol K", tol, maxError(s, ref, REFINEMENT), maxError(s, same, 1),
 					evaluations[0], ms));
 		}
-		// the literal 4× refined run of the engine's own scheme (4× the nodes, a quarter of the step)
+		// the literal 4× refined run of the engine's own scheme (4× the nodes, a quarter
+		// of the step)
 		double[][] be4 = backwardEuler(c, c.fine(), 0.125);
 		rows.add(new Row("check: backward Euler, 4x nodes, dt s", 0.125, maxError(be4, ref, 1), 0,
 				(int) Math.round(c.endS() / 0.125), Double.NaN));
@@ -139,8 +151,8 @@ public final class IntegratorComparison {
 	}
 
 	/**
-	 * Median wall time of one run in ms over about half a second of runs after a warm-up: a rough figure;
-	 * the median rather than the mean because the machine is shared.
+	 * Median wall time of one run in ms over about half a second of runs after a warm-up:
+	 * a rough figure; the median rather than the mean because the machine is shared.
 	 */
 	private static double time(Runnable run) {
 		for (int i = 0; i < 5; i++) {
@@ -160,19 +172,21 @@ public final class IntegratorComparison {
 	public static void main(String[] args) {
 		for (Case c : List.of(STEAK, CHIPS)) {
 			OvenSlab slab = c.coarse();
-			System.out.printf(Locale.ROOT, "%n%s, %d nodes, %.0f s; reference %d nodes at %.0e K; error = max |T - T_ref| over nodes and %d samples%n",
+			System.out.printf(Locale.ROOT,
+					"%n%s, %d nodes, %.0f s; reference %d nodes at %.0e K; error = max |T - T_ref| over nodes and %d samples%n",
 					slab.name, NODES, c.endS(), REFINEMENT * (NODES - 1) + 1, REFERENCE_TOLERANCE_K, samples(c));
 			System.out.printf(Locale.ROOT, "%-40s %9s %10s %12s %8s %10s%n", "solver", "setting", "error K",
 					"time err K", "steps/f", "ms/run");
 			List<Row> rows = table(c, true);
 			for (Row r : rows) {
-				System.out.printf(Locale.ROOT, "%-40s %9.3g %10.4f %12.4f %8d %10.3f%n", r.solver(), r.setting(), r.errorK(),
-						r.timeErrorK(), r.work(), r.msPerRun());
+				System.out.printf(Locale.ROOT, "%-40s %9.3g %10.4f %12.4f %8d %10.3f%n", r.solver(), r.setting(),
+						r.errorK(), r.timeErrorK(), r.work(), r.msPerRun());
 			}
 			Row be = loosestWithin(rows, "backward", GOAL_K);
 			Row dp = loosestWithin(rows, "Dormand", GOAL_K);
 			if (be != null && dp != null) {
-				System.out.printf(Locale.ROOT, "at <= %.1f K: backward Euler dt %.3g s (%.4f K) vs DP54 tol %.3g K (%.4f K): rough speed ratio %.1fx%n",
+				System.out.printf(Locale.ROOT,
+						"at <= %.1f K: backward Euler dt %.3g s (%.4f K) vs DP54 tol %.3g K (%.4f K): rough speed ratio %.1fx%n",
 						GOAL_K, be.setting(), be.errorK(), dp.setting(), dp.errorK(), dp.msPerRun() / be.msPerRun());
 			}
 			else {

@@ -9,19 +9,20 @@ import com.crustplan.engine.properties.FoodComponent;
 import com.crustplan.engine.properties.ThermalProperties;
 
 /**
- * The conduction part of a cook written as a method-of-lines system, so a general-purpose ODE
- * integrator and the engine's own stepper can solve the same equations on the same grid:
- * <pre>
+ * The conduction part of a cook written as a method-of-lines system, so a general-purpose
+ * ODE integrator and the engine's own stepper can solve the same equations on the same
+ * grid: <pre>
  *   C_i(T_i)·dT_i/dt = Σ_j G_ij(T)·(T_j − T_i) + [face] q(T_face)
  *   q(T) = h·(T_air − T) + ε·σ·(T_air⁴ − T⁴)      both faces in a fan oven, walls at the air temperature
- * </pre>
- * with C_i = m_i·cp(T_i) and k(T_i) from the Choi–Okos mixing rules exactly as CookSimulation evaluates
- * them (including its porosity rule), G_ij the series conductance of the two half-spacings as in
- * HeatConduction. Moisture is held at its initial value and the face exchanges no vapour: no evaporation
- * and no local boiling. The engine's local-boiling constraint (a node holding water cannot rise above
- * its boiling point; the excess enthalpy boils water off) is an inequality on the state, not a
- * right-hand side, so a general ODE integrator cannot impose it without event handling and a change of
- * equations at every node; it is left out of both sides of the comparison.
+ * </pre> with C_i = m_i·cp(T_i) and k(T_i) from the Choi–Okos mixing rules exactly as
+ * CookSimulation evaluates them (including its porosity rule), G_ij the series
+ * conductance of the two half-spacings as in HeatConduction. Moisture is held at its
+ * initial value and the face exchanges no vapour: no evaporation and no local boiling.
+ * The engine's local-boiling constraint (a node holding water cannot rise above its
+ * boiling point; the excess enthalpy boils water off) is an inequality on the state, not
+ * a right-hand side, so a general ODE integrator cannot impose it without event handling
+ * and a change of equations at every node; it is left out of both sides of the
+ * comparison.
  */
 final class OvenSlab {
 
@@ -66,7 +67,8 @@ final class OvenSlab {
 		for (int j = 0; j < dry.length; j++) {
 			massFractions[j + 1] = dry[j] / (1 + x0);
 		}
-		// the same initial bulk density as CookSimulation: matrix density at the start, less the pores
+		// the same initial bulk density as CookSimulation: matrix density at the start,
+		// less the pores
 		double matrixVolume = ThermalProperties.specificVolume(massFractions, surface.initialTemperatureC());
 		double bulkDensity = (1 - surface.category().initialPorosity().value()) / matrixVolume;
 		nodeMass = new double[n];
@@ -87,7 +89,10 @@ final class OvenSlab {
 		return new OvenSlab("chips 10 mm, fan oven 200 °C", Surface.defaults(FoodCategory.POTATO), 200, nodes);
 	}
 
-	/** The same food on a grid refined by {@code factor} (factor·(n − 1) + 1 nodes, so every node is kept). */
+	/**
+	 * The same food on a grid refined by {@code factor} (factor·(n − 1) + 1 nodes, so
+	 * every node is kept).
+	 */
 	OvenSlab refined(Surface surface, int factor) {
 		return new OvenSlab(name, surface, airK - 273.15, factor * (n - 1) + 1);
 	}
@@ -107,7 +112,10 @@ final class OvenSlab {
 		return t;
 	}
 
-	/** Heat capacity per m² and conductivity of every node at temperatures {@code t} (CookSimulation step 1). */
+	/**
+	 * Heat capacity per m² and conductivity of every node at temperatures {@code t}
+	 * (CookSimulation step 1).
+	 */
 	void properties(double[] t, double[] capacity, double[] conductivity) {
 		for (int i = 0; i < n; i++) {
 			double tc = t[i] - 273.15;
@@ -131,7 +139,10 @@ final class OvenSlab {
 		return convection + 4 * emissivity * SIGMA * t * t * t;
 	}
 
-	/** The right-hand side dT/dt, using {@code capacity} and {@code conductivity} as scratch. */
+	/**
+	 * The right-hand side dT/dt, using {@code capacity} and {@code conductivity} as
+	 * scratch.
+	 */
 	void derivatives(double[] t, double[] capacity, double[] conductivity, double[] dtdt) {
 		properties(t, capacity, conductivity);
 		dtdt[0] = faceFlux(t[0]);

@@ -23,9 +23,10 @@ import com.crustplan.engine.cook.CookResult;
 import com.crustplan.engine.cook.CookSettings;
 
 /**
- * One plan at the default settings (CookSettings.defaults()), with the series a plan page charts, and the
- * 30-temperature fryer map. Goals (issue 6): a plan ≤ 2 ms median, the map ≤ 60 ms. Sampling mode gives
- * the median (p0.50) as well as the mean. Short runs: the machine's two cores are shared.
+ * One plan at the default settings (CookSettings.defaults()), with the series a plan page
+ * charts, and the 30-temperature fryer map. Goals (issue 6): a plan ≤ 2 ms median, the
+ * map ≤ 60 ms. Sampling mode gives the median (p0.50) as well as the mean. Short runs:
+ * the machine's two cores are shared.
  */
 @BenchmarkMode(Mode.SampleTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
@@ -37,7 +38,10 @@ public class PlanBenchmark {
 
 	private static final CookSettings DEFAULTS = CookSettings.defaults();
 
-	/** A map needs only the time to target: it can stop there instead of running on by a quarter. */
+	/**
+	 * A map needs only the time to target: it can stop there instead of running on by a
+	 * quarter.
+	 */
 	private static final CookSettings STOP_AT_TARGET = DEFAULTS.withRecordSeries(false).withRunPastTargetFraction(0);
 
 	private ExecutorService pool;
@@ -62,8 +66,12 @@ public class PlanBenchmark {
 		return Plans.chips(DEFAULTS);
 	}
 
-	/** Twice the nodes at twice the step: about the same work, closer to converged (see the convergence table). */
-	private static final CookSettings DOUBLE_GRID_DOUBLE_STEP = DEFAULTS.withNodes(2 * (CookSettings.DEFAULT_NODES - 1) + 1)
+	/**
+	 * Twice the nodes at twice the step: about the same work, closer to converged (see
+	 * the convergence table).
+	 */
+	private static final CookSettings DOUBLE_GRID_DOUBLE_STEP = DEFAULTS
+		.withNodes(2 * (CookSettings.DEFAULT_NODES - 1) + 1)
 		.withTimeStepS(2 * CookSettings.DEFAULT_TIME_STEP_S);
 
 	@Benchmark
@@ -85,16 +93,20 @@ public class PlanBenchmark {
 	}
 
 	/**
-	 * The acrylamide risk map as a plan page asks for it: chips, 30 fryer temperatures 150–195 °C, a column
-	 * every 30 s to 15 min (each row runs to the map's end and records every column; rows in parallel).
+	 * The acrylamide risk map as a plan page asks for it: chips, 30 fryer temperatures
+	 * 150–195 °C, a column every 30 s to 15 min (each row runs to the map's end and
+	 * records every column; rows in parallel).
 	 */
 	@Benchmark
 	public RiskMap riskMapFries30Temperatures() {
-		return RiskMap.compute(Plans.CHIPS, Product.FRENCH_FRIES, Plans.FRYER_175, Plans.GOLDEN, MAP_TEMPERATURES_C, 30, 900,
-				DEFAULTS);
+		return RiskMap.compute(Plans.CHIPS, Product.FRENCH_FRIES, Plans.FRYER_175, Plans.GOLDEN, MAP_TEMPERATURES_C, 30,
+				900, DEFAULTS);
 	}
 
-	/** The map's engine cost alone, as before RiskMap landed: 30 summary runs to the target and a quarter past. */
+	/**
+	 * The map's engine cost alone, as before RiskMap landed: 30 summary runs to the
+	 * target and a quarter past.
+	 */
 	@Benchmark
 	public double[] fryerMap30RunsNoSeries() {
 		return Plans.fryerMapTimesToTarget();
@@ -106,7 +118,10 @@ public class PlanBenchmark {
 		return Plans.fryerMapTimesToTarget(STOP_AT_TARGET);
 	}
 
-	/** The same map stopping at each target, the 30 runs spread over two threads (the machine's two cores). */
+	/**
+	 * The same map stopping at each target, the 30 runs spread over two threads (the
+	 * machine's two cores).
+	 */
 	@Benchmark
 	public double[] fryerMap30RunsStopAtTargetTwoThreads() throws Exception {
 		@SuppressWarnings("unchecked")

@@ -10,10 +10,15 @@ import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.heat.DeepFryer;
 import com.crustplan.engine.heat.PanContact;
 
-/** The plans the benchmarks and tables run: the two everyday cooks a kitchen plans most. */
+/**
+ * The plans the benchmarks and tables run: the two everyday cooks a kitchen plans most.
+ */
 final class Plans {
 
-	/** A 25 mm steak (the meat defaults) in an oiled pan at 220 °C, not turned, to a browned crust. */
+	/**
+	 * A 25 mm steak (the meat defaults) in an oiled pan at 220 °C, not turned, to a
+	 * browned crust.
+	 */
 	static final Surface STEAK = Surface.defaults(FoodCategory.MEAT);
 
 	static final HeatSetup PAN_220 = new PanContact(220, true, 0);
@@ -50,8 +55,9 @@ final class Plans {
 	}
 
 	/**
-	 * The engine part of a risk map without RiskMap's columns and acrylamide: 30 runs of the chips over
-	 * the fryer temperatures, summaries only (no series), each stopping a quarter past its target.
+	 * The engine part of a risk map without RiskMap's columns and acrylamide: 30 runs of
+	 * the chips over the fryer temperatures, summaries only (no series), each stopping a
+	 * quarter past its target.
 	 */
 	static double[] fryerMapTimesToTarget() {
 		return fryerMapTimesToTarget(CookSettings.defaults().withRecordSeries(false));

@@ -9,17 +9,21 @@ import org.hipparchus.ode.sampling.StepNormalizer;
 import com.crustplan.engine.layers.HeatConduction;
 
 /**
- * The two ways of solving an {@link OvenSlab}: the engine's backward-Euler conduction step (properties
- * and the face flux linearised about the start of each step, one tridiagonal solve, as CookSimulation
- * does) and Hipparchus' adaptive Dormand–Prince 5(4) on the full nonlinear right-hand side. Both can
- * record the profile every {@code sampleS} seconds into {@code samples[k][i]} (null: record nothing).
+ * The two ways of solving an {@link OvenSlab}: the engine's backward-Euler conduction
+ * step (properties and the face flux linearised about the start of each step, one
+ * tridiagonal solve, as CookSimulation does) and Hipparchus' adaptive Dormand–Prince 5(4)
+ * on the full nonlinear right-hand side. Both can record the profile every
+ * {@code sampleS} seconds into {@code samples[k][i]} (null: record nothing).
  */
 final class SlabSolvers {
 
 	private SlabSolvers() {
 	}
 
-	/** Backward Euler with the engine's HeatConduction; {@code dt} must divide {@code sampleS}. */
+	/**
+	 * Backward Euler with the engine's HeatConduction; {@code dt} must divide
+	 * {@code sampleS}.
+	 */
 	static double[] backwardEuler(OvenSlab slab, double dt, double endS, double sampleS, double[][] samples) {
 		int n = slab.n;
 		double[] t = slab.initialState();
@@ -46,7 +50,10 @@ final class SlabSolvers {
 		return t;
 	}
 
-	/** The same system as a Hipparchus ODE. Hipparchus hands back a new array per evaluation. */
+	/**
+	 * The same system as a Hipparchus ODE. Hipparchus hands back a new array per
+	 * evaluation.
+	 */
 	static final class Equations implements OrdinaryDifferentialEquation {
 
 		private final OvenSlab slab;
@@ -79,9 +86,11 @@ final class SlabSolvers {
 	}
 
 	/**
-	 * Dormand–Prince 5(4) with an absolute tolerance in kelvin on every node and no relative tolerance
-	 * (temperatures are all 270–470 K, so a relative tolerance would only rescale it).
-	 * @return the final profile; {@code evaluations[0]} gets the number of right-hand-side evaluations if given
+	 * Dormand–Prince 5(4) with an absolute tolerance in kelvin on every node and no
+	 * relative tolerance (temperatures are all 270–470 K, so a relative tolerance would
+	 * only rescale it).
+	 * @return the final profile; {@code evaluations[0]} gets the number of
+	 * right-hand-side evaluations if given
 	 */
 	static double[] dormandPrince(OvenSlab slab, double absTolK, double endS, double sampleS, double[][] samples,
 			int[] evaluations) {

@@ -15,8 +15,9 @@ import org.openqa.selenium.chrome.ChromeDriverService;
 import org.openqa.selenium.chrome.ChromeOptions;
 
 /**
- * Headless Debian Chromium for the browser tests. Where Chromium or its driver is missing (a laptop
- * without them) the tests are skipped with a message; CI installs both (.ci/run).
+ * Headless Debian Chromium for the browser tests. Where Chromium or its driver is missing
+ * (a laptop without them) the tests are skipped with a message; CI installs both
+ * (.ci/run).
  */
 final class Browser {
 

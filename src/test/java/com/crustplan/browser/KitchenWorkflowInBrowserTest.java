@@ -85,7 +85,8 @@ class KitchenWorkflowInBrowserTest {
 		driver.get(url("/surfaces/new"));
 		new Select(driver.findElement(By.id("category"))).selectByValue("vegetable");
 		driver.findElement(By.id("fill-defaults")).click();
-		// the typical vegetable water, 89 % (the category's default composition), filled in by the button
+		// the typical vegetable water, 89 % (the category's default composition), filled
+		// in by the button
 		assertThat(driver.findElement(By.id("waterPct")).getDomProperty("value")).isEqualTo("89");
 		type("name", "Shallot halves (browser test)");
 		type("thicknessMm", "18");
@@ -98,7 +99,8 @@ class KitchenWorkflowInBrowserTest {
 
 		driver.findElement(By.linkText("Plan with this surface")).click();
 		new Select(driver.findElement(By.id("setupId"))).selectByContainsVisibleText("Cast-iron skillet");
-		driver.findElement(By.cssSelector("#targetStage optgroup[data-category=vegetable] option[value=golden]")).click();
+		driver.findElement(By.cssSelector("#targetStage optgroup[data-category=vegetable] option[value=golden]"))
+			.click();
 		driver.findElement(By.id("run-plan")).click();
 		waiting().until(d -> "true".equals(d.findElement(By.id("charts")).getDomAttribute("data-rendered")));
 		type("name", "Shallots for the tart");

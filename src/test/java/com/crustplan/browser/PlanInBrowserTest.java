@@ -21,7 +21,10 @@ import org.springframework.boot.test.web.server.LocalServerPort;
 
 import com.crustplan.CrustplanTest;
 
-/** A chef signs in, plans chips in the demo kitchen's fryer, and sees charts and swatches drawn. */
+/**
+ * A chef signs in, plans chips in the demo kitchen's fryer, and sees charts and swatches
+ * drawn.
+ */
 @CrustplanTest
 class PlanInBrowserTest {
 
@@ -69,19 +72,21 @@ class PlanInBrowserTest {
 
 		WebElement charts = new WebDriverWait(driver, Duration.ofSeconds(20))
 			.until(d -> d.findElement(By.id("charts")));
-		new WebDriverWait(driver, Duration.ofSeconds(10)).until(d -> "true".equals(charts.getDomAttribute("data-rendered")));
+		new WebDriverWait(driver, Duration.ofSeconds(10))
+			.until(d -> "true".equals(charts.getDomAttribute("data-rendered")));
 
 		List<WebElement> canvases = driver.findElements(By.cssSelector("#charts canvas"));
 		assertThat(canvases).hasSize(3);
 		for (WebElement c : canvases) {
-			// Chart.js sizes the canvas to its box; a chart that failed to draw leaves it 0 × 0
+			// Chart.js sizes the canvas to its box; a chart that failed to draw leaves it
+			// 0 × 0
 			Dimension size = c.getSize();
 			assertThat(size.getWidth()).isGreaterThan(200);
 			assertThat(size.getHeight()).isGreaterThan(150);
 			// some pixels drawn: a blank canvas is all transparent
-			Object painted = ((JavascriptExecutor) driver).executeScript(
-					"var c=arguments[0],x=c.getContext('2d').getImageData(0,0,c.width,c.height).data;"
-							+ "for(var i=3;i<x.length;i+=4){if(x[i]>0)return true;}return false;", c);
+			Object painted = ((JavascriptExecutor) driver)
+				.executeScript("var c=arguments[0],x=c.getContext('2d').getImageData(0,0,c.width,c.height).data;"
+						+ "for(var i=3;i<x.length;i+=4){if(x[i]>0)return true;}return false;", c);
 			assertThat(painted).isEqualTo(true);
 		}
 		List<WebElement> swatches = driver.findElements(By.cssSelector("#swatches li .swatch"));
@@ -95,7 +100,8 @@ class PlanInBrowserTest {
 		Path shot = Browser.screenshot(driver, "plan-chips-fryer");
 		assertThat(Files.size(shot)).isGreaterThan(10_000);
 
-		// the plan's risk map: one row per set temperature, cells coloured, the target cell outlined
+		// the plan's risk map: one row per set temperature, cells coloured, the target
+		// cell outlined
 		driver.findElement(By.id("risk-map-link")).click();
 		assertThat(driver.findElements(By.cssSelector("#risk-map tbody tr"))).hasSizeGreaterThanOrEqualTo(9);
 		assertThat(driver.findElements(By.cssSelector("#risk-map td.risk-target"))).isNotEmpty();

@@ -21,7 +21,10 @@ import org.springframework.boot.test.web.server.LocalServerPort;
 import com.crustplan.CrustplanTest;
 import com.crustplan.DemoData;
 
-/** A chef plans a thick steak in steps (sear, oven to 52 °C core, rest) and reads the bands and the timeline. */
+/**
+ * A chef plans a thick steak in steps (sear, oven to 52 °C core, rest) and reads the
+ * bands and the timeline.
+ */
 @CrustplanTest
 class PlanStepsInBrowserTest {
 
@@ -72,22 +75,27 @@ class PlanStepsInBrowserTest {
 		signIn();
 		driver.get(url("/plan"));
 		new Select(driver.findElement(By.id("surfaceId"))).selectByVisibleText("Sirloin steak, 30 mm, patted dry");
-		driver.findElement(By.cssSelector("#targetStage optgroup[data-category=meat] option[value=light-sear]")).click();
+		driver.findElement(By.cssSelector("#targetStage optgroup[data-category=meat] option[value=light-sear]"))
+			.click();
 		driver.findElement(By.id("coreTarget")).sendKeys("52");
 		step(0, "Plancha, high", "3", null);
 		driver.findElement(By.id("add-step")).click();
 		step(1, "Fan oven, dry, roast finish", "40", "52");
 		driver.findElement(By.id("add-step")).click();
 		step(2, "Rest in kitchen air", "5", null);
-		// the one-setup choice is not used once there are steps, and the page says so by dimming it
+		// the one-setup choice is not used once there are steps, and the page says so by
+		// dimming it
 		assertThat(driver.findElement(By.id("setupId")).findElement(By.xpath("..")).getDomAttribute("class"))
 			.contains("unused");
 		driver.findElement(By.id("run-plan")).click();
 
-		WebElement charts = new WebDriverWait(driver, Duration.ofSeconds(30)).until(d -> d.findElement(By.id("charts")));
-		new WebDriverWait(driver, Duration.ofSeconds(10)).until(d -> "true".equals(charts.getDomAttribute("data-rendered")));
+		WebElement charts = new WebDriverWait(driver, Duration.ofSeconds(30))
+			.until(d -> d.findElement(By.id("charts")));
+		new WebDriverWait(driver, Duration.ofSeconds(10))
+			.until(d -> "true".equals(charts.getDomAttribute("data-rendered")));
 		assertThat(charts.getDomAttribute("data-bands")).isEqualTo("3");
-		// a band is painted where the oven step runs: sample the temperature chart inside it
+		// a band is painted where the oven step runs: sample the temperature chart inside
+		// it
 		Object shaded = ((JavascriptExecutor) driver).executeScript("""
 				var c = document.getElementById('chart-temperature'), ch = Chart.getChart(c);
 				var b = JSON.parse(document.getElementById('charts').dataset.plan).steps[1];
@@ -97,8 +105,12 @@ class PlanStepsInBrowserTest {
 				return p[3] > 0 && p[2] > p[0];""");
 		assertThat(shaded).as("oven band is blue-grey").isEqualTo(true);
 
-		List<String> timeline = driver.findElements(By.cssSelector("#timeline li")).stream().map(WebElement::getText).toList();
-		assertThat(timeline).contains("0:00 Into the pan at 230 °C", "1:00 Flip", "2:00 Flip", "3:00 Into the oven at 180 °C");
+		List<String> timeline = driver.findElements(By.cssSelector("#timeline li"))
+			.stream()
+			.map(WebElement::getText)
+			.toList();
+		assertThat(timeline).contains("0:00 Into the pan at 230 °C", "1:00 Flip", "2:00 Flip",
+				"3:00 Into the oven at 180 °C");
 		assertThat(timeline).anyMatch(t -> t.matches("\\d+:\\d{2} Probe the core: about 47 °C now, pull at 52 °C"));
 		assertThat(timeline).anyMatch(t -> t.matches("\\d+:\\d{2} Pull at 52 °C core"));
 		assertThat(timeline).anyMatch(t -> t.matches("\\d+:\\d{2} Out to rest in 25 °C air"));

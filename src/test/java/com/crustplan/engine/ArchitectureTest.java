@@ -12,8 +12,9 @@ import com.tngtech.archunit.junit.ArchTest;
 import com.tngtech.archunit.lang.ArchRule;
 
 /**
- * The physics engine stays a plain library (project rule: no Spring imports in com.crustplan.engine..),
- * so it can be tested, benchmarked and reused without an application context.
+ * The physics engine stays a plain library (project rule: no Spring imports in
+ * com.crustplan.engine..), so it can be tested, benchmarked and reused without an
+ * application context.
  */
 @AnalyzeClasses(packages = "com.crustplan.engine", importOptions = ImportOption.DoNotIncludeTests.class)
 class ArchitectureTest {

@@ -31,11 +31,11 @@ import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * Crash safety of the packaged app: start the jar on a real database (H2 file, or PostgreSQL when
- * CRUSTPLAN_TEST_PG_URL is set), send concurrent saves to {@code POST /api/v1/surfaces}, SIGKILL the
- * process part-way, start it again and check that every save the app confirmed (201 Created, sent only
- * after the save's transaction committed) is there with every value sent, and that no record is
- * half-written.
+ * Crash safety of the packaged app: start the jar on a real database (H2 file, or
+ * PostgreSQL when CRUSTPLAN_TEST_PG_URL is set), send concurrent saves to
+ * {@code POST /api/v1/surfaces}, SIGKILL the process part-way, start it again and check
+ * that every save the app confirmed (201 Created, sent only after the save's transaction
+ * committed) is there with every value sent, and that no record is half-written.
  */
 class CrashSafetyIT {
 
@@ -44,19 +44,26 @@ class CrashSafetyIT {
 
 	static final int THREADS = 32;
 
-	/** Kill once this many saves are confirmed, so the kill lands while saves are in flight. */
+	/**
+	 * Kill once this many saves are confirmed, so the kill lands while saves are in
+	 * flight.
+	 */
 	static final int KILL_AFTER = 40;
 
 	static final JsonMapper JSON = JsonMapper.builder().build();
 
-	/** The composition fields of the API, each 0 to 100 % (the engine's Composition check). */
-	static final List<String> PERCENTS = List.of("waterPct", "proteinPct", "fatPct", "reducingSugarPct",
-			"sucrosePct", "starchPct", "fibrePct", "ashPct");
+	/**
+	 * The composition fields of the API, each 0 to 100 % (the engine's Composition
+	 * check).
+	 */
+	static final List<String> PERCENTS = List.of("waterPct", "proteinPct", "fatPct", "reducingSugarPct", "sucrosePct",
+			"starchPct", "fibrePct", "ashPct");
 
 	@Test
 	void shouldKeepEveryConfirmedSaveThroughASigkill() throws Exception {
 		Path jar = Path.of(System.getProperty("crustplan.jar", "target/crustplan-0.1.0-SNAPSHOT.jar"));
-		assumeTrue(Files.isRegularFile(jar), "the packaged jar is needed: run mvn verify (failsafe runs after package)");
+		assumeTrue(Files.isRegularFile(jar),
+				"the packaged jar is needed: run mvn verify (failsafe runs after package)");
 		Map<String, Object> db = TestDatabase.properties("crash");
 		String run = Long.toString(System.nanoTime(), 36);
 		Map<Integer, Long> confirmed = new ConcurrentHashMap<>();
@@ -77,7 +84,8 @@ class CrashSafetyIT {
 						}
 					}
 					catch (IOException | InterruptedException e) {
-						// the process was killed under this request: it was never confirmed
+						// the process was killed under this request: it was never
+						// confirmed
 					}
 				});
 			}
@@ -103,11 +111,13 @@ class CrashSafetyIT {
 			Client chef = new Client((int) db.get("__port"), "chef", "chef-demo");
 			for (Map.Entry<Integer, Long> e : confirmed.entrySet()) {
 				HttpResponse<String> r = chef.get("/api/v1/surfaces/" + e.getValue());
-				assertThat(r.statusCode()).as("confirmed save %d (id %d) on %s", e.getKey(), e.getValue(),
-						TestDatabase.describe()).isEqualTo(200);
+				assertThat(r.statusCode())
+					.as("confirmed save %d (id %d) on %s", e.getKey(), e.getValue(), TestDatabase.describe())
+					.isEqualTo(200);
 				assertSameAsSent(JSON.readTree(r.body()), run, e.getKey());
 			}
-			// every record that exists at all is whole; one of this run holds exactly one save's values
+			// every record that exists at all is whole; one of this run holds exactly one
+			// save's values
 			HttpResponse<String> list = chef.get("/api/v1/surfaces");
 			assertThat(list.statusCode()).isEqualTo(200);
 			Pattern ours = Pattern.compile("Crash " + run + " #(\\d+)");
@@ -138,9 +148,10 @@ class CrashSafetyIT {
 	}
 
 	/**
-	 * Save n: a lean beef cut (water 72, protein 21, fat 5, ash 1.1 %: typical raw lean beef, from
-	 * memory of food composition tables) with thickness, asparagine, start temperature and notes that
-	 * differ per save, so a record holding another save's values is caught.
+	 * Save n: a lean beef cut (water 72, protein 21, fat 5, ash 1.1 %: typical raw lean
+	 * beef, from memory of food composition tables) with thickness, asparagine, start
+	 * temperature and notes that differ per save, so a record holding another save's
+	 * values is caught.
 	 */
 	static Map<String, Object> body(String run, int n) {
 		Map<String, Object> s = new LinkedHashMap<>();
@@ -167,7 +178,10 @@ class CrashSafetyIT {
 		return b;
 	}
 
-	/** Every value read back equals the one sent: JSON numbers compared exactly (doubles round-trip). */
+	/**
+	 * Every value read back equals the one sent: JSON numbers compared exactly (doubles
+	 * round-trip).
+	 */
 	static void assertSameAsSent(JsonNode got, String run, int n) {
 		Map<String, Object> sent = body(run, n);
 		assertThat(got.path("name").asString()).isEqualTo(sent.get("name"));
@@ -183,7 +197,10 @@ class CrashSafetyIT {
 		});
 	}
 
-	/** A record is whole when every field the form requires is present and inside the engine's ranges. */
+	/**
+	 * A record is whole when every field the form requires is present and inside the
+	 * engine's ranges.
+	 */
 	static void assertWhole(JsonNode s) {
 		assertThat(s.path("id").asLong()).as("id of %s", s).isPositive();
 		assertThat(s.path("name").asString()).as("name of %s", s).isNotBlank();
@@ -214,7 +231,8 @@ class CrashSafetyIT {
 				"--spring.main.banner-mode=off"));
 		ProcessBuilder pb = new ProcessBuilder(cmd);
 		if (TestDatabase.postgres()) {
-			// exactly as a kitchen group runs it: the postgres profile, connection from the environment
+			// exactly as a kitchen group runs it: the postgres profile, connection from
+			// the environment
 			cmd.add("--spring.profiles.active=postgres");
 			pb.environment().put("CRUSTPLAN_DB_URL", (String) db.get("spring.datasource.url"));
 			pb.environment().put("CRUSTPLAN_DB_USER", (String) db.get("spring.datasource.username"));
@@ -261,8 +279,8 @@ class CrashSafetyIT {
 
 		Client(int port, String user, String password) {
 			this.port = port;
-			this.authorization = "Basic " + Base64.getEncoder()
-				.encodeToString((user + ":" + password).getBytes(StandardCharsets.UTF_8));
+			this.authorization = "Basic "
+					+ Base64.getEncoder().encodeToString((user + ":" + password).getBytes(StandardCharsets.UTF_8));
 			this.http = HttpClient.newBuilder()
 				.followRedirects(HttpClient.Redirect.NEVER)
 				.version(HttpClient.Version.HTTP_1_1)

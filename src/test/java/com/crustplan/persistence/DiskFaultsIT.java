@@ -22,10 +22,11 @@ import org.junit.jupiter.api.Test;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * The packaged app on an H2 data folder that fills up or turns read-only: a small tmpfs (Linux
- * tmpfs(5), mounted with size= and remounted ro). Needs root and mount; skipped with a message where
- * the machine does not allow it. A full disk gives no 500 and turns health DOWN; freeing space brings
- * the app back without a restart; a read-only folder stops the start with a message saying so.
+ * The packaged app on an H2 data folder that fills up or turns read-only: a small tmpfs
+ * (Linux tmpfs(5), mounted with size= and remounted ro). Needs root and mount; skipped
+ * with a message where the machine does not allow it. A full disk gives no 500 and turns
+ * health DOWN; freeing space brings the app back without a restart; a read-only folder
+ * stops the start with a message saying so.
  */
 class DiskFaultsIT {
 
@@ -55,7 +56,8 @@ class DiskFaultsIT {
 
 	Map<String, Object> db() {
 		Map<String, Object> p = new LinkedHashMap<>();
-		p.put("spring.datasource.url", "jdbc:h2:file:" + mount.resolve("crustplan") + ";WRITE_DELAY=0;DB_CLOSE_ON_EXIT=FALSE");
+		p.put("spring.datasource.url",
+				"jdbc:h2:file:" + mount.resolve("crustplan") + ";WRITE_DELAY=0;DB_CLOSE_ON_EXIT=FALSE");
 		p.put("spring.datasource.username", "sa");
 		p.put("spring.datasource.password", "");
 		return p;
@@ -90,7 +92,8 @@ class DiskFaultsIT {
 			long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(30);
 			int after = 0;
 			while (System.nanoTime() < deadline) {
-				after = chef.post("/api/v1/surfaces", JSON.writeValueAsString(CrashSafetyIT.body(run, 99))).statusCode();
+				after = chef.post("/api/v1/surfaces", JSON.writeValueAsString(CrashSafetyIT.body(run, 99)))
+					.statusCode();
 				if (after == 201) {
 					break;
 				}
@@ -117,8 +120,8 @@ class DiskFaultsIT {
 		int rc = new ProcessBuilder("mount", "-o", "remount,ro", mount.toString()).inheritIO().start().waitFor();
 		assumeTrue(rc == 0, "cannot remount the tmpfs read-only here: read-only test skipped");
 		Path log = Path.of("target", "crash-read-only.log");
-		Process second = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-Xmx512m",
-				"-jar", jar.toString(), "--server.port=0", "--spring.main.banner-mode=off",
+		Process second = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+				"-Xmx512m", "-jar", jar.toString(), "--server.port=0", "--spring.main.banner-mode=off",
 				"--spring.datasource.url=" + db.get("spring.datasource.url"), "--spring.datasource.username=sa",
 				"--spring.datasource.password=")
 			.redirectErrorStream(true)

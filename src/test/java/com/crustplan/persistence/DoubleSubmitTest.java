@@ -28,7 +28,10 @@ import com.crustplan.DemoData;
 import com.crustplan.plan.SavedPlanRepository;
 import com.crustplan.surface.SurfaceRepository;
 
-/** A form sent twice (a double click, a resend) saves one record, and both answers lead to it. */
+/**
+ * A form sent twice (a double click, a resend) saves one record, and both answers lead to
+ * it.
+ */
 @CrustplanTest
 class DoubleSubmitTest {
 
@@ -58,19 +61,24 @@ class DoubleSubmitTest {
 		String token = token(mvc.perform(get("/surfaces/new").with(CHEF)).andReturn());
 		long before = surfaces.count();
 		String first = mvc
-			.perform(StoredTextTest.potatoTo("/surfaces/new", "name", "Double-click wedges", "formToken", token).with(CHEF))
+			.perform(StoredTextTest.potatoTo("/surfaces/new", "name", "Double-click wedges", "formToken", token)
+				.with(CHEF))
 			.andReturn()
 			.getResponse()
 			.getRedirectedUrl();
 		MvcResult second = mvc
-			.perform(StoredTextTest.potatoTo("/surfaces/new", "name", "Double-click wedges", "formToken", token).with(CHEF))
+			.perform(StoredTextTest.potatoTo("/surfaces/new", "name", "Double-click wedges", "formToken", token)
+				.with(CHEF))
 			.andReturn();
 		assertThat(second.getResponse().getRedirectedUrl()).isEqualTo(first);
 		assertThat(second.getFlashMap().get("message")).asString().contains("sent twice", "saved once");
 		assertThat(surfaces.count()).isEqualTo(before + 1);
 	}
 
-	/** Six copies of one form at the same moment: the token's key lets only one save commit. */
+	/**
+	 * Six copies of one form at the same moment: the token's key lets only one save
+	 * commit.
+	 */
 	@Test
 	void shouldSaveOnceWhenTheSameFormArrivesConcurrently() throws Exception {
 		String token = token(mvc.perform(get("/surfaces/new").with(CHEF)).andReturn());
@@ -93,7 +101,9 @@ class DoubleSubmitTest {
 		String surface = String.valueOf(demo.surface("Chips, 10 mm, blanched"));
 		String setup = String.valueOf(demo.setup("Fryer, chips"));
 		String token = token(mvc
-			.perform(get("/plan").param("surfaceId", surface).param("setupId", setup).param("targetStage", "golden")
+			.perform(get("/plan").param("surfaceId", surface)
+				.param("setupId", setup)
+				.param("targetStage", "golden")
 				.with(CHEF))
 			.andReturn());
 		long before = plans.count();

@@ -44,8 +44,9 @@ import com.crustplan.surface.SurfaceRepository;
 import com.crustplan.system.TemperatureUnit;
 
 /**
- * Two chefs editing one surface never overwrite each other unseen, and collisions of edits and
- * deletes never answer 5xx. Thread and request counts are fixed, so each test stops by itself.
+ * Two chefs editing one surface never overwrite each other unseen, and collisions of
+ * edits and deletes never answer 5xx. Thread and request counts are fixed, so each test
+ * stops by itself.
  */
 @CrustplanTest
 class EditCollisionTest {
@@ -62,7 +63,8 @@ class EditCollisionTest {
 	int port;
 
 	long newSurface(String name) {
-		return surfaces.save(SavedSurface.from(SurfaceForm.defaults(FoodCategory.POTATO, name, TemperatureUnit.CELSIUS)))
+		return surfaces
+			.save(SavedSurface.from(SurfaceForm.defaults(FoodCategory.POTATO, name, TemperatureUnit.CELSIUS)))
 			.getId();
 	}
 
@@ -82,7 +84,8 @@ class EditCollisionTest {
 		HttpResponse<String> first = anna.post("/surfaces/" + id + "/edit",
 				potato("Shared wedges", "78", version, Browser.field(annasForm, "_csrf")));
 		assertThat(first.statusCode()).isEqualTo(302);
-		// Ben saves from his older form: 77 % water. Refused, in words, with both versions
+		// Ben saves from his older form: 77 % water. Refused, in words, with both
+		// versions
 		HttpResponse<String> second = ben.post("/surfaces/" + id + "/edit",
 				potato("Shared wedges", "77", version, Browser.field(bensForm, "_csrf")));
 		assertThat(second.statusCode()).isEqualTo(200);
@@ -93,7 +96,8 @@ class EditCollisionTest {
 		assertThat(second.body()).contains("value=\"77\"");
 		assertThat(surfaces.findById(id).orElseThrow().getWaterPct()).isEqualTo(78.0);
 
-		// saving again from the re-rendered form (which now carries the saved version) is his deliberate choice
+		// saving again from the re-rendered form (which now carries the saved version) is
+		// his deliberate choice
 		HttpResponse<String> again = ben.post("/surfaces/" + id + "/edit", potato("Shared wedges", "77",
 				Browser.field(second.body(), "version"), Browser.field(second.body(), "_csrf")));
 		assertThat(again.statusCode()).isEqualTo(302);
@@ -106,24 +110,33 @@ class EditCollisionTest {
 		int version = surfaces.findById(id).orElseThrow().getVersion();
 		surfaces.deleteById(id);
 		String page = mvc
-			.perform(StoredTextTest.potatoTo("/surfaces/" + id + "/edit", "name", "Soon gone, edited", "version",
-					String.valueOf(version)).with(CHEF))
+			.perform(StoredTextTest
+				.potatoTo("/surfaces/" + id + "/edit", "name", "Soon gone, edited", "version", String.valueOf(version))
+				.with(CHEF))
 			.andReturn()
 			.getResponse()
 			.getContentAsString();
 		assertThat(page).contains("was deleted by someone else", "Soon gone, edited", "action=\"/surfaces/new\"");
 	}
 
-	/** 40 edits of one surface from 8 threads, each from a freshly read version: saved or refused, never 5xx. */
+	/**
+	 * 40 edits of one surface from 8 threads, each from a freshly read version: saved or
+	 * refused, never 5xx.
+	 */
 	@Test
 	void shouldAnswerConcurrentEditsOfOneSurfaceWithoutServerErrors() throws Exception {
 		long id = newSurface("Busy wedges");
 		Map<Integer, AtomicInteger> statuses = run(40, 8, n -> {
 			int v = surfaces.findById(id).orElseThrow().getVersion();
-			return mvc.perform(StoredTextTest
-				.potatoTo("/surfaces/" + id + "/edit", "name", "Busy wedges", "thicknessMm", String.valueOf(10 + n % 20),
-						"version", String.valueOf(v))
-				.with(CHEF)).andReturn().getResponse().getStatus();
+			return mvc
+				.perform(
+						StoredTextTest
+							.potatoTo("/surfaces/" + id + "/edit", "name", "Busy wedges", "thicknessMm",
+									String.valueOf(10 + n % 20), "version", String.valueOf(v))
+							.with(CHEF))
+				.andReturn()
+				.getResponse()
+				.getStatus();
 		});
 		System.out.printf("40 concurrent edits of one surface: %s (status: count)%n", statuses);
 		assertThat(statuses.keySet()).as("statuses %s", statuses).allMatch(s -> s == 302 || s == 200);
@@ -138,7 +151,8 @@ class EditCollisionTest {
 					.andReturn()
 					.getResponse()
 					.getStatus());
-		// each delete is done (302) or finds nothing left to delete (404 page): never a 5xx
+		// each delete is done (302) or finds nothing left to delete (404 page): never a
+		// 5xx
 		assertThat(deletes.keySet()).as("statuses %s", deletes).allMatch(s -> s == 302 || s == 404);
 		assertThat(surfaces.findById(id)).isEmpty();
 
@@ -154,8 +168,12 @@ class EditCollisionTest {
 					.getResponse()
 					.getStatus();
 			}
-			return mvc.perform(StoredTextTest.potatoTo("/surfaces/" + target + "/edit", "name", "Edited " + n,
-					"version", "0").with(CHEF)).andReturn().getResponse().getStatus();
+			return mvc
+				.perform(StoredTextTest.potatoTo("/surfaces/" + target + "/edit", "name", "Edited " + n, "version", "0")
+					.with(CHEF))
+				.andReturn()
+				.getResponse()
+				.getStatus();
 		});
 		System.out.printf("8 concurrent deletes: %s; 10 edits racing 10 deletes: %s%n", deletes, races);
 		assertThat(races.keySet()).as("statuses %s", races).allMatch(s -> s == 302 || s == 200 || s == 404);
@@ -167,7 +185,10 @@ class EditCollisionTest {
 
 	}
 
-	/** Runs {@code count} calls on {@code threads} threads; an exception thrown out of MockMvc counts as a 500. */
+	/**
+	 * Runs {@code count} calls on {@code threads} threads; an exception thrown out of
+	 * MockMvc counts as a 500.
+	 */
 	static Map<Integer, AtomicInteger> run(int count, int threads, Call call) throws Exception {
 		Map<Integer, AtomicInteger> statuses = new ConcurrentHashMap<>();
 		ExecutorService pool = Executors.newFixedThreadPool(threads);
@@ -222,7 +243,10 @@ class EditCollisionTest {
 		return p;
 	}
 
-	/** A browser's session over real HTTP: its own cookies, CSRF tokens read from the pages. */
+	/**
+	 * A browser's session over real HTTP: its own cookies, CSRF tokens read from the
+	 * pages.
+	 */
 	static final class Browser {
 
 		final HttpClient http;

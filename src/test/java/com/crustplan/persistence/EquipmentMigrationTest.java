@@ -16,8 +16,9 @@ import com.crustplan.engine.heat.PanBody;
 import com.crustplan.setup.EquipmentSettings;
 
 /**
- * V8 on a database saved before it (H2): existing pans and fryers get the engine's defaults, exactly
- * {@link PanBody#DEFAULT} and {@link FryerBody#DEFAULT}; ovens and grills get no body.
+ * V8 on a database saved before it (H2): existing pans and fryers get the engine's
+ * defaults, exactly {@link PanBody#DEFAULT} and {@link FryerBody#DEFAULT}; ovens and
+ * grills get no body.
  */
 class EquipmentMigrationTest {
 
@@ -29,9 +30,10 @@ class EquipmentMigrationTest {
 		try (Connection c = DriverManager.getConnection(URL, "sa", ""); Statement s = c.createStatement()) {
 			for (String[] row : new String[][] { { "Old plancha", "pan" }, { "Old fryer", "fryer" },
 					{ "Old oven", "oven" } }) {
-				s.executeUpdate("INSERT INTO heat_setup (version, name, mode, temperature_c, fan, fat_film, created_at, "
-						+ "updated_at) VALUES (0, '" + row[0] + "', '" + row[1]
-						+ "', 180, FALSE, FALSE, CURRENT_TIMESTAMP, CURRENT_TIMESTAMP)");
+				s.executeUpdate(
+						"INSERT INTO heat_setup (version, name, mode, temperature_c, fan, fat_film, created_at, "
+								+ "updated_at) VALUES (0, '" + row[0] + "', '" + row[1]
+								+ "', 180, FALSE, FALSE, CURRENT_TIMESTAMP, CURRENT_TIMESTAMP)");
 			}
 		}
 		Flyway.configure().dataSource(URL, "sa", "").locations("classpath:db/migration").load().migrate();
@@ -57,8 +59,8 @@ class EquipmentMigrationTest {
 				assertThat(r.getDouble(3)).isEqualTo(f.loadKg());
 				assertThat(r.getObject(4)).isNull();
 			}
-			try (ResultSet r = s.executeQuery(
-					"SELECT pan_mass_kg, fryer_oil_litres FROM heat_setup WHERE name = 'Old oven'")) {
+			try (ResultSet r = s
+				.executeQuery("SELECT pan_mass_kg, fryer_oil_litres FROM heat_setup WHERE name = 'Old oven'")) {
 				assertThat(r.next()).isTrue();
 				assertThat(r.getObject(1)).isNull();
 				assertThat(r.getObject(2)).isNull();

@@ -20,9 +20,10 @@ import org.junit.jupiter.api.Test;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * SIGTERM while saves are in flight (H2 file, or PostgreSQL when CRUSTPLAN_TEST_PG_URL is set): the
- * web server stops taking new connections and finishes the requests it has, then the database closes.
- * No request gets a 5xx or a 401, and every save answered 201 is there after a restart.
+ * SIGTERM while saves are in flight (H2 file, or PostgreSQL when CRUSTPLAN_TEST_PG_URL is
+ * set): the web server stops taking new connections and finishes the requests it has,
+ * then the database closes. No request gets a 5xx or a 401, and every save answered 201
+ * is there after a restart.
  */
 class GracefulShutdownIT {
 
@@ -38,7 +39,8 @@ class GracefulShutdownIT {
 	@Test
 	void shouldFinishEverySaveInFlightOnSigterm() throws Exception {
 		Path jar = Path.of(System.getProperty("crustplan.jar", "target/crustplan-0.1.0-SNAPSHOT.jar"));
-		assumeTrue(Files.isRegularFile(jar), "the packaged jar is needed: run mvn verify (failsafe runs after package)");
+		assumeTrue(Files.isRegularFile(jar),
+				"the packaged jar is needed: run mvn verify (failsafe runs after package)");
 		Map<String, Object> db = TestDatabase.properties("sigterm");
 		String run = Long.toString(System.nanoTime(), 36);
 		Map<Integer, Long> confirmed = new ConcurrentHashMap<>();
@@ -63,7 +65,8 @@ class GracefulShutdownIT {
 						}
 					}
 					catch (IOException | InterruptedException e) {
-						refused.incrementAndGet(); // not accepted: the server had stopped listening
+						refused.incrementAndGet(); // not accepted: the server had stopped
+													// listening
 					}
 				});
 			}

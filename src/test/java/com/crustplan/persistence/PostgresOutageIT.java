@@ -14,15 +14,17 @@ import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Test;
 
 /**
- * A PostgreSQL outage under the packaged app (issue 13, item 12): while the server is down, requests
- * are answered within a few seconds (the pool waits 3 s, not its default 30 s) with 503 and the API's
- * problem shape, health turns DOWN at once, and when the server is back the app serves again without
- * a restart. Runs where CI has a local PostgreSQL cluster it may stop (root, pg_ctlcluster); skipped
- * with a message elsewhere.
+ * A PostgreSQL outage under the packaged app (issue 13, item 12): while the server is
+ * down, requests are answered within a few seconds (the pool waits 3 s, not its default
+ * 30 s) with 503 and the API's problem shape, health turns DOWN at once, and when the
+ * server is back the app serves again without a restart. Runs where CI has a local
+ * PostgreSQL cluster it may stop (root, pg_ctlcluster); skipped with a message elsewhere.
  */
 class PostgresOutageIT {
 
-	/** The pool's 3 s wait plus the request's own work, with room for a loaded CI machine. */
+	/**
+	 * The pool's 3 s wait plus the request's own work, with room for a loaded CI machine.
+	 */
 	static final long ANSWER_WITHIN_MS = 8000;
 
 	@Test
@@ -31,7 +33,8 @@ class PostgresOutageIT {
 		String cluster = localCluster();
 		assumeTrue(cluster != null, "needs a local PostgreSQL cluster that pg_ctlcluster can stop (as root)");
 		Path jar = Path.of(System.getProperty("crustplan.jar", "target/crustplan-0.1.0-SNAPSHOT.jar"));
-		assumeTrue(Files.isRegularFile(jar), "the packaged jar is needed: run mvn verify (failsafe runs after package)");
+		assumeTrue(Files.isRegularFile(jar),
+				"the packaged jar is needed: run mvn verify (failsafe runs after package)");
 		Map<String, Object> db = TestDatabase.properties("outage");
 		Process app = CrashSafetyIT.launch(jar, db, "outage");
 		try {
@@ -77,7 +80,10 @@ class PostgresOutageIT {
 		}
 	}
 
-	/** "15 main" for the newest local cluster, or null where none can be controlled from here. */
+	/**
+	 * "15 main" for the newest local cluster, or null where none can be controlled from
+	 * here.
+	 */
 	static String localCluster() throws Exception {
 		if (!new File("/usr/bin/pg_ctlcluster").canExecute() || !"root".equals(System.getProperty("user.name"))) {
 			return null;

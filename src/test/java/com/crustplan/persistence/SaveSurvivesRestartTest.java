@@ -20,11 +20,15 @@ import com.crustplan.system.TemperatureUnit;
 
 /**
  * A save survives a restart of the application on the real database (H2 file by default,
- * PostgreSQL in CI): start, save, close the context, start a new one on the same database, read.
+ * PostgreSQL in CI): start, save, close the context, start a new one on the same
+ * database, read.
  */
 class SaveSurvivesRestartTest {
 
-	/** Settings as command-line arguments: they outrank application.properties, as in production. */
+	/**
+	 * Settings as command-line arguments: they outrank application.properties, as in
+	 * production.
+	 */
 	static ConfigurableApplicationContext start(Map<String, Object> db) {
 		java.util.List<String> args = new java.util.ArrayList<>(java.util.List.of("--server.port=0",
 				"--crustplan.demo.enabled=false", "--spring.main.banner-mode=off", "--logging.level.root=WARN"));
@@ -42,7 +46,8 @@ class SaveSurvivesRestartTest {
 		try (ConfigurableApplicationContext first = start(db)) {
 			surfaceId = first.getBean(SurfaceService.class).create(form).getId();
 			planId = first.getBean(SavedPlanRepository.class)
-				.save(new SavedPlan("Restart plan", form.name(), "Deck oven", "Golden", "{\"x\":1}", true, 600.0, "chef"))
+				.save(new SavedPlan("Restart plan", form.name(), "Deck oven", "Golden", "{\"x\":1}", true, 600.0,
+						"chef"))
 				.getId();
 		}
 		try (ConfigurableApplicationContext second = start(db)) {
@@ -51,7 +56,8 @@ class SaveSurvivesRestartTest {
 			assertThat(url).isEqualTo(db.get("spring.datasource.url"));
 			SavedSurface s = second.getBean(SurfaceRepository.class).findById(surfaceId).orElseThrow();
 			assertThat(s.getName()).as("on %s", TestDatabase.describe()).isEqualTo(form.name());
-			// the bread category's typical water 43 % (the engine's default composition), stored exactly
+			// the bread category's typical water 43 % (the engine's default composition),
+			// stored exactly
 			assertThat(s.getWaterPct()).isEqualTo(43.0);
 			assertThat(s.getPh()).isNull();
 			SavedPlan p = second.getBean(SavedPlanRepository.class).findById(planId).orElseThrow();

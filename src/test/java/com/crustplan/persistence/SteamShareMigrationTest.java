@@ -22,11 +22,12 @@ import com.crustplan.engine.heat.Oven;
 import com.crustplan.setup.HeatSettings;
 
 /**
- * Migration V7 on a copy of a round-one database: Flyway up to V3 on a fresh database (H2 in memory, or
- * a schema of its own on PostgreSQL when {@code CRUSTPLAN_TEST_PG_URL} is set), round-one setups put in
- * with their "humidity %", then migrated to the latest version. Each oven keeps its intent: a dry fan
- * stays near kitchen air, a steam oven stays steam. Dew points checked against the steam tables
- * (IAPWS-IF97 saturation: 1.58 kPa ↔ 13.8 °C, 101.3 kPa ↔ 100 °C).
+ * Migration V7 on a copy of a round-one database: Flyway up to V3 on a fresh database (H2
+ * in memory, or a schema of its own on PostgreSQL when {@code CRUSTPLAN_TEST_PG_URL} is
+ * set), round-one setups put in with their "humidity %", then migrated to the latest
+ * version. Each oven keeps its intent: a dry fan stays near kitchen air, a steam oven
+ * stays steam. Dew points checked against the steam tables (IAPWS-IF97 saturation: 1.58
+ * kPa ↔ 13.8 °C, 101.3 kPa ↔ 100 °C).
  */
 class SteamShareMigrationTest {
 
@@ -92,9 +93,10 @@ class SteamShareMigrationTest {
 
 	private static void roundOneSetup(Connection c, String name, String mode, double temperatureC, boolean fan,
 			Double humidityPct, Double flip) throws SQLException {
-		try (PreparedStatement p = c.prepareStatement("INSERT INTO heat_setup (version, name, mode, temperature_c, fan, "
-				+ "fat_film, relative_humidity_pct, flip_every_seconds, notes, created_at, updated_at) "
-				+ "VALUES (0, ?, ?, ?, ?, FALSE, ?, ?, NULL, CURRENT_TIMESTAMP, CURRENT_TIMESTAMP)")) {
+		try (PreparedStatement p = c
+			.prepareStatement("INSERT INTO heat_setup (version, name, mode, temperature_c, fan, "
+					+ "fat_film, relative_humidity_pct, flip_every_seconds, notes, created_at, updated_at) "
+					+ "VALUES (0, ?, ?, ?, ?, FALSE, ?, ?, NULL, CURRENT_TIMESTAMP, CURRENT_TIMESTAMP)")) {
 			p.setString(1, name);
 			p.setString(2, mode);
 			p.setDouble(3, temperatureC);
@@ -123,35 +125,39 @@ class SteamShareMigrationTest {
 		}
 		flyway(null).migrate();
 		Map<String, Row> rows = new LinkedHashMap<>();
-		try (Connection c = connect(); Statement s = c.createStatement();
+		try (Connection c = connect();
+				Statement s = c.createStatement();
 				ResultSet r = s.executeQuery("SELECT name, mode, steam_pct, relative_humidity_pct, grill_kind, "
 						+ "heat_flux_kw_per_m2, distance_mm FROM heat_setup")) {
 			while (r.next()) {
-				rows.put(r.getString(1), new Row(r.getString(2), (Double) r.getObject(3, Double.class),
-						(Double) r.getObject(4, Double.class), r.getString(5), (Double) r.getObject(6, Double.class),
-						(Double) r.getObject(7, Double.class)));
+				rows.put(r.getString(1),
+						new Row(r.getString(2), (Double) r.getObject(3, Double.class),
+								(Double) r.getObject(4, Double.class), r.getString(5),
+								(Double) r.getObject(6, Double.class), (Double) r.getObject(7, Double.class)));
 			}
 		}
 		assertThat(rows).hasSize(7);
 		// a dry fan stays dry: kitchen air, 1.6 % steam, dew point about 14 °C
 		assertThat(rows.get("Combi oven, dry fan").steamPct()).isCloseTo(1.6, within(1e-9));
 		assertThat(rows.get("Oven, vent open").steamPct()).isCloseTo(1.6, within(1e-9));
-		assertThat(new Oven(200, true, rows.get("Combi oven, dry fan").steamPct()).dewPointC())
-			.isCloseTo(13.8, within(0.5));
-		// above the dry range the share rises linearly: 30 → 1.6 + 20·98.4/90 = 23.47 %, 80 → 78.13 %
+		assertThat(new Oven(200, true, rows.get("Combi oven, dry fan").steamPct()).dewPointC()).isCloseTo(13.8,
+				within(0.5));
+		// above the dry range the share rises linearly: 30 → 1.6 + 20·98.4/90 = 23.47 %,
+		// 80 → 78.13 %
 		assertThat(rows.get("Deck oven, bread").steamPct()).isCloseTo(23.47, within(0.01));
 		assertThat(rows.get("Combi, moist roast").steamPct()).isCloseTo(78.13, within(0.01));
 		// a steam oven stays steam: 100 %, dew point 100 °C (101.325 kPa)
 		assertThat(rows.get("Steam oven").steamPct()).isCloseTo(100, within(1e-9));
 		assertThat(new Oven(100, true, rows.get("Steam oven").steamPct()).dewPointC()).isCloseTo(100, within(0.1));
 		// the SQL and the API's reading of the old field agree
-		for (String oven : new String[] { "Combi oven, dry fan", "Deck oven, bread", "Oven, vent open", "Combi, moist roast",
-				"Steam oven" }) {
+		for (String oven : new String[] { "Combi oven, dry fan", "Deck oven, bread", "Oven, vent open",
+				"Combi, moist roast", "Steam oven" }) {
 			Row row = rows.get(oven);
 			assertThat(row.steamPct()).as(oven)
 				.isCloseTo(HeatSettings.steamPctFromLegacyHumidity(row.oldHumidityPct()), within(1e-9));
 		}
-		// the old reading is kept as saved, so nothing is lost and the page can say what changed
+		// the old reading is kept as saved, so nothing is lost and the page can say what
+		// changed
 		assertThat(rows.get("Deck oven, bread").oldHumidityPct()).isEqualTo(30.0);
 		// other modes untouched; round one's grill is a salamander at its usual distance
 		assertThat(rows.get("Plancha").steamPct()).isNull();

@@ -30,10 +30,10 @@ import com.crustplan.surface.SurfaceRepository;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * Control characters in stored text are refused beside the field, on every way in. PostgreSQL
- * rejects NUL (U+0000) in text columns (PostgreSQL 15 manual, 8.3 "Character Types": "the character
- * with code zero cannot be stored"), so H2 must refuse it too, or a kitchen moving to PostgreSQL
- * meets 500s.
+ * Control characters in stored text are refused beside the field, on every way in.
+ * PostgreSQL rejects NUL (U+0000) in text columns (PostgreSQL 15 manual, 8.3 "Character
+ * Types": "the character with code zero cannot be stored"), so H2 must refuse it too, or
+ * a kitchen moving to PostgreSQL meets 500s.
  */
 @CrustplanTest
 @WithMockUser(username = "chef", roles = "CHEF")
@@ -63,7 +63,10 @@ class StoredTextTest {
 		return potatoTo("/surfaces/new", overrides);
 	}
 
-	/** A valid potato surface form (the category's typical composition, 100 % in all) posted to {@code url}. */
+	/**
+	 * A valid potato surface form (the category's typical composition, 100 % in all)
+	 * posted to {@code url}.
+	 */
 	static MockHttpServletRequestBuilder potatoTo(String url, String... overrides) {
 		Map<String, String> p = new LinkedHashMap<>();
 		p.put("name", "Control wedges");
@@ -113,8 +116,12 @@ class StoredTextTest {
 	void shouldKeepTabsAndLineBreaksInNotes() throws Exception {
 		mvc.perform(potato("name", "Wedges with notes", "notes", "line one\r\nline two\tindented"))
 			.andExpect(status().is3xxRedirection());
-		assertThat(surfaces.findAll().stream().filter(s -> s.getName().equals("Wedges with notes")).findFirst()
-			.orElseThrow().getNotes()).isEqualTo("line one\r\nline two\tindented");
+		assertThat(surfaces.findAll()
+			.stream()
+			.filter(s -> s.getName().equals("Wedges with notes"))
+			.findFirst()
+			.orElseThrow()
+			.getNotes()).isEqualTo("line one\r\nline two\tindented");
 	}
 
 	@Test

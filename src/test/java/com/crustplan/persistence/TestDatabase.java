@@ -5,9 +5,10 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 
 /**
- * The database the persistence tests run against: a fresh H2 file database under target/ by default,
- * or a real PostgreSQL server when {@code CRUSTPLAN_TEST_PG_URL} is set (as .ci/run does), with user
- * and password from {@code CRUSTPLAN_TEST_PG_USER} / {@code CRUSTPLAN_TEST_PG_PASSWORD}.
+ * The database the persistence tests run against: a fresh H2 file database under target/
+ * by default, or a real PostgreSQL server when {@code CRUSTPLAN_TEST_PG_URL} is set (as
+ * .ci/run does), with user and password from {@code CRUSTPLAN_TEST_PG_USER} /
+ * {@code CRUSTPLAN_TEST_PG_PASSWORD}.
  */
 final class TestDatabase {
 

@@ -15,7 +15,10 @@ import com.crustplan.surface.SurfaceRepository;
 import com.crustplan.surface.SurfaceService;
 import com.crustplan.system.TemperatureUnit;
 
-/** A save that the database refuses changes nothing: no half-written record, the old one intact. */
+/**
+ * A save that the database refuses changes nothing: no half-written record, the old one
+ * intact.
+ */
 @CrustplanTest
 class TransactionalSaveTest {
 
@@ -25,7 +28,10 @@ class TransactionalSaveTest {
 	@Autowired
 	SurfaceRepository surfaces;
 
-	/** 81 characters: one more than the name column holds (VARCHAR(80) in V1__kitchen.sql). */
+	/**
+	 * 81 characters: one more than the name column holds (VARCHAR(80) in
+	 * V1__kitchen.sql).
+	 */
 	static final String TOO_LONG = "x".repeat(81);
 
 	@Test
@@ -41,7 +47,8 @@ class TransactionalSaveTest {
 		SavedSurface s = service
 			.create(SurfaceForm.defaults(FoodCategory.MEAT, "Rollback steak", TemperatureUnit.CELSIUS));
 		SurfaceForm bad = SurfaceForm.defaults(FoodCategory.POTATO, TOO_LONG, TemperatureUnit.CELSIUS);
-		assertThatThrownBy(() -> service.update(s.getId(), bad, s.getVersion())).isInstanceOf(DataIntegrityViolationException.class);
+		assertThatThrownBy(() -> service.update(s.getId(), bad, s.getVersion()))
+			.isInstanceOf(DataIntegrityViolationException.class);
 		SavedSurface after = surfaces.findById(s.getId()).orElseThrow();
 		assertThat(after.getName()).isEqualTo("Rollback steak");
 		// meat's typical water 72 % stays; the failed update wanted potato's 79 %

@@ -24,7 +24,10 @@ import com.jayway.jsonpath.JsonPath;
 
 import com.crustplan.CrustplanTest;
 
-/** The API's optional pan and fryer bodies: accepted, named when wrong, and no change without them. */
+/**
+ * The API's optional pan and fryer bodies: accepted, named when wrong, and no change
+ * without them.
+ */
 @CrustplanTest
 class PlanApiEquipmentTest {
 
@@ -40,7 +43,8 @@ class PlanApiEquipmentTest {
 	MockMvc mvc;
 
 	ResultActions plan(String body) throws Exception {
-		return mvc.perform(post("/api/v1/plans").with(anonymous()).contentType(MediaType.APPLICATION_JSON).content(body));
+		return mvc
+			.perform(post("/api/v1/plans").with(anonymous()).contentType(MediaType.APPLICATION_JSON).content(body));
 	}
 
 	String answer(String body) throws Exception {
@@ -51,7 +55,8 @@ class PlanApiEquipmentTest {
 	void shouldAnswerExactlyAsBeforeWithoutABody() throws Exception {
 		String plain = answer(CHIPS);
 		assertThat(plain).doesNotContain("heatSourceTemperatureC");
-		assertThat(answer(withHeat("{ \"mode\": \"fryer\", \"temperatureC\": 175, \"fryer\": null }"))).isEqualTo(plain);
+		assertThat(answer(withHeat("{ \"mode\": \"fryer\", \"temperatureC\": 175, \"fryer\": null }")))
+			.isEqualTo(plain);
 		assertThat(answer(withHeat("{ \"mode\": \"pan\", \"temperatureC\": 200 }")))
 			.doesNotContain("heatSourceTemperatureC");
 	}
@@ -66,8 +71,10 @@ class PlanApiEquipmentTest {
 		assertThat(oil).hasSameSizeAs(times);
 		// preheated to the set temperature when the basket goes in
 		assertThat(oil.get(0)).isCloseTo(175.0, offset(0.5));
-		// energy conservation: the cold load can only take heat out of the oil, so the oil falls below its
-		// set point and the food, in cooler oil, browns no sooner than in oil held at 175 °C
+		// energy conservation: the cold load can only take heat out of the oil, so the
+		// oil falls below its
+		// set point and the food, in cooler oil, browns no sooner than in oil held at 175
+		// °C
 		assertThat(oil.stream().mapToDouble(Double::doubleValue).min().orElseThrow()).isLessThan(174.0);
 		double held = JsonPath.<Double>read(plain, "$.timeToTargetS");
 		double drawn = JsonPath.<Double>read(loaded, "$.timeToTargetS");
@@ -77,17 +84,20 @@ class PlanApiEquipmentTest {
 
 	@Test
 	void shouldTakeAPanWithDefaultsForWhatIsLeftOut() throws Exception {
-		String full = answer(withHeat("{ \"mode\": \"pan\", \"temperatureC\": 200, \"pan\": { \"material\": \"cast-iron\", "
-				+ "\"massKg\": 2.3, \"diameterCm\": 28, \"powerKw\": 2.5, \"control\": \"thermostat\", \"coverPct\": 50 } }"));
+		String full = answer(
+				withHeat("{ \"mode\": \"pan\", \"temperatureC\": 200, \"pan\": { \"material\": \"cast-iron\", "
+						+ "\"massKg\": 2.3, \"diameterCm\": 28, \"powerKw\": 2.5, \"control\": \"thermostat\", \"coverPct\": 50 } }"));
 		String empty = answer(withHeat("{ \"mode\": \"pan\", \"temperatureC\": 200, \"pan\": { } }"));
-		// the values given are PanBody.DEFAULT's, so an empty pan object gives the same answer
+		// the values given are PanBody.DEFAULT's, so an empty pan object gives the same
+		// answer
 		assertThat(empty).isEqualTo(full);
 		List<Double> pan = JsonPath.read(full, "$.series.heatSourceTemperatureC");
 		assertThat(pan.get(0)).isCloseTo(200.0, offset(0.5));
 		String fixed = answer(withHeat(
 				"{ \"mode\": \"pan\", \"temperatureC\": 200, \"pan\": { \"control\": \"fixed-input\", \"massKg\": 1.2 } }"));
 		List<Double> lighter = JsonPath.read(fixed, "$.series.heatSourceTemperatureC");
-		// a lighter pan on a flame that is not turned up falls further (m·c·ΔT = heat drawn)
+		// a lighter pan on a flame that is not turned up falls further (m·c·ΔT = heat
+		// drawn)
 		assertThat(lighter.stream().mapToDouble(Double::doubleValue).min().orElseThrow())
 			.isLessThan(pan.stream().mapToDouble(Double::doubleValue).min().orElseThrow());
 	}
@@ -102,18 +112,19 @@ class PlanApiEquipmentTest {
 		}
 
 		@ParameterizedTest
-		@CsvSource(delimiter = '|', value = { "\"massKg\": 0.1|heat.pan.massKg", "\"massKg\": \"heavy\"|heat.pan.massKg",
-				"\"diameterCm\": 500|heat.pan.diameterCm", "\"powerKw\": 0|heat.pan.powerKw",
-				"\"coverPct\": 120|heat.pan.coverPct", "\"material\": \"copper\"|heat.pan.material",
-				"\"control\": \"by-hand\"|heat.pan.control", "\"material\": 7|heat.pan.material" })
+		@CsvSource(delimiter = '|',
+				value = { "\"massKg\": 0.1|heat.pan.massKg", "\"massKg\": \"heavy\"|heat.pan.massKg",
+						"\"diameterCm\": 500|heat.pan.diameterCm", "\"powerKw\": 0|heat.pan.powerKw",
+						"\"coverPct\": 120|heat.pan.coverPct", "\"material\": \"copper\"|heat.pan.material",
+						"\"control\": \"by-hand\"|heat.pan.control", "\"material\": 7|heat.pan.material" })
 		void shouldNameTheWrongPanField(String value, String field) throws Exception {
 			rejects("{ \"mode\": \"pan\", \"temperatureC\": 200, \"pan\": { " + value + " } }", field);
 		}
 
 		@ParameterizedTest
-		@CsvSource(delimiter = '|', value = { "\"oilLitres\": 0.2|heat.fryer.oilLitres",
-				"\"heaterKw\": 99|heat.fryer.heaterKw", "\"loadKg\": 20|heat.fryer.loadKg",
-				"\"loadKg\": [1]|heat.fryer.loadKg" })
+		@CsvSource(delimiter = '|',
+				value = { "\"oilLitres\": 0.2|heat.fryer.oilLitres", "\"heaterKw\": 99|heat.fryer.heaterKw",
+						"\"loadKg\": 20|heat.fryer.loadKg", "\"loadKg\": [1]|heat.fryer.loadKg" })
 		void shouldNameTheWrongFryerField(String value, String field) throws Exception {
 			rejects("{ \"mode\": \"fryer\", \"temperatureC\": 175, \"fryer\": { " + value + " } }", field);
 		}

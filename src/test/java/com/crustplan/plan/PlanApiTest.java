@@ -31,8 +31,9 @@ class PlanApiTest {
 	MockMvc mvc;
 
 	/**
-	 * The request body of the issue, potato chips in a 175 °C fryer, with starch 16.4 % instead of 17 %:
-	 * the issue's example adds up to 100.6 %, which the engine rightly refuses.
+	 * The request body of the issue, potato chips in a 175 °C fryer, with starch 16.4 %
+	 * instead of 17 %: the issue's example adds up to 100.6 %, which the engine rightly
+	 * refuses.
 	 */
 	static final String CHIPS = """
 			{ "surface": { "category": "potato", "waterPct": 78, "proteinPct": 2, "fatPct": 0.1,
@@ -44,7 +45,8 @@ class PlanApiTest {
 			  "horizonMinutes": 30 }""";
 
 	ResultActions plan(String body) throws Exception {
-		return mvc.perform(post("/api/v1/plans").with(anonymous()).contentType(MediaType.APPLICATION_JSON).content(body));
+		return mvc
+			.perform(post("/api/v1/plans").with(anonymous()).contentType(MediaType.APPLICATION_JSON).content(body));
 	}
 
 	@Test
@@ -67,7 +69,8 @@ class PlanApiTest {
 			.andExpect(jsonPath("$.pH").value(6.0))
 			.andExpect(jsonPath("$.series.timeS.length()").value(greaterThan(10)))
 			.andExpect(jsonPath("$.series.colorHex[0]").value(org.hamcrest.Matchers.matchesPattern("#[0-9a-fA-F]{6}")))
-			// potato without a named product is benchmarked as French fries: 500 µg/kg (Reg. (EU) 2017/2158, Annex IV)
+			// potato without a named product is benchmarked as French fries: 500 µg/kg
+			// (Reg. (EU) 2017/2158, Annex IV)
 			.andExpect(jsonPath("$.acrylamide.benchmarkUgPerKg").value(500.0))
 			.andExpect(jsonPath("$.assumptions.length()").value(greaterThan(0)))
 			.andExpect(jsonPath("$.cautions[*]", hasItem(containsString("Hot oil"))));
@@ -77,17 +80,16 @@ class PlanApiTest {
 	void shouldFillOptionalFieldsFromTheCategoryDefaults() throws Exception {
 		plan("""
 				{ "surface": { "category": "meat" }, "heat": { "mode": "pan", "temperatureC": 220 },
-				  "target": { "stage": "browned" } }""")
-			.andExpect(status().isOk())
+				  "target": { "stage": "browned" } }""").andExpect(status().isOk())
 			// the meat category's typical pH is 5.6 (beef 5.5–5.8, food pH tables)
 			.andExpect(jsonPath("$.pH").value(5.6));
 	}
 
 	@Test
 	void shouldWarnWhenFryingPotatoAt175OrAbove() throws Exception {
-		plan(CHIPS.replace("\"temperatureC\": 175", "\"temperatureC\": 190"))
-			.andExpect(status().isOk())
-			// Commission Regulation (EU) 2017/2158, Annex II: fry potato products below 175 °C
+		plan(CHIPS.replace("\"temperatureC\": 175", "\"temperatureC\": 190")).andExpect(status().isOk())
+			// Commission Regulation (EU) 2017/2158, Annex II: fry potato products below
+			// 175 °C
 			.andExpect(jsonPath("$.warnings[*].code", hasItem("frying-at-175-or-above")));
 	}
 
@@ -96,9 +98,9 @@ class PlanApiTest {
 		plan("""
 				{ "surface": { "category": "poultry-skin" },
 				  "heat": { "mode": "oven", "temperatureC": 200, "fan": true, "relativeHumidityPct": 0 },
-				  "target": { "stage": "golden" } }""")
-			.andExpect(status().isOk())
-			// poultry breast dries past about 80 °C (common practice); the core here nears 99 °C
+				  "target": { "stage": "golden" } }""").andExpect(status().isOk())
+			// poultry breast dries past about 80 °C (common practice); the core here
+			// nears 99 °C
 			.andExpect(jsonPath("$.warnings[*].code", hasItem("core-past-juiciness")))
 			.andExpect(jsonPath("$.warnings[*].message", hasItem(containsString("80 °C"))));
 	}
@@ -106,9 +108,9 @@ class PlanApiTest {
 	@Test
 	void shouldEstimateAcrylamideAgainstTheFrenchFriesBenchmark() throws Exception {
 		plan(CHIPS.replace("\"category\": \"potato\"", "\"category\": \"potato\", \"product\": \"french-fries\"")
-			.replaceFirst("\\}\\s*$", ", \"mitigations\": true }"))
-			.andExpect(status().isOk())
-			// Commission Regulation (EU) 2017/2158, Annex IV: French fries (ready-to-eat) 500 µg/kg
+			.replaceFirst("\\}\\s*$", ", \"mitigations\": true }")).andExpect(status().isOk())
+			// Commission Regulation (EU) 2017/2158, Annex IV: French fries (ready-to-eat)
+			// 500 µg/kg
 			.andExpect(jsonPath("$.acrylamide.benchmarkUgPerKg").value(500.0))
 			.andExpect(jsonPath("$.acrylamide.zone").value(org.hamcrest.Matchers.oneOf("low", "elevated", "high")))
 			.andExpect(jsonPath("$.acrylamide.portionUgPerKg").value(greaterThan(0.0)))
@@ -119,8 +121,7 @@ class PlanApiTest {
 	void shouldGiveNoBenchmarkForMeat() throws Exception {
 		plan("""
 				{ "surface": { "category": "meat" }, "heat": { "mode": "pan", "temperatureC": 220 },
-				  "target": { "stage": "browned" }, "mitigations": false }""")
-			.andExpect(status().isOk())
+				  "target": { "stage": "browned" }, "mitigations": false }""").andExpect(status().isOk())
 			// the regulation sets no benchmark for meat
 			.andExpect(jsonPath("$.acrylamide.benchmarkUgPerKg").value(nullValue()))
 			.andExpect(jsonPath("$.acrylamide.zone").value(nullValue()))
@@ -136,16 +137,22 @@ class PlanApiTest {
 
 	@Test
 	void shouldTakeTheSteamShareAndSayItsDewPoint() throws Exception {
-		// 20 % steam: p_v = 20.27 kPa; steam tables (IAPWS-IF97) give 19.95 kPa at 60 °C, so about 60 °C
+		// 20 % steam: p_v = 20.27 kPa; steam tables (IAPWS-IF97) give 19.95 kPa at 60 °C,
+		// so about 60 °C
 		plan(oven("\"steamPct\": 20")).andExpect(status().isOk())
-			.andExpect(jsonPath("$.deprecations").doesNotExist()) // only answers to the old field carry the list
-			.andExpect(jsonPath("$.assumptions[*]", hasItem(containsString("20.0 % steam by volume: dew point 60 °C"))));
+			.andExpect(jsonPath("$.deprecations").doesNotExist()) // only answers to the
+																	// old field carry the
+																	// list
+			.andExpect(
+					jsonPath("$.assumptions[*]", hasItem(containsString("20.0 % steam by volume: dew point 60 °C"))));
 	}
 
 	@Test
 	void shouldStillReadTheOldHumidityFieldAsTheMigrationDoesAndSaySo() throws Exception {
-		// the V5 rule: a "dry fan, 10 %" reading is dry kitchen air, 1.6 % steam (dew point 14 °C: p_v =
-		// 1.58 kPa, saturation at 13.8 °C in the steam tables), not the pure steam RH at 200 °C made of it
+		// the V5 rule: a "dry fan, 10 %" reading is dry kitchen air, 1.6 % steam (dew
+		// point 14 °C: p_v =
+		// 1.58 kPa, saturation at 13.8 °C in the steam tables), not the pure steam RH at
+		// 200 °C made of it
 		plan(oven("\"relativeHumidityPct\": 10")).andExpect(status().isOk())
 			.andExpect(jsonPath("$.deprecations[0]", containsString("heat.relativeHumidityPct is deprecated")))
 			.andExpect(jsonPath("$.deprecations[0]", containsString("heat.steamPct")))
@@ -169,17 +176,18 @@ class PlanApiTest {
 			.andExpect(jsonPath("$.assumptions[*]", hasItem(containsString("food 100 mm from the heater"))));
 		// round one's body: an element temperature and a flip interval
 		plan(toast.formatted("\"temperatureC\": 800, \"flipEverySeconds\": 0")).andExpect(status().isOk())
-			.andExpect(jsonPath("$.assumptions[*]", hasItem(containsString("The cook stops if the surface passes 250 °C"))));
+			.andExpect(jsonPath("$.assumptions[*]",
+					hasItem(containsString("The cook stops if the surface passes 250 °C"))));
 	}
 
 	@Test
 	void shouldStopAndWarnWhereTheSurfaceWouldChar() throws Exception {
-		// 40 kW/m² on a 12 mm slice: the surface passes 250 °C well before the slice is dark
+		// 40 kW/m² on a 12 mm slice: the surface passes 250 °C well before the slice is
+		// dark
 		plan("""
 				{ "surface": { "category": "bread", "thicknessMm": 12 },
 				  "heat": { "mode": "grill", "heatFluxKwPerM2": 40, "flipEverySeconds": 0 },
-				  "target": { "stage": "dark" }, "mitigations": false }""")
-			.andExpect(status().isOk())
+				  "target": { "stage": "dark" }, "mitigations": false }""").andExpect(status().isOk())
 			.andExpect(jsonPath("$.reached").value(false))
 			.andExpect(jsonPath("$.warnings[*].code", hasItem("surface-limit")))
 			.andExpect(jsonPath("$.warnings[*].message", hasItem(containsString("The surface passes 250 °C"))));
@@ -193,14 +201,14 @@ class PlanApiTest {
 			rejects(oven("\"steamPct\": 120"), "heat.steamPct");
 			rejects(oven("\"relativeHumidityPct\": -5"), "heat.relativeHumidityPct");
 			rejects(oven("\"steamPct\": 20, \"relativeHumidityPct\": 10"), "heat.relativeHumidityPct");
-			rejects(CHIPS.replace("\"mode\": \"fryer\", \"temperatureC\": 175", "\"mode\": \"grill\", \"heatFluxKwPerM2\": 90"),
-					"heat.heatFluxKwPerM2");
-			rejects(CHIPS.replace("\"mode\": \"fryer\", \"temperatureC\": 175", "\"mode\": \"grill\", \"grill\": \"toaster\", \"temperatureC\": 800"),
-					"heat.grill");
-			rejects(CHIPS.replace("\"mode\": \"fryer\", \"temperatureC\": 175", "\"mode\": \"grill\", \"temperatureC\": 800, \"distanceMm\": 5"),
-					"heat.distanceMm");
-			rejects(CHIPS.replace("\"mode\": \"fryer\", \"temperatureC\": 175", "\"mode\": \"grill\", \"grill\": \"salamander\""),
-					"heat.temperatureC");
+			rejects(CHIPS.replace("\"mode\": \"fryer\", \"temperatureC\": 175",
+					"\"mode\": \"grill\", \"heatFluxKwPerM2\": 90"), "heat.heatFluxKwPerM2");
+			rejects(CHIPS.replace("\"mode\": \"fryer\", \"temperatureC\": 175",
+					"\"mode\": \"grill\", \"grill\": \"toaster\", \"temperatureC\": 800"), "heat.grill");
+			rejects(CHIPS.replace("\"mode\": \"fryer\", \"temperatureC\": 175",
+					"\"mode\": \"grill\", \"temperatureC\": 800, \"distanceMm\": 5"), "heat.distanceMm");
+			rejects(CHIPS.replace("\"mode\": \"fryer\", \"temperatureC\": 175",
+					"\"mode\": \"grill\", \"grill\": \"salamander\""), "heat.temperatureC");
 		}
 
 		void rejects(String body, String field) throws Exception {
@@ -258,14 +266,16 @@ class PlanApiTest {
 		}
 
 		@ParameterizedTest
-		@CsvSource(delimiter = '|', value = { "NaN|surface.waterPct", "Infinity|surface.waterPct",
-				"-Infinity|surface.waterPct", "\"NaN\"|surface.waterPct", "\"Infinity\"|surface.waterPct",
-				"1e400|surface.waterPct", "\"78\"|surface.waterPct", "true|surface.waterPct", "{}|surface.waterPct",
-				"[78]|surface.waterPct" })
+		@CsvSource(delimiter = '|',
+				value = { "NaN|surface.waterPct", "Infinity|surface.waterPct", "-Infinity|surface.waterPct",
+						"\"NaN\"|surface.waterPct", "\"Infinity\"|surface.waterPct", "1e400|surface.waterPct",
+						"\"78\"|surface.waterPct", "true|surface.waterPct", "{}|surface.waterPct",
+						"[78]|surface.waterPct" })
 		void shouldRejectNonFiniteAndWronglyTypedNumbers(String value, String field) throws Exception {
 			String body = CHIPS.replace("\"waterPct\": 78", "\"waterPct\": " + value);
 			if (value.equals("NaN") || value.contains("Infinity") && !value.startsWith("\"")) {
-				// bare NaN and Infinity are not JSON (RFC 8259): the body itself is malformed
+				// bare NaN and Infinity are not JSON (RFC 8259): the body itself is
+				// malformed
 				rejects(body, "body");
 			}
 			else {
@@ -279,7 +289,8 @@ class PlanApiTest {
 					"surface");
 			rejects(CHIPS.replace("\"heat\": { \"mode\": \"fryer\", \"temperatureC\": 175 },", ""), "heat");
 			rejects(CHIPS.replace("{ \"stage\": \"golden\" }", "{ }"), "target");
-			rejects(CHIPS.replace("{ \"stage\": \"golden\" }", "{ \"stage\": \"golden\", \"lightness\": 60 }"), "target");
+			rejects(CHIPS.replace("{ \"stage\": \"golden\" }", "{ \"stage\": \"golden\", \"lightness\": 60 }"),
+					"target");
 			rejects(CHIPS.replace("{ \"stage\": \"golden\" }", "\"golden\""), "target");
 		}
 

@@ -16,7 +16,10 @@ import com.jayway.jsonpath.JsonPath;
 import com.crustplan.CrustplanTest;
 import com.crustplan.DemoData;
 
-/** The plan page's temperature chart gets the pan's or the oil's line where the heat has a body. */
+/**
+ * The plan page's temperature chart gets the pan's or the oil's line where the heat has a
+ * body.
+ */
 @CrustplanTest
 @WithMockUser(username = "chef", roles = "CHEF")
 class PlanChartsEquipmentTest {
@@ -45,7 +48,8 @@ class PlanChartsEquipmentTest {
 		assertThat(JsonPath.<String>read(d, "$.heatSourceLabel")).isEqualTo("Oil");
 		List<Double> oil = JsonPath.read(d, "$.heatSourceTemperature");
 		assertThat(oil).hasSameSizeAs(JsonPath.<List<Double>>read(d, "$.timeMin"));
-		// preheated to the set 175 °C; a cold basket can only take heat out of the oil (energy balance)
+		// preheated to the set 175 °C; a cold basket can only take heat out of the oil
+		// (energy balance)
 		assertThat(oil.get(0)).isEqualTo(175.0);
 		assertThat(oil.stream().mapToDouble(Double::doubleValue).min().orElseThrow()).isLessThan(175.0);
 		// the assumptions say what load was assumed: the demo fryer's 8 L, 3.2 kW, 0.5 kg
@@ -56,7 +60,9 @@ class PlanChartsEquipmentTest {
 			.andReturn()
 			.getResponse()
 			.getContentAsString();
-		assertThat(page).contains("of food per batch drawing it down").contains("8.0 L of oil, a 3.2 kW heater").contains("0.50 kg of food per batch");
+		assertThat(page).contains("of food per batch drawing it down")
+			.contains("8.0 L of oil, a 3.2 kW heater")
+			.contains("0.50 kg of food per batch");
 	}
 
 	@Test

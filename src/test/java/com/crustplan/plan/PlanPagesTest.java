@@ -68,17 +68,22 @@ class PlanPagesTest {
 			.andExpect(content().string(containsString("Group 2A")))
 			.andExpect(content().string(containsString("FDA Food Code 2022")))
 			.andExpect(content().string(containsString("Hot oil")))
-			// the acrylamide section: the estimate where the engine gives one, otherwise it says so
+			// the acrylamide section: the estimate where the engine gives one, otherwise
+			// it says so
 			.andExpect(content().string(org.hamcrest.Matchers.anyOf(containsString("Estimate not available"),
 					containsString("µg/kg</dd>"))));
 	}
 
 	@Test
 	void shouldShowTheWholeReportInFahrenheitWithoutACelsiusFigure() throws Exception {
-		// the demo's 175 °C fryer: the below-175 °C measure of Regulation (EU) 2017/2158, Annex II, and the
-		// FDA Food Code figures in the cautions are all shown in °F (°F = °C × 9/5 + 32, NIST SP 811 §B.9)
+		// the demo's 175 °C fryer: the below-175 °C measure of Regulation (EU) 2017/2158,
+		// Annex II, and the
+		// FDA Food Code figures in the cautions are all shown in °F (°F = °C × 9/5 + 32,
+		// NIST SP 811 §B.9)
 		String page = mvc
-			.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetStage", "golden")
+			.perform(get("/plan").param("surfaceId", chips())
+				.param("setupId", fryer())
+				.param("targetStage", "golden")
 				.cookie(new Cookie("crustplan-units", "F")))
 			.andExpect(status().isOk())
 			.andReturn()
@@ -90,16 +95,22 @@ class PlanPagesTest {
 
 	@Test
 	void shouldDrawTheRiskMapWhoseCellsAreSingleRuns() throws Exception {
-		// the fryer rows run 150–190 °C (the common frying range) plus the setup's own temperature
+		// the fryer rows run 150–190 °C (the common frying range) plus the setup's own
+		// temperature
 		RiskMapView map = (RiskMapView) mvc
-			.perform(get("/plan/risk-map").param("surfaceId", chips()).param("setupId", fryer()).param("targetStage", "golden"))
+			.perform(get("/plan/risk-map").param("surfaceId", chips())
+				.param("setupId", fryer())
+				.param("targetStage", "golden"))
 			.andExpect(status().isOk())
 			.andExpect(view().name("plan/risk"))
 			// Commission Regulation (EU) 2017/2158, Annex IV: French fries 500 µg/kg
 			.andExpect(content().string(containsString("500 µg/kg")))
 			.andExpect(content().string(containsString("risk-target")))
 			.andExpect(content().string(containsString("IARC")))
-			.andReturn().getModelAndView().getModel().get("map");
+			.andReturn()
+			.getModelAndView()
+			.getModel()
+			.get("map");
 		assertThat(map.rows()).hasSizeGreaterThanOrEqualTo(9);
 		assertThat(map.rows()).allSatisfy(r -> assertThat(r.cells()).hasSize(map.timesS().size()));
 		// hotter oil reaches the colour sooner (each row is its own run)
@@ -122,7 +133,8 @@ class PlanPagesTest {
 
 	@Test
 	void shouldShowDonenessWarningsOnThePlanPage() throws Exception {
-		// the demo chicken thigh in the demo's combi oven: golden with the core at the boil, past the 80 °C at
+		// the demo chicken thigh in the demo's combi oven: golden with the core at the
+		// boil, past the 80 °C at
 		// which poultry dries (common practice)
 		mvc.perform(get("/plan").param("surfaceId", String.valueOf(demo.surface("Chicken thigh, skin on")))
 			.param("setupId", String.valueOf(demo.setup("Combi oven, dry fan")))
@@ -149,12 +161,13 @@ class PlanPagesTest {
 
 	@Test
 	void shouldSaveAPlanAndOpenItLater() throws Exception {
-		MvcResult r = mvc.perform(post("/plans").with(csrf())
-			.param("surfaceId", chips())
-			.param("setupId", fryer())
-			.param("targetStage", "golden")
-			.param("horizonMinutes", "30")
-			.param("name", "Friday chips"))
+		MvcResult r = mvc
+			.perform(post("/plans").with(csrf())
+				.param("surfaceId", chips())
+				.param("setupId", fryer())
+				.param("targetStage", "golden")
+				.param("horizonMinutes", "30")
+				.param("name", "Friday chips"))
 			.andExpect(status().is3xxRedirection())
 			.andExpect(redirectedUrlPattern("/plans/*"))
 			.andExpect(flash().attribute("message", containsString("Friday chips")))
@@ -164,16 +177,20 @@ class PlanPagesTest {
 			.andExpect(view().name("plan/show"))
 			.andExpect(content().string(containsString("Friday chips")))
 			.andExpect(content().string(containsString("data-plan=")));
-		mvc.perform(get("/plans")).andExpect(status().isOk()).andExpect(content().string(containsString("Friday chips")));
+		mvc.perform(get("/plans"))
+			.andExpect(status().isOk())
+			.andExpect(content().string(containsString("Friday chips")));
 	}
 
 	@Test
 	void shouldDeleteASavedPlanAfterConfirmation() throws Exception {
-		MvcResult r = mvc.perform(post("/plans").with(csrf())
-			.param("surfaceId", chips())
-			.param("setupId", fryer())
-			.param("targetStage", "golden")
-			.param("name", "Plan to delete")).andReturn();
+		MvcResult r = mvc
+			.perform(post("/plans").with(csrf())
+				.param("surfaceId", chips())
+				.param("setupId", fryer())
+				.param("targetStage", "golden")
+				.param("name", "Plan to delete"))
+			.andReturn();
 		String url = r.getResponse().getRedirectedUrl();
 		long id = Long.parseLong(url.substring(url.lastIndexOf('/') + 1));
 		mvc.perform(get("/plans/{id}/delete", id)).andExpect(view().name("plan/delete"));
@@ -189,8 +206,13 @@ class PlanPagesTest {
 		mvc.perform(get("/plans/{id}", unreadable))
 			.andExpect(status().isOk())
 			.andExpect(content().string(containsString("cannot be read")));
-		MvcResult r = mvc.perform(post("/plans").with(csrf()).param("surfaceId", chips()).param("setupId", fryer())
-			.param("targetStage", "golden").param("name", "Soon too thick")).andReturn();
+		MvcResult r = mvc
+			.perform(post("/plans").with(csrf())
+				.param("surfaceId", chips())
+				.param("setupId", fryer())
+				.param("targetStage", "golden")
+				.param("name", "Soon too thick"))
+			.andReturn();
 		SavedPlan good = plans.findById(Long.parseLong(r.getResponse().getRedirectedUrl().replace("/plans/", "")))
 			.orElseThrow();
 		// the same inputs with a thickness beyond the model's 200 mm
@@ -207,7 +229,8 @@ class PlanPagesTest {
 
 		@Test
 		void shouldRejectAStageOfAnotherCategory() throws Exception {
-			mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetStage", "mahogany"))
+			mvc.perform(
+					get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetStage", "mahogany"))
 				.andExpect(status().isOk())
 				.andExpect(model().attributeHasFieldErrors("form", "targetStage"))
 				.andExpect(model().attributeDoesNotExist("report"));
@@ -215,15 +238,18 @@ class PlanPagesTest {
 
 		@Test
 		void shouldRejectALightnessOutsideTheScale() throws Exception {
-			mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetLightness", "150"))
+			mvc.perform(
+					get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetLightness", "150"))
 				.andExpect(model().attributeHasFieldErrors("form", "targetLightness"));
-			mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetLightness", "NaN"))
+			mvc.perform(
+					get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetLightness", "NaN"))
 				.andExpect(model().attributeHasFieldErrorCode("form", "targetLightness", "typeMismatch"));
 		}
 
 		@Test
 		void shouldRejectAMissingSurfaceAndAnUnreadableId() throws Exception {
-			mvc.perform(get("/plan").param("surfaceId", "987654").param("setupId", fryer()).param("targetStage", "golden"))
+			mvc.perform(
+					get("/plan").param("surfaceId", "987654").param("setupId", fryer()).param("targetStage", "golden"))
 				.andExpect(status().isOk())
 				.andExpect(model().attributeHasFieldErrors("form", "surfaceId"));
 			mvc.perform(get("/plan").param("surfaceId", "abc").param("setupId", fryer()))
@@ -235,8 +261,11 @@ class PlanPagesTest {
 		void shouldRejectANoTargetAndABlankPlanName() throws Exception {
 			mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()))
 				.andExpect(model().attributeHasFieldErrors("form", "targetLightness"));
-			mvc.perform(post("/plans").with(csrf()).param("surfaceId", chips()).param("setupId", fryer())
-				.param("targetStage", "golden").param("name", ""))
+			mvc.perform(post("/plans").with(csrf())
+				.param("surfaceId", chips())
+				.param("setupId", fryer())
+				.param("targetStage", "golden")
+				.param("name", ""))
 				.andExpect(status().isOk())
 				.andExpect(model().attributeHasFieldErrors("form", "name"))
 				.andExpect(content().string(containsString("give the plan a name")));
@@ -244,22 +273,28 @@ class PlanPagesTest {
 
 		@Test
 		void shouldRejectAHorizonOverSixHours() throws Exception {
-			mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetStage", "golden")
-				.param("horizonMinutes", "1000"))
-				.andExpect(model().attributeHasFieldErrors("form", "horizonMinutes"));
+			mvc.perform(get("/plan").param("surfaceId", chips())
+				.param("setupId", fryer())
+				.param("targetStage", "golden")
+				.param("horizonMinutes", "1000")).andExpect(model().attributeHasFieldErrors("form", "horizonMinutes"));
 		}
 
 	}
 
 	@Test
 	void shouldLetACookPlanButNotSave() throws Exception {
-		mvc.perform(get("/plan").with(user("cook").roles("COOK")).param("surfaceId", chips()).param("setupId", fryer())
+		mvc.perform(get("/plan").with(user("cook").roles("COOK"))
+			.param("surfaceId", chips())
+			.param("setupId", fryer())
 			.param("targetStage", "golden"))
 			.andExpect(status().isOk())
 			.andExpect(content().string(not(containsString("Save this plan"))));
-		mvc.perform(post("/plans").with(csrf()).with(user("cook").roles("COOK")).param("surfaceId", chips())
-			.param("setupId", fryer()).param("targetStage", "golden").param("name", "cook's plan"))
-			.andExpect(status().isForbidden());
+		mvc.perform(post("/plans").with(csrf())
+			.with(user("cook").roles("COOK"))
+			.param("surfaceId", chips())
+			.param("setupId", fryer())
+			.param("targetStage", "golden")
+			.param("name", "cook's plan")).andExpect(status().isForbidden());
 	}
 
 }

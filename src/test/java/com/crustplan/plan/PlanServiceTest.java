@@ -18,7 +18,10 @@ import com.crustplan.engine.heat.PanContact;
 import com.crustplan.system.MessageText;
 import com.crustplan.system.TemperatureUnit;
 
-/** What the plan service adds around the engine's numbers: warnings, cautions, swatches. No Spring. */
+/**
+ * What the plan service adds around the engine's numbers: warnings, cautions, swatches.
+ * No Spring.
+ */
 class PlanServiceTest {
 
 	final PlanService planner = new PlanService();
@@ -26,7 +29,10 @@ class PlanServiceTest {
 	/** The report speaks in codes; a page renders them in the cook's unit. */
 	final MessageText text = new MessageText();
 
-	/** A 60 mm skin-on piece in a 240 °C pan: the skin colours long before the core is safe. */
+	/**
+	 * A 60 mm skin-on piece in a 240 °C pan: the skin colours long before the core is
+	 * safe.
+	 */
 	PlanReport thickChicken() {
 		Surface s = Surface.defaults(FoodCategory.POULTRY_SKIN).withThicknessMm(60);
 		return planner.plan(s, new PanContact(240, true, 0), Target.stage("light-golden"), 30);
@@ -37,11 +43,17 @@ class PlanServiceTest {
 		PlanReport r = thickChicken();
 		assertThat(r.reached()).isTrue();
 		assertThat(r.coreTemperatureAtTargetC()).isLessThan(74.0);
-		PlanWarning w = r.warnings().stream().filter(x -> x.code().equals("core-below-food-code")).findFirst()
+		PlanWarning w = r.warnings()
+			.stream()
+			.filter(x -> x.code().equals("core-below-food-code"))
+			.findFirst()
 			.orElseThrow();
-		// FDA Food Code 2022, 3-401.11(A)(3): poultry 165 °F (74 °C), the code's own °F figure
-		assertThat(text.render(w.message(), TemperatureUnit.FAHRENHEIT)).contains("165 °F").contains("FDA Food Code 2022");
-		assertThat(text.render(thickChicken().warnings().stream()
+		// FDA Food Code 2022, 3-401.11(A)(3): poultry 165 °F (74 °C), the code's own °F
+		// figure
+		assertThat(text.render(w.message(), TemperatureUnit.FAHRENHEIT)).contains("165 °F")
+			.contains("FDA Food Code 2022");
+		assertThat(text.render(thickChicken().warnings()
+			.stream()
 			.filter(x -> x.code().equals("core-below-food-code"))
 			.findFirst()
 			.orElseThrow()
@@ -53,9 +65,12 @@ class PlanServiceTest {
 		List<String> c = text.render(thickChicken().cautions(), TemperatureUnit.CELSIUS);
 		assertThat(c).anySatisfy(x -> assertThat(x).contains("Group 2A"));
 		assertThat(c).anySatisfy(x -> assertThat(x).contains("probe"));
-		// FDA Food Code 2022 3-401.11: 63 °C 15 s whole cuts, 68 °C 17 s minced, 74 °C < 1 s poultry
-		assertThat(c).anySatisfy(x -> assertThat(x).contains("2022").contains("63 °C (145 °F) for 15 s")
-			.contains("68 °C (155 °F) for 17 s").contains("74 °C (165 °F) for under 1 s"));
+		// FDA Food Code 2022 3-401.11: 63 °C 15 s whole cuts, 68 °C 17 s minced, 74 °C <
+		// 1 s poultry
+		assertThat(c).anySatisfy(x -> assertThat(x).contains("2022")
+			.contains("63 °C (145 °F) for 15 s")
+			.contains("68 °C (155 °F) for 17 s")
+			.contains("74 °C (165 °F) for under 1 s"));
 		assertThat(c).anySatisfy(x -> assertThat(x).contains("Hot pan"));
 	}
 
@@ -77,7 +92,8 @@ class PlanServiceTest {
 			assertThat(s.get(i).timeS()).isGreaterThan(s.get(i - 1).timeS());
 		}
 		Swatch t = s.stream().filter(Swatch::target).findFirst().orElseThrow();
-		// the marked swatch is the sample nearest the target time: within one output interval (5 s)
+		// the marked swatch is the sample nearest the target time: within one output
+		// interval (5 s)
 		assertThat(Math.abs(t.timeS() - r.timeToTargetS())).isLessThanOrEqualTo(5.0);
 		assertThat(t.hex()).matches("#[0-9a-fA-F]{6}");
 	}
@@ -96,20 +112,25 @@ class PlanServiceTest {
 
 	@Test
 	void shouldShowAnAcrylamideEstimateExactlyWhenTheEngineGivesOne() {
-		// the engine's acrylamide fields are NaN until its acrylamide model is in; then the page shows them
+		// the engine's acrylamide fields are NaN until its acrylamide model is in; then
+		// the page shows them
 		PlanReport r = thickChicken();
-		assertThat(r.acrylamide().available())
-			.isEqualTo(Double.isFinite(r.result().crustAcrylamideAtTargetUgPerKg())
-					|| Double.isFinite(r.result().portionAcrylamideAtTargetUgPerKg()));
+		assertThat(r.acrylamide().available()).isEqualTo(Double.isFinite(r.result().crustAcrylamideAtTargetUgPerKg())
+				|| Double.isFinite(r.result().portionAcrylamideAtTargetUgPerKg()));
 	}
 
 	@Test
 	void shouldWarnWhenChickenIsGoldenWithADryCoreAndSayHowToAvoidIt() {
-		// skin-on chicken in a dry 200 °C fan oven: golden with the core near 99 °C, past the 80 °C at which
+		// skin-on chicken in a dry 200 °C fan oven: golden with the core near 99 °C, past
+		// the 80 °C at which
 		// poultry breast dries (common practice); the plan used to say "Warnings: none"
 		PlanReport r = planner.plan(Surface.defaults(FoodCategory.POULTRY_SKIN), new Oven(200, true, 1.6),
 				Target.stage("golden"), 60);
-		PlanWarning w = r.warnings().stream().filter(x -> x.code().equals("core-past-juiciness")).findFirst().orElseThrow();
+		PlanWarning w = r.warnings()
+			.stream()
+			.filter(x -> x.code().equals("core-past-juiciness"))
+			.findFirst()
+			.orElseThrow();
 		String f = text.render(w.message(), TemperatureUnit.FAHRENHEIT);
 		// 80 °C = 176 °F; FDA Food Code 2022 poultry 165 °F, the code's own figure
 		assertThat(f).contains("176 °F").contains("165 °F").contains("Brown it first").doesNotContain("°C");
@@ -117,11 +138,13 @@ class PlanServiceTest {
 
 	@Test
 	void shouldWarnWhenABaguetteIsGoldenOverARawCrumb() {
-		// a 60 mm lean loaf golden in a 230 °C deck oven while the crumb is near 22 °C; baked is 96 °C (bakers' probe)
-		PlanReport r = planner.plan(Surface.defaults(FoodCategory.BREAD).withThicknessMm(60),
-				new Oven(230, false, 1.6), Target.stage("golden"), 60);
+		// a 60 mm lean loaf golden in a 230 °C deck oven while the crumb is near 22 °C;
+		// baked is 96 °C (bakers' probe)
+		PlanReport r = planner.plan(Surface.defaults(FoodCategory.BREAD).withThicknessMm(60), new Oven(230, false, 1.6),
+				Target.stage("golden"), 60);
 		PlanWarning w = r.warnings().stream().filter(x -> x.code().equals("crumb-not-baked")).findFirst().orElseThrow();
-		assertThat(text.render(w.message(), TemperatureUnit.CELSIUS)).contains("96 °C").contains("Bake about 40 K cooler");
+		assertThat(text.render(w.message(), TemperatureUnit.CELSIUS)).contains("96 °C")
+			.contains("Bake about 40 K cooler");
 	}
 
 }

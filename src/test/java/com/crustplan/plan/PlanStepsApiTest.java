@@ -24,7 +24,10 @@ import com.crustplan.CrustplanTest;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 
-/** The plans API with {@code steps}: a sear–oven–rest plan, one step against one setup, bad step fields. */
+/**
+ * The plans API with {@code steps}: a sear–oven–rest plan, one step against one setup,
+ * bad step fields.
+ */
 @CrustplanTest
 class PlanStepsApiTest {
 
@@ -34,7 +37,10 @@ class PlanStepsApiTest {
 	@Autowired
 	JsonMapper json;
 
-	/** A 30 mm steak: 3 min in a 240 °C pan turned each minute, a 180 °C fan oven to 52 °C core, 5 min rest. */
+	/**
+	 * A 30 mm steak: 3 min in a 240 °C pan turned each minute, a 180 °C fan oven to 52 °C
+	 * core, 5 min rest.
+	 */
 	static final String SEAR_OVEN_REST = """
 			{ "surface": { "category": "meat", "thicknessMm": 30, "initialTemperatureC": 5 },
 			  "steps": [
@@ -46,7 +52,8 @@ class PlanStepsApiTest {
 			  "horizonMinutes": 60 }""";
 
 	ResultActions plan(String body) throws Exception {
-		return mvc.perform(post("/api/v1/plans").with(anonymous()).contentType(MediaType.APPLICATION_JSON).content(body));
+		return mvc
+			.perform(post("/api/v1/plans").with(anonymous()).contentType(MediaType.APPLICATION_JSON).content(body));
 	}
 
 	@Test
@@ -61,7 +68,8 @@ class PlanStepsApiTest {
 			.andExpect(jsonPath("$.steps[1].coreAtEndC").value(closeTo(52.5, 0.5)))
 			.andExpect(jsonPath("$.steps[2].mode").value("rest"))
 			.andExpect(jsonPath("$.steps[2].endS").value(closeTo(jsonStepEnd() + 300, 1e-6)))
-			// carry-over: the core goes on rising after the pull (a few kelvin for a thick cut, common kitchen experience)
+			// carry-over: the core goes on rising after the pull (a few kelvin for a
+			// thick cut, common kitchen experience)
 			.andExpect(jsonPath("$.steps[2].coreAtEndC").value(greaterThan(52.0)))
 			.andExpect(jsonPath("$.coreTargetC").value(52.0))
 			.andExpect(jsonPath("$.coreTargetReachedS").value(greaterThan(180.0)))
@@ -89,16 +97,16 @@ class PlanStepsApiTest {
 				{ "surface": { "category": "meat", "thicknessMm": 30 },
 				  "steps": [ { "heat": { "mode": "oven", "temperatureC": 120, "fan": true, "relativeHumidityPct": 0.5 },
 				               "coreTemperatureC": 55, "minutes": 90 } ],
-				  "target": { "coreTemperatureC": 55 }, "horizonMinutes": 90 }""")
-			.andExpect(status().isOk())
+				  "target": { "coreTemperatureC": 55 }, "horizonMinutes": 90 }""").andExpect(status().isOk())
 			.andExpect(jsonPath("$.reached").value(true))
 			.andExpect(jsonPath("$.target").value("core 55 °C"))
 			.andExpect(jsonPath("$.timeToTargetS").value(greaterThan(600.0)));
 	}
 
 	/**
-	 * Today's body and the same cook as one step: the same time to the target colour (the engine's
-	 * boundary conservation, CookStepsTest), and today's answer carries none of the step fields.
+	 * Today's body and the same cook as one step: the same time to the target colour (the
+	 * engine's boundary conservation, CookStepsTest), and today's answer carries none of
+	 * the step fields.
 	 */
 	@Test
 	void shouldAnswerOneStepAsTheOneSetupPlan() throws Exception {

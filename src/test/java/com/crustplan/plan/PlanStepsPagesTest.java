@@ -27,7 +27,10 @@ import org.springframework.test.web.servlet.request.MockHttpServletRequestBuilde
 import com.crustplan.CrustplanTest;
 import com.crustplan.DemoData;
 
-/** The plan page in steps: rows of setups and rests, the timeline, saving, and the demo kitchen's plans. */
+/**
+ * The plan page in steps: rows of setups and rests, the timeline, saving, and the demo
+ * kitchen's plans.
+ */
 @CrustplanTest
 @WithMockUser(username = "chef", roles = "CHEF")
 class PlanStepsPagesTest {
@@ -75,7 +78,10 @@ class PlanStepsPagesTest {
 			.andExpect(content().string(not(containsString("id=\"risk-map-link\""))));
 	}
 
-	/** 52 °C is 125.6 °F (°F = °C × 9/5 + 32, NIST SP 811 §B.9); typed in °C, shown in °F after the switch. */
+	/**
+	 * 52 °C is 125.6 °F (°F = °C × 9/5 + 32, NIST SP 811 §B.9); typed in °C, shown in °F
+	 * after the switch.
+	 */
 	@Test
 	void shouldKeepTheCoreTemperaturesTypedInCelsiusOnAFahrenheitPage() throws Exception {
 		String page = mvc.perform(searOvenRest(get("/plan")).cookie(new Cookie("crustplan-units", "F")))
@@ -102,14 +108,19 @@ class PlanStepsPagesTest {
 			.andExpect(content().string(containsString("Pull at 52 °C core")));
 	}
 
-	/** A plan saved before steps existed has no steps or core target in its JSON: it reads as one setup. */
+	/**
+	 * A plan saved before steps existed has no steps or core target in its JSON: it reads
+	 * as one setup.
+	 */
 	@Test
 	void shouldStillShowARoundOnePlan() throws Exception {
-		MvcResult r = mvc.perform(post("/plans").with(csrf())
-			.param("surfaceId", String.valueOf(demo.surface("Chips, 10 mm, blanched")))
-			.param("setupId", String.valueOf(demo.setup("Fryer, chips")))
-			.param("targetStage", "golden")
-			.param("name", "Round one")).andReturn();
+		MvcResult r = mvc
+			.perform(post("/plans").with(csrf())
+				.param("surfaceId", String.valueOf(demo.surface("Chips, 10 mm, blanched")))
+				.param("setupId", String.valueOf(demo.setup("Fryer, chips")))
+				.param("targetStage", "golden")
+				.param("name", "Round one"))
+			.andReturn();
 		SavedPlan now = plans.findById(Long.parseLong(r.getResponse().getRedirectedUrl().replace("/plans/", "")))
 			.orElseThrow();
 		String roundOne = now.getInputsJson().replace(",\"steps\":null", "").replace(",\"coreTargetC\":null", "");

@@ -19,7 +19,10 @@ import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.system.MessageText;
 import com.crustplan.system.TemperatureUnit;
 
-/** A plan in steps as the line reads it: checkpoints in time order, in the cook's unit. No Spring. */
+/**
+ * A plan in steps as the line reads it: checkpoints in time order, in the cook's unit. No
+ * Spring.
+ */
 class PlanStepsServiceTest {
 
 	final PlanService planner = new PlanService();
@@ -63,17 +66,22 @@ class PlanStepsServiceTest {
 		// a probe reading 5 K before the pull, inside the oven step
 		StepsReport.Checkpoint probe = t.stream().filter(x -> x.kind().equals("probe")).findFirst().orElseThrow();
 		assertThat(probe.timeS()).isBetween(180.0, pullS);
-		// carry-over during the rest: the core rises after the pull (a thick steak gains a few kelvin, kitchen experience)
+		// carry-over during the rest: the core rises after the pull (a thick steak gains
+		// a few kelvin, kitchen experience)
 		assertThat(r.steps().records().get(2).coreAtEndC()).isGreaterThan(53);
 		assertThat(t.get(t.size() - 1).kind()).isEqualTo("end");
 		assertThat(t.get(t.size() - 1).timeS()).isEqualTo(pullS + 300);
 	}
 
-	/** °F = °C × 9/5 + 32 (NIST SP 811, §B.9): 52 °C is 125.6 °F, shown as 126 °F; 240 °C is 464 °F. */
+	/**
+	 * °F = °C × 9/5 + 32 (NIST SP 811, §B.9): 52 °C is 125.6 °F, shown as 126 °F; 240 °C
+	 * is 464 °F.
+	 */
 	@Test
 	void shouldSpeakInTheCooksUnit() {
 		List<String> f = lines(searOvenRest(), TemperatureUnit.FAHRENHEIT);
-		assertThat(f).anyMatch(l -> l.endsWith("Pull at 126 °F core")).anyMatch(l -> l.endsWith("Into the pan at 464 °F"));
+		assertThat(f).anyMatch(l -> l.endsWith("Pull at 126 °F core"))
+			.anyMatch(l -> l.endsWith("Into the pan at 464 °F"));
 		assertThat(String.join("\n", f)).doesNotContain("°C");
 	}
 
@@ -87,7 +95,8 @@ class PlanStepsServiceTest {
 		assertThat(s.firstTarget()).isEqualTo(lead <= 0 ? "colour" : "core");
 		assertThat(s.firstTargetLeadS()).isEqualTo(Math.abs(lead));
 		assertThat(text.celsius(s.targetOrder())).contains("before").contains("52 °C");
-		// a browned crust is not reached by this sear: the plan says so rather than pretending
+		// a browned crust is not reached by this sear: the plan says so rather than
+		// pretending
 		PlanReport browned = searOvenRest();
 		assertThat(browned.steps().firstTarget()).isNull();
 		assertThat(text.celsius(browned.steps().targetOrder()))
@@ -95,7 +104,10 @@ class PlanStepsServiceTest {
 		assertThat(browned.warnings()).anyMatch(w -> w.code().equals("target-not-reached"));
 	}
 
-	/** A steak pulled at 52 °C is below the whole-cut figure of FDA Food Code 2022, 3-401.11 (63 °C): said so. */
+	/**
+	 * A steak pulled at 52 °C is below the whole-cut figure of FDA Food Code 2022,
+	 * 3-401.11 (63 °C): said so.
+	 */
 	@Test
 	void shouldWarnOnThePlansPeakCoreBelowTheFoodCode() {
 		assertThat(searOvenRest().warnings()).anyMatch(w -> w.code().equals("core-below-food-code"));
@@ -112,8 +124,8 @@ class PlanStepsServiceTest {
 	@Test
 	void shouldRefuseAPlanWithNoTargetAndAStepStageOfAnotherCategory() {
 		List<CookStep> pan = List.of(CookStep.timed(new PanContact(200, true, 0), 60));
-		InvalidInputException none = assertThrows(InvalidInputException.class,
-				() -> planner.planSteps(STEAK, Product.defaultFor(FoodCategory.MEAT), pan, List.of("Pan"), null, null, 30));
+		InvalidInputException none = assertThrows(InvalidInputException.class, () -> planner.planSteps(STEAK,
+				Product.defaultFor(FoodCategory.MEAT), pan, List.of("Pan"), null, null, 30));
 		assertThat(none.field()).isEqualTo("target");
 		InvalidInputException stage = assertThrows(InvalidInputException.class,
 				() -> planner.planSteps(STEAK, Product.defaultFor(FoodCategory.MEAT),

@@ -22,21 +22,27 @@ class ReportCacheTest {
 		PlanService planner = new PlanService();
 		FoodCategory potato = FoodCategory.POTATO;
 		Composition c = potato.defaultComposition();
-		Surface chips = new Surface(potato, c, potato.defaultAsparagineMgPerKg(), potato.defaultSurfaceWaterGPerM2(), 10,
-				null, 0, 0, potato.defaultInitialTemperatureC());
+		Surface chips = new Surface(potato, c, potato.defaultAsparagineMgPerKg(), potato.defaultSurfaceWaterGPerM2(),
+				10, null, 0, 0, potato.defaultInitialTemperatureC());
 		HeatSetup fryer = new DeepFryer(175);
 		PlanReport first = planner.plan(chips, Product.defaultFor(potato), fryer, Target.stage("golden"), 10, false);
 		// equal inputs (new but equal records): the same report object, not a new run
 		Surface same = new Surface(potato, c, potato.defaultAsparagineMgPerKg(), potato.defaultSurfaceWaterGPerM2(), 10,
 				null, 0, 0, potato.defaultInitialTemperatureC());
-		assertThat(planner.plan(same, Product.defaultFor(potato), new DeepFryer(175), Target.stage("golden"),
-				10, false)).isSameAs(first);
-		// another oil temperature is another plan (the unit is applied when the page words it)
-		assertThat(planner.plan(chips, Product.defaultFor(potato), new DeepFryer(170), Target.stage("golden"),
-				10, false)).isNotSameAs(first);
+		assertThat(
+				planner.plan(same, Product.defaultFor(potato), new DeepFryer(175), Target.stage("golden"), 10, false))
+			.isSameAs(first);
+		// another oil temperature is another plan (the unit is applied when the page
+		// words it)
+		assertThat(
+				planner.plan(chips, Product.defaultFor(potato), new DeepFryer(170), Target.stage("golden"), 10, false))
+			.isNotSameAs(first);
 	}
 
-	/** Least recently used goes first (java.util.LinkedHashMap in access order, its documented LRU use). */
+	/**
+	 * Least recently used goes first (java.util.LinkedHashMap in access order, its
+	 * documented LRU use).
+	 */
 	@Test
 	void shouldKeepOnlyTheMostRecentlyUsedReportsUpToItsBound() {
 		ReportCache<Integer, String> cache = new ReportCache<>(3);

@@ -29,7 +29,10 @@ import com.crustplan.engine.heat.PanBody;
 import com.crustplan.engine.heat.PanMaterial;
 import com.crustplan.system.TemperatureUnit;
 
-/** The pan's and the fryer's body on the setup form: defaults shown, bad values named, saved and shown. */
+/**
+ * The pan's and the fryer's body on the setup form: defaults shown, bad values named,
+ * saved and shown.
+ */
 @CrustplanTest
 @WithMockUser(username = "chef", roles = "CHEF")
 class EquipmentSetupPagesTest {
@@ -77,17 +80,21 @@ class EquipmentSetupPagesTest {
 			.getModelAndView()
 			.getModel()
 			.get("form");
-		// the engine's defaults (PanBody.DEFAULT, FryerBody.DEFAULT), each with its source there
+		// the engine's defaults (PanBody.DEFAULT, FryerBody.DEFAULT), each with its
+		// source there
 		assertThat(form.panMassKg()).isEqualTo(PanBody.DEFAULT.massKg());
 		assertThat(form.panMaterial()).isEqualTo(PanBody.DEFAULT.material().key());
 		assertThat(form.fryerOilLitres()).isEqualTo(FryerBody.DEFAULT.oilLitres());
 		mvc.perform(get("/setups/new"))
-			.andExpect(content().string(containsString("defaults for a typical line pan; change them if you know yours")))
-			.andExpect(content().string(containsString("defaults for a typical line fryer; change them if you know yours")))
+			.andExpect(
+					content().string(containsString("defaults for a typical line pan; change them if you know yours")))
+			.andExpect(content()
+				.string(containsString("defaults for a typical line fryer; change them if you know yours")))
 			.andExpect(content().string(containsString("value=\"2.3\" aria-describedby=\"panMassKg-note\"")))
 			.andExpect(content().string(containsString("value=\"28\" aria-describedby=\"panDiameterCm-note\"")))
 			.andExpect(content().string(containsString("value=\"3.2\" aria-describedby=\"fryerHeaterKw-note\"")))
-			.andExpect(content().string(containsString("<option value=\"cast-iron\" selected=\"selected\">cast iron</option>")))
+			.andExpect(content()
+				.string(containsString("<option value=\"cast-iron\" selected=\"selected\">cast iron</option>")))
 			.andExpect(content().string(containsString("Flame left as set")));
 	}
 
@@ -99,12 +106,12 @@ class EquipmentSetupPagesTest {
 		assertThat(s.getPanMassKg()).isEqualTo(1.5);
 		assertThat(s.getPanControl()).isEqualTo("fixed-input");
 		assertThat(s.getFryerOilLitres()).as("a pan keeps no fryer settings").isNull();
-		PanContact engine = (PanContact) SetupForm.of(s, TemperatureUnit.CELSIUS)
-			.toHeatSetup();
-		assertThat(engine.body()).isEqualTo(
-				new PanBody(PanMaterial.CARBON_STEEL, 1.5, 30, 3, HeatedBody.Control.FIXED_INPUT, 40));
+		PanContact engine = (PanContact) SetupForm.of(s, TemperatureUnit.CELSIUS).toHeatSetup();
+		assertThat(engine.body())
+			.isEqualTo(new PanBody(PanMaterial.CARBON_STEEL, 1.5, 30, 3, HeatedBody.Control.FIXED_INPUT, 40));
 		mvc.perform(get("/setups"))
-			.andExpect(content().string(containsString("carbon steel, 1.5 kg, 30 cm, 3 kW, flame left as set, 40 % covered")));
+			.andExpect(content()
+				.string(containsString("carbon steel, 1.5 kg, 30 cm, 3 kW, flame left as set, 40 % covered")));
 		mvc.perform(get("/setups/{id}/edit", s.getId()))
 			.andExpect(content().string(containsString("value=\"1.5\" aria-describedby=\"panMassKg-note\"")))
 			.andExpect(content().string(containsString("<option value=\"fixed-input\" selected=\"selected\"")));
@@ -112,7 +119,8 @@ class EquipmentSetupPagesTest {
 
 	@Test
 	void shouldGiveAPanSentWithoutItsBodyTheDefaultOne() throws Exception {
-		// a client of the form from before the body: a pan or fryer in the app always has one
+		// a client of the form from before the body: a pan or fryer in the app always has
+		// one
 		mvc.perform(pan("Pan, no body sent", "panMaterial", "", "panMassKg", "", "panDiameterCm", "", "panPowerKw", "",
 				"panControl", "", "panCoverPct", ""))
 			.andExpect(redirectedUrl("/setups"));
@@ -131,7 +139,8 @@ class EquipmentSetupPagesTest {
 		assertThat(f.getFryerOilLitres()).isEqualTo(12.0);
 		assertThat(f.getFryerLoadKg()).isEqualTo(1.2);
 		assertThat(f.getPanMassKg()).as("a fryer keeps no pan settings").isNull();
-		mvc.perform(get("/setups")).andExpect(content().string(containsString("12 L oil, 6 kW heater, 1.2 kg per batch")));
+		mvc.perform(get("/setups"))
+			.andExpect(content().string(containsString("12 L oil, 6 kW heater, 1.2 kg per batch")));
 		mvc.perform(pan("Oven, no body", "mode", "oven", "temperature", "180")).andExpect(redirectedUrl("/setups"));
 		SavedSetup o = saved("Oven, no body");
 		assertThat(o.getPanMassKg()).isNull();
@@ -141,8 +150,10 @@ class EquipmentSetupPagesTest {
 	@Test
 	void shouldListTheDemoSkilletOnAFixedFlameAndThePlanchaKeptUp() throws Exception {
 		mvc.perform(get("/setups"))
-			.andExpect(content().string(containsString("cast iron, 2.3 kg, 28 cm, 2.5 kW, flame left as set, 50 % covered")))
-			.andExpect(content().string(containsString("carbon steel, 22.6 kg, 55 cm, 6 kW, heat kept up, 25 % covered")))
+			.andExpect(content()
+				.string(containsString("cast iron, 2.3 kg, 28 cm, 2.5 kW, flame left as set, 50 % covered")))
+			.andExpect(
+					content().string(containsString("carbon steel, 22.6 kg, 55 cm, 6 kW, heat kept up, 25 % covered")))
 			.andExpect(content().string(containsString("8 L oil, 3.2 kW heater, 0.5 kg per batch")));
 	}
 
@@ -190,7 +201,8 @@ class EquipmentSetupPagesTest {
 
 		@Test
 		void shouldIgnoreBodyValuesTheModeDoesNotUse() throws Exception {
-			// a grill has no body: a fryer value out of range on its hidden fieldset is not an error
+			// a grill has no body: a fryer value out of range on its hidden fieldset is
+			// not an error
 			mvc.perform(pan("Grill, stray fryer value", "mode", "grill", "temperature", "800", "fryerLoadKg", "99"))
 				.andExpect(redirectedUrl("/setups"));
 			assertThat(saved("Grill, stray fryer value").getFryerLoadKg()).isNull();

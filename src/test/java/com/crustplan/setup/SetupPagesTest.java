@@ -85,12 +85,16 @@ class SetupPagesTest {
 			.andExpect(status().is3xxRedirection())
 			.andExpect(redirectedUrl("/setups"))
 			.andExpect(flash().attribute("message", containsString("Test combi")));
-		SavedSetup s = setups.findAll().stream().filter(x -> x.getName().equals("Test combi")).findFirst().orElseThrow();
+		SavedSetup s = setups.findAll()
+			.stream()
+			.filter(x -> x.getName().equals("Test combi"))
+			.findFirst()
+			.orElseThrow();
 		assertThat(s.isFan()).isTrue();
 		assertThat(s.getSteamPct()).isEqualTo(20.0);
 		mvc.perform(get("/setups/{id}/edit", s.getId())).andExpect(status().isOk());
-		mvc.perform(oven("/setups/" + s.getId() + "/edit", "name", "Test combi, steam", "steamPct", "80",
-				"version", String.valueOf(s.getVersion())))
+		mvc.perform(oven("/setups/" + s.getId() + "/edit", "name", "Test combi, steam", "steamPct", "80", "version",
+				String.valueOf(s.getVersion())))
 			.andExpect(status().is3xxRedirection());
 		assertThat(setups.findById(s.getId()).orElseThrow().getSteamPct()).isEqualTo(80.0);
 		mvc.perform(get("/setups/{id}/copy", s.getId()))
@@ -104,20 +108,29 @@ class SetupPagesTest {
 	void shouldKeepOnlyTheSettingsTheModeUses() throws Exception {
 		mvc.perform(oven("/setups/new", "name", "Fryer with a fan?", "mode", "fryer", "temperature", "170"))
 			.andExpect(status().is3xxRedirection());
-		SavedSetup s = setups.findAll().stream().filter(x -> x.getName().equals("Fryer with a fan?")).findFirst().orElseThrow();
+		SavedSetup s = setups.findAll()
+			.stream()
+			.filter(x -> x.getName().equals("Fryer with a fan?"))
+			.findFirst()
+			.orElseThrow();
 		assertThat(s.isFan()).isFalse();
 		assertThat(s.getSteamPct()).isNull();
 	}
 
 	@Test
 	void shouldShowTheDewPointBesideTheSteamShare() throws Exception {
-		// 50 % steam: p_v = 50.66 kPa; steam tables (IAPWS-IF97) give 47.39 kPa at 80 °C and 57.87 kPa at
+		// 50 % steam: p_v = 50.66 kPa; steam tables (IAPWS-IF97) give 47.39 kPa at 80 °C
+		// and 57.87 kPa at
 		// 85 °C, so about 81.6 °C: 82 °C, and 81.6 × 9/5 + 32 = 178.9, 179 °F
 		mvc.perform(oven("/setups/new", "name", "Half steam", "steamPct", "50")).andExpect(status().is3xxRedirection());
 		mvc.perform(get("/setups")).andExpect(content().string(containsString("50 % steam, dew point 82 °C")));
 		mvc.perform(get("/setups").cookie(new Cookie("crustplan-units", "F")))
 			.andExpect(content().string(containsString("50 % steam, dew point 179 °F")));
-		SavedSetup s = setups.findAll().stream().filter(x -> x.getName().equals("Half steam")).findFirst().orElseThrow();
+		SavedSetup s = setups.findAll()
+			.stream()
+			.filter(x -> x.getName().equals("Half steam"))
+			.findFirst()
+			.orElseThrow();
 		mvc.perform(get("/setups/{id}/edit", s.getId()))
 			.andExpect(content().string(containsString("Steam in the oven air")))
 			.andExpect(content().string(containsString("0 = dry (kitchen air is about 1.6 %), 100 = pure steam")))
@@ -126,15 +139,24 @@ class SetupPagesTest {
 
 	@Test
 	void shouldReadAnOldHumidityReadingAsTheSteamShareACookMeant() throws Exception {
-		// the rule of migration V5: 10 % or less is dry kitchen air (1.6 %), 40 % → 1.6 + 30·98.4/90 = 34.4 %
+		// the rule of migration V5: 10 % or less is dry kitchen air (1.6 %), 40 % → 1.6 +
+		// 30·98.4/90 = 34.4 %
 		mvc.perform(oven("/setups/new", "name", "Old dry", "steamPct", "", "relativeHumidityPct", "10"))
 			.andExpect(status().is3xxRedirection());
 		mvc.perform(oven("/setups/new", "name", "Old combi", "steamPct", "", "relativeHumidityPct", "40"))
 			.andExpect(status().is3xxRedirection());
-		assertThat(setups.findAll().stream().filter(x -> x.getName().equals("Old dry")).findFirst().orElseThrow().getSteamPct())
-			.isEqualTo(1.6);
-		assertThat(setups.findAll().stream().filter(x -> x.getName().equals("Old combi")).findFirst().orElseThrow().getSteamPct())
-			.isCloseTo(34.4, org.assertj.core.data.Offset.offset(1e-9));
+		assertThat(setups.findAll()
+			.stream()
+			.filter(x -> x.getName().equals("Old dry"))
+			.findFirst()
+			.orElseThrow()
+			.getSteamPct()).isEqualTo(1.6);
+		assertThat(setups.findAll()
+			.stream()
+			.filter(x -> x.getName().equals("Old combi"))
+			.findFirst()
+			.orElseThrow()
+			.getSteamPct()).isCloseTo(34.4, org.assertj.core.data.Offset.offset(1e-9));
 	}
 
 	@Test
@@ -145,7 +167,11 @@ class SetupPagesTest {
 		mvc.perform(oven("/setups/new", "name", "Coals", "mode", "grill", "temperature", "650", "grill", "charcoal",
 				"distanceMm", "100", "flipEverySeconds", "90"))
 			.andExpect(status().is3xxRedirection());
-		SavedSetup flux = setups.findAll().stream().filter(x -> x.getName().equals("Flux grill")).findFirst().orElseThrow();
+		SavedSetup flux = setups.findAll()
+			.stream()
+			.filter(x -> x.getName().equals("Flux grill"))
+			.findFirst()
+			.orElseThrow();
 		assertThat(flux.getHeatFluxKwPerM2()).isEqualTo(14.0);
 		assertThat(flux.getGrill()).isEqualTo("salamander");
 		SavedSetup coals = setups.findAll().stream().filter(x -> x.getName().equals("Coals")).findFirst().orElseThrow();
@@ -154,9 +180,9 @@ class SetupPagesTest {
 		mvc.perform(get("/setups"))
 			.andExpect(content().string(containsString("14 kW/m² at the food")))
 			.andExpect(content().string(containsString("food 100 mm below")));
-		mvc.perform(get("/setups/{id}/edit", flux.getId())).andExpect(content().string(containsString("Heat flux at the food")));
+		mvc.perform(get("/setups/{id}/edit", flux.getId()))
+			.andExpect(content().string(containsString("Heat flux at the food")));
 	}
-
 
 	@Test
 	void shouldAnswer404ForAMissingSetup() throws Exception {
@@ -186,8 +212,10 @@ class SetupPagesTest {
 				.andExpect(content().string(containsString("salamander, broiler or charcoal")));
 			mvc.perform(oven("/setups/new", "mode", "grill", "temperature", "", "grill", "salamander"))
 				.andExpect(model().attributeHasFieldErrors("form", "temperature"));
-			// coals at 1000 °C 30 mm below: σ·0.95·0.7·F·(1273⁴ − 298⁴) with F ≈ 0.98, about 97 kW/m², over 60
-			mvc.perform(oven("/setups/new", "mode", "grill", "grill", "charcoal", "temperature", "1000", "distanceMm", "30"))
+			// coals at 1000 °C 30 mm below: σ·0.95·0.7·F·(1273⁴ − 298⁴) with F ≈ 0.98,
+			// about 97 kW/m², over 60
+			mvc.perform(oven("/setups/new", "mode", "grill", "grill", "charcoal", "temperature", "1000", "distanceMm",
+					"30"))
 				.andExpect(model().attributeHasFieldErrors("form", "distanceMm"));
 		}
 

@@ -27,8 +27,9 @@ import org.springframework.test.web.servlet.request.MockHttpServletRequestBuilde
 import com.crustplan.CrustplanTest;
 
 /**
- * JSON API v1 for saved surfaces. API clients sign in with HTTP Basic as the demo kitchen's chef and
- * cook (demo/DemoKitchenLoader); a browser session still needs its CSRF token to write.
+ * JSON API v1 for saved surfaces. API clients sign in with HTTP Basic as the demo
+ * kitchen's chef and cook (demo/DemoKitchenLoader); a browser session still needs its
+ * CSRF token to write.
  */
 @CrustplanTest
 class SurfaceApiTest {
@@ -40,8 +41,8 @@ class SurfaceApiTest {
 	SurfaceRepository surfaces;
 
 	/**
-	 * Potato slices for chips: the composition is the potato category's typical one, which sums to
-	 * 100 %; thickness and notes are our own test values.
+	 * Potato slices for chips: the composition is the potato category's typical one,
+	 * which sums to 100 %; thickness and notes are our own test values.
 	 */
 	static final String WEDGES = """
 			{ "name": "API wedges", "notes": "skin on, blanched",
@@ -93,7 +94,8 @@ class SurfaceApiTest {
 	@Test
 	void shouldFillLeftOutFieldsFromTheCategoryDefaultsAndKeepTheUsualProduct() throws Exception {
 		mvc.perform(save("""
-				{ "name": "API plain steak", "surface": { "category": "meat" } }""").with(httpBasic("chef", "chef-demo")))
+				{ "name": "API plain steak", "surface": { "category": "meat" } }""")
+			.with(httpBasic("chef", "chef-demo")))
 			.andExpect(status().isCreated())
 			.andExpect(jsonPath("$.product").value(nullValue()))
 			.andExpect(jsonPath("$.pH").value(nullValue()))
@@ -102,7 +104,8 @@ class SurfaceApiTest {
 
 	@ParameterizedTest(name = "{0} -> {1}")
 	@CsvSource(delimiter = '|', value = {
-			// potato's composition with starch 16.5 instead of 15.5: the parts add up to 101 %
+			// potato's composition with starch 16.5 instead of 15.5: the parts add up to
+			// 101 %
 			"'{\"name\":\"x\",\"surface\":{\"category\":\"potato\",\"waterPct\":79,\"proteinPct\":2,\"fatPct\":0.1,\"reducingSugarPct\":0.4,\"sucrosePct\":0.2,\"starchPct\":16.5,\"fibrePct\":1.8,\"ashPct\":1}}'|surface.composition|more than 100",
 			"'{\"name\":\"x\",\"surface\":{\"category\":\"meat\",\"waterPct\":120}}'|surface.waterPct|0 to 100",
 			"'{\"name\":\"x\",\"surface\":{\"category\":\"meat\",\"waterPct\":\"NaN\"}}'|surface.waterPct|NaN",
@@ -114,8 +117,7 @@ class SurfaceApiTest {
 			"'{\"name\":\"x\",\"surface\":{\"category\":\"meat\",\"pH\":12}}'|surface.pH|",
 			"'{\"name\":\"x\",\"surface\":{\"category\":\"lava\"}}'|surface.category|not a category",
 			"'[1,2]'|body|JSON object", "''|body|name and surface" })
-	void shouldAnswerFieldErrorsAndSaveNothingForBadBodies(String body, String field, String message)
-			throws Exception {
+	void shouldAnswerFieldErrorsAndSaveNothingForBadBodies(String body, String field, String message) throws Exception {
 		long before = surfaces.count();
 		mvc.perform(save(body).with(httpBasic("chef", "chef-demo")))
 			.andExpect(status().isBadRequest())
@@ -170,7 +172,10 @@ class SurfaceApiTest {
 			.andExpect(jsonPath("$.errors[0].field").value("id"));
 	}
 
-	/** A browser's signed-in session is no way around CSRF: only Basic requests skip the token. */
+	/**
+	 * A browser's signed-in session is no way around CSRF: only Basic requests skip the
+	 * token.
+	 */
 	@Test
 	void shouldStillAskASessionForItsCsrfToken() throws Exception {
 		long before = surfaces.count();

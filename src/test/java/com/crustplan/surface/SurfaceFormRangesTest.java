@@ -23,9 +23,9 @@ import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.system.TemperatureUnit;
 
 /**
- * The form's range messages, now worded from the engine's ranges, read exactly as the form worded them
- * before (the wording cooks and API clients already know), and a value the form refuses is also one
- * the engine refuses.
+ * The form's range messages, now worded from the engine's ranges, read exactly as the
+ * form worded them before (the wording cooks and API clients already know), and a value
+ * the form refuses is also one the engine refuses.
  */
 class SurfaceFormRangesTest {
 
@@ -56,8 +56,8 @@ class SurfaceFormRangesTest {
 				v.getOrDefault("ashPct", f.ashPct()), v.getOrDefault("asparagineMgPerKg", f.asparagineMgPerKg()),
 				v.getOrDefault("surfaceWaterGPerM2", f.surfaceWaterGPerM2()),
 				v.getOrDefault("thicknessMm", f.thicknessMm()), v.getOrDefault("ph", f.ph()),
-				v.getOrDefault("bicarbonateGPerKg", f.bicarbonateGPerKg()), v.getOrDefault("acidGPerKg", f.acidGPerKg()),
-				f.initialTemperature(), f.temperatureUnit(), f.notes());
+				v.getOrDefault("bicarbonateGPerKg", f.bicarbonateGPerKg()),
+				v.getOrDefault("acidGPerKg", f.acidGPerKg()), f.initialTemperature(), f.temperatureUnit(), f.notes());
 	}
 
 	static Set<String> messages(SurfaceForm f, String field) {
@@ -68,7 +68,8 @@ class SurfaceFormRangesTest {
 			.collect(Collectors.toSet());
 	}
 
-	// the messages as SurfaceForm's @DecimalMin/@DecimalMax annotations wrote them before the ranges
+	// the messages as SurfaceForm's @DecimalMin/@DecimalMax annotations wrote them before
+	// the ranges
 	// moved into the engine
 	@ParameterizedTest
 	@CsvSource(delimiter = '|', textBlock = """

@@ -43,8 +43,8 @@ class SurfacePagesTest {
 	SurfaceRepository surfaces;
 
 	/**
-	 * A valid potato surface (the category's typical composition, which sums to 100 %), with some
-	 * fields replaced: {@code overrides} are name/value pairs.
+	 * A valid potato surface (the category's typical composition, which sums to 100 %),
+	 * with some fields replaced: {@code overrides} are name/value pairs.
 	 */
 	static MockHttpServletRequestBuilder potato(String url, String... overrides) {
 		java.util.Map<String, String> p = new java.util.LinkedHashMap<>();
@@ -125,7 +125,8 @@ class SurfacePagesTest {
 	@Test
 	void shouldUpdateASurface() throws Exception {
 		long id = surfaces.save(SavedSurface.from(SurfaceForm.defaults(com.crustplan.engine.food.FoodCategory.FISH,
-				"Edit me", com.crustplan.system.TemperatureUnit.CELSIUS))).getId();
+				"Edit me", com.crustplan.system.TemperatureUnit.CELSIUS)))
+			.getId();
 		mvc.perform(potato("/surfaces/" + id + "/edit", "name", "Edited wedges", "version",
 				String.valueOf(surfaces.findById(id).orElseThrow().getVersion())))
 			.andExpect(status().is3xxRedirection())
@@ -147,7 +148,8 @@ class SurfacePagesTest {
 	@Test
 	void shouldAskBeforeDeletingAndThenDelete() throws Exception {
 		long id = surfaces.save(SavedSurface.from(SurfaceForm.defaults(com.crustplan.engine.food.FoodCategory.MEAT,
-				"Delete me", com.crustplan.system.TemperatureUnit.CELSIUS))).getId();
+				"Delete me", com.crustplan.system.TemperatureUnit.CELSIUS)))
+			.getId();
 		mvc.perform(get("/surfaces/{id}/delete", id))
 			.andExpect(status().isOk())
 			.andExpect(view().name("surface/delete"))
@@ -175,7 +177,12 @@ class SurfacePagesTest {
 			.andExpect(status().isOk())
 			.andExpect(content().string(containsString("value=\"41\"")))
 			.andExpect(content().string(containsString("°F")));
-		MvcResult r = mvc.perform(potato("/surfaces/new", "name", "Fahrenheit wedges", "initialTemperature", "41", "temperatureUnit", "F").cookie(f)).andExpect(status().is3xxRedirection()).andReturn();
+		MvcResult r = mvc
+			.perform(potato("/surfaces/new", "name", "Fahrenheit wedges", "initialTemperature", "41", "temperatureUnit",
+					"F")
+				.cookie(f))
+			.andExpect(status().is3xxRedirection())
+			.andReturn();
 		long id = Long.parseLong(r.getResponse().getRedirectedUrl().replace("/surfaces/", ""));
 		// exact in binary floating point to well under 1e-9 °C
 		assertThat(surfaces.findById(id).orElseThrow().getInitialTemperatureC()).isCloseTo(5.0,
@@ -237,8 +244,7 @@ class SurfacePagesTest {
 
 		@Test
 		void shouldRejectAPhOutsideTwoToTen() throws Exception {
-			mvc.perform(potato("/surfaces/new", "ph", "11"))
-				.andExpect(model().attributeHasFieldErrors("form", "ph"));
+			mvc.perform(potato("/surfaces/new", "ph", "11")).andExpect(model().attributeHasFieldErrors("form", "ph"));
 		}
 
 		@Test
@@ -271,7 +277,9 @@ class SurfacePagesTest {
 
 		@Test
 		void shouldSendStrangersToTheSignInPage() throws Exception {
-			mvc.perform(get("/surfaces").with(org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.anonymous()))
+			mvc.perform(get("/surfaces")
+				.with(org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors
+					.anonymous()))
 				.andExpect(status().is3xxRedirection())
 				.andExpect(redirectedUrl("/signin"));
 		}

@@ -32,10 +32,10 @@ class EscapingTest {
 	@Test
 	void shouldShowAScriptTagInASurfaceNameAsText() throws Exception {
 		SurfaceForm f = SurfaceForm.defaults(FoodCategory.FISH, SCRIPT, TemperatureUnit.CELSIUS);
-		f = new SurfaceForm(f.name(), f.category(), f.product(), f.waterPct(), f.proteinPct(), f.fatPct(), f.reducingSugarPct(),
-				f.sucrosePct(), f.starchPct(), f.fibrePct(), f.ashPct(), f.asparagineMgPerKg(), f.surfaceWaterGPerM2(),
-				f.thicknessMm(), f.ph(), f.bicarbonateGPerKg(), f.acidGPerKg(), f.initialTemperature(),
-				f.temperatureUnit(), "note " + SCRIPT);
+		f = new SurfaceForm(f.name(), f.category(), f.product(), f.waterPct(), f.proteinPct(), f.fatPct(),
+				f.reducingSugarPct(), f.sucrosePct(), f.starchPct(), f.fibrePct(), f.ashPct(), f.asparagineMgPerKg(),
+				f.surfaceWaterGPerM2(), f.thicknessMm(), f.ph(), f.bicarbonateGPerKg(), f.acidGPerKg(),
+				f.initialTemperature(), f.temperatureUnit(), "note " + SCRIPT);
 		long id = surfaces.create(f).getId();
 		for (String page : new String[] { "/surfaces", "/surfaces/" + id, "/surfaces/" + id + "/edit",
 				"/surfaces/" + id + "/delete", "/plan" }) {
@@ -44,7 +44,8 @@ class EscapingTest {
 				.andExpect(content().string(not(containsString(SCRIPT))))
 				.andExpect(content().string(containsString("&lt;script&gt;")));
 		}
-		// and the plan page carries no inline script at all (the content security policy forbids it)
+		// and the plan page carries no inline script at all (the content security policy
+		// forbids it)
 		mvc.perform(get("/plan")).andExpect(content().string(not(containsString("<script>"))));
 	}
 

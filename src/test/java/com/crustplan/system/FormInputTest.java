@@ -22,7 +22,10 @@ import com.crustplan.CrustplanTest;
 import com.crustplan.setup.SetupRepository;
 import com.crustplan.surface.SurfaceRepository;
 
-/** Page forms given what no browser form sends: each test reproduces one case of the robustness issue. */
+/**
+ * Page forms given what no browser form sends: each test reproduces one case of the
+ * robustness issue.
+ */
 @CrustplanTest
 @WithMockUser(username = "chef", roles = "CHEF")
 class FormInputTest {
@@ -36,7 +39,10 @@ class FormInputTest {
 	@Autowired
 	SetupRepository setups;
 
-	/** Potato with the category's typical composition (sums to 100 %); our own test values otherwise. */
+	/**
+	 * Potato with the category's typical composition (sums to 100 %); our own test values
+	 * otherwise.
+	 */
 	static MockHttpServletRequestBuilder potato() {
 		Map<String, String> p = new LinkedHashMap<>();
 		p.put("name", "Repeated-field wedges");
@@ -60,7 +66,9 @@ class FormInputTest {
 		return b;
 	}
 
-	/** Reproduces {@code waterPct=1&waterPct=2} being joined to "1,2" and saved as 1.2 %. */
+	/**
+	 * Reproduces {@code waterPct=1&waterPct=2} being joined to "1,2" and saved as 1.2 %.
+	 */
 	@Test
 	void shouldRefuseAFieldSentTwiceInsteadOfJoiningIt() throws Exception {
 		long before = surfaces.count();
@@ -76,7 +84,9 @@ class FormInputTest {
 		assertThat(surfaces.count()).isEqualTo(before);
 	}
 
-	/** Reproduces {@code fan=maybe} re-rendering the setup form with no message anywhere. */
+	/**
+	 * Reproduces {@code fan=maybe} re-rendering the setup form with no message anywhere.
+	 */
 	@Test
 	void shouldShowWhyAnUnreadableCheckboxValueWasRefused() throws Exception {
 		long before = setups.count();
@@ -90,7 +100,8 @@ class FormInputTest {
 			.andExpect(status().isOk())
 			.andExpect(view().name("setup/form"))
 			.andExpect(model().attributeHasFieldErrorCode("form", "fan", "typeMismatch"))
-			// messages.properties: typeMismatch.java.lang.Boolean, shown under the checkbox
+			// messages.properties: typeMismatch.java.lang.Boolean, shown under the
+			// checkbox
 			.andExpect(content().string(containsString("must be yes or no")));
 		assertThat(setups.count()).isEqualTo(before);
 	}

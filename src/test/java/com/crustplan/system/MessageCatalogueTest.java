@@ -48,10 +48,10 @@ import com.crustplan.plan.PlanService;
 import com.crustplan.plan.PlanWarning;
 
 /**
- * Every message code the engine and the planner use is in {@code messages.properties} and the other way
- * round, and every one reads right in °C and in °F: no °C on a °F rendering and no figure twice (the
- * "154 °F (155 °F)" of converting a code's own two figures). Conversions: °F = °C × 9/5 + 32, a
- * difference of 1 K = 1.8 °F (NIST SP 811, §B.9).
+ * Every message code the engine and the planner use is in {@code messages.properties} and
+ * the other way round, and every one reads right in °C and in °F: no °C on a °F rendering
+ * and no figure twice (the "154 °F (155 °F)" of converting a code's own two figures).
+ * Conversions: °F = °C × 9/5 + 32, a difference of 1 K = 1.8 °F (NIST SP 811, §B.9).
  */
 class MessageCatalogueTest {
 
@@ -63,7 +63,10 @@ class MessageCatalogueTest {
 
 	static Map<String, String> patterns;
 
-	/** Binding codes Spring's form handling looks up in the same file; not engine messages. */
+	/**
+	 * Binding codes Spring's form handling looks up in the same file; not engine
+	 * messages.
+	 */
 	static boolean bindingCode(String key) {
 		return key.startsWith("typeMismatch") || key.equals("repeated");
 	}
@@ -71,7 +74,8 @@ class MessageCatalogueTest {
 	@BeforeAll
 	static void load() throws IOException {
 		Properties p = new Properties();
-		try (Reader r = Files.newBufferedReader(Path.of("src/main/resources/messages.properties"), StandardCharsets.UTF_8)) {
+		try (Reader r = Files.newBufferedReader(Path.of("src/main/resources/messages.properties"),
+				StandardCharsets.UTF_8)) {
 			p.load(r);
 		}
 		patterns = new HashMap<>();
@@ -90,7 +94,10 @@ class MessageCatalogueTest {
 		return Message.of(code, args);
 	}
 
-	/** One realistic set of values per code, distinct from each other and from the figures in the wording. */
+	/**
+	 * One realistic set of values per code, distinct from each other and from the figures
+	 * in the wording.
+	 */
 	static final Map<String, Argument[]> SAMPLES = new LinkedHashMap<>();
 
 	static void sample(String code, Argument... args) {
@@ -126,7 +133,8 @@ class MessageCatalogueTest {
 				Quantity.of(2.5, "kW", 1), m("control.kept-up"), q(50, "%"));
 		sample("control.kept-up");
 		sample("control.fixed");
-		sample("assumption.fryer.body", c(175), Quantity.of(8, "L", 1), Quantity.of(3.2, "kW", 1), Quantity.of(0.5, "kg", 2));
+		sample("assumption.fryer.body", c(175), Quantity.of(8, "L", 1), Quantity.of(3.2, "kW", 1),
+				Quantity.of(0.5, "kg", 2));
 		sample("exchange.rest", c(22));
 		sample("assumption.surface.slab", q(12, "mm"));
 		sample("assumption.surface.ph", PlainNumber.of(5.8, 2), q(51, "mmol/(pH·kg)"));
@@ -141,7 +149,8 @@ class MessageCatalogueTest {
 		sample("assumption.grill.lower-face");
 		sample("assumption.grill.upper-face");
 		sample("assumption.grill.flux", Text.of("Salamander"), Quantity.of(14, "kW/m²", 1), c(835));
-		sample("assumption.grill.geometry", Text.of("Charcoal grill"), q(150, "mm"), PlainNumber.of(0.74, 2), q(25, "%"));
+		sample("assumption.grill.geometry", Text.of("Charcoal grill"), q(150, "mm"), PlainNumber.of(0.74, 2),
+				q(25, "%"));
 		sample("assumption.grill.surface-limit", c(250));
 		sample("assumption.fryer.oil", c(172));
 		sample("assumption.fryer.coefficient", q(280, "W/m²K"), q(900, "W/m²K"));
@@ -181,7 +190,8 @@ class MessageCatalogueTest {
 		sample("mitigation.acid-dip.title");
 		sample("mitigation.acid-dip.change", Quantity.of(1, "g", 1), PlainNumber.of(5.8, 2), PlainNumber.of(5.52, 2));
 		sample("mitigation.acid-recipe.title");
-		sample("mitigation.acid-recipe.change", Quantity.of(1, "g", 1), PlainNumber.of(5.8, 2), PlainNumber.of(5.52, 2));
+		sample("mitigation.acid-recipe.change", Quantity.of(1, "g", 1), PlainNumber.of(5.8, 2),
+				PlainNumber.of(5.52, 2));
 		sample("mitigation.warm-storage.title", c(6));
 		sample("mitigation.warm-storage.change", c(6), Quantity.of(2.4, "%", 1), Quantity.of(0.8, "%", 1));
 		sample("warning.with-basis", m("warning.acrylamide.frying-too-hot", c(185), c(175)),
@@ -212,8 +222,8 @@ class MessageCatalogueTest {
 		sample("warning.alkaline-surface", PlainNumber.of(7.6, 1));
 		sample("caution.joined", m("caution.acrylamide.carcinogen"), m("caution.acrylamide.estimate"));
 		sample("caution.probe");
-		sample("caution.food-code", StatedTemperature.withFahrenheit(63, 145), StatedTemperature.withFahrenheit(68, 155),
-				StatedTemperature.withFahrenheit(74, 165));
+		sample("caution.food-code", StatedTemperature.withFahrenheit(63, 145),
+				StatedTemperature.withFahrenheit(68, 155), StatedTemperature.withFahrenheit(74, 165));
 		sample("caution.hot-oil");
 		sample("caution.hot-pan");
 		sample("caution.bicarbonate");
@@ -240,7 +250,10 @@ class MessageCatalogueTest {
 		sample("timeline.end", c(55), c(41));
 	}
 
-	/** Codes named where messages are made: the first argument of every Message.of in main code. */
+	/**
+	 * Codes named where messages are made: the first argument of every Message.of in main
+	 * code.
+	 */
 	static Set<String> codesInSource() throws IOException {
 		Set<String> codes = new TreeSet<>();
 		Pattern call = Pattern.compile("Message\\.of\\(([^,)]*)");
@@ -258,8 +271,10 @@ class MessageCatalogueTest {
 						codes.add(ml.group(1));
 						found++;
 					}
-					assertThat(found).as("%s: Message.of(%s…) names its code as a literal, so it can be checked here", f,
-							mc.group(1)).isPositive();
+					assertThat(found)
+						.as("%s: Message.of(%s…) names its code as a literal, so it can be checked here", f,
+								mc.group(1))
+						.isPositive();
 				}
 			}
 		}
@@ -297,21 +312,23 @@ class MessageCatalogueTest {
 	@Test
 	void shouldWordMessagesAsTheyAlwaysRead() {
 		// today's API wording, byte for byte, and the conversions of NIST SP 811 §B.9
-		assertThat(TEXT.celsius(m("warning.acrylamide.frying-too-hot", c(190), c(175)))).startsWith(
-				"Oil at 190 °C: fry potato products below 175 °C, and as low as food safety allows.");
+		assertThat(TEXT.celsius(m("warning.acrylamide.frying-too-hot", c(190), c(175))))
+			.startsWith("Oil at 190 °C: fry potato products below 175 °C, and as low as food safety allows.");
 		assertThat(TEXT.render(m("warning.acrylamide.frying-too-hot", c(190), c(175)), TemperatureUnit.FAHRENHEIT))
 			.startsWith("Oil at 374 °F: fry potato products below 347 °F,");
 		assertThat(TEXT.render(m("assumption.pan.upper-face", c(25)), TemperatureUnit.FAHRENHEIT))
 			.isEqualTo("The upper face loses heat and water to kitchen air at 77 °F.");
 		assertThat(TEXT.celsius(m("assumption.grill.element", c(815), q(50, "%"), q(37, "kW/m²"))))
 			.isEqualTo("Element at 815 °C filling 50 % of the food's view: 37 kW/m² on a cold surface.");
-		// FDA Food Code 2022, 3-401.11: the code's own figures, 155 °F for minced meat (not 154 °F from 68 °C)
+		// FDA Food Code 2022, 3-401.11: the code's own figures, 155 °F for minced meat
+		// (not 154 °F from 68 °C)
 		Message foodCode = m("caution.food-code", StatedTemperature.withFahrenheit(63, 145),
 				StatedTemperature.withFahrenheit(68, 155), StatedTemperature.withFahrenheit(74, 165));
 		assertThat(TEXT.celsius(foodCode)).contains("63 °C (145 °F) for 15 s", "68 °C (155 °F) for 17 s",
 				"74 °C (165 °F) for under 1 s");
-		assertThat(TEXT.render(foodCode, TemperatureUnit.FAHRENHEIT)).contains("145 °F for 15 s", "155 °F for 17 s",
-				"165 °F for under 1 s").doesNotContain("154");
+		assertThat(TEXT.render(foodCode, TemperatureUnit.FAHRENHEIT))
+			.contains("145 °F for 15 s", "155 °F for 17 s", "165 °F for under 1 s")
+			.doesNotContain("154");
 		assertThat(TEXT.celsius((Message) null)).isEmpty();
 	}
 
@@ -325,7 +342,10 @@ class MessageCatalogueTest {
 		assertThat(TEXT.argument(Temperature.celsius(Double.NaN), TemperatureUnit.CELSIUS)).isEqualTo("–");
 	}
 
-	/** Real plans across the four heat modes: their messages match the samples' shape and read right in °F. */
+	/**
+	 * Real plans across the four heat modes: their messages match the samples' shape and
+	 * read right in °F.
+	 */
 	@Test
 	void shouldRenderWhatRealPlansSayInFahrenheitWithoutCelsius() {
 		PlanService planner = new PlanService();
@@ -335,14 +355,16 @@ class MessageCatalogueTest {
 				planner.plan(sweetChips, Product.FRENCH_FRIES, new DeepFryer(185), Target.stage("brown"), 30, true),
 				planner.plan(Surface.defaults(FoodCategory.POULTRY_SKIN).withThicknessMm(60),
 						new PanContact(240, true, 0), Target.stage("light-golden"), 30),
-				planner.plan(Surface.defaults(FoodCategory.MEAT), RadiantGrill.fromHeatFlux(15, 90), Target.stage("browned"), 30),
+				planner.plan(Surface.defaults(FoodCategory.MEAT), RadiantGrill.fromHeatFlux(15, 90),
+						Target.stage("browned"), 30),
 				planner.plan(Surface.defaults(FoodCategory.BREAD).withThicknessMm(12), new RadiantGrill(800, 0),
 						Target.stage("dark"), 30),
 				planner.plan(Surface.defaults(FoodCategory.MEAT),
 						RadiantGrill.ofElement(GrillKind.CHARCOAL, 650, 100.0, 90), Target.stage("browned"), 30),
 				planner.plan(Surface.defaults(FoodCategory.BREAD).withBicarbonateGPerKg(10), new Oven(200, true, 20),
 						Target.lightness(60), 30),
-				planner.plan(Surface.defaults(FoodCategory.MEAT), new Oven(60, false, 1.6), Target.stage("browned"), 10));
+				planner.plan(Surface.defaults(FoodCategory.MEAT), new Oven(60, false, 1.6), Target.stage("browned"),
+						10));
 		List<Message> said = new ArrayList<>();
 		for (PlanReport r : reports) {
 			said.add(r.targetLabel());
@@ -353,7 +375,9 @@ class MessageCatalogueTest {
 			said.add(r.acrylamide().basis());
 			said.addAll(r.acrylamide().cautions());
 			for (Mitigation x : r.acrylamide().mitigations()) {
-				said.addAll(Stream.of(x.title(), x.change(), x.reason(), x.basis().meaning()).filter(y -> y != null).toList());
+				said.addAll(Stream.of(x.title(), x.change(), x.reason(), x.basis().meaning())
+					.filter(y -> y != null)
+					.toList());
 			}
 			for (int face = 0; face < 2; face++) {
 				said.add(r.setup().schedule().at(face, 0).describe());
@@ -369,7 +393,8 @@ class MessageCatalogueTest {
 		assertThat(seen).contains("warning.acrylamide.frying-too-hot", "warning.food-code.poultry",
 				"warning.food-code.whole-cut", "warning.alkaline-surface", "mitigation.warm-storage.change",
 				"assumption.grill.element", "assumption.oven.steam", "exchange.fryer", "warning.target-not-reached");
-		// toast taken to dark under a salamander passes the surface limit; the coals heat the lower face
+		// toast taken to dark under a salamander passes the surface limit; the coals heat
+		// the lower face
 		assertThat(seen).contains("assumption.grill.flux", "assumption.grill.geometry", "assumption.grill.upper-face",
 				"warning.surface-limit", "outcome.surface-limit");
 	}
@@ -385,9 +410,7 @@ class MessageCatalogueTest {
 	}
 
 	static boolean containsLiteral(Message message) {
-		return message.args()
-			.stream()
-			.anyMatch(a -> a instanceof Message inner && containsLiteral(inner));
+		return message.args().stream().anyMatch(a -> a instanceof Message inner && containsLiteral(inner));
 	}
 
 	static int placeholders(String pattern) {

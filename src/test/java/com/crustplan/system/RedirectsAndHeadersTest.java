@@ -24,7 +24,10 @@ import org.springframework.test.web.servlet.MockMvc;
 
 import com.crustplan.CrustplanTest;
 
-/** What the server says about itself to any client: redirects, error addresses, privacy headers. */
+/**
+ * What the server says about itself to any client: redirects, error addresses, privacy
+ * headers.
+ */
 @CrustplanTest
 class RedirectsAndHeadersTest {
 
@@ -35,9 +38,9 @@ class RedirectsAndHeadersTest {
 	MockMvc mvc;
 
 	/**
-	 * A client may send any Host header (RFC 9110 §7.2); the redirect to the sign-in page must not
-	 * repeat it, or a poisoned cache or link would send people to another site. A raw socket, since
-	 * Java's HTTP client will not send a forged Host.
+	 * A client may send any Host header (RFC 9110 §7.2); the redirect to the sign-in page
+	 * must not repeat it, or a poisoned cache or link would send people to another site.
+	 * A raw socket, since Java's HTTP client will not send a forged Host.
 	 */
 	@Test
 	void shouldRedirectToTheSignInPageByPathWhateverTheHostHeader() throws Exception {
@@ -46,21 +49,28 @@ class RedirectsAndHeadersTest {
 		assertThat(response).containsIgnoringCase("\r\nLocation: /signin\r\n").doesNotContain("evil.example");
 	}
 
-	/** Opened directly, /error has no error to tell of: it is a page that is not there (404), never "Status 999". */
+	/**
+	 * Opened directly, /error has no error to tell of: it is a page that is not there
+	 * (404), never "Status 999".
+	 */
 	@Test
 	void shouldAnswerTheErrorAddressOpenedDirectlyWithNotFound() throws Exception {
 		HttpClient http = HttpClient.newHttpClient();
 		HttpResponse<String> page = http.send(HttpRequest.newBuilder(URI.create("http://localhost:" + port + "/error"))
-			.header("Accept", "text/html").build(), HttpResponse.BodyHandlers.ofString());
+			.header("Accept", "text/html")
+			.build(), HttpResponse.BodyHandlers.ofString());
 		assertThat(page.statusCode()).isEqualTo(404);
 		assertThat(page.body()).contains("There is nothing at this address").doesNotContain("999");
 		HttpResponse<String> json = http.send(HttpRequest.newBuilder(URI.create("http://localhost:" + port + "/error"))
-			.header("Accept", "application/json").build(), HttpResponse.BodyHandlers.ofString());
+			.header("Accept", "application/json")
+			.build(), HttpResponse.BodyHandlers.ofString());
 		assertThat(json.statusCode()).isEqualTo(404);
 		assertThat(json.body()).doesNotContain("999");
 	}
 
-	/** W3C Referrer Policy and Permissions Policy, on pages and on the Basic API alike. */
+	/**
+	 * W3C Referrer Policy and Permissions Policy, on pages and on the Basic API alike.
+	 */
 	@Test
 	void shouldSendReferrerAndPermissionsPolicies() throws Exception {
 		mvc.perform(get("/").with(anonymous()))

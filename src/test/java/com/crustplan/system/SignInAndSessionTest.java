@@ -25,7 +25,9 @@ import org.springframework.test.web.servlet.MockMvc;
 
 import com.crustplan.CrustplanTest;
 
-/** Form sign-in against the stored BCrypt hashes, sessions kept in the database, sign-out. */
+/**
+ * Form sign-in against the stored BCrypt hashes, sessions kept in the database, sign-out.
+ */
 @CrustplanTest
 class SignInAndSessionTest {
 
@@ -38,13 +40,20 @@ class SignInAndSessionTest {
 	@LocalServerPort
 	int port;
 
-	/** Over real HTTP: MockMvc keeps its own mock session and would not show the session cookie. */
+	/**
+	 * Over real HTTP: MockMvc keeps its own mock session and would not show the session
+	 * cookie.
+	 */
 	@Test
 	void shouldSignInWithTheDemoChefAndKeepTheSessionInTheDatabase() throws Exception {
-		HttpClient http = HttpClient.newBuilder().cookieHandler(new CookieManager())
-			.followRedirects(HttpClient.Redirect.NEVER).build();
-		String page = http.send(HttpRequest.newBuilder(URI.create("http://localhost:" + port + "/signin")).build(),
-				HttpResponse.BodyHandlers.ofString()).body();
+		HttpClient http = HttpClient.newBuilder()
+			.cookieHandler(new CookieManager())
+			.followRedirects(HttpClient.Redirect.NEVER)
+			.build();
+		String page = http
+			.send(HttpRequest.newBuilder(URI.create("http://localhost:" + port + "/signin")).build(),
+					HttpResponse.BodyHandlers.ofString())
+			.body();
 		Matcher m = Pattern.compile("name=\"_csrf\" value=\"([^\"]+)\"").matcher(page);
 		assertThat(m.find()).isTrue();
 		String form = "username=chef&password=chef-demo&_csrf=" + URLEncoder.encode(m.group(1), StandardCharsets.UTF_8);
@@ -54,10 +63,15 @@ class SignInAndSessionTest {
 			.build(), HttpResponse.BodyHandlers.ofString());
 		assertThat(r.statusCode()).isEqualTo(302);
 		assertThat(r.headers().firstValue("Location").orElse("")).endsWith("/");
-		String cookie = r.headers().allValues("Set-Cookie").stream().filter(c -> c.startsWith("CRUSTPLAN_SESSION="))
-			.findFirst().orElseThrow();
+		String cookie = r.headers()
+			.allValues("Set-Cookie")
+			.stream()
+			.filter(c -> c.startsWith("CRUSTPLAN_SESSION="))
+			.findFirst()
+			.orElseThrow();
 		assertThat(cookie).contains("HttpOnly").contains("SameSite=Lax");
-		// the session lives in the database, where every instance behind a load balancer finds it
+		// the session lives in the database, where every instance behind a load balancer
+		// finds it
 		Integer sessions = jdbc.queryForObject("SELECT COUNT(*) FROM spring_session WHERE principal_name = 'chef'",
 				Integer.class);
 		assertThat(sessions).isPositive();

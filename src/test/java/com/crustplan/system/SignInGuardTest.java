@@ -24,9 +24,10 @@ import org.springframework.security.provisioning.InMemoryUserDetailsManager;
 import org.springframework.security.web.authentication.WebAuthenticationDetails;
 
 /**
- * The sign-in path as SecurityConfig builds it, with a counter on the password hash: a throttled or
- * over-long attempt must not reach the hash, and a repeated right password must reach it once.
- * BCrypt at cost 4, the lowest Spring Security's BCrypt accepts, keeps the test quick.
+ * The sign-in path as SecurityConfig builds it, with a counter on the password hash: a
+ * throttled or over-long attempt must not reach the hash, and a repeated right password
+ * must reach it once. BCrypt at cost 4, the lowest Spring Security's BCrypt accepts,
+ * keeps the test quick.
  */
 class SignInGuardTest {
 
@@ -59,7 +60,8 @@ class SignInGuardTest {
 
 	@BeforeEach
 	void setUp() {
-		accounts.createUser(User.withUsername("api-chef").password(bcrypt.encode("line chef passphrase")).roles("CHEF").build());
+		accounts.createUser(
+				User.withUsername("api-chef").password(bcrypt.encode("line chef passphrase")).roles("CHEF").build());
 		DaoAuthenticationProvider passwords = new DaoAuthenticationProvider(accounts);
 		passwords.setPasswordEncoder(checks.encoder());
 		guard = new SignInGuard(passwords, throttle);
@@ -89,7 +91,8 @@ class SignInGuardTest {
 			assertThatThrownBy(() -> guard.authenticate(token(name, "guess", "203.0.113.66")))
 				.isInstanceOf(AuthenticationException.class);
 		}
-		// an unknown name still costs one hash (Spring Security hides which names exist), but only 20 of them
+		// an unknown name still costs one hash (Spring Security hides which names exist),
+		// but only 20 of them
 		assertThat(hashes.get()).isEqualTo(20);
 		// a client elsewhere signs in as usual
 		assertThat(guard.authenticate(token("api-chef", "line chef passphrase", "203.0.113.67")).isAuthenticated())
@@ -123,20 +126,27 @@ class SignInGuardTest {
 	void shouldReadTheAccountAfreshDespiteARememberedPassword() {
 		guard.authenticate(token("api-chef", "line chef passphrase", "192.0.2.1"));
 		// demoted: the role comes from the account, not from the remembered check
-		accounts.updateUser(User.withUsername("api-chef").password(accounts.loadUserByUsername("api-chef").getPassword())
-			.roles("COOK").build());
+		accounts.updateUser(User.withUsername("api-chef")
+			.password(accounts.loadUserByUsername("api-chef").getPassword())
+			.roles("COOK")
+			.build());
 		assertThat(roles(guard.authenticate(token("api-chef", "line chef passphrase", "192.0.2.1"))))
 			.containsExactly("ROLE_COOK");
 		// disabled
-		accounts.updateUser(User.withUsername("api-chef").password(accounts.loadUserByUsername("api-chef").getPassword())
-			.roles("COOK").disabled(true).build());
+		accounts.updateUser(User.withUsername("api-chef")
+			.password(accounts.loadUserByUsername("api-chef").getPassword())
+			.roles("COOK")
+			.disabled(true)
+			.build());
 		assertThatThrownBy(() -> guard.authenticate(token("api-chef", "line chef passphrase", "192.0.2.1")))
 			.isInstanceOf(DisabledException.class);
 		// a new password is a new salted hash: the old password no longer passes
-		accounts.updateUser(User.withUsername("api-chef").password(bcrypt.encode("a brand new passphrase")).roles("CHEF").build());
+		accounts.updateUser(
+				User.withUsername("api-chef").password(bcrypt.encode("a brand new passphrase")).roles("CHEF").build());
 		assertThatThrownBy(() -> guard.authenticate(token("api-chef", "line chef passphrase", "192.0.2.1")))
 			.isInstanceOf(BadCredentialsException.class);
-		assertThat(guard.authenticate(token("api-chef", "a brand new passphrase", "192.0.2.1")).isAuthenticated()).isTrue();
+		assertThat(guard.authenticate(token("api-chef", "a brand new passphrase", "192.0.2.1")).isAuthenticated())
+			.isTrue();
 	}
 
 	@Test

@@ -10,8 +10,9 @@ import java.util.concurrent.atomic.AtomicLong;
 import org.junit.jupiter.api.Test;
 
 /**
- * The throttle's counting on a hand-driven clock, so the cooling period passes without waiting.
- * Addresses are from the documentation ranges (RFC 5737 for IPv4, RFC 3849 for IPv6).
+ * The throttle's counting on a hand-driven clock, so the cooling period passes without
+ * waiting. Addresses are from the documentation ranges (RFC 5737 for IPv4, RFC 3849 for
+ * IPv6).
  */
 class SignInThrottleTest {
 
@@ -25,7 +26,8 @@ class SignInThrottleTest {
 			throttle.check("chef", "192.0.2.1");
 			throttle.failed("chef", "192.0.2.1");
 		}
-		// the same account from anywhere, in any case or with spaces (as AccountDetailsService looks it up)
+		// the same account from anywhere, in any case or with spaces (as
+		// AccountDetailsService looks it up)
 		assertThatThrownBy(() -> throttle.check(" CHEF ", "198.51.100.9")).isInstanceOf(SignInThrottle.Refused.class)
 			.satisfies(e -> assertThat(((SignInThrottle.Refused) e).minutes()).isEqualTo(15));
 		assertThatCode(() -> throttle.check("cook", "198.51.100.9")).doesNotThrowAnyException();
@@ -76,9 +78,11 @@ class SignInThrottleTest {
 		for (int i = 0; i < 20; i++) {
 			throttle.failed("guess-" + i, "2001:db8:0:1::" + Integer.toHexString(i + 1));
 		}
-		assertThatThrownBy(() -> throttle.check("chef", "2001:db8:0:1:ffff::1")).isInstanceOf(SignInThrottle.Refused.class);
+		assertThatThrownBy(() -> throttle.check("chef", "2001:db8:0:1:ffff::1"))
+			.isInstanceOf(SignInThrottle.Refused.class);
 		assertThatCode(() -> throttle.check("chef", "2001:db8:0:2::1")).doesNotThrowAnyException();
-		assertThat(SignInThrottle.addressKey("2001:DB8:0:1:0:0:0:5")).isEqualTo(SignInThrottle.addressKey("2001:db8:0:1::9"));
+		assertThat(SignInThrottle.addressKey("2001:DB8:0:1:0:0:0:5"))
+			.isEqualTo(SignInThrottle.addressKey("2001:db8:0:1::9"));
 	}
 
 	@Test

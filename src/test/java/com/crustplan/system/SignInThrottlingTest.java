@@ -20,9 +20,10 @@ import org.springframework.test.web.servlet.request.RequestPostProcessor;
 import com.crustplan.CrustplanTest;
 
 /**
- * Repeated wrong passwords through the real filter chains. Each test runs a fixed number of
- * attempts (no waiting, no timing) from addresses of the documentation range 203.0.113.0/24
- * (RFC 5737), and forgets the tallies afterwards so no other test is locked out.
+ * Repeated wrong passwords through the real filter chains. Each test runs a fixed number
+ * of attempts (no waiting, no timing) from addresses of the documentation range
+ * 203.0.113.0/24 (RFC 5737), and forgets the tallies afterwards so no other test is
+ * locked out.
  */
 @CrustplanTest
 class SignInThrottlingTest {
@@ -41,14 +42,17 @@ class SignInThrottlingTest {
 	@Test
 	void shouldPauseFormSignInAfterFiveWrongPasswordsEvenForTheRightOne() throws Exception {
 		for (int i = 0; i < 5; i++) {
-			mvc.perform(post("/signin").with(csrf()).with(from("203.0.113.10")).param("username", "cook")
-				.param("password", "wrong guess " + i))
-				.andExpect(redirectedUrl("/signin?error"));
+			mvc.perform(post("/signin").with(csrf())
+				.with(from("203.0.113.10"))
+				.param("username", "cook")
+				.param("password", "wrong guess " + i)).andExpect(redirectedUrl("/signin?error"));
 		}
-		// the right password, even from another address: refused until the cooling period is over
-		mvc.perform(post("/signin").with(csrf()).with(from("203.0.113.11")).param("username", "cook")
-			.param("password", "cook-demo"))
-			.andExpect(redirectedUrl("/signin?locked=15"));
+		// the right password, even from another address: refused until the cooling period
+		// is over
+		mvc.perform(post("/signin").with(csrf())
+			.with(from("203.0.113.11"))
+			.param("username", "cook")
+			.param("password", "cook-demo")).andExpect(redirectedUrl("/signin?locked=15"));
 		mvc.perform(get("/signin").param("locked", "15"))
 			.andExpect(status().isOk())
 			.andExpect(content().string(containsString("Too many wrong passwords")))
@@ -71,15 +75,17 @@ class SignInThrottlingTest {
 				.andExpect(jsonPath("$.errors[0].field").value("authorization"))
 				.andExpect(jsonPath("$.errors[0].message").value(containsString("try again in 15 minute")));
 		}
-		// the right password from that address waits as well (else the pause would tell a guesser when he is right)
+		// the right password from that address waits as well (else the pause would tell a
+		// guesser when he is right)
 		mvc.perform(get("/api/v1/surfaces").with(httpBasic("chef", "chef-demo")).with(from("203.0.113.20")))
 			.andExpect(status().isTooManyRequests());
 		// another client is served as usual
 		mvc.perform(get("/api/v1/surfaces").with(httpBasic("chef", "chef-demo")).with(from("203.0.113.21")))
 			.andExpect(status().isOk());
-		mvc.perform(post("/signin").with(csrf()).with(from("203.0.113.21")).param("username", "chef")
-			.param("password", "chef-demo"))
-			.andExpect(redirectedUrl("/"));
+		mvc.perform(post("/signin").with(csrf())
+			.with(from("203.0.113.21"))
+			.param("username", "chef")
+			.param("password", "chef-demo")).andExpect(redirectedUrl("/"));
 	}
 
 	static RequestPostProcessor from(String address) {

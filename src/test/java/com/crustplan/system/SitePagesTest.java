@@ -21,7 +21,9 @@ import org.springframework.test.web.servlet.MockMvc;
 import com.crustplan.CrustplanTest;
 import com.crustplan.engine.heat.HeatSetup;
 
-/** The pages around the kitchen data: welcome, sign-in, model, unit switch, error pages. */
+/**
+ * The pages around the kitchen data: welcome, sign-in, model, unit switch, error pages.
+ */
 @CrustplanTest
 class SitePagesTest {
 
@@ -65,7 +67,8 @@ class SitePagesTest {
 
 	@Test
 	void shouldNotRedirectTheUnitSwitchToAnotherSite() throws Exception {
-		for (String back : new String[] { "//evil.example", "https://evil.example/", "/\\evil", "javascript:alert(1)" }) {
+		for (String back : new String[] { "//evil.example", "https://evil.example/", "/\\evil",
+				"javascript:alert(1)" }) {
 			mvc.perform(post("/units").with(csrf()).with(anonymous()).param("unit", "C").param("back", back))
 				.andExpect(redirectedUrl("/"));
 		}
@@ -95,7 +98,8 @@ class SitePagesTest {
 
 	@Test
 	void shouldAnswerHealthChecksWithoutSignIn() throws Exception {
-		mvc.perform(get("/actuator/health").with(anonymous())).andExpect(status().isOk())
+		mvc.perform(get("/actuator/health").with(anonymous()))
+			.andExpect(status().isOk())
 			.andExpect(content().string(containsString("UP")));
 	}
 

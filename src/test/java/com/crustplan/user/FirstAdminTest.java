@@ -17,13 +17,17 @@ import org.springframework.security.crypto.password.PasswordEncoder;
 
 import com.crustplan.CrustplanApplication;
 
-/** On an empty database the first administrator comes from the configured name and password. */
+/**
+ * On an empty database the first administrator comes from the configured name and
+ * password.
+ */
 class FirstAdminTest {
 
 	@Test
 	void shouldCreateTheConfiguredFirstAdministratorOnceAndNoDemoAccounts() {
-		String url = "jdbc:h2:file:" + Path.of("target", "test-databases", "first-admin-" + System.nanoTime())
-			.toAbsolutePath() + ";WRITE_DELAY=0";
+		String url = "jdbc:h2:file:"
+				+ Path.of("target", "test-databases", "first-admin-" + System.nanoTime()).toAbsolutePath()
+				+ ";WRITE_DELAY=0";
 		String[] args = { "--spring.datasource.url=" + url, "--server.port=0", "--spring.main.banner-mode=off",
 				"--logging.level.root=WARN", "--crustplan.admin.username=owner",
 				"--crustplan.admin.password=first owner passphrase" };
@@ -39,7 +43,10 @@ class FirstAdminTest {
 		}
 	}
 
-	/** A configured password BCrypt cannot take whole (over 72 bytes): start-up stops and names the setting. */
+	/**
+	 * A configured password BCrypt cannot take whole (over 72 bytes): start-up stops and
+	 * names the setting.
+	 */
 	@Test
 	void shouldRefuseAConfiguredPasswordOverSeventyTwoBytes() {
 		UserAccountRepository users = mock(UserAccountRepository.class);

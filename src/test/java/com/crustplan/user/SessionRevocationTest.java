@@ -21,14 +21,18 @@ import org.springframework.jdbc.core.JdbcTemplate;
 import com.crustplan.CrustplanTest;
 
 /**
- * Over real HTTP, with the session cookie and CSRF token a browser would hold: a chef whom an
- * administrator demotes or disables cannot write with the old session on the very next request.
- * (The issue's case: a chef set to cook and disabled kept saving surfaces through the API.)
+ * Over real HTTP, with the session cookie and CSRF token a browser would hold: a chef
+ * whom an administrator demotes or disables cannot write with the old session on the very
+ * next request. (The issue's case: a chef set to cook and disabled kept saving surfaces
+ * through the API.)
  */
 @CrustplanTest
 class SessionRevocationTest {
 
-	/** A surface the API accepts (the potato category's typical composition, see SurfaceApiTest). */
+	/**
+	 * A surface the API accepts (the potato category's typical composition, see
+	 * SurfaceApiTest).
+	 */
 	static final String SURFACE = """
 			{ "name": "Revocation wedges", "surface": { "category": "potato", "product": "french-fries",
 			  "waterPct": 79, "proteinPct": 2, "fatPct": 0.1, "reducingSugarPct": 0.4, "sucrosePct": 0.2,
@@ -58,7 +62,8 @@ class SessionRevocationTest {
 		assertThat(sessionsOf("demoted-chef")).isZero();
 		// signed in again they are a cook, who may not write (403)
 		assertThat(signIn("demoted-chef").postSurface()).isEqualTo(403);
-		// and an API client with the account's Basic credentials is a cook from the next request on
+		// and an API client with the account's Basic credentials is a cook from the next
+		// request on
 		assertThat(basicPost("demoted-chef")).isEqualTo(403);
 	}
 
@@ -90,11 +95,13 @@ class SessionRevocationTest {
 
 	private int basicPost(String name) throws Exception {
 		String auth = Base64.getEncoder().encodeToString((name + ":" + PASSWORD).getBytes(StandardCharsets.UTF_8));
-		return HttpClient.newHttpClient().send(HttpRequest.newBuilder(uri("/api/v1/surfaces"))
-			.header("Authorization", "Basic " + auth)
-			.header("Content-Type", "application/json")
-			.POST(HttpRequest.BodyPublishers.ofString(SURFACE))
-			.build(), HttpResponse.BodyHandlers.discarding()).statusCode();
+		return HttpClient.newHttpClient()
+			.send(HttpRequest.newBuilder(uri("/api/v1/surfaces"))
+				.header("Authorization", "Basic " + auth)
+				.header("Content-Type", "application/json")
+				.POST(HttpRequest.BodyPublishers.ofString(SURFACE))
+				.build(), HttpResponse.BodyHandlers.discarding())
+			.statusCode();
 	}
 
 	private Browser signIn(String name) throws Exception {
@@ -119,24 +126,29 @@ class SessionRevocationTest {
 	/** One browser: its own cookies, redirects not followed. */
 	private class Browser {
 
-		final HttpClient http = HttpClient.newBuilder().cookieHandler(new CookieManager())
-			.followRedirects(HttpClient.Redirect.NEVER).build();
+		final HttpClient http = HttpClient.newBuilder()
+			.cookieHandler(new CookieManager())
+			.followRedirects(HttpClient.Redirect.NEVER)
+			.build();
 
 		String csrf;
 
 		String token(String page) throws Exception {
-			String body = http.send(HttpRequest.newBuilder(uri(page)).build(), HttpResponse.BodyHandlers.ofString()).body();
+			String body = http.send(HttpRequest.newBuilder(uri(page)).build(), HttpResponse.BodyHandlers.ofString())
+				.body();
 			Matcher m = Pattern.compile("name=\"_csrf\" value=\"([^\"]+)\"").matcher(body);
 			assertThat(m.find()).as("a CSRF token on " + page).isTrue();
 			return m.group(1);
 		}
 
 		int postSurface() throws Exception {
-			return http.send(HttpRequest.newBuilder(uri("/api/v1/surfaces"))
-				.header("Content-Type", "application/json")
-				.header("X-CSRF-TOKEN", csrf)
-				.POST(HttpRequest.BodyPublishers.ofString(SURFACE))
-				.build(), HttpResponse.BodyHandlers.discarding()).statusCode();
+			return http
+				.send(HttpRequest.newBuilder(uri("/api/v1/surfaces"))
+					.header("Content-Type", "application/json")
+					.header("X-CSRF-TOKEN", csrf)
+					.POST(HttpRequest.BodyPublishers.ofString(SURFACE))
+					.build(), HttpResponse.BodyHandlers.discarding())
+				.statusCode();
 		}
 
 	}

@@ -9,13 +9,14 @@ import com.crustplan.engine.layers.Grid;
 import com.crustplan.engine.layers.Layers;
 
 /**
- * Acrylamide in every control volume of a run, stepped from the layer's own temperature and water
- * activity (see {@link AcrylamideModel} for the equations and sources). Concentrations are kept per kg of
- * dry matter so drying does not change them; the reported levels are per kg of the food as eaten.
+ * Acrylamide in every control volume of a run, stepped from the layer's own temperature
+ * and water activity (see {@link AcrylamideModel} for the equations and sources).
+ * Concentrations are kept per kg of dry matter so drying does not change them; the
+ * reported levels are per kg of the food as eaten.
  * <p>
- * The crust is the outer 1 mm of face 0 (half the thickness for thinner pieces): the
- * face a {@code Sample} calls the surface. The portion is the whole piece, mass-weighted. One instance
- * belongs to one run; {@link #step} allocates nothing.
+ * The crust is the outer 1 mm of face 0 (half the thickness for thinner pieces): the face
+ * a {@code Sample} calls the surface. The portion is the whole piece, mass-weighted. One
+ * instance belongs to one run; {@link #step} allocates nothing.
  */
 public final class AcrylamideFormation implements LayerReaction {
 
@@ -115,7 +116,10 @@ public final class AcrylamideFormation implements LayerReaction {
 		return u * u * (3 - 2 * u);
 	}
 
-	/** Advances every layer by dt from the state the view shows now (after the step's heat and moisture). */
+	/**
+	 * Advances every layer by dt from the state the view shows now (after the step's heat
+	 * and moisture).
+	 */
 	@Override
 	public void step(Layers layers, double dt) {
 		double yield = kinetics.yield();
@@ -130,7 +134,8 @@ public final class AcrylamideFormation implements LayerReaction {
 			if (t >= skipBelowK) {
 				double g = gate(layers.waterActivity(i), gateDry, gateWet);
 				if (g > 0) {
-					// condensation, implicit in the limiting precursor so neither goes negative
+					// condensation, implicit in the limiting precursor so neither goes
+					// negative
 					double kc = kfRef * rates.formation(t) * g;
 					double a = asparagine[i];
 					double s = sugar[i];
@@ -158,7 +163,10 @@ public final class AcrylamideFormation implements LayerReaction {
 		crust = crustWet > 0 ? crustMass / crustWet * UG_PER_MMOL : 0;
 	}
 
-	/** Acrylamide in the outer crust layer of face 0, µg per kg as eaten, after the last step. */
+	/**
+	 * Acrylamide in the outer crust layer of face 0, µg per kg as eaten, after the last
+	 * step.
+	 */
 	public double crustUgPerKg() {
 		return crust;
 	}

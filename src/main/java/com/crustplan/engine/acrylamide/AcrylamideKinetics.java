@@ -1,7 +1,8 @@
 package com.crustplan.engine.acrylamide;
 
 /**
- * The rate constants a formation run uses: the model's defaults, or trial values while fitting.
+ * The rate constants a formation run uses: the model's defaults, or trial values while
+ * fitting.
  *
  * @param formationRateAtRef k_f at 170 °C, kg d.m./(mmol·s)
  * @param formationActivationEnergy Ea,f, J/mol
@@ -9,8 +10,8 @@ package com.crustplan.engine.acrylamide;
  * @param eliminationActivationEnergy Ea,e, J/mol
  * @param yield acrylamide formed per precursor pair condensed, mol/mol
  */
-public record AcrylamideKinetics(double formationRateAtRef, double formationActivationEnergy, double eliminationRateAtRef,
-		double eliminationActivationEnergy, double yield) {
+public record AcrylamideKinetics(double formationRateAtRef, double formationActivationEnergy,
+		double eliminationRateAtRef, double eliminationActivationEnergy, double yield) {
 
 	public static final AcrylamideKinetics DEFAULT = new AcrylamideKinetics(AcrylamideModel.FORMATION_RATE.value(),
 			AcrylamideModel.FORMATION_EA.value(), AcrylamideModel.ELIMINATION_RATE.value(),
@@ -24,7 +25,8 @@ public record AcrylamideKinetics(double formationRateAtRef, double formationActi
 	}
 
 	public AcrylamideKinetics withFormation(double rateAtRef, double activationEnergy) {
-		return new AcrylamideKinetics(rateAtRef, activationEnergy, eliminationRateAtRef, eliminationActivationEnergy, yield);
+		return new AcrylamideKinetics(rateAtRef, activationEnergy, eliminationRateAtRef, eliminationActivationEnergy,
+				yield);
 	}
 
 }

@@ -3,9 +3,10 @@ package com.crustplan.engine.acrylamide;
 import com.crustplan.engine.kinetics.ArrheniusRate;
 
 /**
- * The Arrhenius factors of formation and elimination tabulated every 0.05 K, so the per-layer step
- * needs no exponential. Linear interpolation over 0.05 K is exact to a few parts per million for these
- * activation energies; beyond the table the factor is computed directly.
+ * The Arrhenius factors of formation and elimination tabulated every 0.05 K, so the
+ * per-layer step needs no exponential. Linear interpolation over 0.05 K is exact to a few
+ * parts per million for these activation energies; beyond the table the factor is
+ * computed directly.
  */
 final class RateTable {
 

@@ -14,7 +14,9 @@ public final class AcrylamideCautions {
 
 	public static final Message AUTHORITY = Message.of("caution.acrylamide.authority");
 
-	/** Regulation (EU) 2017/2158: benchmark levels are performance indicators, not limits. */
+	/**
+	 * Regulation (EU) 2017/2158: benchmark levels are performance indicators, not limits.
+	 */
 	public static final Message BENCHMARK_MEANING = Message.of("caution.acrylamide.benchmark-meaning");
 
 	public static final List<Message> ALL = List.of(CARCINOGEN, ESTIMATE, AUTHORITY, BENCHMARK_MEANING);

@@ -7,18 +7,20 @@ import java.util.List;
 import com.crustplan.engine.model.Equation;
 import com.crustplan.engine.model.ModelSection;
 
-/** The acrylamide chapter of the model page: the formation model's constants and how the assessment judges them. */
+/**
+ * The acrylamide chapter of the model page: the formation model's constants and how the
+ * assessment judges them.
+ */
 public final class AcrylamideChapter {
 
 	private AcrylamideChapter() {
 	}
 
 	public static ModelSection section() {
-		return new ModelSection("Acrylamide", List.of(
-				new Equation("Precursors per dry matter",
-						"[Asn]₀ = c_Asn / (M(Asn)·(1 − w)); [RS]₀ = 10·RS% / (M(RS)·(1 − w)) mol/kg → mmol/kg d.m.",
-						"Asparagine (mg/kg as entered) and reducing sugar (% fresh weight) are expressed per kg of dry matter (w: water fraction) so that drying does not change them.",
-						List.of(M_ASPARAGINE, M_HEXOSE)),
+		return new ModelSection("Acrylamide", List.of(new Equation("Precursors per dry matter",
+				"[Asn]₀ = c_Asn / (M(Asn)·(1 − w)); [RS]₀ = 10·RS% / (M(RS)·(1 − w)) mol/kg → mmol/kg d.m.",
+				"Asparagine (mg/kg as entered) and reducing sugar (% fresh weight) are expressed per kg of dry matter (w: water fraction) so that drying does not change them.",
+				List.of(M_ASPARAGINE, M_HEXOSE)),
 				new Equation("Condensation and formation, per layer of the grid",
 						"r = k_f(T)/Y · [Asn]·[RS] · g(aw) · 10^(β_AA(pH − pH_ref));  d[Asn]/dt = d[RS]/dt = −r;  d[AA]/dt = Y·r − k_e(T)·[AA]",
 						"Lumped form of the Knol et al. (2005) scheme: the precursors condense (and are used up), a share Y of the condensation gives acrylamide, which is itself eliminated. Integrated on every control volume from its own temperature and water activity; the limiting precursor is stepped implicitly so it never goes negative.",
@@ -27,8 +29,7 @@ public final class AcrylamideChapter {
 						"k_f(T) = k_f,ref·exp(−Ea,f/R·(1/T − 1/443.15 K));  k_e(T) = k_e,ref·exp(−Ea,e/R·(1/T − 1/453.15 K))",
 						"Arrhenius rates; formation fitted to Pedreschi, Kaack & Granby (2006) at 150 and 190 °C, elimination from model-system studies.",
 						List.of(FORMATION_RATE, FORMATION_EA, ELIMINATION_RATE, ELIMINATION_EA)),
-				new Equation("Dryness gate",
-						"g(aw) = 1 for aw ≤ aw,dry; 0 for aw ≥ aw,wet; smooth step between",
+				new Equation("Dryness gate", "g(aw) = 1 for aw ≤ aw,dry; 0 for aw ≥ aw,wet; smooth step between",
 						"Formation needs a layer that has lost its free water; a wet layer is also held near 100 °C by boiling, so the gate and the temperature agree.",
 						List.of(GATE_DRY, GATE_WET, SKIP_BELOW)),
 				new Equation("Reported levels, fresh (as eaten) basis",
@@ -39,8 +40,7 @@ public final class AcrylamideChapter {
 						"low: AA_portion < B/2; elevated: B/2 ≤ AA_portion ≤ B; high: AA_portion > B",
 						"B is the product's benchmark level (Regulation (EU) 2017/2158, Annex IV). Warnings follow the retail and catering measures of Annex II: fry potato products below 175 °C, cook to a lighter colour (golden) with a colour guide, use low-sugar potatoes.",
 						List.of(AcrylamideWarnings.MAX_FRYING_C, AcrylamideWarnings.HIGH_SUGAR_PCT)),
-				new Equation("Mitigations by re-running the model",
-						"(1 − f)² = 1 − R  ⇒  f = 1 − √(1 − R)",
+				new Equation("Mitigations by re-running the model", "(1 − f)² = 1 − R  ⇒  f = 1 − √(1 − R)",
 						"A pretreatment that leaches a fraction f of both precursors leaves (1 − f)² of the acrylamide, so a published reduction R gives f. Cooking changes are compared at the target colour, raw-material changes after the same cooking time.",
 						Mitigations.parameters())),
 				List.of("Fitted to one potato data set (blanched strips, one variety); other foods use the same kinetics with their own precursors, which is an extrapolation.",

@@ -12,7 +12,10 @@ import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
 
-/** A cook with acrylamide formation running in every layer: what plans, maps and mitigations judge. */
+/**
+ * A cook with acrylamide formation running in every layer: what plans, maps and
+ * mitigations judge.
+ */
 public final class AcrylamideCook {
 
 	private AcrylamideCook() {
@@ -26,7 +29,10 @@ public final class AcrylamideCook {
 		return run(surface, setup, target, CookSettings.defaults());
 	}
 
-	/** A cook in steps with acrylamide formation; the colour and core targets may each be null. */
+	/**
+	 * A cook in steps with acrylamide formation; the colour and core targets may each be
+	 * null.
+	 */
 	public static StepsResult runSteps(Surface surface, List<CookStep> steps, Target colour, Double coreTargetC,
 			CookSettings settings) {
 		return CookSimulation.runSteps(surface, steps, colour, coreTargetC, settings, AcrylamideFormation.REACTION);

@@ -12,15 +12,18 @@ import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.message.Message;
 
 /**
- * Acrylamide for one planned cook: crust and portion levels (µg/kg as eaten), the product's benchmark,
- * the zone, the warnings and the cautions. Levels are at the target colour when it is reached, otherwise
- * at the end of the run ({@code atTarget} false).
+ * Acrylamide for one planned cook: crust and portion levels (µg/kg as eaten), the
+ * product's benchmark, the zone, the warnings and the cautions. Levels are at the target
+ * colour when it is reached, otherwise at the end of the run ({@code atTarget} false).
  */
 public record AcrylamideEstimate(double crustUgPerKg, double portionUgPerKg, boolean atTarget, Product product,
 		BenchmarkLevel benchmarkOrNull, AcrylamideZone zone, List<AcrylamideWarning> warnings, Message basis,
 		List<Message> cautions) {
 
-	/** What the figures are: fresh weight as eaten, crust the outer 1 mm, portion the whole piece. */
+	/**
+	 * What the figures are: fresh weight as eaten, crust the outer 1 mm, portion the
+	 * whole piece.
+	 */
 	public static final Message BASIS = Message.of("acrylamide.basis");
 
 	public AcrylamideEstimate {
@@ -38,7 +41,8 @@ public record AcrylamideEstimate(double crustUgPerKg, double portionUgPerKg, boo
 	}
 
 	/** The estimate for a finished run of the engine. */
-	public static AcrylamideEstimate of(Surface surface, Product product, HeatSetup setup, Target target, CookResult result) {
+	public static AcrylamideEstimate of(Surface surface, Product product, HeatSetup setup, Target target,
+			CookResult result) {
 		if (product.category() != surface.category()) {
 			throw new InvalidInputException("product",
 					"'" + product.key() + "' is not a product of " + surface.category().label());

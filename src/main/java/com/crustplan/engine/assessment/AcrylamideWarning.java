@@ -3,9 +3,9 @@ package com.crustplan.engine.assessment;
 import com.crustplan.engine.message.Message;
 
 /**
- * A setup that breaks one of the acrylamide measures of Regulation (EU) 2017/2158 Annex II (retail and
- * catering), or an estimate over its benchmark: a stable code for the page, a message a cook acts on and
- * the citation it rests on.
+ * A setup that breaks one of the acrylamide measures of Regulation (EU) 2017/2158 Annex
+ * II (retail and catering), or an estimate over its benchmark: a stable code for the
+ * page, a message a cook acts on and the citation it rests on.
  */
 public record AcrylamideWarning(String code, Message message, String basis) {
 

@@ -16,36 +16,50 @@ import com.crustplan.engine.message.Temperature;
 import com.crustplan.engine.message.Text;
 import com.crustplan.engine.model.Parameter;
 
-/** Checks a setup against the retail and catering measures of Regulation (EU) 2017/2158, Annex II. */
+/**
+ * Checks a setup against the retail and catering measures of Regulation (EU) 2017/2158,
+ * Annex II.
+ */
 public final class AcrylamideWarnings {
 
 	private static final String ANNEX_II = "Regulation (EU) 2017/2158, Annex II";
 
-	public static final Parameter MAX_FRYING_C = Parameter.published("T_fry,max", "frying temperature the measures ask to stay below",
-			175, "°C", "Regulation (EU) 2017/2158, Annex II Part A (French fries and other cut potato products)");
+	public static final Parameter MAX_FRYING_C = Parameter.published("T_fry,max",
+			"frying temperature the measures ask to stay below", 175, "°C",
+			"Regulation (EU) 2017/2158, Annex II Part A (French fries and other cut potato products)");
 
-	public static final Parameter HIGH_SUGAR_PCT = Parameter.fromMemory("RS,high", "reducing sugar above which a potato is a high-sugar lot",
-			0.5, "%", "frying-quality potatoes usually hold well under 0.5 % reducing sugar fresh weight (from memory)");
+	public static final Parameter HIGH_SUGAR_PCT = Parameter.fromMemory("RS,high",
+			"reducing sugar above which a potato is a high-sugar lot", 0.5, "%",
+			"frying-quality potatoes usually hold well under 0.5 % reducing sugar fresh weight (from memory)");
 
-	/** Store potatoes above this (Regulation (EU) 2017/2158, Annex II Part A: storage above 6 °C). */
+	/**
+	 * Store potatoes above this (Regulation (EU) 2017/2158, Annex II Part A: storage
+	 * above 6 °C).
+	 */
 	public static final double WARM_STORAGE_C = 6;
 
-	/** The darkest stage a colour guide for the category recommends (common practice: fries and bread cooked to golden). */
+	/**
+	 * The darkest stage a colour guide for the category recommends (common practice:
+	 * fries and bread cooked to golden).
+	 */
 	public static final String GUIDE_STAGE = "golden";
 
 	private AcrylamideWarnings() {
 	}
 
-	/** Warnings for one planned cook; {@code portionUgPerKg} may be NaN when there is no estimate. */
+	/**
+	 * Warnings for one planned cook; {@code portionUgPerKg} may be NaN when there is no
+	 * estimate.
+	 */
 	public static List<AcrylamideWarning> check(Surface surface, Product product, HeatSetup setup, Target target,
 			double portionUgPerKg) {
 		List<AcrylamideWarning> list = new ArrayList<>();
 		FoodCategory category = surface.category();
 		if (category == FoodCategory.POTATO && setup instanceof DeepFryer fryer
 				&& fryer.oilTemperatureC() >= MAX_FRYING_C.value()) {
-			list.add(new AcrylamideWarning(AcrylamideWarning.FRYING_TOO_HOT,
-					Message.of("warning.acrylamide.frying-too-hot", Temperature.celsius(fryer.oilTemperatureC()),
-							Temperature.celsius(MAX_FRYING_C.value())),
+			list.add(new AcrylamideWarning(
+					AcrylamideWarning.FRYING_TOO_HOT, Message.of("warning.acrylamide.frying-too-hot",
+							Temperature.celsius(fryer.oilTemperatureC()), Temperature.celsius(MAX_FRYING_C.value())),
 					ANNEX_II + ", Part A (French fries)"));
 		}
 		if (guideApplies(category)) {
@@ -86,7 +100,8 @@ public final class AcrylamideWarnings {
 	}
 
 	private static boolean guideApplies(FoodCategory category) {
-		return category == FoodCategory.POTATO || category == FoodCategory.BREAD || category == FoodCategory.SWEET_DOUGH;
+		return category == FoodCategory.POTATO || category == FoodCategory.BREAD
+				|| category == FoodCategory.SWEET_DOUGH;
 	}
 
 	/** The stage of a category that a colour guide recommends, if it has one. */

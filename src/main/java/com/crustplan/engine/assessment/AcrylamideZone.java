@@ -26,7 +26,10 @@ public enum AcrylamideZone {
 		return meaning;
 	}
 
-	/** Low below half the benchmark, elevated from half up to the benchmark, high above it. */
+	/**
+	 * Low below half the benchmark, elevated from half up to the benchmark, high above
+	 * it.
+	 */
 	public static AcrylamideZone of(double ugPerKg, double benchmarkUgPerKg) {
 		if (!Double.isFinite(ugPerKg)) {
 			return NOT_ESTIMATED;

@@ -7,7 +7,10 @@ import com.crustplan.engine.heat.RadiantGrill;
 import com.crustplan.engine.heat.Oven;
 import com.crustplan.engine.heat.PanContact;
 
-/** The same heat setup at another set temperature: for maps and the lower-temperature suggestion. */
+/**
+ * The same heat setup at another set temperature: for maps and the lower-temperature
+ * suggestion.
+ */
 public final class HeatSetups {
 
 	private HeatSetups() {

@@ -4,20 +4,22 @@ import com.crustplan.engine.message.Message;
 import com.crustplan.engine.model.Evidence;
 
 /**
- * One change a cook can make, computed by running the model again: portion acrylamide (µg/kg as eaten)
- * and cooking time before and after. {@code applicable} false with a reason where the change does not
- * apply or its run does not reach the target; an applicable change may carry a note in {@code reason}
- * (for example when the model finds no gain), null where it has none. {@code source} is the citation.
+ * One change a cook can make, computed by running the model again: portion acrylamide
+ * (µg/kg as eaten) and cooking time before and after. {@code applicable} false with a
+ * reason where the change does not apply or its run does not reach the target; an
+ * applicable change may carry a note in {@code reason} (for example when the model finds
+ * no gain), null where it has none. {@code source} is the citation.
  * <p>
- * Changes of cooking ({@link Basis#SAME_COLOUR}) compare both cooks at the target colour. Changes of the
- * raw material ({@link Basis#SAME_TIME}: soaking, blanching, enzyme, acid, storage) compare both cooks
- * after the same cooking time, as the published reductions were measured; the minutes then say how much
- * longer (or shorter) the changed food takes to reach the same colour, and
- * {@code afterAtSameColourUgPerKg} what it holds if cooked on to that colour.
+ * Changes of cooking ({@link Basis#SAME_COLOUR}) compare both cooks at the target colour.
+ * Changes of the raw material ({@link Basis#SAME_TIME}: soaking, blanching, enzyme, acid,
+ * storage) compare both cooks after the same cooking time, as the published reductions
+ * were measured; the minutes then say how much longer (or shorter) the changed food takes
+ * to reach the same colour, and {@code afterAtSameColourUgPerKg} what it holds if cooked
+ * on to that colour.
  */
-public record Mitigation(String code, Message title, Message change, String source, Evidence evidence, boolean applicable,
-		Message reason, Basis basis, double beforeUgPerKg, double afterUgPerKg, double beforeMinutes, double afterMinutes,
-		double afterAtSameColourUgPerKg) {
+public record Mitigation(String code, Message title, Message change, String source, Evidence evidence,
+		boolean applicable, Message reason, Basis basis, double beforeUgPerKg, double afterUgPerKg,
+		double beforeMinutes, double afterMinutes, double afterAtSameColourUgPerKg) {
 
 	public enum Basis {
 
@@ -50,10 +52,10 @@ public record Mitigation(String code, Message title, Message change, String sour
 		return beforeUgPerKg > 0 ? afterUgPerKg / beforeUgPerKg - 1 : 0;
 	}
 
-	static Mitigation notApplicable(String code, Message title, Message change, String source, Evidence evidence, Basis basis,
-			Message reason) {
-		return new Mitigation(code, title, change, source, evidence, false, reason, basis, Double.NaN, Double.NaN, Double.NaN,
-				Double.NaN, Double.NaN);
+	static Mitigation notApplicable(String code, Message title, Message change, String source, Evidence evidence,
+			Basis basis, Message reason) {
+		return new Mitigation(code, title, change, source, evidence, false, reason, basis, Double.NaN, Double.NaN,
+				Double.NaN, Double.NaN, Double.NaN);
 	}
 
 }

@@ -25,45 +25,52 @@ import com.crustplan.engine.model.Evidence;
 import com.crustplan.engine.model.Parameter;
 
 /**
- * Changes that lower acrylamide, each computed by re-running the model with the change and comparing the
- * portion's acrylamide and the time at the target colour.
+ * Changes that lower acrylamide, each computed by re-running the model with the change
+ * and comparing the portion's acrylamide and the time at the target colour.
  * <p>
- * Precursor removals: soaking and blanching leach sugars and asparagine alike (both small, water-soluble
- * molecules of similar size, so we take the same fraction for both). With formation proportional to
- * [Asn]·[RS], removing a fraction f of each leaves (1 − f)² of the acrylamide, so a measured reduction R
- * gives f = 1 − √(1 − R).
+ * Precursor removals: soaking and blanching leach sugars and asparagine alike (both
+ * small, water-soluble molecules of similar size, so we take the same fraction for both).
+ * With formation proportional to [Asn]·[RS], removing a fraction f of each leaves (1 −
+ * f)² of the acrylamide, so a measured reduction R gives f = 1 − √(1 − R).
  */
 public final class Mitigations {
 
-	public static final Parameter SOAK_REMOVAL = Parameter.derived("f_soak", "share of sugars and asparagine removed by soaking",
-			1 - Math.sqrt(1 - 0.27), "–",
+	public static final Parameter SOAK_REMOVAL = Parameter.derived("f_soak",
+			"share of sugars and asparagine removed by soaking", 1 - Math.sqrt(1 - 0.27), "–",
 			"Pedreschi, Kaack & Granby 2006 (Food Res Int 39:40): soaking 120 min cut fries' acrylamide by 33 / 21 / 27 % at 150 / 170 / 190 °C; mean 27 % → f = 1 − √0.73");
 
-	public static final Parameter BLANCH_REMOVAL = Parameter.derived("f_blanch", "share of sugars and asparagine removed by blanching",
-			1 - Math.sqrt(1 - 0.64), "–",
+	public static final Parameter BLANCH_REMOVAL = Parameter.derived("f_blanch",
+			"share of sugars and asparagine removed by blanching", 1 - Math.sqrt(1 - 0.64), "–",
 			"Pedreschi et al. 2005: blanching 85 °C, 3.5 min cut crisps' acrylamide by 64 % on average → f = 1 − √0.36");
 
-	public static final Parameter ASPARAGINASE_REMOVAL = Parameter.fromMemory("f_Asn", "share of free asparagine removed by asparaginase",
-			0.6, "–",
+	public static final Parameter ASPARAGINASE_REMOVAL = Parameter.fromMemory("f_Asn",
+			"share of free asparagine removed by asparaginase", 0.6, "–",
 			"enzyme treatments of potato strips and doughs remove roughly half to nine tenths of free asparagine (e.g. Pedreschi, Kaack & Granby 2008, Food Chem 109:386, fries); 60 % from memory");
 
-	public static final Parameter ACID_DIP_UPTAKE = Parameter.assumption("c_acid", "citric acid taken up by an acid dip", 1.0, "g/kg",
+	public static final Parameter ACID_DIP_UPTAKE = Parameter.assumption("c_acid",
+			"citric acid taken up by an acid dip", 1.0, "g/kg",
 			"a dip of cut potatoes in about 1 % citric acid (as in Jung, Choi & Ju 2003, J Food Sci 68:1287); uptake of 1 g per kg of food assumed");
 
-	public static final Parameter COLD_STORAGE_SUGAR = Parameter.fromMemory("F_cold", "reducing sugar of cold-stored tubers relative to warm-stored",
-			3.0, "–",
+	public static final Parameter COLD_STORAGE_SUGAR = Parameter.fromMemory("F_cold",
+			"reducing sugar of cold-stored tubers relative to warm-stored", 3.0, "–",
 			"storage at 2–4 °C raises glucose and fructose several-fold within weeks (cold-induced sweetening); factor 3 from memory");
 
-	public static final Parameter FRYER_STEP_C = Parameter.commonPractice("ΔT_fry", "temperature step for frying lower", 10, "°C",
+	public static final Parameter FRYER_STEP_C = Parameter.commonPractice("ΔT_fry", "temperature step for frying lower",
+			10, "°C",
 			"one usual fryer setting step; never above 170 °C so the result also meets the below-175 °C measure (common practice)");
 
-	public static final Parameter OVEN_PAN_STEP_C = Parameter.commonPractice("ΔT_oven", "temperature step for baking or searing lower", 20,
-			"°C", "a usual oven or pan setting step (common practice)");
+	public static final Parameter OVEN_PAN_STEP_C = Parameter.commonPractice("ΔT_oven",
+			"temperature step for baking or searing lower", 20, "°C",
+			"a usual oven or pan setting step (common practice)");
 
-	public static final Parameter GRILL_STEP_C = Parameter.commonPractice("ΔT_grill", "heater temperature step for grilling lower", 100,
-			"°C", "a radiant element runs at 600–1000 °C; one step lower on the dial (common practice)");
+	public static final Parameter GRILL_STEP_C = Parameter.commonPractice("ΔT_grill",
+			"heater temperature step for grilling lower", 100, "°C",
+			"a radiant element runs at 600–1000 °C; one step lower on the dial (common practice)");
 
-	/** Blanching water as in Pedreschi et al. 2005 (85 °C, 3.5 min), the source of {@link #BLANCH_REMOVAL}. */
+	/**
+	 * Blanching water as in Pedreschi et al. 2005 (85 °C, 3.5 min), the source of
+	 * {@link #BLANCH_REMOVAL}.
+	 */
 	static final double BLANCH_WATER_C = 85;
 
 	private static final String LIGHTER_SOURCE = "Regulation (EU) 2017/2158, Annex II: cook, bake and toast to a lighter colour; the stages are the category's own";
@@ -71,10 +78,14 @@ public final class Mitigations {
 	private Mitigations() {
 	}
 
-	/** All changes for a planned cook, in a fixed order; those that do not apply say why. */
-	public static List<Mitigation> compute(Surface surface, Product product, HeatSetup setup, Target target, CookSettings base) {
+	/**
+	 * All changes for a planned cook, in a fixed order; those that do not apply say why.
+	 */
+	public static List<Mitigation> compute(Surface surface, Product product, HeatSetup setup, Target target,
+			CookSettings base) {
 		if (product.category() != surface.category()) {
-			throw new InvalidInputException("product", "'" + product.key() + "' is not a product of " + surface.category().label());
+			throw new InvalidInputException("product",
+					"'" + product.key() + "' is not a product of " + surface.category().label());
 		}
 		CookSettings settings = base.withRecordSeries(false);
 		CookResult baseline = AcrylamideCook.run(surface, setup, target, settings);
@@ -103,9 +114,11 @@ public final class Mitigations {
 				Message.of("mitigation.asparaginase.change", Quantity.of(ASPARAGINASE_REMOVAL.value() * 100, "%")),
 				ASPARAGINASE_REMOVAL, removePrecursors(surface, 0, ASPARAGINASE_REMOVAL.value())));
 		Surface acid = surface.withAcidGPerKg(Math.min(50, surface.acidGPerKg() + ACID_DIP_UPTAKE.value()));
-		list.add(rawChange(b, "ACID_DIP", Message.of(potato ? "mitigation.acid-dip.title" : "mitigation.acid-recipe.title"),
+		list.add(rawChange(b, "ACID_DIP",
+				Message.of(potato ? "mitigation.acid-dip.title" : "mitigation.acid-recipe.title"),
 				Message.of(potato ? "mitigation.acid-dip.change" : "mitigation.acid-recipe.change",
-						Quantity.of(ACID_DIP_UPTAKE.value(), "g", 1), PlainNumber.of(surface.ph(), 2), PlainNumber.of(acid.ph(), 2)),
+						Quantity.of(ACID_DIP_UPTAKE.value(), "g", 1), PlainNumber.of(surface.ph(), 2),
+						PlainNumber.of(acid.ph(), 2)),
 				ACID_DIP_UPTAKE, acid));
 		if (potato) {
 			list.add(warmStorage(b));
@@ -144,7 +157,8 @@ public final class Mitigations {
 			lower = t - step.value();
 		}
 		Message title = Message.of("mitigation.lower-temperature.title");
-		Message change = Message.of("mitigation.lower-temperature.change", Temperature.celsius(lower), Temperature.celsius(t));
+		Message change = Message.of("mitigation.lower-temperature.change", Temperature.celsius(lower),
+				Temperature.celsius(t));
 		HeatSetup cooler;
 		try {
 			cooler = HeatSetups.withTemperature(setup, lower);
@@ -157,10 +171,13 @@ public final class Mitigations {
 		Mitigation m = sameColour(b, "LOWER_TEMPERATURE", title, change, step.source(), step.evidence(), r,
 				Message.of("mitigation.lower-temperature.not-reached", Temperature.celsius(lower)));
 		if (m.applicable() && m.effectUgPerKg() >= 0) {
-			// an honest null result: the slower formation is offset by a longer cook that dries more of the piece
+			// an honest null result: the slower formation is offset by a longer cook that
+			// dries more of the piece
 			return new Mitigation(m.code(), m.title(), m.change(), m.source(), m.evidence(), true,
-					Message.of("mitigation.lower-temperature.no-gain", Temperature.celsius(AcrylamideWarnings.MAX_FRYING_C.value())),
-					m.basis(), m.beforeUgPerKg(), m.afterUgPerKg(), m.beforeMinutes(), m.afterMinutes(), m.afterAtSameColourUgPerKg());
+					Message.of("mitigation.lower-temperature.no-gain",
+							Temperature.celsius(AcrylamideWarnings.MAX_FRYING_C.value())),
+					m.basis(), m.beforeUgPerKg(), m.afterUgPerKg(), m.beforeMinutes(), m.afterMinutes(),
+					m.afterAtSameColourUgPerKg());
 		}
 		return m;
 	}
@@ -168,13 +185,15 @@ public final class Mitigations {
 	private static Mitigation lighterTarget(Baseline b) {
 		FoodCategory category = b.surface().category();
 		double extent = b.target().extentFor(category);
-		Optional<BrowningStage> lighter = category.stages().stream()
+		Optional<BrowningStage> lighter = category.stages()
+			.stream()
 			.filter(s -> s.extentOn(category.colourPath()) < extent - 1e-6)
 			.max(Comparator.comparingDouble(s -> s.extentOn(category.colourPath())));
 		if (lighter.isEmpty()) {
 			return Mitigation.notApplicable("LIGHTER_TARGET", Message.of("mitigation.lighter-target.title"),
 					Message.of("mitigation.lighter-target.one-stage"), LIGHTER_SOURCE, Evidence.PUBLISHED,
-					Mitigation.Basis.SAME_COLOUR, Message.of("mitigation.lighter-target.lightest", Text.of(category.label())));
+					Mitigation.Basis.SAME_COLOUR,
+					Message.of("mitigation.lighter-target.lightest", Text.of(category.label())));
 		}
 		BrowningStage s = lighter.get();
 		CookResult r = AcrylamideCook.run(b.surface(), b.setup(), Target.stage(s.key()), b.settings());
@@ -187,10 +206,12 @@ public final class Mitigations {
 	private static Mitigation sameColour(Baseline b, String code, Message title, Message change, String source,
 			Evidence evidence, CookResult r, Message notReached) {
 		if (!r.reached()) {
-			return Mitigation.notApplicable(code, title, change, source, evidence, Mitigation.Basis.SAME_COLOUR, notReached);
+			return Mitigation.notApplicable(code, title, change, source, evidence, Mitigation.Basis.SAME_COLOUR,
+					notReached);
 		}
 		return new Mitigation(code, title, change, source, evidence, true, null, Mitigation.Basis.SAME_COLOUR, b.ug(),
-				r.portionAcrylamideAtTargetUgPerKg(), b.minutes(), r.timeToTargetS() / 60, r.portionAcrylamideAtTargetUgPerKg());
+				r.portionAcrylamideAtTargetUgPerKg(), b.minutes(), r.timeToTargetS() / 60,
+				r.portionAcrylamideAtTargetUgPerKg());
 	}
 
 	/** A change of the raw food, compared after the baseline's cooking time. */
@@ -198,8 +219,9 @@ public final class Mitigations {
 			Surface changed) {
 		double atSameTime = portionAfter(changed, b.setup(), b.settings(), b.result().timeToTargetS());
 		CookResult toColour = AcrylamideCook.run(changed, b.setup(), b.target(), b.settings());
-		return new Mitigation(code, title, change, fraction.source(), fraction.evidence(), true, null, Mitigation.Basis.SAME_TIME,
-				b.ug(), atSameTime, b.minutes(), toColour.reached() ? toColour.timeToTargetS() / 60 : Double.NaN,
+		return new Mitigation(code, title, change, fraction.source(), fraction.evidence(), true, null,
+				Mitigation.Basis.SAME_TIME, b.ug(), atSameTime, b.minutes(),
+				toColour.reached() ? toColour.timeToTargetS() / 60 : Double.NaN,
 				toColour.reached() ? toColour.portionAcrylamideAtTargetUgPerKg() : Double.NaN);
 	}
 
@@ -213,13 +235,13 @@ public final class Mitigations {
 		Surface coldStored = b.surface().withComposition(cold);
 		Temperature warm = Temperature.celsius(AcrylamideWarnings.WARM_STORAGE_C);
 		Message title = Message.of("mitigation.warm-storage.title", warm);
-		Message change = Message.of("mitigation.warm-storage.change", warm, Quantity.of(cold.reducingSugarPct(), "%", 1),
-				Quantity.of(c.reducingSugarPct(), "%", 1));
+		Message change = Message.of("mitigation.warm-storage.change", warm,
+				Quantity.of(cold.reducingSugarPct(), "%", 1), Quantity.of(c.reducingSugarPct(), "%", 1));
 		double coldAtSameTime = portionAfter(coldStored, b.setup(), b.settings(), b.result().timeToTargetS());
 		CookResult coldToColour = AcrylamideCook.run(coldStored, b.setup(), b.target(), b.settings());
 		// before: cold-stored tubers cooked as planned; after: the potatoes as entered
-		return new Mitigation("WARM_STORAGE", title, change, COLD_STORAGE_SUGAR.source(), COLD_STORAGE_SUGAR.evidence(), true, null,
-				Mitigation.Basis.SAME_TIME, coldAtSameTime, b.ug(),
+		return new Mitigation("WARM_STORAGE", title, change, COLD_STORAGE_SUGAR.source(), COLD_STORAGE_SUGAR.evidence(),
+				true, null, Mitigation.Basis.SAME_TIME, coldAtSameTime, b.ug(),
 				coldToColour.reached() ? coldToColour.timeToTargetS() / 60 : Double.NaN, b.minutes(), b.ug());
 	}
 
@@ -231,7 +253,9 @@ public final class Mitigations {
 		return r.series().get(r.series().size() - 1).portionAcrylamideUgPerKg();
 	}
 
-	/** The surface with a share of its reducing sugar and of its asparagine leached out. */
+	/**
+	 * The surface with a share of its reducing sugar and of its asparagine leached out.
+	 */
 	static Surface removePrecursors(Surface surface, double sugarFraction, double asparagineFraction) {
 		Composition c = surface.composition();
 		return surface.withComposition(c.withReducingSugarPct(c.reducingSugarPct() * (1 - sugarFraction)))
@@ -239,8 +263,8 @@ public final class Mitigations {
 	}
 
 	public static List<Parameter> parameters() {
-		return List.of(SOAK_REMOVAL, BLANCH_REMOVAL, ASPARAGINASE_REMOVAL, ACID_DIP_UPTAKE, COLD_STORAGE_SUGAR, FRYER_STEP_C,
-				OVEN_PAN_STEP_C, GRILL_STEP_C);
+		return List.of(SOAK_REMOVAL, BLANCH_REMOVAL, ASPARAGINASE_REMOVAL, ACID_DIP_UPTAKE, COLD_STORAGE_SUGAR,
+				FRYER_STEP_C, OVEN_PAN_STEP_C, GRILL_STEP_C);
 	}
 
 }

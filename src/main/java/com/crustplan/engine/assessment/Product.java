@@ -8,22 +8,26 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 
 /**
- * What a surface is sold as, which decides its benchmark level. Where the regulation tells products of
- * one category apart (French fries and crisps are both potato) the surface names its product by key;
- * each category has a default.
+ * What a surface is sold as, which decides its benchmark level. Where the regulation
+ * tells products of one category apart (French fries and crisps are both potato) the
+ * surface names its product by key; each category has a default.
  */
 public enum Product {
 
 	FRENCH_FRIES("french-fries", "French fries (chips)", FoodCategory.POTATO, BenchmarkLevel.FRENCH_FRIES, true),
 	POTATO_CRISPS("crisps", "Potato crisps", FoodCategory.POTATO, BenchmarkLevel.POTATO_CRISPS, false),
-	OTHER_POTATO("roast-potato", "Roast potatoes, rösti, wedges and other potato dishes", FoodCategory.POTATO, null, false),
-	SOFT_BREAD_WHEAT("wheat-bread", "Soft bread, wheat-based", FoodCategory.BREAD, BenchmarkLevel.SOFT_BREAD_WHEAT, true),
-	SOFT_BREAD_OTHER("other-bread", "Soft bread, not wheat-based (rye, mixed grain)", FoodCategory.BREAD, BenchmarkLevel.SOFT_BREAD_OTHER, false),
+	OTHER_POTATO("roast-potato", "Roast potatoes, rösti, wedges and other potato dishes", FoodCategory.POTATO, null,
+			false),
+	SOFT_BREAD_WHEAT("wheat-bread", "Soft bread, wheat-based", FoodCategory.BREAD, BenchmarkLevel.SOFT_BREAD_WHEAT,
+			true),
+	SOFT_BREAD_OTHER("other-bread", "Soft bread, not wheat-based (rye, mixed grain)", FoodCategory.BREAD,
+			BenchmarkLevel.SOFT_BREAD_OTHER, false),
 	CRISPBREAD("crispbread", "Crispbread", FoodCategory.BREAD, BenchmarkLevel.CRISPBREAD, false),
 	CRACKERS("crackers", "Crackers (not potato-based)", FoodCategory.BREAD, BenchmarkLevel.CRACKERS, false),
 	BISCUITS("biscuits", "Biscuits and wafers", FoodCategory.SWEET_DOUGH, BenchmarkLevel.BISCUITS_AND_WAFERS, true),
 	GINGERBREAD("gingerbread", "Gingerbread", FoodCategory.SWEET_DOUGH, BenchmarkLevel.GINGERBREAD, false),
-	SIMILAR_FINE_BAKERY("fine-bakery", "Other fine bakery wares like biscuits", FoodCategory.SWEET_DOUGH, BenchmarkLevel.SIMILAR_FINE_BAKERY, false),
+	SIMILAR_FINE_BAKERY("fine-bakery", "Other fine bakery wares like biscuits", FoodCategory.SWEET_DOUGH,
+			BenchmarkLevel.SIMILAR_FINE_BAKERY, false),
 	MEAT("meat", "Meat", FoodCategory.MEAT, null, true),
 	POULTRY("poultry", "Poultry", FoodCategory.POULTRY_SKIN, null, true),
 	FISH("fish", "Fish", FoodCategory.FISH, null, true),
@@ -70,7 +74,8 @@ public enum Product {
 			return Optional.empty();
 		}
 		if (category == FoodCategory.POTATO) {
-			return Optional.of("Regulation (EU) 2017/2158 sets benchmark levels for French fries and crisps only; roast potatoes, rösti and similar dishes have none. French fries (500 µg/kg) may serve as an orientation.");
+			return Optional
+				.of("Regulation (EU) 2017/2158 sets benchmark levels for French fries and crisps only; roast potatoes, rösti and similar dishes have none. French fries (500 µg/kg) may serve as an orientation.");
 		}
 		return Optional.of("Regulation (EU) 2017/2158 sets no benchmark level for " + label.toLowerCase()
 				+ ": acrylamide forms mainly in carbohydrate-rich foods such as potato and cereal products.");
@@ -98,21 +103,23 @@ public enum Product {
 	}
 
 	/**
-	 * The product with this key for the category; a null or blank key means the category's default.
-	 *
-	 * @throws InvalidInputException naming field {@code product} when the key is not a product of the category
+	 * The product with this key for the category; a null or blank key means the
+	 * category's default.
+	 * @throws InvalidInputException naming field {@code product} when the key is not a
+	 * product of the category
 	 */
 	public static Product forSurface(FoodCategory category, String key) {
 		if (key == null || key.isBlank()) {
 			return defaultFor(category);
 		}
 		for (Product p : values()) {
-			if (p.category == category && (p.key.equalsIgnoreCase(key.trim()) || p.name().equalsIgnoreCase(key.trim()))) {
+			if (p.category == category
+					&& (p.key.equalsIgnoreCase(key.trim()) || p.name().equalsIgnoreCase(key.trim()))) {
 				return p;
 			}
 		}
-		throw new InvalidInputException("product", "'" + key + "' is not a product of " + category.label() + "; use one of "
-				+ of(category).stream().map(Product::key).toList());
+		throw new InvalidInputException("product", "'" + key + "' is not a product of " + category.label()
+				+ "; use one of " + of(category).stream().map(Product::key).toList());
 	}
 
 }

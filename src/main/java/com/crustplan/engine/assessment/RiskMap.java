@@ -17,10 +17,11 @@ import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.message.Message;
 
 /**
- * Set temperature × time for one surface and heat mode: per cell the browning stage reached and the
- * acrylamide zone of the portion, per temperature the time the target colour is reached (the target
- * line). Each temperature row is one engine run recorded every time step of the map, so a cell is
- * exactly what a single run at {@link #settingsFor} shows at that time.
+ * Set temperature × time for one surface and heat mode: per cell the browning stage
+ * reached and the acrylamide zone of the portion, per temperature the time the target
+ * colour is reached (the target line). Each temperature row is one engine run recorded
+ * every time step of the map, so a cell is exactly what a single run at
+ * {@link #settingsFor} shows at that time.
  */
 public record RiskMap(FoodCategory category, Product product, String mode, Message targetDescription,
 		BenchmarkLevel benchmarkOrNull, double timeStepS, List<Row> rows, List<Message> cautions) {
@@ -37,8 +38,8 @@ public record RiskMap(FoodCategory category, Product product, String mode, Messa
 	}
 
 	/**
-	 * One set temperature: its cells over time, the time to the target and the portion's acrylamide there
-	 * (both NaN if the target is not reached within the map).
+	 * One set temperature: its cells over time, the time to the target and the portion's
+	 * acrylamide there (both NaN if the target is not reached within the map).
 	 */
 	public record Row(double temperatureC, double targetTimeS, double targetPortionUgPerKg, List<Cell> cells) {
 
@@ -52,39 +53,52 @@ public record RiskMap(FoodCategory category, Product product, String mode, Messa
 
 	}
 
-	/** One time at one temperature; {@code stageKey} "unbrowned" before the category's first stage. */
+	/**
+	 * One time at one temperature; {@code stageKey} "unbrowned" before the category's
+	 * first stage.
+	 */
 	public record Cell(double timeS, String stageKey, String stageLabel, double browningExtent, double crustUgPerKg,
 			double portionUgPerKg, AcrylamideZone zone) {
 	}
 
 	public static final String UNBROWNED_KEY = "unbrowned";
 
-	/** The engine settings of every row: the base settings recorded every map step up to the map's end. */
+	/**
+	 * The engine settings of every row: the base settings recorded every map step up to
+	 * the map's end.
+	 */
 	public static CookSettings settingsFor(CookSettings base, double timeStepS, double maxTimeS) {
-		// run on to the end of the map whatever the target: the cells past the target line are the point
-		return base.withOutputIntervalS(timeStepS).withHorizonS(maxTimeS).withRecordSeries(true)
+		// run on to the end of the map whatever the target: the cells past the target
+		// line are the point
+		return base.withOutputIntervalS(timeStepS)
+			.withHorizonS(maxTimeS)
+			.withRecordSeries(true)
 			.withRunPastTargetFraction(1e6);
 	}
 
 	/**
-	 * @param template the heat mode and its other settings; its temperature is replaced by each row's
+	 * @param template the heat mode and its other settings; its temperature is replaced
+	 * by each row's
 	 * @param temperaturesC set temperatures, one row each
-	 * @param timeStepS time between columns, s (a multiple of the engine step keeps the columns on exact times)
+	 * @param timeStepS time between columns, s (a multiple of the engine step keeps the
+	 * columns on exact times)
 	 * @param maxTimeS last column, s
 	 */
-	public static RiskMap compute(Surface surface, Product product, HeatSetup template, Target target, double[] temperaturesC,
-			double timeStepS, double maxTimeS, CookSettings base) {
+	public static RiskMap compute(Surface surface, Product product, HeatSetup template, Target target,
+			double[] temperaturesC, double timeStepS, double maxTimeS, CookSettings base) {
 		if (temperaturesC.length == 0 || temperaturesC.length > MAX_TEMPERATURES) {
 			throw new InvalidInputException("temperatures", "give 1 to " + MAX_TEMPERATURES + " temperatures");
 		}
 		if (!(timeStepS > 0) || !(maxTimeS >= timeStepS) || maxTimeS > CookSettings.MAX_HORIZON_S) {
-			throw new InvalidInputException("timeStepS", "the time step must be positive and no longer than the map, at most 6 h");
+			throw new InvalidInputException("timeStepS",
+					"the time step must be positive and no longer than the map, at most 6 h");
 		}
 		if (maxTimeS / timeStepS > MAX_TIMES) {
 			throw new InvalidInputException("timeStepS", "at most " + MAX_TIMES + " time columns: use a longer step");
 		}
 		if (product.category() != surface.category()) {
-			throw new InvalidInputException("product", "'" + product.key() + "' is not a product of " + surface.category().label());
+			throw new InvalidInputException("product",
+					"'" + product.key() + "' is not a product of " + surface.category().label());
 		}
 		FoodCategory category = surface.category();
 		List<BrowningStage> stages = new ArrayList<>(category.stages());
@@ -95,7 +109,8 @@ public record RiskMap(FoodCategory category, Product product, String mode, Messa
 		}
 		BenchmarkLevel benchmark = product.benchmark().orElse(null);
 		CookSettings settings = settingsFor(base, timeStepS, maxTimeS);
-		// rows are independent runs, each owning its simulation: compute them on all cores
+		// rows are independent runs, each owning its simulation: compute them on all
+		// cores
 		List<Row> rows = IntStream.range(0, temperaturesC.length).parallel().mapToObj(j -> {
 			double t = temperaturesC[j];
 			CookResult r = AcrylamideCook.run(surface, HeatSetups.withTemperature(template, t), target, settings);
@@ -104,8 +119,8 @@ public record RiskMap(FoodCategory category, Product product, String mode, Messa
 				int k = stageIndex(stageExtent, s.browningExtent());
 				double portion = s.portionAcrylamideUgPerKg();
 				cells.add(new Cell(s.timeS(), k < 0 ? UNBROWNED_KEY : stages.get(k).key(),
-						k < 0 ? "Unbrowned" : stages.get(k).label(), s.browningExtent(), s.crustAcrylamideUgPerKg(), portion,
-						benchmark == null ? AcrylamideZone.NO_BENCHMARK : benchmark.zoneOf(portion)));
+						k < 0 ? "Unbrowned" : stages.get(k).label(), s.browningExtent(), s.crustAcrylamideUgPerKg(),
+						portion, benchmark == null ? AcrylamideZone.NO_BENCHMARK : benchmark.zoneOf(portion)));
 			}
 			return new Row(t, r.reached() ? r.timeToTargetS() : Double.NaN,
 					r.reached() ? r.portionAcrylamideAtTargetUgPerKg() : Double.NaN, cells);

@@ -5,23 +5,24 @@ import com.crustplan.engine.kinetics.ArrheniusRate;
 import com.crustplan.engine.model.Parameter;
 
 /**
- * A category's Maillard browning kinetics: first-order approach of the browning extent to 1,
- * dB/dt = k(T)·f_aw·f_pH·f_sugar·f_amino·(1 − B), with k Arrhenius and the factors relative to the
- * conditions under which k was measured or calibrated.
+ * A category's Maillard browning kinetics: first-order approach of the browning extent to
+ * 1, dB/dt = k(T)·f_aw·f_pH·f_sugar·f_amino·(1 − B), with k Arrhenius and the factors
+ * relative to the conditions under which k was measured or calibrated.
  */
 public record BrowningKinetics(ArrheniusRate rate, Parameter referenceWaterActivity, Parameter referencePh,
 		Parameter referenceReducingSugarPct, Parameter referenceProteinPct) {
 
 	/**
-	 * pH sensitivity β of log10 k: factor 10^(β(pH − pH_ref)). Martins &amp; van Boekel 2005 (Food Chem
-	 * 92:437) show log k rising about linearly with pH; the slope here is an assumption.
+	 * pH sensitivity β of log10 k: factor 10^(β(pH − pH_ref)). Martins &amp; van Boekel
+	 * 2005 (Food Chem 92:437) show log k rising about linearly with pH; the slope here is
+	 * an assumption.
 	 */
-	public static final Parameter PH_SENSITIVITY = Parameter.assumption("β", "rise of log10 k per pH unit", 0.5,
-			"1/pH", "order 0.3–1 per pH unit, log-linear form of Martins & van Boekel 2005, Food Chem 92:437");
+	public static final Parameter PH_SENSITIVITY = Parameter.assumption("β", "rise of log10 k per pH unit", 0.5, "1/pH",
+			"order 0.3–1 per pH unit, log-linear form of Martins & van Boekel 2005, Food Chem 92:437");
 
 	/**
-	 * Cap on the reactant factor: the first-order dependence on sugar and amino groups is extrapolated at
-	 * most this far beyond the reference composition.
+	 * Cap on the reactant factor: the first-order dependence on sugar and amino groups is
+	 * extrapolated at most this far beyond the reference composition.
 	 */
 	public static final Parameter REACTANT_FACTOR_CAP = Parameter.assumption("f_max",
 			"largest reactant factor relative to the reference composition", 4.0, "–",
@@ -32,8 +33,8 @@ public record BrowningKinetics(ArrheniusRate rate, Parameter referenceWaterActiv
 	}
 
 	/**
-	 * First order in reducing sugar and in amino groups (protein as their proxy), relative to the
-	 * reference composition; zero without either reactant.
+	 * First order in reducing sugar and in amino groups (protein as their proxy),
+	 * relative to the reference composition; zero without either reactant.
 	 */
 	public double reactantFactor(double reducingSugarPct, double proteinPct) {
 		double sugar = reducingSugarPct / referenceReducingSugarPct.value();

@@ -27,8 +27,9 @@ import com.crustplan.engine.water.MoistureDiffusivity;
 import com.crustplan.engine.water.WaterVapour;
 
 /**
- * The model as implemented: every equation with the parameters it uses, read from the same constants
- * the engine runs on, so the model page and the contributor guide cannot drift from the code.
+ * The model as implemented: every equation with the parameters it uses, read from the
+ * same constants the engine runs on, so the model page and the contributor guide cannot
+ * drift from the code.
  */
 public final class ModelCatalogue {
 
@@ -78,18 +79,21 @@ public final class ModelCatalogue {
 		}
 		eq.add(new Equation("Porous foods", "k = k_matrix^(1−ε) · k_gas^ε;  ε = 1 − m·v_matrix / V",
 				"Gas fraction ε from the volume the matrix leaves empty in each control volume: it starts at the category's value and grows as water leaves.",
-				List.of(Parameter.secondary("k_gas", "conductivity of the gas in pores", ThermalProperties.AIR_CONDUCTIVITY,
-						"W/(m·K)", "still air near 100 °C (Incropera, Table A.4)"))));
-		return new ModelSection("Thermal properties from composition", eq,
-				List.of("Choi–Okos fits end at 150 °C; hotter crusts use the 150 °C values.",
-						"Oil taken up in frying and fat rendering out of skin are not modelled.",
-						"The whole thickness has one composition (a surface layer of different make-up is not resolved)."));
+				List.of(Parameter.secondary("k_gas", "conductivity of the gas in pores",
+						ThermalProperties.AIR_CONDUCTIVITY, "W/(m·K)",
+						"still air near 100 °C (Incropera, Table A.4)"))));
+		return new ModelSection("Thermal properties from composition", eq, List.of(
+				"Choi–Okos fits end at 150 °C; hotter crusts use the 150 °C values.",
+				"Oil taken up in frying and fat rendering out of skin are not modelled.",
+				"The whole thickness has one composition (a surface layer of different make-up is not resolved)."));
 	}
 
 	private static ModelSection water() {
 		List<Equation> eq = new ArrayList<>();
-		eq.add(new Equation("Saturation pressure", "p_sat(T): IAPWS-IF97 region 4, eqs. 30 (pressure) and 31 (temperature)",
-				"IAPWS R7-97(2012); vapour treated as an ideal gas, ρv = p/(R_v·T).", List.of(WaterVapour.GAS_CONSTANT)));
+		eq.add(new Equation("Saturation pressure",
+				"p_sat(T): IAPWS-IF97 region 4, eqs. 30 (pressure) and 31 (temperature)",
+				"IAPWS R7-97(2012); vapour treated as an ideal gas, ρv = p/(R_v·T).",
+				List.of(WaterVapour.GAS_CONSTANT)));
 		eq.add(new Equation("Latent heat", "h_fg = 2501 − 2.36·t  kJ/kg  (t in °C)", "A linear fit to steam tables.",
 				List.of(WaterVapour.LATENT_HEAT_0C, WaterVapour.LATENT_HEAT_SLOPE)));
 		eq.add(new Equation("Local boiling", "aw(X)·p_sat(T) ≤ p_atm  for every control volume holding water",
@@ -97,18 +101,21 @@ public final class ModelCatalogue {
 						+ "instead. This gives the 100 °C plateau against a pan or in oil, an evaporation front that recedes into the food, "
 						+ "crust temperatures that climb as aw falls, and wet cores that stay near 100 °C.",
 				List.of()));
-		eq.add(new Equation("Moisture diffusion", "ρ_d·∂X/∂t = ∂/∂x(ρ_d·D·∂X/∂x);  D = D_ref·exp(−Ea/R·(1/T − 1/353.15 K))·X²/(X² + X_c²)",
+		eq.add(new Equation("Moisture diffusion",
+				"ρ_d·∂X/∂t = ∂/∂x(ρ_d·D·∂X/∂x);  D = D_ref·exp(−Ea/R·(1/T − 1/353.15 K))·X²/(X² + X_c²)",
 				"X in kg water per kg dry matter; vapour leaves through the faces.",
-				List.of(MoistureDiffusivity.REFERENCE, MoistureDiffusivity.ACTIVATION_ENERGY, MoistureDiffusivity.CRUST_MOISTURE)));
+				List.of(MoistureDiffusivity.REFERENCE, MoistureDiffusivity.ACTIVATION_ENERGY,
+						MoistureDiffusivity.CRUST_MOISTURE)));
 		for (FoodCategory c : FoodCategory.values()) {
-			eq.add(new Equation("Sorption isotherm: " + c.label(), "X = Xm·C·K·aw / ((1 − K·aw)(1 − K·aw + C·K·aw))  (GAB)",
+			eq.add(new Equation("Sorption isotherm: " + c.label(),
+					"X = Xm·C·K·aw / ((1 − K·aw)(1 − K·aw + C·K·aw))  (GAB)",
 					"Water activity of each layer from its moisture, inverted by the positive root of the GAB quadratic; above X(aw = 1) the water is free.",
 					List.of(c.isotherm().monolayer(), c.isotherm().c(), c.isotherm().k())));
 		}
-		return new ModelSection("Water: vapour, sorption, drying and boiling", eq,
-				List.of("Isotherms measured at 40–50 °C are used at all temperatures (at crust temperatures they overstate how tightly water is held).",
-						"Vapour formed inside the food is taken to leave at once; pressure build-up and puffing are not modelled.",
-						"No shrinkage: each layer keeps its volume as it dries."));
+		return new ModelSection("Water: vapour, sorption, drying and boiling", eq, List.of(
+				"Isotherms measured at 40–50 °C are used at all temperatures (at crust temperatures they overstate how tightly water is held).",
+				"Vapour formed inside the food is taken to leave at once; pressure build-up and puffing are not modelled.",
+				"No shrinkage: each layer keeps its volume as it dries."));
 	}
 
 	private static ModelSection heat() {
@@ -144,7 +151,8 @@ public final class ModelCatalogue {
 
 	private static ModelSection numerics() {
 		List<Equation> eq = new ArrayList<>();
-		eq.add(new Equation("Conduction", "C_i·(T_i' − T_i)/Δt = Σ_j G_ij·(T_j' − T_i') + q_face;  G = 1/(d/2k_i + d/2k_j)",
+		eq.add(new Equation("Conduction",
+				"C_i·(T_i' − T_i)/Δt = Σ_j G_ij·(T_j' − T_i') + q_face;  G = 1/(d/2k_i + d/2k_j)",
 				"Vertex-centred finite volumes through the thickness (half volumes at the faces, so a face node is the surface layer), "
 						+ "backward Euler, tridiagonal solve; face fluxes linearised about the last temperature. Energy is counted: heat in = "
 						+ "sensible + latent + sensible heat carried off by the vapour.",
@@ -178,19 +186,20 @@ public final class ModelCatalogue {
 				List.of(BrowningKinetics.REACTANT_FACTOR_CAP)));
 		eq.add(new Equation("Caramelisation", "k_C = k0,c·exp(−Ea,c/(R·T));  f_s = min(f_max, S/S_ref)",
 				"Sucrose browns by caramelisation alone, significant above about 160 °C.",
-				List.of(Caramelisation.PRE_EXPONENTIAL, Caramelisation.ACTIVATION_ENERGY, Caramelisation.REFERENCE_SUCROSE_PCT)));
+				List.of(Caramelisation.PRE_EXPONENTIAL, Caramelisation.ACTIVATION_ENERGY,
+						Caramelisation.REFERENCE_SUCROSE_PCT)));
 		for (FoodCategory c : FoodCategory.values()) {
 			BrowningKinetics k = c.browning();
 			eq.add(new Equation("Maillard rate: " + c.label(), "k_M = k0·exp(−Ea/(R·T))",
 					"Parameters and the reference conditions of the fit.",
-					List.of(k.rate().preExponential(), k.rate().activationEnergy(), k.referenceWaterActivity(), k.referencePh(),
-							k.referenceReducingSugarPct(), k.referenceProteinPct())));
+					List.of(k.rate().preExponential(), k.rate().activationEnergy(), k.referenceWaterActivity(),
+							k.referencePh(), k.referenceReducingSugarPct(), k.referenceProteinPct())));
 		}
-		return new ModelSection("Browning kinetics", eq,
-				List.of("Reported Maillard activation energies scatter from about 30 to 180 kJ/mol (van Boekel 2001, Nahrung 45:150): "
+		return new ModelSection("Browning kinetics", eq, List.of(
+				"Reported Maillard activation energies scatter from about 30 to 180 kJ/mol (van Boekel 2001, Nahrung 45:150): "
 						+ "several categories borrow the bread crust value and are calibrated to common kitchen practice — calibrate them to your own equipment.",
-						"Colour is predicted at the face only; oxygen, smoke and marinade sugars on the surface are not modelled separately.",
-						"Browning says nothing about whether the inside is safe to eat: check the core with a probe."));
+				"Colour is predicted at the face only; oxygen, smoke and marinade sugars on the surface are not modelled separately.",
+				"Browning says nothing about whether the inside is safe to eat: check the core with a probe."));
 	}
 
 	private static ModelSection acidity() {
@@ -198,28 +207,30 @@ public final class ModelCatalogue {
 		eq.add(new Equation("pH after additions", "ΔpH = (n_base − n_acid) / (β·m)",
 				"Sodium bicarbonate adds one mole of base per mole; citric acid gives about two protons per mole in the food pH range. "
 						+ "β is the category's buffer capacity. Held between the pH limits below.",
-				List.of(Acidity.BICARBONATE_MOLAR_MASS, Acidity.CITRIC_ACID_MOLAR_MASS, Acidity.CITRIC_PROTONS, Acidity.MAX_PH,
-						Acidity.MIN_PH)));
+				List.of(Acidity.BICARBONATE_MOLAR_MASS, Acidity.CITRIC_ACID_MOLAR_MASS, Acidity.CITRIC_PROTONS,
+						Acidity.MAX_PH, Acidity.MIN_PH)));
 		for (FoodCategory c : FoodCategory.values()) {
 			eq.add(new Equation("Buffer capacity: " + c.label(), "β", "Initial gas fraction ε0 listed alongside.",
 					List.of(c.bufferCapacity(), c.initialPorosity())));
 		}
-		return new ModelSection("pH and additions", eq,
-				List.of("Buffer capacities of vegetables and doughs are assumptions; ammonium bicarbonate (which raises acrylamide) is not offered."));
+		return new ModelSection("pH and additions", eq, List
+			.of("Buffer capacities of vegetables and doughs are assumptions; ammonium bicarbonate (which raises acrylamide) is not offered."));
 	}
 
 	private static ModelSection colour() {
 		List<Equation> eq = new ArrayList<>();
-		eq.add(new Equation("Colour path", "L*a*b*(B): straight segments between anchor colours along the browning extent",
+		eq.add(new Equation("Colour path",
+				"L*a*b*(B): straight segments between anchor colours along the browning extent",
 				"Each category's surface runs through its own anchors; stages are defined by L* limits, or by extent where the path is "
 						+ "not monotone in L* (raw red meat lightens as it greys before it browns).",
 				List.of()));
 		eq.add(new Equation("Colour difference", "ΔE*ab = √(ΔL*² + Δa*² + Δb*²)", "CIE 1976.", List.of()));
-		eq.add(new Equation("Swatches", "L*a*b* → XYZ (D65, CIE 1976 inverse) → linear RGB (IEC 61966-2-1 matrix) → sRGB transfer curve",
+		eq.add(new Equation("Swatches",
+				"L*a*b* → XYZ (D65, CIE 1976 inverse) → linear RGB (IEC 61966-2-1 matrix) → sRGB transfer curve",
 				"Out-of-gamut values are clipped.", List.of()));
-		return new ModelSection("Colour", eq, List.of(
-				"Anchor colours of most paths are from memory of published ranges, not a measured colour chart: a screen swatch is a guide, "
-						+ "not a standard; use the kitchen's own colour guide at the station."));
+		return new ModelSection("Colour", eq, List
+			.of("Anchor colours of most paths are from memory of published ranges, not a measured colour chart: a screen swatch is a guide, "
+					+ "not a standard; use the kitchen's own colour guide at the station."));
 	}
 
 }

@@ -8,8 +8,9 @@ import java.util.List;
 import java.util.Locale;
 
 /**
- * Renders the model catalogue as Markdown for the contributor guide. A test keeps the block in
- * DEVELOPERS.md equal to this output, so the guide cannot drift from the constants.
+ * Renders the model catalogue as Markdown for the contributor guide. A test keeps the
+ * block in DEVELOPERS.md equal to this output, so the guide cannot drift from the
+ * constants.
  */
 public final class ModelDocument {
 
@@ -30,9 +31,19 @@ public final class ModelDocument {
 				if (!e.parameters().isEmpty()) {
 					md.append("| symbol | meaning | value | unit | source | evidence |\n|---|---|---|---|---|---|\n");
 					for (Parameter p : e.parameters()) {
-						md.append("| ").append(p.symbol()).append(" | ").append(p.description()).append(" | ")
-							.append(format(p.value())).append(" | ").append(p.unit()).append(" | ")
-							.append(p.source().replace("|", "/")).append(" | ").append(p.evidence().label()).append(" |\n");
+						md.append("| ")
+							.append(p.symbol())
+							.append(" | ")
+							.append(p.description())
+							.append(" | ")
+							.append(format(p.value()))
+							.append(" | ")
+							.append(p.unit())
+							.append(" | ")
+							.append(p.source().replace("|", "/"))
+							.append(" | ")
+							.append(p.evidence().label())
+							.append(" |\n");
 					}
 					md.append('\n');
 				}
@@ -48,7 +59,10 @@ public final class ModelDocument {
 		return md.toString();
 	}
 
-	/** A number as a reader wants it: up to 5 significant digits, no exponent for ordinary sizes. */
+	/**
+	 * A number as a reader wants it: up to 5 significant digits, no exponent for ordinary
+	 * sizes.
+	 */
 	public static String format(double v) {
 		if (v == Math.rint(v) && Math.abs(v) < 1e7) {
 			return String.format(Locale.ROOT, "%d", (long) v);
@@ -57,7 +71,10 @@ public final class ModelDocument {
 		if (a >= 1e-3 && a < 1e6) {
 			return String.format(Locale.ROOT, "%.5g", v).replaceAll("0+$", "").replaceAll("\\.$", "");
 		}
-		return String.format(Locale.ROOT, "%.4e", v).replace("e", "×10^").replace("×10^+0", "×10^").replace("×10^-0", "×10^-");
+		return String.format(Locale.ROOT, "%.4e", v)
+			.replace("e", "×10^")
+			.replace("×10^+0", "×10^")
+			.replace("×10^-0", "×10^-");
 	}
 
 }

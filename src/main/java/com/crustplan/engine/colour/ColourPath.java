@@ -3,9 +3,10 @@ package com.crustplan.engine.colour;
 import java.util.List;
 
 /**
- * The colour a category's surface takes as its browning extent runs from 0 to 1: a polyline through
- * L*a*b* anchor colours at given extents. Colour paths need not be monotone in L* (raw red meat lightens
- * as it greys before it browns), which is why targets are resolved to an extent.
+ * The colour a category's surface takes as its browning extent runs from 0 to 1: a
+ * polyline through L*a*b* anchor colours at given extents. Colour paths need not be
+ * monotone in L* (raw red meat lightens as it greys before it browns), which is why
+ * targets are resolved to an extent.
  */
 public final class ColourPath {
 
@@ -73,8 +74,9 @@ public final class ColourPath {
 	}
 
 	/**
-	 * The extent at which the surface first darkens to L* = {@code lightness} after its palest point, or
-	 * NaN if the path never gets that dark (or the target is paler than the path's palest colour).
+	 * The extent at which the surface first darkens to L* = {@code lightness} after its
+	 * palest point, or NaN if the path never gets that dark (or the target is paler than
+	 * the path's palest colour).
 	 */
 	public double extentAtLightness(double lightness) {
 		double start = extentOfPalest();

@@ -12,8 +12,9 @@ public record Lab(double lightness, double a, double b) {
 	}
 
 	/**
-	 * Browning index BI = 100(x − 0.31)/0.17 with x = (a* + 1.75L*)/(5.645L* + a* − 3.012b*), as used in
-	 * the food literature (Buera et al. 1986; Maskan 2001 — quoted by secondary sources).
+	 * Browning index BI = 100(x − 0.31)/0.17 with x = (a* + 1.75L*)/(5.645L* + a* −
+	 * 3.012b*), as used in the food literature (Buera et al. 1986; Maskan 2001 — quoted
+	 * by secondary sources).
 	 */
 	public double browningIndex() {
 		double x = (a + 1.75 * lightness) / (5.645 * lightness + a - 3.012 * b);

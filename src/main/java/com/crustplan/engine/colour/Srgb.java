@@ -1,14 +1,17 @@
 package com.crustplan.engine.colour;
 
 /**
- * An sRGB colour with components in [0, 1], converted from CIE L*a*b* by the CIE 1976 inverse to XYZ
- * (D65 white) and the IEC 61966-2-1 matrix and transfer curve. Out-of-gamut values are clipped.
+ * An sRGB colour with components in [0, 1], converted from CIE L*a*b* by the CIE 1976
+ * inverse to XYZ (D65 white) and the IEC 61966-2-1 matrix and transfer curve.
+ * Out-of-gamut values are clipped.
  */
 public record Srgb(double red, double green, double blue) {
 
 	// D65 reference white, 2° observer, Y = 1 (CIE 15:2004, Table T.3 via IEC 61966-2-1).
 	private static final double XN = 0.95047;
+
 	private static final double YN = 1.0;
+
 	private static final double ZN = 1.08883;
 
 	// CIE 1976: ε = (6/29)³, κ-form inverse (CIE 15:2004, §8.2.1).

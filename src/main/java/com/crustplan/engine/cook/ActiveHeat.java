@@ -5,8 +5,8 @@ import com.crustplan.engine.heat.FaceSchedule;
 import com.crustplan.engine.heat.HeatedBody;
 
 /**
- * The heat the food is in now: the current step's face schedule, on a clock that starts with the step
- * (a flip every 60 s counts from when the food went into that pan).
+ * The heat the food is in now: the current step's face schedule, on a clock that starts
+ * with the step (a flip every 60 s counts from when the food went into that pan).
  */
 final class ActiveHeat {
 
@@ -28,12 +28,18 @@ final class ActiveHeat {
 		return schedule.at(face, timeS - startS);
 	}
 
-	/** The next time after timeS (on the cook's clock) at which the faces' conditions change. */
+	/**
+	 * The next time after timeS (on the cook's clock) at which the faces' conditions
+	 * change.
+	 */
 	double nextChangeAfter(double timeS) {
 		return startS + schedule.nextChangeAfter(timeS - startS);
 	}
 
-	/** The pan or oil of the current heat, where it is a body whose temperature moves; null otherwise. */
+	/**
+	 * The pan or oil of the current heat, where it is a body whose temperature moves;
+	 * null otherwise.
+	 */
 	HeatedBody body() {
 		return schedule.body();
 	}

@@ -5,10 +5,11 @@ import com.crustplan.engine.heat.HeatedBody;
 import com.crustplan.engine.layers.HeatConduction;
 
 /**
- * One time step of a cook, implicit (backward Euler) in heat and moisture: (1) properties from
- * composition, temperature and moisture; (2) heat conduction with the faces' exchange linearised and
- * (3) local boiling solved with it; (4) moisture diffusion with the face's evaporation implicit in
- * moisture; then the layer reaction, and (5) browning at each face. Owns its scratch arrays: one per run.
+ * One time step of a cook, implicit (backward Euler) in heat and moisture: (1) properties
+ * from composition, temperature and moisture; (2) heat conduction with the faces'
+ * exchange linearised and (3) local boiling solved with it; (4) moisture diffusion with
+ * the face's evaporation implicit in moisture; then the layer reaction, and (5) browning
+ * at each face. Owns its scratch arrays: one per run.
  */
 final class BackwardEulerStep {
 
@@ -52,7 +53,10 @@ final class BackwardEulerStep {
 		state.time = now + dt;
 	}
 
-	/** A pan or fryer with a body gives up what the faces touching it took, and its heat input answers. */
+	/**
+	 * A pan or fryer with a body gives up what the faces touching it took, and its heat
+	 * input answers.
+	 */
 	private void drawOnBody(double now, double dt) {
 		HeatedBody body = schedule.body();
 		if (body == null) {

@@ -1,9 +1,10 @@
 package com.crustplan.engine.cook;
 
 /**
- * A discrete event of a cook: a value of the moment crossing a threshold, upwards (browning reaching a
- * target, the core reaching a temperature) or downwards (a face drying). What happens when it fires is
- * an {@link EventHandler}'s business, not the event's.
+ * A discrete event of a cook: a value of the moment crossing a threshold, upwards
+ * (browning reaching a target, the core reaching a temperature) or downwards (a face
+ * drying). What happens when it fires is an {@link EventHandler}'s business, not the
+ * event's.
  */
 public interface CookEvent {
 
@@ -11,7 +12,10 @@ public interface CookEvent {
 
 	double threshold();
 
-	/** True when the event fires as the value rises to the threshold, false as it falls to it. */
+	/**
+	 * True when the event fires as the value rises to the threshold, false as it falls to
+	 * it.
+	 */
 	default boolean rising() {
 		return true;
 	}
@@ -21,7 +25,10 @@ public interface CookEvent {
 		return rising() ? value(moment) >= threshold() : value(moment) <= threshold();
 	}
 
-	/** Where in the step the value crossed the threshold, 0 (its start) to 1 (its end), linearly. */
+	/**
+	 * Where in the step the value crossed the threshold, 0 (its start) to 1 (its end),
+	 * linearly.
+	 */
 	default double crossing(StepInterpolator step) {
 		double before = value(step.previous());
 		double after = value(step.current());
@@ -43,7 +50,10 @@ public interface CookEvent {
 		return new Crossing(Quantity.SURFACE_K, surfaceK, true);
 	}
 
-	/** Face 0 has dried: its water activity falls to the threshold (standing water gone, layer drying). */
+	/**
+	 * Face 0 has dried: its water activity falls to the threshold (standing water gone,
+	 * layer drying).
+	 */
 	static CookEvent faceDried(double waterActivity) {
 		return new Crossing(Quantity.SURFACE_WATER_ACTIVITY, waterActivity, false);
 	}

@@ -6,8 +6,9 @@ import com.crustplan.engine.colour.Lab;
 import com.crustplan.engine.message.Message;
 
 /**
- * What a run predicts: whether and when the target colour is reached, the series for charts, and the
- * assumptions it rests on. Times are NaN where the target was not reached.
+ * What a run predicts: whether and when the target colour is reached, the series for
+ * charts, and the assumptions it rests on. Times are NaN where the target was not
+ * reached.
  */
 public record CookResult(Outcome outcome, Message explanation, double timeToTargetS, double targetExtent,
 		Lab targetColour, double ph, double coreTemperatureAtTargetC, double crustAcrylamideAtTargetUgPerKg,
@@ -23,9 +24,12 @@ public record CookResult(Outcome outcome, Message explanation, double timeToTarg
 		return outcome == Outcome.REACHED;
 	}
 
-	/** The state through the thickness at the end of the run (for energy checks and follow-on runs). */
-	public record FinalState(double[] positionM, double[] temperatureK, double[] moistureDryBasis, double[] dryMassKgPerM2,
-			double[] standingWaterKgPerM2) {
+	/**
+	 * The state through the thickness at the end of the run (for energy checks and
+	 * follow-on runs).
+	 */
+	public record FinalState(double[] positionM, double[] temperatureK, double[] moistureDryBasis,
+			double[] dryMassKgPerM2, double[] standingWaterKgPerM2) {
 
 		public FinalState {
 			positionM = positionM.clone();

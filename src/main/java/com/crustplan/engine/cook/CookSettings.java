@@ -1,8 +1,8 @@
 package com.crustplan.engine.cook;
 
 /**
- * Numerical and reporting settings of a run. Defaults are justified by the grid and step convergence
- * table in the README (Performance section).
+ * Numerical and reporting settings of a run. Defaults are justified by the grid and step
+ * convergence table in the README (Performance section).
  */
 public record CookSettings(int nodes, double timeStepS, double outputIntervalS, double horizonS,
 		double runPastTargetFraction, boolean recordSeries) {
@@ -15,7 +15,10 @@ public record CookSettings(int nodes, double timeStepS, double outputIntervalS, 
 
 	public static final double DEFAULT_HORIZON_S = 3600;
 
-	/** After the target, run on by this share of the time to target so charts show what overcooking does. */
+	/**
+	 * After the target, run on by this share of the time to target so charts show what
+	 * overcooking does.
+	 */
 	public static final double DEFAULT_RUN_PAST_TARGET = 0.25;
 
 	public static final double MAX_HORIZON_S = 6 * 3600;
@@ -39,8 +42,8 @@ public record CookSettings(int nodes, double timeStepS, double outputIntervalS, 
 	}
 
 	public static CookSettings defaults() {
-		return new CookSettings(DEFAULT_NODES, DEFAULT_TIME_STEP_S, DEFAULT_OUTPUT_INTERVAL_S,
-				DEFAULT_HORIZON_S, DEFAULT_RUN_PAST_TARGET, true);
+		return new CookSettings(DEFAULT_NODES, DEFAULT_TIME_STEP_S, DEFAULT_OUTPUT_INTERVAL_S, DEFAULT_HORIZON_S,
+				DEFAULT_RUN_PAST_TARGET, true);
 	}
 
 	public CookSettings withNodes(int n) {
@@ -63,7 +66,10 @@ public record CookSettings(int nodes, double timeStepS, double outputIntervalS, 
 		return new CookSettings(nodes, timeStepS, outputIntervalS, horizonS, f, recordSeries);
 	}
 
-	/** Without series only the summary is kept: for maps and planners that run the engine many times. */
+	/**
+	 * Without series only the summary is kept: for maps and planners that run the engine
+	 * many times.
+	 */
 	public CookSettings withRecordSeries(boolean record) {
 		return new CookSettings(nodes, timeStepS, outputIntervalS, horizonS, runPastTargetFraction, record);
 	}

@@ -14,10 +14,11 @@ import com.crustplan.engine.message.Message;
 import com.crustplan.engine.properties.ThermalProperties;
 
 /**
- * One cook of one surface in one heat setup: the driver that wires the state, the stepper, the
- * listeners and the events. It marches in backward-Euler steps, landing exactly on output times and
- * flips, until the target colour (and a little past it) or the horizon. A run owns all its arrays: make
- * a new simulation per run, never share one between threads.
+ * One cook of one surface in one heat setup: the driver that wires the state, the
+ * stepper, the listeners and the events. It marches in backward-Euler steps, landing
+ * exactly on output times and flips, until the target colour (and a little past it) or
+ * the horizon. A run owns all its arrays: make a new simulation per run, never share one
+ * between threads.
  */
 public final class CookSimulation {
 
@@ -51,19 +52,22 @@ public final class CookSimulation {
 		Grid grid = new Grid(surface.thicknessMm() / 1000, settings.nodes(), Grid.DEFAULT_CLUSTERING);
 		double x0 = surface.composition().moistureDryBasis();
 		MatrixProperties properties = new MatrixProperties(surface.composition().dryMatterFractions(), grid.size());
-		double matrixVolume = ThermalProperties.specificVolume(properties.massFractions(x0), surface.initialTemperatureC());
+		double matrixVolume = ThermalProperties.specificVolume(properties.massFractions(x0),
+				surface.initialTemperatureC());
 		double bulkDensity = (1 - surface.category().initialPorosity().value()) / matrixVolume;
-		this.state = new CookState(grid, surface.category().isotherm(), surface.initialTemperatureC() + 273.15, x0, bulkDensity,
-				surface.surfaceWaterGPerM2() / 1000);
+		this.state = new CookState(grid, surface.category().isotherm(), surface.initialTemperatureC() + 273.15, x0,
+				bulkDensity, surface.surfaceWaterGPerM2() / 1000);
 		this.reaction = reaction.start(surface, grid);
 		this.stepper = new BackwardEulerStep(state, surface, heat, properties, this.reaction, account);
 	}
 
 	/**
-	 * A cook ready to run, to which listeners and events can be added first (each run is one-shot):
+	 * A cook ready to run, to which listeners and events can be added first (each run is
+	 * one-shot):
 	 * {@code CookSimulation.of(surface, setup, settings).listen(l).on(event, handler).run(target)}.
 	 */
-	public static CookSimulation of(Surface surface, HeatSetup setup, CookSettings settings, LayerReaction.Factory reaction) {
+	public static CookSimulation of(Surface surface, HeatSetup setup, CookSettings settings,
+			LayerReaction.Factory reaction) {
 		return new CookSimulation(surface, setup, settings, reaction);
 	}
 
@@ -79,31 +83,42 @@ public final class CookSimulation {
 		return this;
 	}
 
-	/** The pan or oil of the current heat where it is a body that moves under the load (its ledger), else null. */
+	/**
+	 * The pan or oil of the current heat where it is a body that moves under the load
+	 * (its ledger), else null.
+	 */
 	public HeatedBody heatSourceBody() {
 		return heat.body();
 	}
 
-	/** Runs to the target (and a little past it), to the horizon, or until an event handler stops it. */
+	/**
+	 * Runs to the target (and a little past it), to the horizon, or until an event
+	 * handler stops it.
+	 */
 	public CookResult run(Target target) {
 		return march(target.extentFor(surface.category()));
 	}
 
-	/** Runs a cook to the target (and a little past it) or to the horizon, with no layer reaction. */
+	/**
+	 * Runs a cook to the target (and a little past it) or to the horizon, with no layer
+	 * reaction.
+	 */
 	public static CookResult run(Surface surface, HeatSetup setup, Target target, CookSettings settings) {
 		return run(surface, setup, target, settings, LayerReaction.NONE);
 	}
 
-	/** Runs a cook with a reaction stepped in every layer (acrylamide formation, for one). */
+	/**
+	 * Runs a cook with a reaction stepped in every layer (acrylamide formation, for one).
+	 */
 	public static CookResult run(Surface surface, HeatSetup setup, Target target, CookSettings settings,
 			LayerReaction.Factory reaction) {
 		return of(surface, setup, settings, reaction).run(target);
 	}
 
 	/**
-	 * As {@link #run(Surface, HeatSetup, Target, CookSettings, LayerReaction.Factory)}, handing the live state
-	 * through the thickness to {@code afterEachStep} after every time step (for fitting tools and tests;
-	 * keep it cheap).
+	 * As {@link #run(Surface, HeatSetup, Target, CookSettings, LayerReaction.Factory)},
+	 * handing the live state through the thickness to {@code afterEachStep} after every
+	 * time step (for fitting tools and tests; keep it cheap).
 	 */
 	public static CookResult run(Surface surface, HeatSetup setup, Target target, CookSettings settings,
 			LayerReaction.Factory reaction, Consumer<? super Layers> afterEachStep) {
@@ -120,16 +135,17 @@ public final class CookSimulation {
 	}
 
 	/**
-	 * Runs a cook in steps, each held until its end; the state carries over from step to step. The plan's
-	 * targets, a colour and a core temperature (either may be null), are recorded where they are reached;
-	 * they do not end the cook.
+	 * Runs a cook in steps, each held until its end; the state carries over from step to
+	 * step. The plan's targets, a colour and a core temperature (either may be null), are
+	 * recorded where they are reached; they do not end the cook.
 	 */
 	public static StepsResult runSteps(Surface surface, List<CookStep> steps, Target colour, Double coreTargetC,
 			CookSettings settings, LayerReaction.Factory reaction) {
 		if (steps.isEmpty()) {
 			throw new InvalidInputException("steps", "a plan needs at least one step");
 		}
-		return new CookSimulation(surface, steps.get(0).setup(), settings, reaction).marchSteps(steps, colour, coreTargetC);
+		return new CookSimulation(surface, steps.get(0).setup(), settings, reaction).marchSteps(steps, colour,
+				coreTargetC);
 	}
 
 	private CookResult march(double targetExtent) {
@@ -168,10 +184,11 @@ public final class CookSimulation {
 			CookStep.Ending[] endedBy = { CookStep.Ending.TIME };
 			List<Watch> ends = new ArrayList<>();
 			if (step.colour() != null) {
-				ends.add(new Watch(CookEvent.targetColourReached(step.colour().extentFor(surface.category())), (s, f) -> {
-					endedBy[0] = CookStep.Ending.COLOUR;
-					return s.current().timeS();
-				}));
+				ends.add(new Watch(CookEvent.targetColourReached(step.colour().extentFor(surface.category())),
+						(s, f) -> {
+							endedBy[0] = CookStep.Ending.COLOUR;
+							return s.current().timeS();
+						}));
 			}
 			if (step.coreTemperatureC() != null) {
 				ends.add(new Watch(CookEvent.coreTemperatureReached(step.coreTemperatureC() + 273.15), (s, f) -> {
@@ -203,10 +220,15 @@ public final class CookSimulation {
 				core.reached() ? core.surfaceExtent() : Double.NaN);
 	}
 
-	/** When the surface passed the setup's limit and the cook stopped, s (NaN if it did not). */
+	/**
+	 * When the surface passed the setup's limit and the cook stopped, s (NaN if it did
+	 * not).
+	 */
 	private double surfaceLimitAtS = Double.NaN;
 
-	/** A setup with a surface limit (a grill) stops the cook where the surface passes it. */
+	/**
+	 * A setup with a surface limit (a grill) stops the cook where the surface passes it.
+	 */
 	private void watchSurfaceLimit(HeatSetup s) {
 		double limitC = s.surfaceLimitC();
 		if (Double.isFinite(limitC)) {
@@ -274,8 +296,8 @@ public final class CookSimulation {
 			l.finish(state, interpolator);
 		}
 		boolean noColourTarget = Double.isNaN(targetExtent);
-		Outcome outcome = !target.reached() && !Double.isNaN(surfaceLimitAtS) ? Outcome.SURFACE_LIMIT
-				: CookSummary.outcome(target.reached(), stepper.browning().canBrown(), watch.maxSurfaceK(), watch.everDry());
+		Outcome outcome = !target.reached() && !Double.isNaN(surfaceLimitAtS) ? Outcome.SURFACE_LIMIT : CookSummary
+			.outcome(target.reached(), stepper.browning().canBrown(), watch.maxSurfaceK(), watch.everDry());
 		Message explanation = CookSummary.explain(outcome, watch.maxSurfaceK(), state.browningExtent(0), state.time);
 		List<Message> assumptions = new ArrayList<>(heatAssumptions);
 		assumptions.addAll(CookSummary.surfaceAssumptions(surface));
@@ -294,13 +316,17 @@ public final class CookSimulation {
 		return next;
 	}
 
-	/** Between the coldest start (−20 °C) and the hottest element (1200 °C), with margin: else the step failed. */
+	/**
+	 * Between the coldest start (−20 °C) and the hottest element (1200 °C), with margin:
+	 * else the step failed.
+	 */
 	private void checkPhysical() {
 		if (!physical(state.surfaceK()) || !physical(state.otherFaceK()) || !physical(state.coreK())) {
-			throw new InvalidInputException("surface", String.format(
-					"the model could not follow this cook (a %.1f mm piece with %.0f g/m² of standing water): "
-							+ "use a thicker piece, less standing water or a gentler heat",
-					surface.thicknessMm(), surface.surfaceWaterGPerM2()));
+			throw new InvalidInputException("surface",
+					String.format(
+							"the model could not follow this cook (a %.1f mm piece with %.0f g/m² of standing water): "
+									+ "use a thicker piece, less standing water or a gentler heat",
+							surface.thicknessMm(), surface.surfaceWaterGPerM2()));
 		}
 	}
 

@@ -5,13 +5,16 @@ import com.crustplan.engine.layers.Layers;
 import com.crustplan.engine.water.GabIsotherm;
 
 /**
- * What a cook knows at one instant: per control volume its temperature, moisture, dry matter and
- * volume; per face its standing water, browning extent and boiling flux; and the time. The stepper
- * updates it in place; everything else reads it through {@link Layers} or the accessors here.
+ * What a cook knows at one instant: per control volume its temperature, moisture, dry
+ * matter and volume; per face its standing water, browning extent and boiling flux; and
+ * the time. The stepper updates it in place; everything else reads it through
+ * {@link Layers} or the accessors here.
  */
 public final class CookState implements Layers {
 
-	/** Residual moisture a node keeps, kg/kg d.b.: bone-dry is outside the isotherm fits. */
+	/**
+	 * Residual moisture a node keeps, kg/kg d.b.: bone-dry is outside the isotherm fits.
+	 */
 	static final double MIN_MOISTURE = 1e-3;
 
 	private final Grid grid;
@@ -70,12 +73,18 @@ public final class CookState implements Layers {
 		return isotherm;
 	}
 
-	/** Water activity at a face: 1 while standing water covers it, else the isotherm's at its node. */
+	/**
+	 * Water activity at a face: 1 while standing water covers it, else the isotherm's at
+	 * its node.
+	 */
 	double faceWaterActivity(int face) {
 		return faces[face].standingWater > 0 ? 1 : isotherm.waterActivity(moisture[faceNode(face)]);
 	}
 
-	/** Water a layer can still boil off, kg/m²: standing water on its face and its own above the residue. */
+	/**
+	 * Water a layer can still boil off, kg/m²: standing water on its face and its own
+	 * above the residue.
+	 */
 	double availableWater(int i) {
 		double w = Math.max(0, (moisture[i] - MIN_MOISTURE) * dryMass[i]);
 		int face = faceOf(i);
@@ -172,7 +181,10 @@ public final class CookState implements Layers {
 		return time;
 	}
 
-	/** What each heated face carries besides its node: standing water, browning, the boiling under it. */
+	/**
+	 * What each heated face carries besides its node: standing water, browning, the
+	 * boiling under it.
+	 */
 	static final class Face {
 
 		/** Standing water, kg/m². */
@@ -181,7 +193,10 @@ public final class CookState implements Layers {
 		/** Browning extent, 0–1. */
 		double browningExtent;
 
-		/** Water boiled off under this half of the piece in the last step, kg/(m²·s): it stirs a fryer's oil. */
+		/**
+		 * Water boiled off under this half of the piece in the last step, kg/(m²·s): it
+		 * stirs a fryer's oil.
+		 */
 		double boilingFlux;
 
 	}

@@ -4,13 +4,15 @@ import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.input.InvalidInputException;
 
 /**
- * One step of a cook in several steps (sear, oven, rest): a heat setup held until the step's end, which
- * is a time, a surface colour, a core temperature, or whichever of them comes first.
+ * One step of a cook in several steps (sear, oven, rest): a heat setup held until the
+ * step's end, which is a time, a surface colour, a core temperature, or whichever of them
+ * comes first.
  *
  * @param setup the heat; its flips count from the start of the step
  * @param maxDurationS the longest the step lasts, s
  * @param colour ends the step when face 0 reaches this colour (null: not by colour)
- * @param coreTemperatureC ends the step when the centre reaches this temperature (null: not by core)
+ * @param coreTemperatureC ends the step when the centre reaches this temperature (null:
+ * not by core)
  */
 public record CookStep(HeatSetup setup, double maxDurationS, Target colour, Double coreTemperatureC) {
 
@@ -24,7 +26,8 @@ public record CookStep(HeatSetup setup, double maxDurationS, Target colour, Doub
 		if (!(maxDurationS > 0 && maxDurationS <= MAX_DURATION_S)) {
 			throw new InvalidInputException("minutes", "a step lasts more than 0 and at most 360 minutes");
 		}
-		// −20 °C (frozen) to 120 °C: a core holding water does not pass its boiling point by much
+		// −20 °C (frozen) to 120 °C: a core holding water does not pass its boiling point
+		// by much
 		if (coreTemperatureC != null && !(coreTemperatureC > -20 && coreTemperatureC <= 120)) {
 			throw new InvalidInputException("coreTemperatureC", "a core target lies above −20 °C and at most 120 °C");
 		}

@@ -28,7 +28,8 @@ final class CookSummary {
 		if (!everDry || maxSurfaceK < 378.15) {
 			return Outcome.WET_PLATEAU;
 		}
-		// below ≈ 130 °C even a dry surface browns an order of magnitude slower than at 150 °C (Ea ≈ 64 kJ/mol)
+		// below ≈ 130 °C even a dry surface browns an order of magnitude slower than at
+		// 150 °C (Ea ≈ 64 kJ/mol)
 		if (maxSurfaceK < 403.15) {
 			return Outcome.TOO_COOL;
 		}

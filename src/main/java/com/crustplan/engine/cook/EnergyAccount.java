@@ -2,7 +2,10 @@ package com.crustplan.engine.cook;
 
 import com.crustplan.engine.water.WaterVapour;
 
-/** The running energy ledger of a cook: heat in through the faces and the enthalpy the vapour carries off. */
+/**
+ * The running energy ledger of a cook: heat in through the faces and the enthalpy the
+ * vapour carries off.
+ */
 final class EnergyAccount {
 
 	private double heatIn;

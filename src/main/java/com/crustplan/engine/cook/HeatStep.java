@@ -6,19 +6,24 @@ import com.crustplan.engine.layers.HeatConduction;
 import com.crustplan.engine.water.WaterVapour;
 
 /**
- * Step (2): heat conduction through the thickness with each face's exchange linearised about an
- * estimate of its new temperature, q ≈ q* + q'(T − T*) − h_fg(J* + J'(T − T*)) = b − a·T, re-linearised
- * while the estimate moves; local boiling solved with it; then standing water evaporates (or steam
- * condenses on a wet face into standing water).
+ * Step (2): heat conduction through the thickness with each face's exchange linearised
+ * about an estimate of its new temperature, q ≈ q* + q'(T − T*) − h_fg(J* + J'(T − T*)) =
+ * b − a·T, re-linearised while the estimate moves; local boiling solved with it; then
+ * standing water evaporates (or steam condenses on a wet face into standing water).
  */
 final class HeatStep {
 
-	/** Faces are re-linearised until their temperature estimate moves less than this in a pass. */
+	/**
+	 * Faces are re-linearised until their temperature estimate moves less than this in a
+	 * pass.
+	 */
 	private static final double FACE_LINEARISATION_K = 1.0;
 
 	private static final int MAX_FACE_PASSES = 4;
 
-	/** A face this wet gathers condensing steam as standing water rather than sorbing it. */
+	/**
+	 * A face this wet gathers condensing steam as standing water rather than sorbing it.
+	 */
 	private static final double WET_FACE_AW = 0.99;
 
 	private final CookState state;
@@ -51,12 +56,14 @@ final class HeatStep {
 
 	private final double[] evaporationSlope = new double[2];
 
-	/** Heat into each face over the last step, W/m² (what a pan or the oil gave up to it). */
+	/**
+	 * Heat into each face over the last step, W/m² (what a pan or the oil gave up to it).
+	 */
 	final double[] faceHeatFlux = new double[2];
 
 	/**
-	 * Evaporation from each bare face into the gas, kg/(m²·s), as this step drew latent heat for it; the
-	 * moisture step takes the water from the face node.
+	 * Evaporation from each bare face into the gas, kg/(m²·s), as this step drew latent
+	 * heat for it; the moisture step takes the water from the face node.
 	 */
 	final double[] faceEvaporation = new double[2];
 
@@ -82,10 +89,11 @@ final class HeatStep {
 			for (int face = 0; face < 2; face++) {
 				linearise(face, schedule.at(face, now));
 			}
-			conduction.assemble(temperature, properties.capacity, properties.conductivity, dt, faceSlope[0], faceSource[0],
-					faceSlope[1], faceSource[1]);
+			conduction.assemble(temperature, properties.capacity, properties.conductivity, dt, faceSlope[0],
+					faceSource[0], faceSlope[1], faceSource[1]);
 			boiling.solve(solution, dt);
-			double moved = Math.max(Math.abs(solution[0] - linearisedAt[0]), Math.abs(solution[n - 1] - linearisedAt[1]));
+			double moved = Math.max(Math.abs(solution[0] - linearisedAt[0]),
+					Math.abs(solution[n - 1] - linearisedAt[1]));
 			if (moved < FACE_LINEARISATION_K) {
 				break;
 			}
@@ -94,7 +102,8 @@ final class HeatStep {
 		}
 		boiling.apply(solution, dt);
 		for (int face = 0; face < 2; face++) {
-			// the face fluxes as the solve had them (a layer that ran dry is warmed only afterwards)
+			// the face fluxes as the solve had them (a layer that ran dry is warmed only
+			// afterwards)
 			double dT = solution[state.faceNode(face)] - linearisedAt[face];
 			faceHeatFlux[face] = heatFluxAtStart[face] + heatSlope[face] * dT;
 			account.heatIn(faceHeatFlux[face] * dt);
@@ -121,8 +130,9 @@ final class HeatStep {
 	}
 
 	/**
-	 * Evaporation from standing water, or steam condensing on a wet face into standing water; vapour a dry
-	 * face takes up from the air is left to the moisture step, which sorbs it into the layer.
+	 * Evaporation from standing water, or steam condensing on a wet face into standing
+	 * water; vapour a dry face takes up from the air is left to the moisture step, which
+	 * sorbs it into the layer.
 	 */
 	private void standingWater(int face, double dt) {
 		CookState.Face f = state.face(face);
@@ -132,7 +142,8 @@ final class HeatStep {
 			double fromFilm = Math.min(f.standingWater, m);
 			f.standingWater -= fromFilm;
 			account.vapour(fromFilm, state.temperature[i]);
-			double rest = (m - fromFilm) / dt; // what the film could not supply comes from the node
+			double rest = (m - fromFilm) / dt; // what the film could not supply comes
+												// from the node
 			if (rest > 0) {
 				double take = Math.min(rest * dt, (state.moisture[i] - CookState.MIN_MOISTURE) * state.dryMass[i]);
 				state.moisture[i] -= take / state.dryMass[i];

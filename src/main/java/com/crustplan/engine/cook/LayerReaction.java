@@ -5,13 +5,17 @@ import com.crustplan.engine.layers.Grid;
 import com.crustplan.engine.layers.Layers;
 
 /**
- * A reaction the cook runs in every layer after each step, from that layer's temperature and water
- * (acrylamide formation is one). The cook knows nothing of its chemistry: it steps it and reports its
- * level in the outer crust and in the whole portion, in the reaction's own unit (µg/kg for acrylamide).
+ * A reaction the cook runs in every layer after each step, from that layer's temperature
+ * and water (acrylamide formation is one). The cook knows nothing of its chemistry: it
+ * steps it and reports its level in the outer crust and in the whole portion, in the
+ * reaction's own unit (µg/kg for acrylamide).
  */
 public interface LayerReaction {
 
-	/** Advances the reaction over a step of dt seconds that has just brought the layers to their state. */
+	/**
+	 * Advances the reaction over a step of dt seconds that has just brought the layers to
+	 * their state.
+	 */
 	void step(Layers layers, double dt);
 
 	/** Level in the outer crust of face 0. */

@@ -4,11 +4,11 @@ import com.crustplan.engine.layers.HeatConduction;
 import com.crustplan.engine.water.WaterVapour;
 
 /**
- * Step (3), solved together with conduction: a layer holding water cannot be hotter than its boiling
- * point, where aw·p_sat(T) = 1 atm. Layers the plain solve would push above it are pinned there and
- * solved again; the heat each pinned layer receives beyond what it stores boils its water off (standing
- * water first). This gives the 100 °C plateau against a pan or in oil and an evaporation front that
- * recedes into the food.
+ * Step (3), solved together with conduction: a layer holding water cannot be hotter than
+ * its boiling point, where aw·p_sat(T) = 1 atm. Layers the plain solve would push above
+ * it are pinned there and solved again; the heat each pinned layer receives beyond what
+ * it stores boils its water off (standing water first). This gives the 100 °C plateau
+ * against a pan or in oil and an evaporation front that recedes into the food.
  */
 final class LocalBoiling {
 
@@ -41,7 +41,10 @@ final class LocalBoiling {
 		pinnedTemperature = new double[n];
 	}
 
-	/** Solves the assembled conduction step into {@code solution}, pinning layers at their boiling point. */
+	/**
+	 * Solves the assembled conduction step into {@code solution}, pinning layers at their
+	 * boiling point.
+	 */
 	void solve(double[] solution, double dt) {
 		conduction.solve(solution, null, null);
 		boolean any = false;
@@ -69,14 +72,17 @@ final class LocalBoiling {
 				}
 				double surplus = conduction.surplus(i, solution);
 				if (surplus < 0) {
-					pinned[i] = false; // it loses heat at the boiling point: it is not boiling after all
+					pinned[i] = false; // it loses heat at the boiling point: it is not
+										// boiling after all
 					changed = true;
 				}
 				else if (surplus * dt > state.availableWater(i) * WaterVapour.latentHeat(pinnedTemperature[i])) {
-					// it boils dry within the step: all its water goes, the rest of the heat moves on
+					// it boils dry within the step: all its water goes, the rest of the
+					// heat moves on
 					pinned[i] = false;
 					ranDry[i] = true;
-					conduction.addSource(i, -state.availableWater(i) * WaterVapour.latentHeat(pinnedTemperature[i]) / dt);
+					conduction.addSource(i,
+							-state.availableWater(i) * WaterVapour.latentHeat(pinnedTemperature[i]) / dt);
 					changed = true;
 				}
 			}
@@ -87,8 +93,8 @@ final class LocalBoiling {
 	}
 
 	/**
-	 * Takes the solved temperatures into the state and boils off what the pinned and dried-out layers shed;
-	 * leaves each face's boiling flux for the step.
+	 * Takes the solved temperatures into the state and boils off what the pinned and
+	 * dried-out layers shed; leaves each face's boiling flux for the step.
 	 */
 	void apply(double[] solution, double dt) {
 		boiled[0] = 0;
@@ -117,7 +123,10 @@ final class LocalBoiling {
 		return WaterVapour.boilingTemperatureKFast(state.isotherm().waterActivity(state.moisture[i]));
 	}
 
-	/** Boils {@code energy} (J/m²) worth of water off layer i at {@code boilingK}, standing water first. */
+	/**
+	 * Boils {@code energy} (J/m²) worth of water off layer i at {@code boilingK},
+	 * standing water first.
+	 */
 	private void boilOff(int i, double energy, double boilingK) {
 		int face = state.faceOf(i);
 		int half = state.grid().position(i) < 0.5 * state.grid().thickness() ? 0 : 1;

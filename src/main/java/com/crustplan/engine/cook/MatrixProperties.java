@@ -4,15 +4,19 @@ import com.crustplan.engine.properties.FoodComponent;
 import com.crustplan.engine.properties.ThermalProperties;
 
 /**
- * Step (1): each control volume's heat capacity and conductivity from its composition, temperature and
- * moisture (Choi &amp; Okos 1986), with the gas that fills what the food no longer occupies mixed in by
- * the geometric-mean rule; a face's standing water adds its own heat capacity.
+ * Step (1): each control volume's heat capacity and conductivity from its composition,
+ * temperature and moisture (Choi &amp; Okos 1986), with the gas that fills what the food
+ * no longer occupies mixed in by the geometric-mean rule; a face's standing water adds
+ * its own heat capacity.
  */
 final class MatrixProperties {
 
 	private static final double LOG_GAS_CONDUCTIVITY = Math.log(ThermalProperties.AIR_CONDUCTIVITY);
 
-	/** Dry-matter mass fractions of the composition, in {@link FoodComponent} order after water. */
+	/**
+	 * Dry-matter mass fractions of the composition, in {@link FoodComponent} order after
+	 * water.
+	 */
 	private final double[] dryFractions;
 
 	private final double[] massFractions = new double[FoodComponent.values().length];
@@ -51,8 +55,8 @@ final class MatrixProperties {
 			double porosity = Math.max(0, Math.min(0.95, 1 - mass * props[2] / s.volume[i]));
 			capacity[i] = mass * props[0];
 			// geometric-mean rule k_m^(1−ε)·k_gas^ε, written with one exp
-			conductivity[i] = porosity > 0 ? Math.exp((1 - porosity) * Math.log(props[1]) + porosity * LOG_GAS_CONDUCTIVITY)
-					: props[1];
+			conductivity[i] = porosity > 0
+					? Math.exp((1 - porosity) * Math.log(props[1]) + porosity * LOG_GAS_CONDUCTIVITY) : props[1];
 		}
 		for (int face = 0; face < 2; face++) {
 			int i = s.faceNode(face);

@@ -8,10 +8,10 @@ import com.crustplan.engine.water.MoistureDiffusivity;
 import com.crustplan.engine.water.WaterVapour;
 
 /**
- * Step (4): moisture diffusion through the thickness with each bare face's evaporation implicit in
- * moisture, J(X) ≈ J* + s·(X − X*), s = dJ/daw · daw/dX, where J* is what the heat step already drew
- * latent heat for; the face node pays, in sensible heat, for the difference. Water carries its sensible
- * heat from layer to layer.
+ * Step (4): moisture diffusion through the thickness with each bare face's evaporation
+ * implicit in moisture, J(X) ≈ J* + s·(X − X*), s = dJ/daw · daw/dX, where J* is what the
+ * heat step already drew latent heat for; the face node pays, in sensible heat, for the
+ * difference. Water carries its sensible heat from layer to layer.
  */
 final class MoistureStep {
 
@@ -39,7 +39,8 @@ final class MoistureStep {
 
 	private final FaceFlux flux = new FaceFlux();
 
-	MoistureStep(CookState state, ActiveHeat schedule, MatrixProperties properties, HeatStep heat, EnergyAccount account) {
+	MoistureStep(CookState state, ActiveHeat schedule, MatrixProperties properties, HeatStep heat,
+			EnergyAccount account) {
 		this.state = state;
 		this.schedule = schedule;
 		this.properties = properties;
@@ -86,7 +87,8 @@ final class MoistureStep {
 				j -= state.dryMass[i] * (CookState.MIN_MOISTURE - moisture[i]) / dt;
 				moisture[i] = CookState.MIN_MOISTURE;
 			}
-			// the heat step drew latent heat for J*; the face node pays for the difference
+			// the heat step drew latent heat for J*; the face node pays for the
+			// difference
 			double latent = WaterVapour.latentHeat(temperature[i]);
 			temperature[i] -= latent * (j - predicted) * dt / properties.capacity[i];
 			account.vapour(j * dt, temperature[i]);
@@ -99,8 +101,8 @@ final class MoistureStep {
 	}
 
 	/**
-	 * Water diffusing into a layer arrives at the temperature of the layer it left: mix its sensible heat
-	 * in, so moisture transport neither makes nor loses energy.
+	 * Water diffusing into a layer arrives at the temperature of the layer it left: mix
+	 * its sensible heat in, so moisture transport neither makes nor loses energy.
 	 */
 	private void carryEnthalpyWithWater(double dt) {
 		double[] temperature = state.temperature;
@@ -109,7 +111,11 @@ final class MoistureStep {
 			heatGain[i] = 0;
 		}
 		for (int i = 0; i < n - 1; i++) {
-			double m = diffusion.conductance(i) * (moisture[i] - moisture[i + 1]) * dt; // kg/m² from i to i+1
+			double m = diffusion.conductance(i) * (moisture[i] - moisture[i + 1]) * dt; // kg/m²
+																						// from
+																						// i
+																						// to
+																						// i+1
 			if (m > 0) {
 				heatGain[i + 1] += m * (temperature[i] - temperature[i + 1]);
 			}

@@ -1,8 +1,9 @@
 package com.crustplan.engine.cook;
 
 /**
- * The few values of a cook that listeners and events read at the end of a step: filled in place by the
- * driver (the inner loop allocates nothing), so hold on to the numbers, not to the moment.
+ * The few values of a cook that listeners and events read at the end of a step: filled in
+ * place by the driver (the inner loop allocates nothing), so hold on to the numbers, not
+ * to the moment.
  */
 public final class Moment {
 
@@ -33,7 +34,10 @@ public final class Moment {
 		heatSourceK = heat.body() == null ? Double.NaN : heat.body().temperatureK();
 	}
 
-	/** The pan's or oil's temperature where it is a body that moves under the load, K (NaN otherwise). */
+	/**
+	 * The pan's or oil's temperature where it is a body that moves under the load, K (NaN
+	 * otherwise).
+	 */
 	public double heatSourceK() {
 		return heatSourceK;
 	}

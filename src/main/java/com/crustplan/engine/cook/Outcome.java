@@ -7,8 +7,7 @@ public enum Outcome {
 
 	REACHED(Message.of("outcome.reached")), NO_REACTANTS(Message.of("outcome.no-reactants")),
 	WET_PLATEAU(Message.of("outcome.wet-plateau")), TOO_COOL(Message.of("outcome.too-cool")),
-	TOO_SLOW(Message.of("outcome.too-slow")),
-	SURFACE_LIMIT(Message.of("outcome.surface-limit"));
+	TOO_SLOW(Message.of("outcome.too-slow")), SURFACE_LIMIT(Message.of("outcome.surface-limit"));
 
 	private final Message explanation;
 

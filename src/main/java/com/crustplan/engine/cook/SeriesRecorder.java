@@ -5,7 +5,10 @@ import java.util.List;
 
 import com.crustplan.engine.colour.ColourPath;
 
-/** Records a {@link Sample} at the start, at every output time and at the end: the series the charts draw. */
+/**
+ * Records a {@link Sample} at the start, at every output time and at the end: the series
+ * the charts draw.
+ */
 final class SeriesRecorder implements StepListener {
 
 	private final ColourPath path;

@@ -1,8 +1,9 @@
 package com.crustplan.engine.cook;
 
 /**
- * The step just taken, from its start to its end: what listeners and event handlers see. Values inside a
- * step are interpolated linearly between its two moments (the stepper is first order in time).
+ * The step just taken, from its start to its end: what listeners and event handlers see.
+ * Values inside a step are interpolated linearly between its two moments (the stepper is
+ * first order in time).
  */
 public final class StepInterpolator {
 

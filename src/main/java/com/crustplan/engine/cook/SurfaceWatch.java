@@ -1,6 +1,9 @@
 package com.crustplan.engine.cook;
 
-/** Keeps what explains a cook that missed its target: the hottest the surface got and whether it ever dried. */
+/**
+ * Keeps what explains a cook that missed its target: the hottest the surface got and
+ * whether it ever dried.
+ */
 final class SurfaceWatch implements StepListener {
 
 	/** Below this a bare face still counts as wet for the explanation. */

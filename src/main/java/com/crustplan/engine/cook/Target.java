@@ -30,15 +30,16 @@ public record Target(Double lightness, String stage) {
 		ColourPath path = category.colourPath();
 		if (stage != null) {
 			BrowningStage s = category.stage(stage)
-				.orElseThrow(() -> new InvalidInputException("target.stage", "'" + stage + "' is not a stage of "
-						+ category.label() + "; use one of " + category.stages().stream().map(BrowningStage::key).toList()));
+				.orElseThrow(() -> new InvalidInputException("target.stage",
+						"'" + stage + "' is not a stage of " + category.label() + "; use one of "
+								+ category.stages().stream().map(BrowningStage::key).toList()));
 			return s.extentOn(path);
 		}
 		double e = Double.isFinite(lightness) ? path.extentAtLightness(lightness) : Double.NaN;
 		if (Double.isNaN(e)) {
 			throw new InvalidInputException("target.lightness",
-					String.format("L* must lie between %.0f (darkest) and %.0f (palest) for %s", path.darkestLightness(),
-							path.palestLightness(), category.label()));
+					String.format("L* must lie between %.0f (darkest) and %.0f (palest) for %s",
+							path.darkestLightness(), path.palestLightness(), category.label()));
 		}
 		return e;
 	}
@@ -51,9 +52,13 @@ public record Target(Double lightness, String stage) {
 		return Message.of("target.lightness", PlainNumber.of(lightness, 0));
 	}
 
-	/** The same in running text: a stage's label in lower case ("cook to golden"); L* keeps its capital. */
+	/**
+	 * The same in running text: a stage's label in lower case ("cook to golden"); L*
+	 * keeps its capital.
+	 */
 	public Message describeInText(FoodCategory category) {
-		return stage != null ? Message.of("target.stage", Text.of(stageLabel(category).toLowerCase())) : describe(category);
+		return stage != null ? Message.of("target.stage", Text.of(stageLabel(category).toLowerCase()))
+				: describe(category);
 	}
 
 	private String stageLabel(FoodCategory category) {

@@ -1,9 +1,9 @@
 package com.crustplan.engine.cook;
 
 /**
- * What happens when a target is reached: the time, core temperature, surface browning and reaction
- * levels at that instant are kept; a one-step cook then runs on by a share of the time (charts show what
- * overcooking does), a cook in steps goes on with its steps.
+ * What happens when a target is reached: the time, core temperature, surface browning and
+ * reaction levels at that instant are kept; a one-step cook then runs on by a share of
+ * the time (charts show what overcooking does), a cook in steps goes on with its steps.
  */
 final class TargetRecord implements EventHandler {
 
@@ -19,7 +19,8 @@ final class TargetRecord implements EventHandler {
 
 	private double surfaceExtent = Double.NaN;
 
-	/** @param settings the run-past share and horizon, or null to go on as before */
+	/**
+	 * @param settings the run-past share and horizon, or null to go on as before */
 	TargetRecord(CookSettings settings) {
 		this.settings = settings;
 	}

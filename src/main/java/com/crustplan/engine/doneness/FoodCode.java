@@ -4,13 +4,16 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.message.StatedTemperature;
 
 /**
- * Minimum internal temperatures of the US FDA Food Code 2022, section 3-401.11 (A)(1)–(3), with both of
- * the code's own figures, so a °F page shows the code's number rather than a rounded conversion, and the
- * time the core must hold it.
+ * Minimum internal temperatures of the US FDA Food Code 2022, section 3-401.11
+ * (A)(1)–(3), with both of the code's own figures, so a °F page shows the code's number
+ * rather than a rounded conversion, and the time the core must hold it.
  */
 public enum FoodCode {
 
-	/** 3-401.11 (A)(1)(b): whole cuts of meat, fish, pork and eggs, 63 °C (145 °F) for 15 s. */
+	/**
+	 * 3-401.11 (A)(1)(b): whole cuts of meat, fish, pork and eggs, 63 °C (145 °F) for 15
+	 * s.
+	 */
 	WHOLE_CUT(63, 145, 15),
 
 	/** 3-401.11 (A)(2): comminuted (minced) meat and fish, 68 °C (155 °F) for 17 s. */
@@ -39,7 +42,10 @@ public enum FoodCode {
 		return fahrenheit;
 	}
 
-	/** The holding time the code pairs with the temperature, s (poultry: "< 1 s", kept as 1). */
+	/**
+	 * The holding time the code pairs with the temperature, s (poultry: "< 1 s", kept as
+	 * 1).
+	 */
 	public double holdS() {
 		return holdS;
 	}
@@ -54,7 +60,10 @@ public enum FoodCode {
 		return StatedTemperature.withFahrenheit(celsius, fahrenheit);
 	}
 
-	/** The rule for a category, or null where the code sets none for it (bread, potato, vegetables). */
+	/**
+	 * The rule for a category, or null where the code sets none for it (bread, potato,
+	 * vegetables).
+	 */
 	public static FoodCode forCategory(FoodCategory category, Cut cut) {
 		return switch (category) {
 			case POULTRY_SKIN -> POULTRY;

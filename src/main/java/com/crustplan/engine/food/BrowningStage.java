@@ -3,9 +3,9 @@ package com.crustplan.engine.food;
 import com.crustplan.engine.colour.ColourPath;
 
 /**
- * A named browning stage of a category, reached when the surface gets as dark as {@code lightness}
- * (L*), or, for categories whose colour is not monotone in L*, when the browning extent reaches
- * {@code extent}. Exactly one of the two is set.
+ * A named browning stage of a category, reached when the surface gets as dark as
+ * {@code lightness} (L*), or, for categories whose colour is not monotone in L*, when the
+ * browning extent reaches {@code extent}. Exactly one of the two is set.
  */
 public record BrowningStage(String key, String label, Double lightness, Double extent) {
 
@@ -27,7 +27,10 @@ public record BrowningStage(String key, String label, Double lightness, Double e
 		return extent != null;
 	}
 
-	/** The browning extent at which this stage is reached along the category's colour path. */
+	/**
+	 * The browning extent at which this stage is reached along the category's colour
+	 * path.
+	 */
 	public double extentOn(ColourPath path) {
 		return extent != null ? extent : path.extentAtLightness(lightness);
 	}

@@ -8,9 +8,9 @@ import com.crustplan.engine.model.Parameter;
 import com.crustplan.engine.water.GabIsotherm;
 
 /**
- * A food category as named parts, so each value reads beside its name and its source comment.
- * Every part must be given; {@link #complete()} checks that once, when the category is built, and the
- * parts are not changed after it.
+ * A food category as named parts, so each value reads beside its name and its source
+ * comment. Every part must be given; {@link #complete()} checks that once, when the
+ * category is built, and the parts are not changed after it.
  */
 final class CategorySpec {
 
@@ -77,7 +77,10 @@ final class CategorySpec {
 		return this;
 	}
 
-	/** Fridge (5 °C) for raw proteins and vegetables, room temperature for doughs (common practice). */
+	/**
+	 * Fridge (5 °C) for raw proteins and vegetables, room temperature for doughs (common
+	 * practice).
+	 */
 	CategorySpec initialTemperatureC(double v) {
 		this.initialTemperatureC = v;
 		return this;
@@ -115,10 +118,13 @@ final class CategorySpec {
 		return this;
 	}
 
-	/** This spec, once every part is given; a gap in the table stops the class from loading. */
+	/**
+	 * This spec, once every part is given; a gap in the table stops the class from
+	 * loading.
+	 */
 	CategorySpec complete() {
-		if (parts == null || bufferCapacity == null || initialPorosity == null || isotherm == null
-				|| browning == null || colourPath == null || stages == null) {
+		if (parts == null || bufferCapacity == null || initialPorosity == null || isotherm == null || browning == null
+				|| colourPath == null || stages == null) {
 			throw new IllegalStateException("food category " + key + ": every part must be given");
 		}
 		SurfaceField.PH.check(ph);

@@ -3,12 +3,13 @@ package com.crustplan.engine.food;
 import com.crustplan.engine.input.InvalidInputException;
 
 /**
- * Proximate composition of a food in mass percent. Reducing sugars (glucose, fructose, lactose,
- * maltose) and sucrose are kept apart because only the first take part in Maillard browning; what the
- * named parts leave of 100 % is counted as other carbohydrate.
+ * Proximate composition of a food in mass percent. Reducing sugars (glucose, fructose,
+ * lactose, maltose) and sucrose are kept apart because only the first take part in
+ * Maillard browning; what the named parts leave of 100 % is counted as other
+ * carbohydrate.
  */
-public record Composition(double waterPct, double proteinPct, double fatPct, double reducingSugarPct,
-		double sucrosePct, double starchPct, double fibrePct, double ashPct) {
+public record Composition(double waterPct, double proteinPct, double fatPct, double reducingSugarPct, double sucrosePct,
+		double starchPct, double fibrePct, double ashPct) {
 
 	public Composition {
 		SurfaceField.WATER.check(waterPct);
@@ -22,7 +23,8 @@ public record Composition(double waterPct, double proteinPct, double fatPct, dou
 		double sum = waterPct + proteinPct + fatPct + reducingSugarPct + sucrosePct + starchPct + fibrePct + ashPct;
 		// 0.05 percentage points of slack for rounding in typed-in compositions
 		if (sum > 100.05) {
-			throw new InvalidInputException("composition", String.format("the parts add up to %.2f %%, more than 100 %%", sum));
+			throw new InvalidInputException("composition",
+					String.format("the parts add up to %.2f %%, more than 100 %%", sum));
 		}
 		if (waterPct >= 100) {
 			throw new InvalidInputException("waterPct", "a food needs some dry matter (water must be below 100 %)");
@@ -48,8 +50,8 @@ public record Composition(double waterPct, double proteinPct, double fatPct, dou
 	}
 
 	/**
-	 * Mass fractions of the dry matter in the order of {@code FoodComponent} minus water: protein, fat,
-	 * carbohydrate (sugars, starch and the remainder), fibre, ash.
+	 * Mass fractions of the dry matter in the order of {@code FoodComponent} minus water:
+	 * protein, fat, carbohydrate (sugars, starch and the remainder), fibre, ash.
 	 */
 	public double[] dryMatterFractions() {
 		double dry = 100 - waterPct;
@@ -70,7 +72,10 @@ public record Composition(double waterPct, double proteinPct, double fatPct, dou
 		return new Composition(waterPct, proteinPct, fatPct, reducingSugarPct, pct, starchPct, fibrePct, ashPct);
 	}
 
-	/** A composition by named parts, for tables of typical values; a part not named is 0 %. */
+	/**
+	 * A composition by named parts, for tables of typical values; a part not named is 0
+	 * %.
+	 */
 	public static final class Parts {
 
 		private double water;

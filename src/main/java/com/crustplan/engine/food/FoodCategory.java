@@ -10,8 +10,9 @@ import com.crustplan.engine.model.Parameter;
 import com.crustplan.engine.water.GabIsotherm;
 
 /**
- * Food categories: each supplies defaults for a new surface, a sorption isotherm, browning kinetics, a
- * colour path and named browning stages. Compositions are typical values, not a particular product.
+ * Food categories: each supplies defaults for a new surface, a sorption isotherm,
+ * browning kinetics, a colour path and named browning stages. Compositions are typical
+ * values, not a particular product.
  */
 public enum FoodCategory {
 
@@ -25,19 +26,23 @@ public enum FoodCategory {
 		.initialTemperatureC(5)
 		.bufferCapacity(Parameter.published("β", "buffer capacity of post-rigor beef muscle", 51, "mmol H⁺/(pH·kg)",
 				"Puolanne & Kivikari 2000, Meat Sci 56:7 (beef longissimus)"))
-		.initialPorosity(Parameter.assumption("ε0", "initial gas fraction of whole muscle", 0, "–", "whole muscle has no pores"))
+		.initialPorosity(
+				Parameter.assumption("ε0", "initial gas fraction of whole muscle", 0, "–", "whole muscle has no pores"))
 		.isotherm(Isotherms.MEAT)
-		.browning(new BrowningKinetics(new ArrheniusRate(
-				Parameter.commonPractice("k0", "pre-exponential factor, meat surface browning", 2.0e5, "1/s",
-						"calibrated so a patted-dry 25 mm steak in a 220 °C oiled pan is browned in 3–4 min per side (common practice)"),
+		.browning(new BrowningKinetics(new ArrheniusRate(Parameter.commonPractice("k0",
+				"pre-exponential factor, meat surface browning", 2.0e5, "1/s",
+				"calibrated so a patted-dry 25 mm steak in a 220 °C oiled pan is browned in 3–4 min per side (common practice)"),
 				Isotherms.ZANONI_EA),
 				Parameter.assumption("aw,ref", "water activity at which the meat rate is referenced", 0.4, "–",
 						"rate referenced to a dry crust, like the bread fit"),
-				Parameter.secondary("pH,ref", "typical pH of beef", 5.6, "–", "beef 5.5–5.8 (quoted in food pH tables)"),
+				Parameter.secondary("pH,ref", "typical pH of beef", 5.6, "–",
+						"beef 5.5–5.8 (quoted in food pH tables)"),
 				Parameter.commonPractice("RS,ref", "reducing sugar of the reference meat", 0.1, "%",
 						"glucose and ribose in post-rigor muscle ≈ 0.1 % (from memory)"),
-				Parameter.commonPractice("P,ref", "protein of the reference meat", 21, "%", "lean beef (common practice)")))
-		.colourPath(ColourPath.of("raw red → grey → brown → dark crust; L*a*b* anchors from memory of published meat colour ranges",
+				Parameter.commonPractice("P,ref", "protein of the reference meat", 21, "%",
+						"lean beef (common practice)")))
+		.colourPath(ColourPath.of(
+				"raw red → grey → brown → dark crust; L*a*b* anchors from memory of published meat colour ranges",
 				new double[][] { { 0, 40, 22, 12 }, { 0.08, 50, 10, 14 }, { 0.45, 38, 12, 20 }, { 1, 22, 6, 9 } }))
 		.stages(List.of(BrowningStage.byExtent("grey", "Grey, barely seared", 0.08),
 				BrowningStage.byExtent("light-sear", "Light sear", 0.25),
@@ -54,16 +59,19 @@ public enum FoodCategory {
 		.initialTemperatureC(5)
 		.bufferCapacity(Parameter.published("β", "buffer capacity of broiler breast muscle", 58, "mmol H⁺/(pH·kg)",
 				"Puolanne & Kivikari 2000, Meat Sci 56:7 (broiler breast)"))
-		.initialPorosity(Parameter.assumption("ε0", "initial gas fraction of skin", 0, "–", "skin treated as pore-free"))
+		.initialPorosity(
+				Parameter.assumption("ε0", "initial gas fraction of skin", 0, "–", "skin treated as pore-free"))
 		.isotherm(Isotherms.MEAT)
 		.browning(new BrowningKinetics(new ArrheniusRate(
 				Parameter.commonPractice("k0", "pre-exponential factor, poultry skin browning", 1.5e5, "1/s",
 						"calibrated so skin-on chicken in a 200 °C fan oven is golden in 20–30 min (common practice)"),
 				Isotherms.ZANONI_EA),
 				Parameter.assumption("aw,ref", "water activity at which the rate is referenced", 0.4, "–", "dry crust"),
-				Parameter.secondary("pH,ref", "typical pH of poultry", 6.0, "–", "poultry 5.7–6.0 (quoted in food pH tables)"),
+				Parameter.secondary("pH,ref", "typical pH of poultry", 6.0, "–",
+						"poultry 5.7–6.0 (quoted in food pH tables)"),
 				Parameter.commonPractice("RS,ref", "reducing sugar of the reference skin", 0.05, "%", "from memory"),
-				Parameter.commonPractice("P,ref", "protein of the reference skin", 13, "%", "chicken skin (from memory)")))
+				Parameter.commonPractice("P,ref", "protein of the reference skin", 13, "%",
+						"chicken skin (from memory)")))
 		.colourPath(ColourPath.of("pale skin → golden → mahogany; anchors from memory",
 				new double[][] { { 0, 70, 4, 14 }, { 0.4, 60, 10, 30 }, { 0.7, 48, 14, 30 }, { 1, 33, 14, 22 } }))
 		.stages(List.of(BrowningStage.byLightness("light-golden", "Light golden", 64),
@@ -89,7 +97,8 @@ public enum FoodCategory {
 						"J Food Eng 116:130–137 (2013)")),
 				Parameter.assumption("aw,ref", "water activity at which the fish rate is referenced", 0.8, "–",
 						"measured on real grilled surfaces, taken at the peak so the factor never exceeds 1"),
-				Parameter.fromMemory("pH,ref", "typical pH of fish muscle", 6.4, "–", "white fish 6.2–6.6 (from memory)"),
+				Parameter.fromMemory("pH,ref", "typical pH of fish muscle", 6.4, "–",
+						"white fish 6.2–6.6 (from memory)"),
 				Parameter.fromMemory("RS,ref", "reducing sugar of fish muscle", 0.05, "%", "from memory"),
 				Parameter.fromMemory("P,ref", "protein of fish muscle", 20, "%", "white fish (from memory)")))
 		.colourPath(ColourPath.of("translucent → opaque white → golden → dark; anchors from memory",
@@ -100,8 +109,16 @@ public enum FoodCategory {
 				BrowningStage.byLightness("dark", "Dark", 45)))),
 
 	POTATO(category("potato", "Potato (chips, roasties, rösti)")
-		.composition(new Composition.Parts().water(79).protein(2).fat(0.1).reducingSugar(0.4).sucrose(0.2).starch(15.5).fibre(1.8).ash(1))
-		// 3000 mg/kg = 22.7 mmol/kg, mid-range of 1.2–58 mmol/kg (Vivanti, Finotti & Friedman 2006, J Food Sci)
+		.composition(new Composition.Parts().water(79)
+			.protein(2)
+			.fat(0.1)
+			.reducingSugar(0.4)
+			.sucrose(0.2)
+			.starch(15.5)
+			.fibre(1.8)
+			.ash(1))
+		// 3000 mg/kg = 22.7 mmol/kg, mid-range of 1.2–58 mmol/kg (Vivanti, Finotti &
+		// Friedman 2006, J Food Sci)
 		.asparagineMgPerKg(3000)
 		.surfaceWaterGPerM2(20)
 		.thicknessMm(10)
@@ -109,14 +126,17 @@ public enum FoodCategory {
 		.initialTemperatureC(5)
 		.bufferCapacity(Parameter.assumption("β", "buffer capacity of potato tissue", 15, "mmol H⁺/(pH·kg)",
 				"far lower than meat (from memory); not measured"))
-		.initialPorosity(Parameter.assumption("ε0", "initial gas fraction of raw potato", 0.01, "–", "raw tuber is nearly pore-free (from memory)"))
+		.initialPorosity(Parameter.assumption("ε0", "initial gas fraction of raw potato", 0.01, "–",
+				"raw tuber is nearly pore-free (from memory)"))
 		.isotherm(Isotherms.POTATO)
 		.browning(new BrowningKinetics(new ArrheniusRate(
 				Parameter.commonPractice("k0", "pre-exponential factor, potato surface browning", 1.5e5, "1/s",
 						"calibrated so 10 mm chips in 175 °C oil are golden in 6–8 min (common practice)"),
 				Isotherms.ZANONI_EA),
-				Parameter.assumption("aw,ref", "water activity at which the potato rate is referenced", 0.4, "–", "dry crust"),
-				Parameter.published("pH,ref", "typical pH of potato", 5.8, "–", "potato 5.4–6.1 (FDA, approximate pH of foods)"),
+				Parameter.assumption("aw,ref", "water activity at which the potato rate is referenced", 0.4, "–",
+						"dry crust"),
+				Parameter.published("pH,ref", "typical pH of potato", 5.8, "–",
+						"potato 5.4–6.1 (FDA, approximate pH of foods)"),
 				Parameter.fromMemory("RS,ref", "reducing sugar of a frying potato", 0.4, "%",
 						"glucose + fructose 2.8–69 mmol/kg in retail potatoes (Vivanti et al. 2006); 0.4 % typical of frying varieties"),
 				Parameter.fromMemory("P,ref", "protein of potato", 2, "%", "from memory")))
@@ -129,30 +149,34 @@ public enum FoodCategory {
 				BrowningStage.byLightness("brown", "Brown", 50)))),
 
 	BREAD(category("bread", "Bread or dough")
-		.composition(new Composition.Parts().water(43).protein(9).fat(2).reducingSugar(1.5).starch(40.5).fibre(2.5).ash(1.5))
+		.composition(
+				new Composition.Parts().water(43).protein(9).fat(2).reducingSugar(1.5).starch(40.5).fibre(2.5).ash(1.5))
 		// wheat flour 0.1–0.5 g/kg (from memory), diluted by the dough's water
 		.asparagineMgPerKg(150)
 		.surfaceWaterGPerM2(0)
 		.thicknessMm(30)
 		.ph(5.4)
 		.initialTemperatureC(22)
-		.bufferCapacity(Parameter.assumption("β", "buffer capacity of bread dough", 20, "mmol H⁺/(pH·kg)", "not measured; low (from memory)"))
+		.bufferCapacity(Parameter.assumption("β", "buffer capacity of bread dough", 20, "mmol H⁺/(pH·kg)",
+				"not measured; low (from memory)"))
 		.initialPorosity(Parameter.fromMemory("ε0", "gas fraction of proofed dough", 0.6, "–",
 				"bulk density ≈ 450 kg/m³ against a gas-free 1170 kg/m³ (from memory)"))
 		.isotherm(Isotherms.BREAD)
-		.browning(new BrowningKinetics(new ArrheniusRate(
-				Parameter.published("k0", "pre-exponential factor, bread crust ΔE", 42_000, "1/s",
-						"Zanoni, Peri & Bruno 1995, LWT 28:604–609"),
-				Isotherms.ZANONI_EA),
+		.browning(new BrowningKinetics(
+				new ArrheniusRate(Parameter.published("k0", "pre-exponential factor, bread crust ΔE", 42_000, "1/s",
+						"Zanoni, Peri & Bruno 1995, LWT 28:604–609"), Isotherms.ZANONI_EA),
 				Parameter.assumption("aw,ref", "water activity of the crust the rate was measured on", 0.4, "–",
 						"dried crust (Zanoni's rates were measured on dried crumb)"),
 				Parameter.published("pH,ref", "typical pH of bread", 5.4, "–", "FDA, approximate pH of foods"),
-				Parameter.fromMemory("RS,ref", "reducing sugar of lean bread dough", 1.5, "%", "maltose and glucose from fermentation (from memory)"),
+				Parameter.fromMemory("RS,ref", "reducing sugar of lean bread dough", 1.5, "%",
+						"maltose and glucose from fermentation (from memory)"),
 				Parameter.fromMemory("P,ref", "protein of bread dough", 9, "%", "from memory")))
-		// L* 80 → 25, a* −0.5 → 15, b* 18 → 30 (quoted ranges); the end point is cut at ΔE = 52 so
+		// L* 80 → 25, a* −0.5 → 15, b* 18 → 30 (quoted ranges); the end point is cut at
+		// ΔE = 52 so
 		// that ΔE from the dough colour equals 52·extent, as in Zanoni's fit.
 		.colourPath(ColourPath.of("dough (80, −0.5, 18) towards (25, 15, 30), ΔE∞ = 52 (Zanoni, Peri & Bruno 1995)",
-				new double[][] { { 0, 80, -0.5, 18 }, { 1, 80 - 55 * 0.8904, -0.5 + 15.5 * 0.8904, 18 + 12 * 0.8904 } }))
+				new double[][] { { 0, 80, -0.5, 18 },
+						{ 1, 80 - 55 * 0.8904, -0.5 + 15.5 * 0.8904, 18 + 12 * 0.8904 } }))
 		.stages(List.of(BrowningStage.byLightness("pale", "Pale", 72),
 				BrowningStage.byLightness("light-golden", "Light golden", 64),
 				BrowningStage.byLightness("golden", "Golden", 57),
@@ -160,21 +184,30 @@ public enum FoodCategory {
 				BrowningStage.byLightness("dark", "Dark", 40)))),
 
 	SWEET_DOUGH(category("sweet-dough", "Sweet dough (enriched buns, biscuits)")
-		.composition(new Composition.Parts().water(25).protein(7).fat(15).reducingSugar(2).sucrose(15).starch(33).fibre(1.5).ash(1))
+		.composition(new Composition.Parts().water(25)
+			.protein(7)
+			.fat(15)
+			.reducingSugar(2)
+			.sucrose(15)
+			.starch(33)
+			.fibre(1.5)
+			.ash(1))
 		.asparagineMgPerKg(120)
 		.surfaceWaterGPerM2(0)
 		.thicknessMm(15)
 		.ph(6.5)
 		.initialTemperatureC(20)
-		.bufferCapacity(Parameter.assumption("β", "buffer capacity of sweet dough", 20, "mmol H⁺/(pH·kg)", "not measured; low (from memory)"))
-		.initialPorosity(Parameter.fromMemory("ε0", "gas fraction of sweet dough", 0.4, "–", "denser than bread dough (from memory)"))
+		.bufferCapacity(Parameter.assumption("β", "buffer capacity of sweet dough", 20, "mmol H⁺/(pH·kg)",
+				"not measured; low (from memory)"))
+		.initialPorosity(Parameter.fromMemory("ε0", "gas fraction of sweet dough", 0.4, "–",
+				"denser than bread dough (from memory)"))
 		.isotherm(Isotherms.BREAD)
-		.browning(new BrowningKinetics(new ArrheniusRate(
-				Parameter.published("k0", "pre-exponential factor, crust ΔE (bread kinetics)", 42_000, "1/s",
-						"Zanoni, Peri & Bruno 1995, LWT 28:604–609"),
-				Isotherms.ZANONI_EA),
+		.browning(new BrowningKinetics(
+				new ArrheniusRate(Parameter.published("k0", "pre-exponential factor, crust ΔE (bread kinetics)", 42_000,
+						"1/s", "Zanoni, Peri & Bruno 1995, LWT 28:604–609"), Isotherms.ZANONI_EA),
 				Parameter.assumption("aw,ref", "water activity of a dry crust", 0.4, "–", "as bread"),
-				Parameter.published("pH,ref", "pH of the bread the rate was measured on", 5.4, "–", "FDA, approximate pH of foods"),
+				Parameter.published("pH,ref", "pH of the bread the rate was measured on", 5.4, "–",
+						"FDA, approximate pH of foods"),
 				Parameter.fromMemory("RS,ref", "reducing sugar of lean bread dough", 1.5, "%", "from memory"),
 				Parameter.fromMemory("P,ref", "protein of bread dough", 9, "%", "from memory")))
 		.colourPath(ColourPath.of("pale dough → golden → dark brown; anchors from memory",
@@ -185,8 +218,8 @@ public enum FoodCategory {
 				BrowningStage.byLightness("deep-golden", "Deep golden", 52),
 				BrowningStage.byLightness("dark", "Dark", 42)))),
 
-	VEGETABLE(category("vegetable", "Vegetable (onion, root, squash)")
-		.composition(new Composition.Parts().water(89).protein(1.1).fat(0.1).reducingSugar(4.2).sucrose(1).fibre(1.7).ash(0.4))
+	VEGETABLE(category("vegetable", "Vegetable (onion, root, squash)").composition(
+			new Composition.Parts().water(89).protein(1.1).fat(0.1).reducingSugar(4.2).sucrose(1).fibre(1.7).ash(0.4))
 		.asparagineMgPerKg(100)
 		.surfaceWaterGPerM2(10)
 		.thicknessMm(6)
@@ -201,7 +234,8 @@ public enum FoodCategory {
 						"potato value; vegetables differ mainly by their sugar, which the reactant factor carries"),
 				Isotherms.ZANONI_EA),
 				Parameter.assumption("aw,ref", "water activity at which the rate is referenced", 0.4, "–", "dry crust"),
-				Parameter.published("pH,ref", "pH of potato (kinetics borrowed)", 5.8, "–", "FDA, approximate pH of foods"),
+				Parameter.published("pH,ref", "pH of potato (kinetics borrowed)", 5.8, "–",
+						"FDA, approximate pH of foods"),
 				Parameter.fromMemory("RS,ref", "reducing sugar of a frying potato", 0.4, "%", "as potato"),
 				Parameter.fromMemory("P,ref", "protein of potato", 2, "%", "as potato")))
 		.colourPath(ColourPath.of("raw → translucent → golden → deep brown; anchors from memory (onion)",
@@ -215,7 +249,8 @@ public enum FoodCategory {
 
 	FoodCategory(CategorySpec spec) {
 		this.spec = spec.complete();
-		// the defaults must pass the engine's own checks, since a new surface starts from them
+		// the defaults must pass the engine's own checks, since a new surface starts from
+		// them
 		Surface.defaults(this);
 	}
 
@@ -264,7 +299,10 @@ public enum FoodCategory {
 		return spec.ph;
 	}
 
-	/** Fridge (5 °C) for raw proteins and vegetables, room temperature for doughs (common practice). */
+	/**
+	 * Fridge (5 °C) for raw proteins and vegetables, room temperature for doughs (common
+	 * practice).
+	 */
 	public double defaultInitialTemperatureC() {
 		return spec.initialTemperatureC;
 	}
@@ -300,7 +338,8 @@ public enum FoodCategory {
 				"J/mol", "Zanoni, Peri & Bruno 1995, LWT 28:604–609 (bread crust ΔE)");
 
 		static final GabIsotherm POTATO = new GabIsotherm(
-				Parameter.secondary("Xm", "GAB monolayer moisture, potato", 0.209, "kg/kg d.b.", "Chemkhi et al. 2004 (40–50 °C)"),
+				Parameter.secondary("Xm", "GAB monolayer moisture, potato", 0.209, "kg/kg d.b.",
+						"Chemkhi et al. 2004 (40–50 °C)"),
 				Parameter.secondary("C", "GAB constant C, potato", 4.416, "–", "Chemkhi et al. 2004"),
 				Parameter.secondary("K", "GAB constant K, potato", 0.976, "–", "Chemkhi et al. 2004"));
 
@@ -311,7 +350,8 @@ public enum FoodCategory {
 				Parameter.fromMemory("K", "GAB constant K, muscle", 0.95, "–", "from memory"));
 
 		static final GabIsotherm BREAD = new GabIsotherm(
-				Parameter.fromMemory("Xm", "GAB monolayer moisture, bread crust", 0.08, "kg/kg d.b.", "from memory, low confidence"),
+				Parameter.fromMemory("Xm", "GAB monolayer moisture, bread crust", 0.08, "kg/kg d.b.",
+						"from memory, low confidence"),
 				Parameter.fromMemory("C", "GAB constant C, bread crust", 10, "–", "from memory, low confidence"),
 				Parameter.fromMemory("K", "GAB constant K, bread crust", 0.9, "–", "from memory, low confidence"));
 

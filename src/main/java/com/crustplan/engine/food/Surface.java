@@ -3,8 +3,8 @@ package com.crustplan.engine.food;
 import com.crustplan.engine.input.InvalidInputException;
 
 /**
- * A food surface as a cook describes it: the engine's input. Units are in the names; {@code phOverride}
- * null means the category's typical pH.
+ * A food surface as a cook describes it: the engine's input. Units are in the names;
+ * {@code phOverride} null means the category's typical pH.
  */
 public record Surface(FoodCategory category, Composition composition, double asparagineMgPerKg,
 		double surfaceWaterGPerM2, double thicknessMm, Double phOverride, double bicarbonateGPerKg, double acidGPerKg,

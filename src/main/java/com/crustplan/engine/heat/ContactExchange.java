@@ -3,8 +3,9 @@ package com.crustplan.engine.heat;
 import com.crustplan.engine.message.Message;
 
 /**
- * A face pressed on a hot pan through a thin fat film: q = h_c(T_pan − Ts). Vapour cannot leave into
- * gas here; water at the face boils off at the local boiling point instead (handled by the stepper).
+ * A face pressed on a hot pan through a thin fat film: q = h_c(T_pan − Ts). Vapour cannot
+ * leave into gas here; water at the face boils off at the local boiling point instead
+ * (handled by the stepper).
  */
 final class ContactExchange implements FaceExchange {
 
@@ -14,7 +15,10 @@ final class ContactExchange implements FaceExchange {
 
 	private final Message description;
 
-	/** The pan as a body whose temperature moves with the load; null for a pan held at panK. */
+	/**
+	 * The pan as a body whose temperature moves with the load; null for a pan held at
+	 * panK.
+	 */
 	private final HeatedBody body;
 
 	ContactExchange(double panK, double contactWPerM2K, Message description) {

@@ -8,15 +8,18 @@ public interface FaceExchange {
 	/**
 	 * @param surfaceK face temperature
 	 * @param waterActivity of the face (1 while standing water covers it)
-	 * @param boilingFlux water boiling off behind this face in the last step, kg/(m²·s), which stirs a
-	 * fryer's oil
+	 * @param boilingFlux water boiling off behind this face in the last step, kg/(m²·s),
+	 * which stirs a fryer's oil
 	 */
 	void evaluate(double surfaceK, double waterActivity, double boilingFlux, FaceFlux out);
 
 	/** A short description for the result's assumptions. */
 	Message describe();
 
-	/** The pan or oil this face touches, where it is a body whose temperature moves; null otherwise. */
+	/**
+	 * The pan or oil this face touches, where it is a body whose temperature moves; null
+	 * otherwise.
+	 */
 	default HeatedBody body() {
 		return null;
 	}

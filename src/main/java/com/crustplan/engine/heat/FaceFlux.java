@@ -1,10 +1,10 @@
 package com.crustplan.engine.heat;
 
 /**
- * What a face exchanges with its surroundings at a given surface temperature, linearised for the
- * implicit step: sensible heat into the food q (W/m²) and its slope dq/dT, evaporation to the gas J
- * (kg/(m²·s), negative when steam condenses) and its slopes. A mutable scratch holder so the inner loop
- * allocates nothing.
+ * What a face exchanges with its surroundings at a given surface temperature, linearised
+ * for the implicit step: sensible heat into the food q (W/m²) and its slope dq/dT,
+ * evaporation to the gas J (kg/(m²·s), negative when steam condenses) and its slopes. A
+ * mutable scratch holder so the inner loop allocates nothing.
  */
 public final class FaceFlux {
 

@@ -1,14 +1,22 @@
 package com.crustplan.engine.heat;
 
-/** Which boundary condition each face sees at a time (a pan or grill flip swaps the faces). */
+/**
+ * Which boundary condition each face sees at a time (a pan or grill flip swaps the
+ * faces).
+ */
 public interface FaceSchedule {
 
 	FaceExchange at(int face, double timeS);
 
-	/** True if the face is the heated one at this time (for reporting the browned face). */
+	/**
+	 * True if the face is the heated one at this time (for reporting the browned face).
+	 */
 	boolean heated(int face, double timeS);
 
-	/** The next time after {@code timeS} at which the faces' conditions change (a flip); +∞ if never. */
+	/**
+	 * The next time after {@code timeS} at which the faces' conditions change (a flip);
+	 * +∞ if never.
+	 */
 	default double nextChangeAfter(double timeS) {
 		return Double.POSITIVE_INFINITY;
 	}
@@ -16,12 +24,18 @@ public interface FaceSchedule {
 	/** Flip-free setups in which both faces see the same heat. */
 	boolean symmetric();
 
-	/** The heated body (pan, oil) of this setup, if it has one whose temperature moves; null otherwise. */
+	/**
+	 * The heated body (pan, oil) of this setup, if it has one whose temperature moves;
+	 * null otherwise.
+	 */
 	default HeatedBody body() {
 		return null;
 	}
 
-	/** A schedule that swaps a heated and an open exchange every {@code flipEverySeconds} (0: never). */
+	/**
+	 * A schedule that swaps a heated and an open exchange every {@code flipEverySeconds}
+	 * (0: never).
+	 */
 	static FaceSchedule flipping(FaceExchange heated, FaceExchange open, double flipEverySeconds) {
 		return new FaceSchedule() {
 			private boolean down(int face, double t) {

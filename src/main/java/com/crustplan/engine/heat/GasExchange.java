@@ -7,15 +7,16 @@ import com.crustplan.engine.water.SaturationPressure;
 import com.crustplan.engine.water.WaterVapour;
 
 /**
- * A face open to gas (oven air, steam, kitchen air, or under a radiant heater): convection, grey-body
- * radiation to surroundings at {@code radiantK}, and evaporation J = h_m·(aw·p_sat(Ts) − p_v)/(R_v·T_film)
- * with h_m from the Chilton–Colburn analogy h/h_m = ρ·cp·Le^(2/3) (Incropera, Fundamentals of Heat and
- * Mass Transfer, §6.7): the vapour-density form with both densities taken at the film temperature.
+ * A face open to gas (oven air, steam, kitchen air, or under a radiant heater):
+ * convection, grey-body radiation to surroundings at {@code radiantK}, and evaporation J
+ * = h_m·(aw·p_sat(Ts) − p_v)/(R_v·T_film) with h_m from the Chilton–Colburn analogy h/h_m
+ * = ρ·cp·Le^(2/3) (Incropera, Fundamentals of Heat and Mass Transfer, §6.7): the
+ * vapour-density form with both densities taken at the film temperature.
  */
 public final class GasExchange implements FaceExchange {
 
-	public static final Parameter LEWIS_NUMBER = Parameter.derived("Le", "Lewis number of water vapour in air", 0.85, "–",
-			"α/D_AB with D_AB = 0.26e-4 m²/s at 298 K (Incropera, Table A.8)");
+	public static final Parameter LEWIS_NUMBER = Parameter.derived("Le", "Lewis number of water vapour in air", 0.85,
+			"–", "α/D_AB with D_AB = 0.26e-4 m²/s at 298 K (Incropera, Table A.8)");
 
 	private final Atmosphere gas;
 
@@ -51,7 +52,8 @@ public final class GasExchange implements FaceExchange {
 		out.heatFlux = convection * (ta - surfaceK) + emissivity * Radiation.SIGMA * (tr2 * tr2 - ts3 * surfaceK);
 		out.heatFluxSlope = -convection - 4 * emissivity * Radiation.SIGMA * ts3;
 		double film = 0.5 * (ta + surfaceK);
-		// driving force in partial pressures over the film temperature, so a face below the dew point
+		// driving force in partial pressures over the film temperature, so a face below
+		// the dew point
 		// condenses and a wet face in pure steam settles at the boiling point
 		double perPascal = massTransferCoefficient(film) / (WaterVapour.GAS_CONSTANT.value() * film);
 		double pSat = SaturationPressure.pascal(surfaceK);

@@ -1,12 +1,12 @@
 package com.crustplan.engine.heat;
 
 /**
- * A pan, griddle plate or fryer's oil as one lumped mass (its Biot number is small: metal or stirred
- * oil), with a heat input and losses to the kitchen:
- * m·c·dT/dt = P(T) − Q_food − h·A(T − T_room) − ε·σ·A(T⁴ − T_room⁴).
- * Its temperature is what the food's contact or oil exchange sees; the cook tells it, after each step,
- * how much heat the food took. One instance per run (it holds state); stepped explicitly, which is
- * stable and accurate while the step is far shorter than m·c/(h·A), hours for a pan.
+ * A pan, griddle plate or fryer's oil as one lumped mass (its Biot number is small: metal
+ * or stirred oil), with a heat input and losses to the kitchen: m·c·dT/dt = P(T) − Q_food
+ * − h·A(T − T_room) − ε·σ·A(T⁴ − T_room⁴). Its temperature is what the food's contact or
+ * oil exchange sees; the cook tells it, after each step, how much heat the food took. One
+ * instance per run (it holds state); stepped explicitly, which is stable and accurate
+ * while the step is far shorter than m·c/(h·A), hours for a pan.
  */
 public final class HeatedBody {
 
@@ -14,21 +14,21 @@ public final class HeatedBody {
 	public enum Control {
 
 		/**
-		 * A thermostat (fryer, induction hob, plancha): full power below the set temperature, tapering to
-		 * none across a proportional band.
+		 * A thermostat (fryer, induction hob, plancha): full power below the set
+		 * temperature, tapering to none across a proportional band.
 		 */
 		THERMOSTAT,
 		/**
-		 * A flame left where the cook set it: the power that holds the empty pan at its set temperature, and
-		 * no more when a load pulls it down.
+		 * A flame left where the cook set it: the power that holds the empty pan at its
+		 * set temperature, and no more when a load pulls it down.
 		 */
 		FIXED_INPUT
 
 	}
 
 	/**
-	 * A thermostat's proportional band, K: a few kelvin in catering fryers and induction hobs (assumption;
-	 * the recovery after a load barely depends on it).
+	 * A thermostat's proportional band, K: a few kelvin in catering fryers and induction
+	 * hobs (assumption; the recovery after a load barely depends on it).
 	 */
 	static final double THERMOSTAT_BAND_K = 5;
 
@@ -48,10 +48,16 @@ public final class HeatedBody {
 
 	private final double convection;
 
-	/** Area of food in contact with the body per face that touches it, m² (NaN: from the load). */
+	/**
+	 * Area of food in contact with the body per face that touches it, m² (NaN: from the
+	 * load).
+	 */
 	private double foodAreaPerFaceM2;
 
-	/** Food in a batch, kg, where the contact area follows from it (a fryer basket); NaN otherwise. */
+	/**
+	 * Food in a batch, kg, where the contact area follows from it (a fryer basket); NaN
+	 * otherwise.
+	 */
 	private final double loadKg;
 
 	private final double fixedPowerW;
@@ -70,8 +76,8 @@ public final class HeatedBody {
 	 * @param heatCapacity m·c, J/K
 	 * @param lossAreaM2 area losing heat to the kitchen, m²
 	 * @param convection natural convection to kitchen air, W/(m²·K)
-	 * @param foodAreaPerFaceM2 food area touching the body per food face, m² (a pan's food footprint), or NaN
-	 * when it follows from the load
+	 * @param foodAreaPerFaceM2 food area touching the body per food face, m² (a pan's
+	 * food footprint), or NaN when it follows from the load
 	 * @param loadKg food per batch, kg, when the area follows from it (NaN otherwise)
 	 */
 	public HeatedBody(double heatCapacity, double lossAreaM2, double emissivity, double convection, double maxPowerW,
@@ -92,7 +98,8 @@ public final class HeatedBody {
 
 	/** Heat lost to the kitchen at a body temperature, W. */
 	public double lossW(double t) {
-		return lossAreaM2 * (convection * (t - roomK) + emissivity * Radiation.SIGMA * (Math.pow(t, 4) - Math.pow(roomK, 4)));
+		return lossAreaM2
+				* (convection * (t - roomK) + emissivity * Radiation.SIGMA * (Math.pow(t, 4) - Math.pow(roomK, 4)));
 	}
 
 	/** The heat input at a body temperature, W. */
@@ -104,8 +111,8 @@ public final class HeatedBody {
 	}
 
 	/**
-	 * Tells the body how much food one face carries, kg per m² of face (for a slab: bulk density ×
-	 * thickness), so a load given in kilograms becomes a contact area.
+	 * Tells the body how much food one face carries, kg per m² of face (for a slab: bulk
+	 * density × thickness), so a load given in kilograms becomes a contact area.
 	 */
 	public void placeFood(double foodKgPerM2OfFace) {
 		if (!Double.isNaN(loadKg)) {
@@ -138,7 +145,9 @@ public final class HeatedBody {
 		drawW = 0;
 	}
 
-	/** Starts the body at another temperature than its set one (a pan not yet up to heat). */
+	/**
+	 * Starts the body at another temperature than its set one (a pan not yet up to heat).
+	 */
 	public void preheatTo(double k) {
 		temperatureK = k;
 	}

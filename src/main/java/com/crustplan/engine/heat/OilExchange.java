@@ -7,9 +7,10 @@ import com.crustplan.engine.message.Temperature;
 import com.crustplan.engine.water.WaterVapour;
 
 /**
- * A face in frying oil: q = h(T_oil − Ts), with h rising from its value without boiling towards its
- * bubbling value in proportion to the vapour leaving the face, so h falls back as the crust dries
- * (the trend measured by Hubbard &amp; Farkas 1999 and Mir-Bel, Oria &amp; Salvador 2012).
+ * A face in frying oil: q = h(T_oil − Ts), with h rising from its value without boiling
+ * towards its bubbling value in proportion to the vapour leaving the face, so h falls
+ * back as the crust dries (the trend measured by Hubbard &amp; Farkas 1999 and Mir-Bel,
+ * Oria &amp; Salvador 2012).
  */
 final class OilExchange implements FaceExchange {
 
@@ -19,10 +20,15 @@ final class OilExchange implements FaceExchange {
 
 	private final double bubbling;
 
-	/** Vapour flux at which bubbling is fully developed: all of h_bubbling·(T_oil − 100 °C) boiling water. */
+	/**
+	 * Vapour flux at which bubbling is fully developed: all of h_bubbling·(T_oil − 100
+	 * °C) boiling water.
+	 */
 	private final double fullBoilingFlux;
 
-	/** The oil as a body whose temperature moves with the load; null for oil held at oilK. */
+	/**
+	 * The oil as a body whose temperature moves with the load; null for oil held at oilK.
+	 */
 	private final HeatedBody body;
 
 	OilExchange(double oilK, double quietWPerM2K, double bubblingWPerM2K) {
@@ -53,7 +59,8 @@ final class OilExchange implements FaceExchange {
 
 	@Override
 	public Message describe() {
-		return Message.of("exchange.fryer", Temperature.kelvin(oilK), PlainNumber.of(quiet, 0), Quantity.of(bubbling, "W/m²K"));
+		return Message.of("exchange.fryer", Temperature.kelvin(oilK), PlainNumber.of(quiet, 0),
+				Quantity.of(bubbling, "W/m²K"));
 	}
 
 	@Override

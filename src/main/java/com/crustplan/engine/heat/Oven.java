@@ -8,8 +8,9 @@ import com.crustplan.engine.message.Temperature;
 import com.crustplan.engine.water.Atmosphere;
 
 /**
- * An oven: both faces in air at the set temperature, walls radiating at it; {@code steamPct} is the
- * share of steam in the oven atmosphere by volume (0 to 100 %: dry kitchen air is about 1.6 %).
+ * An oven: both faces in air at the set temperature, walls radiating at it;
+ * {@code steamPct} is the share of steam in the oven atmosphere by volume (0 to 100 %:
+ * dry kitchen air is about 1.6 %).
  */
 public record Oven(double airTemperatureC, boolean fan, double steamPct) implements HeatSetup {
 
@@ -18,19 +19,25 @@ public record Oven(double airTemperatureC, boolean fan, double steamPct) impleme
 		SetupParts.range("steamPct", steamPct, 0, 100, "% steam by volume");
 	}
 
-	/** Relative humidity taken at the oven temperature, converted to a steam share (capped at 100 %). */
+	/**
+	 * Relative humidity taken at the oven temperature, converted to a steam share (capped
+	 * at 100 %).
+	 */
 	public static Oven withRelativeHumidity(double airTemperatureC, boolean fan, double relativeHumidityPct) {
 		SetupParts.range("relativeHumidityPct", relativeHumidityPct, 0, 100, "%");
 		SetupParts.range("temperatureC", airTemperatureC, 50, 320, "°C for an oven");
 		Atmosphere a = Atmosphere.fromRelativeHumidity(SetupParts.kelvin(airTemperatureC), relativeHumidityPct / 100);
-		return new Oven(airTemperatureC, fan, Math.max(Atmosphere.KITCHEN_STEAM_FRACTION, a.steamVolumeFraction()) * 100);
+		return new Oven(airTemperatureC, fan,
+				Math.max(Atmosphere.KITCHEN_STEAM_FRACTION, a.steamVolumeFraction()) * 100);
 	}
 
 	public Atmosphere atmosphere() {
 		return new Atmosphere(SetupParts.kelvin(airTemperatureC), Math.max(steamPct / 100, 0));
 	}
 
-	/** Dew point of the oven atmosphere, °C: a face below it gains water by condensation. */
+	/**
+	 * Dew point of the oven atmosphere, °C: a face below it gains water by condensation.
+	 */
 	public double dewPointC() {
 		return atmosphere().dewPointK() - 273.15;
 	}

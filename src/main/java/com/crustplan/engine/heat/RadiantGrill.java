@@ -13,11 +13,12 @@ import com.crustplan.engine.model.Parameter;
 import com.crustplan.engine.water.Atmosphere;
 
 /**
- * A radiant grill: a salamander or broiler above the food, or coals below it; the other face rests in
- * kitchen air. What reaches the food is {@code heatFluxKwPerM2}: what a black radiometer at 25 °C reads
- * where the food sits. A cook gives it directly (measured, or a published figure for the grill), or
- * gives the element temperature and distance, from which the flux follows through the view factor of
- * {@link GrillKind}. {@code heaterTemperatureC} is the element temperature given or implied;
+ * A radiant grill: a salamander or broiler above the food, or coals below it; the other
+ * face rests in kitchen air. What reaches the food is {@code heatFluxKwPerM2}: what a
+ * black radiometer at 25 °C reads where the food sits. A cook gives it directly
+ * (measured, or a published figure for the grill), or gives the element temperature and
+ * distance, from which the flux follows through the view factor of {@link GrillKind}.
+ * {@code heaterTemperatureC} is the element temperature given or implied;
  * {@code fluxGiven} says which the cook gave. The cook stops where the surface passes
  * {@link #CHAR_SURFACE}: the browning rates are not fitted beyond it.
  */
@@ -25,10 +26,10 @@ public record RadiantGrill(GrillKind kind, double heaterTemperatureC, double dis
 		boolean fluxGiven, double flipEverySeconds) implements HeatSetup {
 
 	/**
-	 * The hottest surface the browning rates are used at: bread crust rates were fitted on bakes with
-	 * crust surfaces up to about 200–250 °C (Zanoni, Peri & Bruno 1995, from memory), the meat, poultry
-	 * and potato rates are calibrated on pans and oil at 175–230 °C; above it a surface pyrolyses
-	 * (chars) rather than browns (from memory).
+	 * The hottest surface the browning rates are used at: bread crust rates were fitted
+	 * on bakes with crust surfaces up to about 200–250 °C (Zanoni, Peri & Bruno 1995,
+	 * from memory), the meat, poultry and potato rates are calibrated on pans and oil at
+	 * 175–230 °C; above it a surface pyrolyses (chars) rather than browns (from memory).
 	 */
 	public static final Parameter CHAR_SURFACE = Parameter.fromMemory("T_char",
 			"highest surface temperature the browning rates are used at", 250, "°C",
@@ -48,7 +49,10 @@ public record RadiantGrill(GrillKind kind, double heaterTemperatureC, double dis
 		}
 	}
 
-	/** A salamander's element at a temperature, the food at the usual distance (the form of round one). */
+	/**
+	 * A salamander's element at a temperature, the food at the usual distance (the form
+	 * of round one).
+	 */
 	public RadiantGrill(double heaterTemperatureC, double flipEverySeconds) {
 		this(ofElement(GrillKind.SALAMANDER, heaterTemperatureC, null, flipEverySeconds));
 	}
@@ -57,7 +61,10 @@ public record RadiantGrill(GrillKind kind, double heaterTemperatureC, double dis
 		this(g.kind, g.heaterTemperatureC, g.distanceMm, g.heatFluxKwPerM2, g.fluxGiven, g.flipEverySeconds);
 	}
 
-	/** An element temperature and distance (null for the kind's usual distance): the flux from the view factor. */
+	/**
+	 * An element temperature and distance (null for the kind's usual distance): the flux
+	 * from the view factor.
+	 */
 	public static RadiantGrill ofElement(GrillKind kind, double elementTemperatureC, Double distanceMm,
 			double flipEverySeconds) {
 		GrillKind k = kind == null ? GrillKind.SALAMANDER : kind;
@@ -73,7 +80,10 @@ public record RadiantGrill(GrillKind kind, double heaterTemperatureC, double dis
 		return new RadiantGrill(k, elementTemperatureC, l, Math.max(q, 1), false, flipEverySeconds);
 	}
 
-	/** A heat flux at the food, kW/m²: the element temperature is implied at the kind's usual distance. */
+	/**
+	 * A heat flux at the food, kW/m²: the element temperature is implied at the kind's
+	 * usual distance.
+	 */
 	public static RadiantGrill ofFlux(GrillKind kind, double kwPerM2, double flipEverySeconds) {
 		GrillKind k = kind == null ? GrillKind.SALAMANDER : kind;
 		SetupParts.range("heatFluxKwPerM2", kwPerM2, 1, 60,
@@ -93,7 +103,9 @@ public record RadiantGrill(GrillKind kind, double heaterTemperatureC, double dis
 		return ofElement(kind, elementTemperatureC, distanceMm, flipEverySeconds);
 	}
 
-	/** Mean view factor from the food face to the heater face (coaxial parallel discs). */
+	/**
+	 * Mean view factor from the food face to the heater face (coaxial parallel discs).
+	 */
 	public double viewFactor() {
 		return kind.viewFactor(distanceMm);
 	}
@@ -104,9 +116,9 @@ public record RadiantGrill(GrillKind kind, double heaterTemperatureC, double dis
 	}
 
 	/**
-	 * The food sees irradiation G = q + σ·T_room⁴ (the radiometer's reading plus what a body at room
-	 * temperature gets back), i.e. surroundings at T_r = (q/σ + T_room⁴)^¼; it absorbs ε·G and emits
-	 * ε·σ·T_s⁴.
+	 * The food sees irradiation G = q + σ·T_room⁴ (the radiometer's reading plus what a
+	 * body at room temperature gets back), i.e. surroundings at T_r = (q/σ + T_room⁴)^¼;
+	 * it absorbs ε·G and emits ε·σ·T_s⁴.
 	 */
 	@Override
 	public FaceSchedule schedule() {

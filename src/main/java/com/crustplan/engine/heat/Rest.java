@@ -7,8 +7,8 @@ import com.crustplan.engine.message.Temperature;
 import com.crustplan.engine.water.Atmosphere;
 
 /**
- * Resting after cooking: both faces in still kitchen air. The heat already in the outer layers moves
- * on inwards, so the core keeps rising for a while (carry-over).
+ * Resting after cooking: both faces in still kitchen air. The heat already in the outer
+ * layers moves on inwards, so the core keeps rising for a while (carry-over).
  */
 public record Rest(double airTemperatureC) implements HeatSetup {
 

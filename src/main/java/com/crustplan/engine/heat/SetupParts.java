@@ -6,7 +6,10 @@ import com.crustplan.engine.message.Message;
 import com.crustplan.engine.message.Quantity;
 import com.crustplan.engine.water.Atmosphere;
 
-/** What the heat setups share: unit conversion, range checks worded alike, kitchen air, message parts. */
+/**
+ * What the heat setups share: unit conversion, range checks worded alike, kitchen air,
+ * message parts.
+ */
 final class SetupParts {
 
 	private SetupParts() {
@@ -24,7 +27,8 @@ final class SetupParts {
 
 	static GasExchange kitchenAir() {
 		double room = kelvin(HeatSetup.KITCHEN_AIR_C.value());
-		return new GasExchange(Atmosphere.kitchen(room), HeatSetup.NATURAL_CONVECTION.value(), room, Message.of("exchange.kitchen-air"));
+		return new GasExchange(Atmosphere.kitchen(room), HeatSetup.NATURAL_CONVECTION.value(), room,
+				Message.of("exchange.kitchen-air"));
 	}
 
 	static Quantity coefficient(double wPerM2K) {

@@ -1,6 +1,9 @@
 package com.crustplan.engine.input;
 
-/** Input the engine cannot run on; names the field and the reason in words a cook can act on. */
+/**
+ * Input the engine cannot run on; names the field and the reason in words a cook can act
+ * on.
+ */
 public class InvalidInputException extends IllegalArgumentException {
 
 	private final String field;

@@ -1,14 +1,17 @@
 package com.crustplan.engine.layers;
 
 /**
- * A vertex-centred finite-volume grid through the thickness: node 0 on face 0, node n−1 on face 1, each
- * node owning the control volume between the midpoints to its neighbours (half volumes at the faces, so
- * a face node is the surface layer). Nodes crowd towards both faces, where the gradients are, by
- * blending uniform and cosine spacing.
+ * A vertex-centred finite-volume grid through the thickness: node 0 on face 0, node n−1
+ * on face 1, each node owning the control volume between the midpoints to its neighbours
+ * (half volumes at the faces, so a face node is the surface layer). Nodes crowd towards
+ * both faces, where the gradients are, by blending uniform and cosine spacing.
  */
 public final class Grid {
 
-	/** Weight of cosine spacing in the blend: 0 uniform, 1 Chebyshev–Lobatto (our choice; see the convergence table). */
+	/**
+	 * Weight of cosine spacing in the blend: 0 uniform, 1 Chebyshev–Lobatto (our choice;
+	 * see the convergence table).
+	 */
 	public static final double DEFAULT_CLUSTERING = 0.7;
 
 	private final double[] position;

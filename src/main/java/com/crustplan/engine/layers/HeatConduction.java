@@ -1,13 +1,15 @@
 package com.crustplan.engine.layers;
 
 /**
- * One backward-Euler step of 1D transient conduction on a {@link Grid}:
- * C_i·(T_i' − T_i)/Δt = Σ G·(T_j' − T_i') + q_face, with interface conductances G = 1/(d/2k_i + d/2k_j)
- * (series resistances of the two half-spacings) and each face's flux linearised as q = b − a·T'.
+ * One backward-Euler step of 1D transient conduction on a {@link Grid}: C_i·(T_i' −
+ * T_i)/Δt = Σ G·(T_j' − T_i') + q_face, with interface conductances G = 1/(d/2k_i +
+ * d/2k_j) (series resistances of the two half-spacings) and each face's flux linearised
+ * as q = b − a·T'.
  * <p>
- * Nodes can be pinned at a temperature (a layer boiling at its boiling point): their rows become
- * T' = T_pin and {@link #surplus(int, double[])} returns the power the pinned layer must shed — the heat
- * that boils water off instead of warming it. Owns its scratch arrays; one instance per run.
+ * Nodes can be pinned at a temperature (a layer boiling at its boiling point): their rows
+ * become T' = T_pin and {@link #surplus(int, double[])} returns the power the pinned
+ * layer must shed — the heat that boils water off instead of warming it. Owns its scratch
+ * arrays; one instance per run.
  */
 public final class HeatConduction {
 
@@ -82,12 +84,17 @@ public final class HeatConduction {
 		rhs[n - 1] += face1Source;
 	}
 
-	/** Adds a heat source (negative: a sink, e.g. water boiling off) to node i's assembled equation, W/m². */
+	/**
+	 * Adds a heat source (negative: a sink, e.g. water boiling off) to node i's assembled
+	 * equation, W/m².
+	 */
 	public void addSource(int i, double watts) {
 		rhs[i] += watts;
 	}
 
-	/** Solves the assembled equations, holding pinned nodes at their pinned temperature. */
+	/**
+	 * Solves the assembled equations, holding pinned nodes at their pinned temperature.
+	 */
 	public void solve(double[] result, boolean[] pinned, double[] pinnedTemperature) {
 		int n = grid.size();
 		for (int i = 0; i < n; i++) {
@@ -108,8 +115,8 @@ public final class HeatConduction {
 	}
 
 	/**
-	 * Power (W/m²) that node i's own energy balance leaves over at temperatures {@code t}: positive for a
-	 * pinned node that receives more heat than it stores.
+	 * Power (W/m²) that node i's own energy balance leaves over at temperatures
+	 * {@code t}: positive for a pinned node that receives more heat than it stores.
 	 */
 	public double surplus(int i, double[] t) {
 		double s = rhs[i] - diag[i] * t[i];

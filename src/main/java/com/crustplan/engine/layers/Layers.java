@@ -1,8 +1,9 @@
 package com.crustplan.engine.layers;
 
 /**
- * Read-only view of the state of every control volume during a run, handed to reactions that work
- * layer by layer (acrylamide). Values are live: they change as the run advances.
+ * Read-only view of the state of every control volume during a run, handed to reactions
+ * that work layer by layer (acrylamide). Values are live: they change as the run
+ * advances.
  */
 public interface Layers {
 

@@ -1,14 +1,18 @@
 package com.crustplan.engine.layers;
 
 /**
- * One backward-Euler step of 1D moisture diffusion on a {@link Grid}, the twin of {@link HeatConduction}:
- * m_i·(X_i' − X_i)/Δt = Σ G·(X_j' − X_i') − J_face, with m_i the dry mass of control volume i per m² of
- * face, interface conductances G = ρ_dry·D/d (ρ_dry and D averaged between the two nodes) and a face's
- * evaporation linearised in moisture as J ≈ J* + s·(X' − X*). Owns its scratch arrays; one instance per run.
+ * One backward-Euler step of 1D moisture diffusion on a {@link Grid}, the twin of
+ * {@link HeatConduction}: m_i·(X_i' − X_i)/Δt = Σ G·(X_j' − X_i') − J_face, with m_i the
+ * dry mass of control volume i per m² of face, interface conductances G = ρ_dry·D/d
+ * (ρ_dry and D averaged between the two nodes) and a face's evaporation linearised in
+ * moisture as J ≈ J* + s·(X' − X*). Owns its scratch arrays; one instance per run.
  */
 public final class MoistureDiffusion {
 
-	/** Effective moisture diffusivity, m²/s, at a temperature (K) and moisture (kg/kg d.b.). */
+	/**
+	 * Effective moisture diffusivity, m²/s, at a temperature (K) and moisture (kg/kg
+	 * d.b.).
+	 */
 	@FunctionalInterface
 	public interface Diffusivity {
 
@@ -63,7 +67,8 @@ public final class MoistureDiffusion {
 			double d = grid.spacing(i);
 			double dryDensity = 0.5 * (dryMass[i] / volume[i] + dryMass[i + 1] / volume[i + 1]);
 			double g = dryDensity
-					* diffusivity.at(0.5 * (temperature[i] + temperature[i + 1]), 0.5 * (moisture[i] + moisture[i + 1])) / d;
+					* diffusivity.at(0.5 * (temperature[i] + temperature[i + 1]), 0.5 * (moisture[i] + moisture[i + 1]))
+					/ d;
 			conductance[i] = g;
 			diag[i] += g;
 			diag[i + 1] += g;
@@ -73,8 +78,8 @@ public final class MoistureDiffusion {
 	}
 
 	/**
-	 * Adds a face's evaporation J ≈ j + slope·(X' − x) to node i's assembled equation, kg/(m²·s); slope in
-	 * kg/(m²·s) per unit of moisture.
+	 * Adds a face's evaporation J ≈ j + slope·(X' − x) to node i's assembled equation,
+	 * kg/(m²·s); slope in kg/(m²·s) per unit of moisture.
 	 */
 	public void addEvaporation(int i, double j, double slope, double x) {
 		diag[i] += slope;
@@ -86,7 +91,10 @@ public final class MoistureDiffusion {
 		solver.solve(lower, diag, upper, rhs, result);
 	}
 
-	/** The conductance between node i and i + 1 of the last assembly, kg/(m²·s) per unit of moisture. */
+	/**
+	 * The conductance between node i and i + 1 of the last assembly, kg/(m²·s) per unit
+	 * of moisture.
+	 */
 	public double conductance(int i) {
 		return conductance[i];
 	}

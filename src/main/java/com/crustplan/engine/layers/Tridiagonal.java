@@ -1,8 +1,9 @@
 package com.crustplan.engine.layers;
 
 /**
- * Thomas algorithm for a diagonally dominant tridiagonal system, with scratch arrays owned by the
- * instance so repeated solves allocate nothing. Not thread-safe: one per simulation.
+ * Thomas algorithm for a diagonally dominant tridiagonal system, with scratch arrays
+ * owned by the instance so repeated solves allocate nothing. Not thread-safe: one per
+ * simulation.
  */
 public final class Tridiagonal {
 
@@ -16,8 +17,8 @@ public final class Tridiagonal {
 	}
 
 	/**
-	 * Solves lower[i]·x[i−1] + diag[i]·x[i] + upper[i]·x[i+1] = rhs[i] into {@code x} (lower[0] and
-	 * upper[n−1] are ignored).
+	 * Solves lower[i]·x[i−1] + diag[i]·x[i] + upper[i]·x[i+1] = rhs[i] into {@code x}
+	 * (lower[0] and upper[n−1] are ignored).
 	 */
 	public void solve(double[] lower, double[] diag, double[] upper, double[] rhs, double[] x) {
 		int n = diag.length;

@@ -1,8 +1,9 @@
 package com.crustplan.engine.message;
 
 /**
- * A physical quantity that is not a temperature, in the SI-based unit a kitchen reads it in; {@code unit}
- * is the unit's symbol ("W/m²K", "kW/m²", "%", "g", "µg/kg") and {@code decimals} how many to show.
+ * A physical quantity that is not a temperature, in the SI-based unit a kitchen reads it
+ * in; {@code unit} is the unit's symbol ("W/m²K", "kW/m²", "%", "g", "µg/kg") and
+ * {@code decimals} how many to show.
  */
 public record Quantity(double value, String unit, int decimals) implements Argument {
 

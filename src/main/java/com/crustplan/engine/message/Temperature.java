@@ -1,6 +1,9 @@
 package com.crustplan.engine.message;
 
-/** A temperature, held in °C (the unit of every engine input); shown whole, in the cook's unit. */
+/**
+ * A temperature, held in °C (the unit of every engine input); shown whole, in the cook's
+ * unit.
+ */
 public record Temperature(double celsius) implements Argument {
 
 	public static Temperature celsius(double c) {

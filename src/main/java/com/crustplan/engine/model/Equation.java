@@ -3,8 +3,8 @@ package com.crustplan.engine.model;
 import java.util.List;
 
 /**
- * One equation of the model as implemented: a plain-text formula, what it means, and the parameters
- * it uses.
+ * One equation of the model as implemented: a plain-text formula, what it means, and the
+ * parameters it uses.
  */
 public record Equation(String title, String formula, String explanation, List<Parameter> parameters) {
 

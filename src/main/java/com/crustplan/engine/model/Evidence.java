@@ -1,6 +1,8 @@
 package com.crustplan.engine.model;
 
-/** How firmly a parameter's value is backed; shown beside every parameter in the product. */
+/**
+ * How firmly a parameter's value is backed; shown beside every parameter in the product.
+ */
 public enum Evidence {
 
 	/** Read in the published source named beside the value. */

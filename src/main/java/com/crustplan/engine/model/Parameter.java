@@ -3,8 +3,9 @@ package com.crustplan.engine.model;
 import java.util.Objects;
 
 /**
- * A model constant with its unit and where it comes from. Every number the engine uses is one of
- * these, so the model page and the contributor guide are generated from the values the code runs on.
+ * A model constant with its unit and where it comes from. Every number the engine uses is
+ * one of these, so the model page and the contributor guide are generated from the values
+ * the code runs on.
  */
 public record Parameter(String symbol, String description, double value, String unit, String source,
 		Evidence evidence) {

@@ -1,13 +1,15 @@
 package com.crustplan.engine.properties;
 
 import java.util.Locale;
+
 /**
- * Major food components with the Choi &amp; Okos temperature polynomials for conductivity, density
- * and specific heat (T in °C, valid −40…150 °C).
+ * Major food components with the Choi &amp; Okos temperature polynomials for
+ * conductivity, density and specific heat (T in °C, valid −40…150 °C).
  * <p>
- * Source: Choi, Y. &amp; Okos, M.R. (1986) "Effects of temperature and composition on the thermal
- * properties of foods", Food Engineering and Process Applications vol. 1, Elsevier, 93–101; as
- * reproduced in ASHRAE Handbook — Refrigeration, "Thermal Properties of Foods", Table 1.
+ * Source: Choi, Y. &amp; Okos, M.R. (1986) "Effects of temperature and composition on the
+ * thermal properties of foods", Food Engineering and Process Applications vol. 1,
+ * Elsevier, 93–101; as reproduced in ASHRAE Handbook — Refrigeration, "Thermal Properties
+ * of Foods", Table 1.
  */
 public enum FoodComponent {
 
@@ -39,7 +41,10 @@ public enum FoodComponent {
 		this.cp2 = cp2;
 	}
 
-	/** Clamped to the fit's range: beyond it the polynomials bend away from real behaviour. */
+	/**
+	 * Clamped to the fit's range: beyond it the polynomials bend away from real
+	 * behaviour.
+	 */
 	private static double clamp(double temperatureC) {
 		return Math.max(MIN_VALID_C, Math.min(MAX_VALID_C, temperatureC));
 	}
@@ -61,13 +66,14 @@ public enum FoodComponent {
 	}
 
 	/**
-	 * Specific enthalpy relative to 0 °C in J/kg: the exact integral of the cp polynomial (used by the
-	 * energy ledger and its tests).
+	 * Specific enthalpy relative to 0 °C in J/kg: the exact integral of the cp polynomial
+	 * (used by the energy ledger and its tests).
 	 */
 	public double enthalpy(double temperatureC) {
 		double t = clamp(temperatureC);
 		double h = 1000 * t * (cp0 + t * (cp1 / 2 + t * cp2 / 3));
-		// beyond the fit's range continue with the end-point cp so enthalpy stays monotone
+		// beyond the fit's range continue with the end-point cp so enthalpy stays
+		// monotone
 		return h + (temperatureC - t) * specificHeat(t);
 	}
 

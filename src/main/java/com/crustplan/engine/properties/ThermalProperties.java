@@ -1,14 +1,17 @@
 package com.crustplan.engine.properties;
 
 /**
- * Mixture properties of a food from its component mass fractions (Choi &amp; Okos 1986 mixing rules):
- * cp = Σ xᵢ cpᵢ, 1/ρ = Σ xᵢ/ρᵢ, k = Σ vᵢ kᵢ with volume fractions vᵢ = (xᵢ/ρᵢ)/Σ(xⱼ/ρⱼ). A gas phase
- * (porosity) is mixed into k by the geometric-mean rule k = k_matrix^(1−ε)·k_gas^ε, a standard
- * porous-medium approximation (common practice).
+ * Mixture properties of a food from its component mass fractions (Choi &amp; Okos 1986
+ * mixing rules): cp = Σ xᵢ cpᵢ, 1/ρ = Σ xᵢ/ρᵢ, k = Σ vᵢ kᵢ with volume fractions vᵢ =
+ * (xᵢ/ρᵢ)/Σ(xⱼ/ρⱼ). A gas phase (porosity) is mixed into k by the geometric-mean rule k =
+ * k_matrix^(1−ε)·k_gas^ε, a standard porous-medium approximation (common practice).
  */
 public final class ThermalProperties {
 
-	/** Thermal conductivity of still air near 100 °C, 0.026–0.031 W/(m·K) (Incropera, Table A.4). */
+	/**
+	 * Thermal conductivity of still air near 100 °C, 0.026–0.031 W/(m·K) (Incropera,
+	 * Table A.4).
+	 */
 	public static final double AIR_CONDUCTIVITY = 0.028;
 
 	private static final FoodComponent[] COMPONENTS = FoodComponent.values();
@@ -59,8 +62,9 @@ public final class ThermalProperties {
 	}
 
 	/**
-	 * Evaluates specific heat (J/(kg·K)), matrix conductivity (W/(m·K)) and specific volume (m³/kg) in one
-	 * pass into {@code out[0..2]}: the stepper's per-node call, which allocates nothing.
+	 * Evaluates specific heat (J/(kg·K)), matrix conductivity (W/(m·K)) and specific
+	 * volume (m³/kg) in one pass into {@code out[0..2]}: the stepper's per-node call,
+	 * which allocates nothing.
 	 */
 	public static void evaluate(double[] massFractions, double temperatureC, double[] out) {
 		double cp = 0;

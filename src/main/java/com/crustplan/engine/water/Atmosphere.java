@@ -1,15 +1,15 @@
 package com.crustplan.engine.water;
 
 /**
- * The gas around a heated face: temperature and vapour content. The humidity input is the steam
- * volume fraction y of the atmosphere (dry kitchen air ≈ 0.016, pure steam 1), i.e. the vapour
- * partial pressure is y·p_atm.
+ * The gas around a heated face: temperature and vapour content. The humidity input is the
+ * steam volume fraction y of the atmosphere (dry kitchen air ≈ 0.016, pure steam 1), i.e.
+ * the vapour partial pressure is y·p_atm.
  */
 public record Atmosphere(double temperatureK, double steamVolumeFraction) {
 
 	/**
-	 * Steam share of kitchen air at 25 °C and 50 % relative humidity: p_v = 0.5·3.17 kPa = 1.58 kPa,
-	 * y = 0.0156 (common practice for the room; p_sat from IAPWS-IF97).
+	 * Steam share of kitchen air at 25 °C and 50 % relative humidity: p_v = 0.5·3.17 kPa
+	 * = 1.58 kPa, y = 0.0156 (common practice for the room; p_sat from IAPWS-IF97).
 	 */
 	public static final double KITCHEN_STEAM_FRACTION = 0.0156;
 
@@ -24,7 +24,8 @@ public record Atmosphere(double temperatureK, double steamVolumeFraction) {
 	}
 
 	/**
-	 * From a relative humidity taken at the gas temperature (p_v = RH·p_sat(T), capped at 1 atm).
+	 * From a relative humidity taken at the gas temperature (p_v = RH·p_sat(T), capped at
+	 * 1 atm).
 	 */
 	public static Atmosphere fromRelativeHumidity(double temperatureK, double relativeHumidity) {
 		double pv = Math.min(relativeHumidity * SaturationPressure.pascal(temperatureK), WaterVapour.ATMOSPHERE_PA);

@@ -3,8 +3,9 @@ package com.crustplan.engine.water;
 import com.crustplan.engine.model.Parameter;
 
 /**
- * Guggenheim–Anderson–de Boer sorption isotherm, X = Xm·C·K·aw / ((1 − K·aw)(1 − K·aw + C·K·aw)), with X
- * in kg water per kg dry matter. Above the moisture at aw = 1 the water is free (aw = 1).
+ * Guggenheim–Anderson–de Boer sorption isotherm, X = Xm·C·K·aw / ((1 − K·aw)(1 − K·aw +
+ * C·K·aw)), with X in kg water per kg dry matter. Above the moisture at aw = 1 the water
+ * is free (aw = 1).
  */
 public record GabIsotherm(Parameter monolayer, Parameter c, Parameter k) {
 
@@ -20,7 +21,10 @@ public record GabIsotherm(Parameter monolayer, Parameter c, Parameter k) {
 		return moisture(1.0);
 	}
 
-	/** Water activity at moisture {@code x} (kg/kg dry basis), from the positive root of the GAB quadratic. */
+	/**
+	 * Water activity at moisture {@code x} (kg/kg dry basis), from the positive root of
+	 * the GAB quadratic.
+	 */
 	public double waterActivity(double x) {
 		if (x <= 0) {
 			return 0;
@@ -34,7 +38,8 @@ public record GabIsotherm(Parameter monolayer, Parameter c, Parameter k) {
 			y = x / b;
 		}
 		else {
-			// x(C−1)y² + (Xm·C − x(C−2))y − x = 0; the root is written to avoid cancellation
+			// x(C−1)y² + (Xm·C − x(C−2))y − x = 0; the root is written to avoid
+			// cancellation
 			y = 2 * x / (b + Math.sqrt(b * b + 4 * a * x));
 		}
 		return Math.min(1.0, y / k.value());

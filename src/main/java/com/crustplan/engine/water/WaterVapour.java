@@ -10,7 +10,9 @@ public final class WaterVapour {
 	public static final Parameter GAS_CONSTANT = Parameter.published("R_v", "specific gas constant of water vapour",
 			461.51805, "J/(kg·K)", "IAPWS R6-95(2018)");
 
-	/** Specific gas constant of dry air, J/(kg·K) (ISO 2533 standard atmosphere: 287.05). */
+	/**
+	 * Specific gas constant of dry air, J/(kg·K) (ISO 2533 standard atmosphere: 287.05).
+	 */
 	public static final double DRY_AIR_GAS_CONSTANT = 287.05;
 
 	/** Standard atmosphere, Pa (ISO 2533). */
@@ -23,12 +25,19 @@ public final class WaterVapour {
 			2501e3, "J/kg", "linear fit h_fg = 2501 − 2.36·t kJ/kg, steam tables (from memory); 2257 kJ/kg at 100 °C");
 
 	public static final Parameter LATENT_HEAT_SLOPE = Parameter.fromMemory("dh_fg/dT",
-			"slope of the latent heat with temperature", 2.36e3, "J/(kg·K)", "linear fit to steam tables (from memory)");
+			"slope of the latent heat with temperature", 2.36e3, "J/(kg·K)",
+			"linear fit to steam tables (from memory)");
 
-	/** Specific heat of dry air near 100 °C, J/(kg·K) (Incropera, Table A.4: 1.009–1.014 kJ/kg·K). */
+	/**
+	 * Specific heat of dry air near 100 °C, J/(kg·K) (Incropera, Table A.4: 1.009–1.014
+	 * kJ/kg·K).
+	 */
 	public static final double DRY_AIR_SPECIFIC_HEAT = 1011;
 
-	/** Specific heat of water vapour at 1 atm near 400 K, J/(kg·K) (Incropera, Table A.6: 2.01 kJ/kg·K). */
+	/**
+	 * Specific heat of water vapour at 1 atm near 400 K, J/(kg·K) (Incropera, Table A.6:
+	 * 2.01 kJ/kg·K).
+	 */
 	public static final double VAPOUR_SPECIFIC_HEAT = 2010;
 
 	private WaterVapour() {
@@ -49,7 +58,10 @@ public final class WaterVapour {
 		return vapourPressurePa / (GAS_CONSTANT.value() * temperatureK);
 	}
 
-	/** Humidity ratio (kg vapour per kg dry air) from the steam volume fraction of the atmosphere. */
+	/**
+	 * Humidity ratio (kg vapour per kg dry air) from the steam volume fraction of the
+	 * atmosphere.
+	 */
 	public static double humidityRatio(double steamVolumeFraction) {
 		double y = Math.min(steamVolumeFraction, 0.999_999);
 		return MOLAR_MASS_RATIO * y / (1 - y);
@@ -64,7 +76,10 @@ public final class WaterVapour {
 		return SaturationPressure.saturationTemperatureK(Math.min(ATMOSPHERE_PA / aw, 2.2e7));
 	}
 
-	/** Below this water activity the boiling point is held (≈ 313 °C): the food is bone dry. */
+	/**
+	 * Below this water activity the boiling point is held (≈ 313 °C): the food is bone
+	 * dry.
+	 */
 	private static final double MIN_BOILING_AW = 0.01;
 
 	private static final int TABLE_SIZE = 2001;
@@ -78,8 +93,9 @@ public final class WaterVapour {
 	}
 
 	/**
-	 * The same boiling point from a table with linear interpolation (error below 0.01 K against the exact
-	 * inverse): the stepper calls it for every boiling node several times a step.
+	 * The same boiling point from a table with linear interpolation (error below 0.01 K
+	 * against the exact inverse): the stepper calls it for every boiling node several
+	 * times a step.
 	 */
 	public static double boilingTemperatureKFast(double waterActivity) {
 		double u = (Math.max(MIN_BOILING_AW, Math.min(1, waterActivity)) - MIN_BOILING_AW) / (1 - MIN_BOILING_AW)
@@ -89,7 +105,10 @@ public final class WaterVapour {
 		return BOILING_TABLE[i] + f * (BOILING_TABLE[i + 1] - BOILING_TABLE[i]);
 	}
 
-	/** Specific enthalpy of liquid water relative to 0 °C, J/kg (Choi–Okos water cp integrated). */
+	/**
+	 * Specific enthalpy of liquid water relative to 0 °C, J/kg (Choi–Okos water cp
+	 * integrated).
+	 */
 	public static double liquidEnthalpy(double temperatureK) {
 		return FoodComponent.WATER.enthalpy(temperatureK - 273.15);
 	}

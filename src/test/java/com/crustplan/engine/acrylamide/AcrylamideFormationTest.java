@@ -1,6 +1,5 @@
 package com.crustplan.engine.acrylamide;
 
-
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -12,8 +11,8 @@ import com.crustplan.engine.layers.Grid;
 import com.crustplan.engine.layers.Layers;
 
 /**
- * The per-layer kinetics on a uniform, constant state (every layer at one temperature and water
- * activity), where the answers are known in closed form.
+ * The per-layer kinetics on a uniform, constant state (every layer at one temperature and
+ * water activity), where the answers are known in closed form.
  */
 class AcrylamideFormationTest {
 
@@ -60,7 +59,8 @@ class AcrylamideFormationTest {
 		};
 	}
 
-	private static AcrylamideFormation heldAt(Surface s, AcrylamideKinetics k, double temperatureC, double seconds, double dt) {
+	private static AcrylamideFormation heldAt(Surface s, AcrylamideKinetics k, double temperatureC, double seconds,
+			double dt) {
 		Grid grid = Grid.uniform(0.002, 5);
 		AcrylamideFormation f = new AcrylamideFormation(s, grid, k);
 		Layers state = uniform(grid, temperatureC + 273.15, 0.05, 0.2);
@@ -72,31 +72,36 @@ class AcrylamideFormationTest {
 
 	@Test
 	void secondOrderCondensationMatchesTheClosedForm() {
-		// A + B → products with [A]₀ = [B]₀: [A](t) = [A]₀/(1 + k[A]₀t) (second-order kinetics, e.g. Atkins'
-		// Physical Chemistry); acrylamide = Y·([A]₀ − [A]) without elimination. 0.5 s steps: 1 % tolerance
+		// A + B → products with [A]₀ = [B]₀: [A](t) = [A]₀/(1 + k[A]₀t) (second-order
+		// kinetics, e.g. Atkins'
+		// Physical Chemistry); acrylamide = Y·([A]₀ − [A]) without elimination. 0.5 s
+		// steps: 1 % tolerance
 		// covers the first-order time-stepping error.
-		Surface equimolar = POTATO.withAsparagineMgPerKg(
-				POTATO.composition().reducingSugarPct() * 10 / AcrylamideModel.M_HEXOSE.value() * AcrylamideModel.M_ASPARAGINE.value()
-						* 1000);
+		Surface equimolar = POTATO.withAsparagineMgPerKg(POTATO.composition().reducingSugarPct() * 10
+				/ AcrylamideModel.M_HEXOSE.value() * AcrylamideModel.M_ASPARAGINE.value() * 1000);
 		AcrylamideKinetics noElimination = new AcrylamideKinetics(AcrylamideKinetics.DEFAULT.formationRateAtRef(),
-				AcrylamideKinetics.DEFAULT.formationActivationEnergy(), 0, AcrylamideKinetics.DEFAULT.eliminationActivationEnergy(),
-				AcrylamideKinetics.DEFAULT.yield());
+				AcrylamideKinetics.DEFAULT.formationActivationEnergy(), 0,
+				AcrylamideKinetics.DEFAULT.eliminationActivationEnergy(), AcrylamideKinetics.DEFAULT.yield());
 		double a0 = AcrylamideFormation.initialAsparagine(equimolar);
 		assertEquals(a0, AcrylamideFormation.initialReducingSugar(equimolar.composition()), 1e-9 * a0);
 		double seconds = 600;
 		AcrylamideFormation f = heldAt(equimolar, noElimination, 170, seconds, 0.5);
-		double k = noElimination.formationRateAtRef() / noElimination.yield() * AcrylamideFormation.phFactor(equimolar.ph());
+		double k = noElimination.formationRateAtRef() / noElimination.yield()
+				* AcrylamideFormation.phFactor(equimolar.ph());
 		double expected = a0 / (1 + k * a0 * seconds);
 		assertEquals(expected, f.asparagine(2), 0.01 * expected);
-		// precursor balance: what condensed, times the yield, is the acrylamide (exact in the scheme)
+		// precursor balance: what condensed, times the yield, is the acrylamide (exact in
+		// the scheme)
 		assertEquals(noElimination.yield() * (a0 - f.asparagine(2)), f.acrylamide(2), 1e-12 * a0);
 		assertEquals(f.asparagine(2), f.reducingSugar(2), 1e-12 * a0);
 	}
 
 	@Test
 	void formationIsNegligibleBelow120C() {
-		// Regulation (EU) 2017/2158 recital 3: acrylamide forms at temperatures typically above 120 °C.
-		// The initial rate (a 5 s hold, precursors barely used) of a dry layer at 110 °C is under 1 % of that
+		// Regulation (EU) 2017/2158 recital 3: acrylamide forms at temperatures typically
+		// above 120 °C.
+		// The initial rate (a 5 s hold, precursors barely used) of a dry layer at 110 °C
+		// is under 1 % of that
 		// at 170 °C, and at 120 °C under 2 %.
 		double cool = heldAt(POTATO, AcrylamideKinetics.DEFAULT, 110, 5, 0.1).acrylamide(2);
 		double warm = heldAt(POTATO, AcrylamideKinetics.DEFAULT, 120, 5, 0.1).acrylamide(2);
@@ -107,7 +112,8 @@ class AcrylamideFormationTest {
 
 	@Test
 	void wetLayersFormNone() {
-		// formation needs a dried layer (Food Chem 352:129305, 2021: crisps form acrylamide once below ≈ 6 % d.b.)
+		// formation needs a dried layer (Food Chem 352:129305, 2021: crisps form
+		// acrylamide once below ≈ 6 % d.b.)
 		assertEquals(0, AcrylamideFormation.dryness(0.95), 0.0);
 		assertEquals(1, AcrylamideFormation.dryness(0.3), 0.0);
 		Grid grid = Grid.uniform(0.002, 5);
@@ -121,8 +127,10 @@ class AcrylamideFormationTest {
 
 	@Test
 	void lowerPhFormsLess() {
-		// lower pH, less acrylamide (Jung, Choi & Ju 2003; Rydberg et al. 2003); one pH unit lower scales the
-		// initial rate by 10^−β. A 1 s hold uses under 1 % of the precursors: 1 % tolerance.
+		// lower pH, less acrylamide (Jung, Choi & Ju 2003; Rydberg et al. 2003); one pH
+		// unit lower scales the
+		// initial rate by 10^−β. A 1 s hold uses under 1 % of the precursors: 1 %
+		// tolerance.
 		Surface acid = POTATO.withPh(POTATO.basePh() - 1);
 		double normal = heldAt(POTATO, AcrylamideKinetics.DEFAULT, 160, 1, 0.1).acrylamide(2);
 		double lower = heldAt(acid, AcrylamideKinetics.DEFAULT, 160, 1, 0.1).acrylamide(2);
@@ -131,10 +139,11 @@ class AcrylamideFormationTest {
 
 	@Test
 	void eliminationRemovesAcrylamideAtHighTemperature() {
-		// acrylamide is an intermediate: it is eliminated on prolonged heating (Knol et al. 2005; Claeys et al. 2005)
+		// acrylamide is an intermediate: it is eliminated on prolonged heating (Knol et
+		// al. 2005; Claeys et al. 2005)
 		AcrylamideKinetics k = AcrylamideKinetics.DEFAULT;
-		AcrylamideKinetics noElimination = new AcrylamideKinetics(k.formationRateAtRef(), k.formationActivationEnergy(), 0,
-				k.eliminationActivationEnergy(), k.yield());
+		AcrylamideKinetics noElimination = new AcrylamideKinetics(k.formationRateAtRef(), k.formationActivationEnergy(),
+				0, k.eliminationActivationEnergy(), k.yield());
 		double with = heldAt(POTATO, k, 190, 1800, 1).acrylamide(2);
 		double without = heldAt(POTATO, noElimination, 190, 1800, 1).acrylamide(2);
 		assertTrue(with < without, () -> with + " vs " + without);
@@ -142,7 +151,8 @@ class AcrylamideFormationTest {
 
 	@Test
 	void freshBasisDilutesByTheWaterPresent() {
-		// µg/kg as eaten = µg/kg d.m. / (1 + X): with X = 1 the fresh figure is half the dry-matter figure (exact)
+		// µg/kg as eaten = µg/kg d.m. / (1 + X): with X = 1 the fresh figure is half the
+		// dry-matter figure (exact)
 		Grid grid = Grid.uniform(0.002, 5);
 		AcrylamideFormation dryBasis = new AcrylamideFormation(POTATO, grid);
 		AcrylamideFormation wetBasis = new AcrylamideFormation(POTATO, grid);
@@ -153,13 +163,15 @@ class AcrylamideFormationTest {
 			wetBasis.step(wet, 1);
 		}
 		assertEquals(0.5 * dryBasis.portionUgPerKg(), wetBasis.portionUgPerKg(), 1e-9 * dryBasis.portionUgPerKg());
-		assertEquals(dryBasis.portionUgPerKg(), dryBasis.crustUgPerKg(), 1e-9 * dryBasis.portionUgPerKg(), "uniform state");
+		assertEquals(dryBasis.portionUgPerKg(), dryBasis.crustUgPerKg(), 1e-9 * dryBasis.portionUgPerKg(),
+				"uniform state");
 		assertEquals(0.001, dryBasis.crustDepthM(), 0.0);
 	}
 
 	@Test
 	void rateTableMatchesTheArrheniusLaw() {
-		// the tabulated factors against exp(−Ea/R·(1/T − 1/T_ref)) computed directly: linear interpolation over
+		// the tabulated factors against exp(−Ea/R·(1/T − 1/T_ref)) computed directly:
+		// linear interpolation over
 		// 0.05 K errs by (Ea/RT²·0.05 K)²/8 < 1e-5 relative at 105 °C
 		RateTable table = RateTable.DEFAULT;
 		for (double t = 378.2; t < 720; t += 0.737) {

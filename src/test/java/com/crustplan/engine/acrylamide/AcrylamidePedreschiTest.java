@@ -16,10 +16,10 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.heat.DeepFryer;
 
 /**
- * The recorded formation constants against the published fry data they were fitted on: Pedreschi,
- * Kaack &amp; Granby 2006 (Food Res Int 39:40), blanched strips fried to 40 % moisture, 135 / 327 / 564 µg/kg
- * at 150 / 170 / 190 °C. If the heat and moisture model changes, these fail: run {@link PedreschiFit#main}
- * and record the new constants.
+ * The recorded formation constants against the published fry data they were fitted on:
+ * Pedreschi, Kaack &amp; Granby 2006 (Food Res Int 39:40), blanched strips fried to 40 %
+ * moisture, 135 / 327 / 564 µg/kg at 150 / 170 / 190 °C. If the heat and moisture model
+ * changes, these fail: run {@link PedreschiFit#main} and record the new constants.
  */
 class AcrylamidePedreschiTest {
 
@@ -35,7 +35,8 @@ class AcrylamidePedreschiTest {
 
 	@Test
 	void recordedConstantsReproduceTheFittedPoints() {
-		// 2 %: the constants are recorded to 4 significant figures and the fit converges to 1e-6 in ln
+		// 2 %: the constants are recorded to 4 significant figures and the fit converges
+		// to 1e-6 in ln
 		for (int i : new int[] { 0, 2 }) {
 			double predicted = PedreschiFit.portionAtFinalMoisture(fries[i], AcrylamideKinetics.DEFAULT);
 			assertEquals(PedreschiFit.MEASURED_UG_PER_KG[i], predicted, 0.02 * PedreschiFit.MEASURED_UG_PER_KG[i],
@@ -45,8 +46,10 @@ class AcrylamidePedreschiTest {
 
 	@Test
 	void heldOutPointAt170CWithinFactor1point5() {
-		// 327 µg/kg at 170 °C was not used in the fit. Factor 1.5: replicate and between-laboratory spread of
-		// acrylamide in fries is commonly 10–30 %, and the strip is modelled as a slab. PedreschiFit prints the current error.
+		// 327 µg/kg at 170 °C was not used in the fit. Factor 1.5: replicate and
+		// between-laboratory spread of
+		// acrylamide in fries is commonly 10–30 %, and the strip is modelled as a slab.
+		// PedreschiFit prints the current error.
 		double predicted = PedreschiFit.portionAtFinalMoisture(fries[1], AcrylamideKinetics.DEFAULT);
 		double ratio = predicted / PedreschiFit.MEASURED_UG_PER_KG[1];
 		assertTrue(ratio > 1 / 1.5 && ratio < 1.5, () -> "170 °C: predicted " + predicted + " µg/kg");
@@ -54,10 +57,13 @@ class AcrylamidePedreschiTest {
 
 	@Test
 	void fitIsReproducible() {
-		// refitting from the same runs recovers the recorded constants (rounded to 4 figures: 0.1 %)
+		// refitting from the same runs recovers the recorded constants (rounded to 4
+		// figures: 0.1 %)
 		AcrylamideKinetics fitted = PedreschiFit.fit(fries[0], fries[2]);
-		assertEquals(AcrylamideModel.FORMATION_RATE.value(), fitted.formationRateAtRef(), 1e-3 * fitted.formationRateAtRef());
-		assertEquals(AcrylamideModel.FORMATION_EA.value(), fitted.formationActivationEnergy(), 1e-3 * fitted.formationActivationEnergy());
+		assertEquals(AcrylamideModel.FORMATION_RATE.value(), fitted.formationRateAtRef(),
+				1e-3 * fitted.formationRateAtRef());
+		assertEquals(AcrylamideModel.FORMATION_EA.value(), fitted.formationActivationEnergy(),
+				1e-3 * fitted.formationActivationEnergy());
 	}
 
 	@Test
@@ -71,13 +77,14 @@ class AcrylamidePedreschiTest {
 
 	@Test
 	void engineAgreesWithTheReplayedHistory() {
-		// the stepper's own figures equal an independent integration over the recorded states (same
+		// the stepper's own figures equal an independent integration over the recorded
+		// states (same
 		// arithmetic, so 1e-9 relative)
 		LayerHistory history = new LayerHistory();
 		Target never = Target.lightness(FoodCategory.POTATO.colourPath().darkestLightness());
 		CookResult r = CookSimulation.run(PedreschiFit.blanchedStrip(), new DeepFryer(175), never,
-				PedreschiFit.settings().withHorizonS(480).withRecordSeries(true).withOutputIntervalS(60), AcrylamideFormation.REACTION,
-				history::accept);
+				PedreschiFit.settings().withHorizonS(480).withRecordSeries(true).withOutputIntervalS(60),
+				AcrylamideFormation.REACTION, history::accept);
 		List<Sample> series = r.series();
 		Sample last = series.get(series.size() - 1);
 		AcrylamideFormation replay = new AcrylamideFormation(PedreschiFit.blanchedStrip(), history.grid());

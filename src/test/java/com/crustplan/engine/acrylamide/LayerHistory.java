@@ -8,9 +8,9 @@ import com.crustplan.engine.layers.Grid;
 import com.crustplan.engine.layers.Layers;
 
 /**
- * The state through the thickness after every step of one engine run, recorded so the acrylamide
- * kinetics can be integrated again over the same temperature and water history with trial constants
- * (the history does not depend on them).
+ * The state through the thickness after every step of one engine run, recorded so the
+ * acrylamide kinetics can be integrated again over the same temperature and water history
+ * with trial constants (the history does not depend on them).
  */
 final class LayerHistory implements Consumer<Layers> {
 
@@ -59,7 +59,9 @@ final class LayerHistory implements Consumer<Layers> {
 		return time.get(step);
 	}
 
-	/** Mean moisture of the whole piece after a step, kg water per kg of food (wet basis). */
+	/**
+	 * Mean moisture of the whole piece after a step, kg water per kg of food (wet basis).
+	 */
 	double meanMoistureWetBasis(int step) {
 		double water = 0;
 		double dry = 0;
@@ -73,8 +75,9 @@ final class LayerHistory implements Consumer<Layers> {
 	}
 
 	/**
-	 * The first time the piece's mean moisture falls to {@code wetBasis}, interpolated between steps, as
-	 * {step index after the crossing, fraction of that step}; null if never.
+	 * The first time the piece's mean moisture falls to {@code wetBasis}, interpolated
+	 * between steps, as {step index after the crossing, fraction of that step}; null if
+	 * never.
 	 */
 	double[] crossing(double wetBasis) {
 		double before = meanMoistureWetBasis(0);

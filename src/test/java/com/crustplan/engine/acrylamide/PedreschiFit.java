@@ -9,25 +9,29 @@ import com.crustplan.engine.heat.DeepFryer;
 import com.crustplan.engine.cook.Target;
 
 /**
- * Fits the formation constants (k_f at 170 °C and Ea,f) to Pedreschi, Kaack &amp; Granby 2006 (Food Res
- * Int 39:40): potato strips 0.8 × 0.8 × 5 cm, blanched 50 °C / 80 min, fried to 40 % moisture (wet
- * basis), acrylamide 135 / 327 / 564 µg/kg at 150 / 170 / 190 °C. Fitted on 150 and 190 °C, 170 °C
- * held out. Run {@link #main} after any change to the heat and moisture model and copy the printed
- * constants into {@link AcrylamideModel}; the tests check that the recorded constants still fit.
- * From the project directory: {@code mvn -o -q test-compile} then
+ * Fits the formation constants (k_f at 170 °C and Ea,f) to Pedreschi, Kaack &amp; Granby
+ * 2006 (Food Res Int 39:40): potato strips 0.8 × 0.8 × 5 cm, blanched 50 °C / 80 min,
+ * fried to 40 % moisture (wet basis), acrylamide 135 / 327 / 564 µg/kg at 150 / 170 / 190
+ * °C. Fitted on 150 and 190 °C, 170 °C held out. Run {@link #main} after any change to
+ * the heat and moisture model and copy the printed constants into
+ * {@link AcrylamideModel}; the tests check that the recorded constants still fit. From
+ * the project directory: {@code mvn -o -q test-compile} then
  * {@code java -cp target/classes:target/test-classes com.crustplan.engine.acrylamide.PedreschiFit}.
  * <p>
- * The strip is run as an 8 mm slab, the convention a cook uses when entering chips by their thickness.
- * Blanched composition: the category's frying potato (0.40 % reducing sugar, 3000 mg/kg asparagine) with
- * half of both leached out by the long warm blanch — an assumption; the short hot blanch of Pedreschi et
- * al. 2005 removes about 40 % by our reading of its −64 % (see {@code Mitigations}), and 80 min at 50 °C
- * leaches at least as much. Hence 0.20 % and 1500 mg/kg.
+ * The strip is run as an 8 mm slab, the convention a cook uses when entering chips by
+ * their thickness. Blanched composition: the category's frying potato (0.40 % reducing
+ * sugar, 3000 mg/kg asparagine) with half of both leached out by the long warm blanch —
+ * an assumption; the short hot blanch of Pedreschi et al. 2005 removes about 40 % by our
+ * reading of its −64 % (see {@code Mitigations}), and 80 min at 50 °C leaches at least as
+ * much. Hence 0.20 % and 1500 mg/kg.
  */
 public final class PedreschiFit {
 
 	static final double[] OIL_C = { 150, 170, 190 };
 
-	/** Pedreschi, Kaack &amp; Granby 2006, Food Res Int 39:40, blanched strips (µg/kg). */
+	/**
+	 * Pedreschi, Kaack &amp; Granby 2006, Food Res Int 39:40, blanched strips (µg/kg).
+	 */
 	static final double[] MEASURED_UG_PER_KG = { 135, 327, 564 };
 
 	static final double FINAL_MOISTURE_WET_BASIS = 0.40;
@@ -50,18 +54,24 @@ public final class PedreschiFit {
 			.withSurfaceWaterGPerM2(0);
 	}
 
-	/** Settings of the fit runs: the engine's defaults, without series, long enough for 150 °C. */
+	/**
+	 * Settings of the fit runs: the engine's defaults, without series, long enough for
+	 * 150 °C.
+	 */
 	static CookSettings settings() {
 		return CookSettings.defaults().withRecordSeries(false).withHorizonS(3 * 3600);
 	}
 
-	/** One fry recorded step by step; the target is the darkest colour, never reached, so it runs on. */
+	/**
+	 * One fry recorded step by step; the target is the darkest colour, never reached, so
+	 * it runs on.
+	 */
 	static LayerHistory fry(double oilC) {
 		LayerHistory history = new LayerHistory();
 		Surface strip = blanchedStrip();
 		Target never = Target.lightness(FoodCategory.POTATO.colourPath().darkestLightness());
-		CookSimulation.run(strip, new DeepFryer(oilC), never, settings().withHorizonS(horizonFor(oilC)), AcrylamideFormation.REACTION,
-				history::accept);
+		CookSimulation.run(strip, new DeepFryer(oilC), never, settings().withHorizonS(horizonFor(oilC)),
+				AcrylamideFormation.REACTION, history::accept);
 		return history;
 	}
 
@@ -69,7 +79,10 @@ public final class PedreschiFit {
 		return oilC < 160 ? 5400 : 3600;
 	}
 
-	/** Portion acrylamide (µg/kg) when the piece reaches 40 % moisture, integrating over a recorded fry. */
+	/**
+	 * Portion acrylamide (µg/kg) when the piece reaches 40 % moisture, integrating over a
+	 * recorded fry.
+	 */
 	static double portionAtFinalMoisture(LayerHistory h, AcrylamideKinetics k) {
 		double[] cross = h.crossing(FINAL_MOISTURE_WET_BASIS);
 		if (cross == null) {
@@ -97,8 +110,8 @@ public final class PedreschiFit {
 	}
 
 	/**
-	 * Newton iteration on ln(predicted/measured) at 150 and 190 °C for (ln k_f,ref, Ea,f), elimination and
-	 * yield held at the model's values.
+	 * Newton iteration on ln(predicted/measured) at 150 and 190 °C for (ln k_f,ref,
+	 * Ea,f), elimination and yield held at the model's values.
 	 */
 	static AcrylamideKinetics fit(LayerHistory at150, LayerHistory at190) {
 		double lnK = Math.log(AcrylamideKinetics.DEFAULT.formationRateAtRef());
@@ -148,9 +161,9 @@ public final class PedreschiFit {
 				fitted.formationActivationEnergy());
 		for (int i = 0; i < OIL_C.length; i++) {
 			double p = portionAtFinalMoisture(runs[i], fitted);
-			System.out.printf("%.0f °C: %.1f min to 40 %% moisture, predicted %.0f µg/kg, measured %.0f (%+.1f %%)%s%n", OIL_C[i],
-					timeToFinalMoisture(runs[i]) / 60, p, MEASURED_UG_PER_KG[i], 100 * (p / MEASURED_UG_PER_KG[i] - 1),
-					i == 1 ? "  [held out]" : "");
+			System.out.printf("%.0f °C: %.1f min to 40 %% moisture, predicted %.0f µg/kg, measured %.0f (%+.1f %%)%s%n",
+					OIL_C[i], timeToFinalMoisture(runs[i]) / 60, p, MEASURED_UG_PER_KG[i],
+					100 * (p / MEASURED_UG_PER_KG[i] - 1), i == 1 ? "  [held out]" : "");
 		}
 	}
 

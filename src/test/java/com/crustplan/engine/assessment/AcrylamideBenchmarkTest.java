@@ -1,6 +1,5 @@
 package com.crustplan.engine.assessment;
 
-
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -14,9 +13,9 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 
 /**
- * The benchmark table against Commission Regulation (EU) 2017/2158, Annex IV (µg/kg). The expected
- * values are typed in here from the Annex table, independently of the enum; they are exact, so the
- * tolerance is zero.
+ * The benchmark table against Commission Regulation (EU) 2017/2158, Annex IV (µg/kg). The
+ * expected values are typed in here from the Annex table, independently of the enum; they
+ * are exact, so the tolerance is zero.
  */
 class AcrylamideBenchmarkTest {
 
@@ -46,7 +45,8 @@ class AcrylamideBenchmarkTest {
 	@Test
 	void everyBenchmarkEqualsAnnexIv() {
 		// Regulation (EU) 2017/2158 Annex IV; exact values, tolerance 0
-		assertEquals(ANNEX_IV.keySet(), java.util.EnumSet.allOf(BenchmarkLevel.class), "every row of the table is checked");
+		assertEquals(ANNEX_IV.keySet(), java.util.EnumSet.allOf(BenchmarkLevel.class),
+				"every row of the table is checked");
 		for (BenchmarkLevel b : BenchmarkLevel.values()) {
 			assertEquals(ANNEX_IV.get(b), b.microgramsPerKg(), 0.0, b.name());
 		}
@@ -54,14 +54,20 @@ class AcrylamideBenchmarkTest {
 
 	@Test
 	void categoriesMapToTheirProducts() {
-		// Annex IV product rows; bread defaults to wheat-based soft bread, sweet dough to biscuits
+		// Annex IV product rows; bread defaults to wheat-based soft bread, sweet dough to
+		// biscuits
 		assertEquals(500, Product.defaultFor(FoodCategory.POTATO).benchmark().orElseThrow().microgramsPerKg(), 0.0);
-		assertEquals(750, Product.forSurface(FoodCategory.POTATO, "crisps").benchmark().orElseThrow().microgramsPerKg(), 0.0);
+		assertEquals(750, Product.forSurface(FoodCategory.POTATO, "crisps").benchmark().orElseThrow().microgramsPerKg(),
+				0.0);
 		assertTrue(Product.forSurface(FoodCategory.POTATO, "roast-potato").benchmark().isEmpty());
 		assertEquals(50, Product.defaultFor(FoodCategory.BREAD).benchmark().orElseThrow().microgramsPerKg(), 0.0);
-		assertEquals(100, Product.forSurface(FoodCategory.BREAD, "other-bread").benchmark().orElseThrow().microgramsPerKg(), 0.0);
-		assertEquals(350, Product.defaultFor(FoodCategory.SWEET_DOUGH).benchmark().orElseThrow().microgramsPerKg(), 0.0);
-		assertEquals(800, Product.forSurface(FoodCategory.SWEET_DOUGH, "gingerbread").benchmark().orElseThrow().microgramsPerKg(), 0.0);
+		assertEquals(100,
+				Product.forSurface(FoodCategory.BREAD, "other-bread").benchmark().orElseThrow().microgramsPerKg(), 0.0);
+		assertEquals(350, Product.defaultFor(FoodCategory.SWEET_DOUGH).benchmark().orElseThrow().microgramsPerKg(),
+				0.0);
+		assertEquals(800,
+				Product.forSurface(FoodCategory.SWEET_DOUGH, "gingerbread").benchmark().orElseThrow().microgramsPerKg(),
+				0.0);
 		for (FoodCategory c : new FoodCategory[] { FoodCategory.MEAT, FoodCategory.POULTRY_SKIN, FoodCategory.FISH,
 				FoodCategory.VEGETABLE }) {
 			Product p = Product.defaultFor(c);
@@ -75,7 +81,8 @@ class AcrylamideBenchmarkTest {
 
 	@Test
 	void unknownProductKeyNamesTheField() {
-		InvalidInputException e = assertThrows(InvalidInputException.class, () -> Product.forSurface(FoodCategory.POTATO, "gingerbread"));
+		InvalidInputException e = assertThrows(InvalidInputException.class,
+				() -> Product.forSurface(FoodCategory.POTATO, "gingerbread"));
 		assertEquals("product", e.field());
 		assertTrue(e.reason().contains("french-fries"), e.reason());
 	}

@@ -16,7 +16,8 @@ class AcrylamideChapterTest {
 		assertTrue(section.equations().stream().anyMatch(e -> e.parameters().contains(AcrylamideModel.FORMATION_RATE)));
 		assertTrue(section.limits().size() >= 3);
 		assertTrue(AcrylamideModel.FORMATION_RATE.source().contains("Pedreschi, Kaack & Granby 2006 (150 and 190 °C)"));
-		// every constant of the model, the warnings and the mitigations is listed on the model page, with a source
+		// every constant of the model, the warnings and the mitigations is listed on the
+		// model page, with a source
 		var listed = section.equations().stream().flatMap(e -> e.parameters().stream()).toList();
 		for (var p : AcrylamideModel.parameters()) {
 			assertTrue(listed.contains(p), p.symbol());
@@ -25,4 +26,5 @@ class AcrylamideChapterTest {
 		assertTrue(listed.contains(AcrylamideWarnings.MAX_FRYING_C));
 		assertTrue(listed.stream().noneMatch(p -> p.source().isBlank()));
 	}
+
 }

@@ -1,6 +1,5 @@
 package com.crustplan.engine.assessment;
 
-
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -21,12 +20,14 @@ import com.crustplan.engine.heat.DeepFryer;
 import com.crustplan.engine.heat.PanContact;
 import com.crustplan.system.MessageText;
 
-/** Mitigations for 10 mm chips fried golden at 180 °C, each computed by re-running the model. */
+/**
+ * Mitigations for 10 mm chips fried golden at 180 °C, each computed by re-running the
+ * model.
+ */
 class AcrylamideMitigationsTest {
 
 	/** The engine speaks in codes: its text is read as the API shows it (°C). */
 	static final MessageText TEXT = new MessageText();
-
 
 	private static Map<String, Mitigation> byCode;
 
@@ -39,9 +40,13 @@ class AcrylamideMitigationsTest {
 
 	@Test
 	void lighterColourAndRawMaterialMeasuresReduceAcrylamide() {
-		// Annex II measures: lighter colour, soaking, blanching, asparaginase, acid, storage above 6 °C
-		assertEquals(List.of("LOWER_TEMPERATURE", "LIGHTER_TARGET", "SOAK", "BLANCH", "ASPARAGINASE", "ACID_DIP", "WARM_STORAGE")
-			.stream().sorted().toList(), byCode.keySet().stream().sorted().toList());
+		// Annex II measures: lighter colour, soaking, blanching, asparaginase, acid,
+		// storage above 6 °C
+		assertEquals(List
+			.of("LOWER_TEMPERATURE", "LIGHTER_TARGET", "SOAK", "BLANCH", "ASPARAGINASE", "ACID_DIP", "WARM_STORAGE")
+			.stream()
+			.sorted()
+			.toList(), byCode.keySet().stream().sorted().toList());
 		for (Mitigation m : byCode.values()) {
 			assertTrue(m.applicable(), m.code() + ": " + m.reason());
 			assertFalse(m.source().isBlank(), m.code());
@@ -55,7 +60,8 @@ class AcrylamideMitigationsTest {
 	void lowerTemperatureTakesLongerToTheSameColour() {
 		Mitigation m = byCode.get("LOWER_TEMPERATURE");
 		assertEquals(Mitigation.Basis.SAME_COLOUR, m.basis());
-		assertTrue(TEXT.celsius(m.change()).contains("170 °C"), "180 °C oil steps down to 170 °C, below the 175 °C measure");
+		assertTrue(TEXT.celsius(m.change()).contains("170 °C"),
+				"180 °C oil steps down to 170 °C, below the 175 °C measure");
 		assertTrue(m.effectMinutes() > 0);
 		assertTrue(m.effectUgPerKg() < 0 || TEXT.celsius(m.reason()).startsWith("No gain"), "a null result says so");
 		assertTrue(byCode.get("LIGHTER_TARGET").effectMinutes() < 0, "a lighter colour is reached sooner");
@@ -63,19 +69,28 @@ class AcrylamideMitigationsTest {
 
 	@Test
 	void lowerTemperatureHelpsThickChipsFriedHot() {
-		// Annex II: fry below 175 °C. For thick-cut chips (14 mm) fried golden at 190 °C the model finds less
-		// acrylamide at 170 °C for the same colour (for thinner fries it finds about none: see the note)
-		Mitigation m = Mitigations.compute(Surface.defaults(FoodCategory.POTATO).withThicknessMm(14), Product.FRENCH_FRIES,
-				new DeepFryer(190), Target.stage("golden"), CookSettings.defaults())
-			.stream().filter(x -> x.code().equals("LOWER_TEMPERATURE")).findFirst().orElseThrow();
+		// Annex II: fry below 175 °C. For thick-cut chips (14 mm) fried golden at 190 °C
+		// the model finds less
+		// acrylamide at 170 °C for the same colour (for thinner fries it finds about
+		// none: see the note)
+		Mitigation m = Mitigations
+			.compute(Surface.defaults(FoodCategory.POTATO).withThicknessMm(14), Product.FRENCH_FRIES,
+					new DeepFryer(190), Target.stage("golden"), CookSettings.defaults())
+			.stream()
+			.filter(x -> x.code().equals("LOWER_TEMPERATURE"))
+			.findFirst()
+			.orElseThrow();
 		assertTrue(m.effectUgPerKg() < 0, () -> m.beforeUgPerKg() + " → " + m.afterUgPerKg());
 	}
 
 	@Test
 	void soakingAndBlanchingWithinThePublishedReductions() {
-		// soaking 120 min: −21 … −33 % (Pedreschi, Kaack & Granby 2006); blanching 85 °C / 3.5 min: −64 % on average
-		// (Pedreschi et al. 2005). The removal fractions were derived from these at face value, but the engine
-		// adds depletion and a changed browning time, so we allow the published range widened by 10 points.
+		// soaking 120 min: −21 … −33 % (Pedreschi, Kaack & Granby 2006); blanching 85 °C
+		// / 3.5 min: −64 % on average
+		// (Pedreschi et al. 2005). The removal fractions were derived from these at face
+		// value, but the engine
+		// adds depletion and a changed browning time, so we allow the published range
+		// widened by 10 points.
 		double soak = byCode.get("SOAK").relativeEffect();
 		assertTrue(soak < -0.11 && soak > -0.43, () -> "soak " + soak);
 		double blanch = byCode.get("BLANCH").relativeEffect();
@@ -87,14 +102,16 @@ class AcrylamideMitigationsTest {
 	@Test
 	void warmStorageComparesWithColdStoredTubers() {
 		Mitigation m = byCode.get("WARM_STORAGE");
-		// cold-stored tubers (×3 reducing sugar, from memory) brown sooner and hold more acrylamide
+		// cold-stored tubers (×3 reducing sugar, from memory) brown sooner and hold more
+		// acrylamide
 		assertTrue(m.beforeUgPerKg() > m.afterUgPerKg());
 		assertTrue(m.beforeMinutes() < m.afterMinutes());
 	}
 
 	@Test
 	void removalFractionsFollowFromThePublishedReductions() {
-		// (1 − f)² = 1 − R: soaking R = 0.27 → f = 0.146; blanching R = 0.64 → f = 0.40 (derived; 1e-3)
+		// (1 − f)² = 1 − R: soaking R = 0.27 → f = 0.146; blanching R = 0.64 → f = 0.40
+		// (derived; 1e-3)
 		assertEquals(0.146, Mitigations.SOAK_REMOVAL.value(), 1e-3);
 		assertEquals(0.400, Mitigations.BLANCH_REMOVAL.value(), 1e-3);
 	}

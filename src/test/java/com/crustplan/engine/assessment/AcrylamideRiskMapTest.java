@@ -1,6 +1,5 @@
 package com.crustplan.engine.assessment;
 
-
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -36,13 +35,14 @@ class AcrylamideRiskMapTest {
 
 	@BeforeAll
 	static void compute() {
-		map = RiskMap.compute(CHIPS, Product.FRENCH_FRIES, new DeepFryer(175), GOLDEN, new double[] { 160, 190 }, STEP_S,
-				MAX_S, CookSettings.defaults());
+		map = RiskMap.compute(CHIPS, Product.FRENCH_FRIES, new DeepFryer(175), GOLDEN, new double[] { 160, 190 },
+				STEP_S, MAX_S, CookSettings.defaults());
 	}
 
 	@Test
 	void cellsAgreeWithSingleRunsAtTheSameSettings() {
-		// each row is one run: a single run at the map's settings must give the same numbers (same arithmetic:
+		// each row is one run: a single run at the map's settings must give the same
+		// numbers (same arithmetic:
 		// exact to 1e-9)
 		for (RiskMap.Row row : map.rows()) {
 			CookResult single = AcrylamideCook.run(CHIPS, new DeepFryer(row.temperatureC()), GOLDEN,
@@ -54,7 +54,8 @@ class AcrylamideRiskMapTest {
 				Sample s = series.get(k);
 				RiskMap.Cell c = row.cells().get(k);
 				assertEquals(k * STEP_S, c.timeS(), 1e-9);
-				assertEquals(s.portionAcrylamideUgPerKg(), c.portionUgPerKg(), 1e-9 * (1 + s.portionAcrylamideUgPerKg()));
+				assertEquals(s.portionAcrylamideUgPerKg(), c.portionUgPerKg(),
+						1e-9 * (1 + s.portionAcrylamideUgPerKg()));
 				assertEquals(s.crustAcrylamideUgPerKg(), c.crustUgPerKg(), 1e-9 * (1 + s.crustAcrylamideUgPerKg()));
 				assertEquals(s.browningExtent(), c.browningExtent(), 1e-12);
 				assertEquals(BenchmarkLevel.FRENCH_FRIES.zoneOf(s.portionAcrylamideUgPerKg()), c.zone());
@@ -64,12 +65,14 @@ class AcrylamideRiskMapTest {
 
 	@Test
 	void targetLineIsTheSingleRunsTimeToTarget() {
-		// the run-on past the target and the output interval do not change when the target is reached
+		// the run-on past the target and the output interval do not change when the
+		// target is reached
 		for (RiskMap.Row row : map.rows()) {
 			CookResult plain = AcrylamideCook.run(CHIPS, new DeepFryer(row.temperatureC()), GOLDEN);
 			assertTrue(row.reachesTarget());
 			assertEquals(plain.timeToTargetS(), row.targetTimeS(), 1e-9);
-			assertEquals(plain.portionAcrylamideAtTargetUgPerKg(), row.targetPortionUgPerKg(), 1e-9 * plain.portionAcrylamideAtTargetUgPerKg());
+			assertEquals(plain.portionAcrylamideAtTargetUgPerKg(), row.targetPortionUgPerKg(),
+					1e-9 * plain.portionAcrylamideAtTargetUgPerKg());
 		}
 		assertTrue(map.rows().get(1).targetTimeS() < map.rows().get(0).targetTimeS(), "hotter oil, sooner golden");
 	}
@@ -79,7 +82,11 @@ class AcrylamideRiskMapTest {
 		RiskMap.Row hot = map.rows().get(1);
 		assertEquals(RiskMap.UNBROWNED_KEY, hot.cells().get(0).stageKey());
 		assertEquals(AcrylamideZone.LOW, hot.cells().get(0).zone());
-		RiskMap.Cell atTarget = hot.cells().stream().filter(c -> c.timeS() >= hot.targetTimeS()).findFirst().orElseThrow();
+		RiskMap.Cell atTarget = hot.cells()
+			.stream()
+			.filter(c -> c.timeS() >= hot.targetTimeS())
+			.findFirst()
+			.orElseThrow();
 		assertEquals("golden", atTarget.stageKey());
 		assertTrue(FoodCategory.POTATO.stage(hot.cells().get(hot.cells().size() - 1).stageKey()).isPresent());
 		assertEquals(BenchmarkLevel.FRENCH_FRIES, map.benchmarkOrNull());
@@ -93,14 +100,16 @@ class AcrylamideRiskMapTest {
 		assertEquals(new RadiantGrill(600, 0), HeatSetups.withTemperature(new RadiantGrill(800, 0), 600));
 		assertEquals(new DeepFryer(165), HeatSetups.withTemperature(new DeepFryer(180), 165));
 		// a row outside the mode's range is refused with the field named
-		assertEquals("temperatureC", assertThrows(InvalidInputException.class,
-				() -> HeatSetups.withTemperature(new DeepFryer(180), 230)).field());
+		assertEquals("temperatureC",
+				assertThrows(InvalidInputException.class, () -> HeatSetups.withTemperature(new DeepFryer(180), 230))
+					.field());
 	}
 
 	@Test
 	void refusesMapsTooLargeOrForAnotherCategory() {
-		InvalidInputException e = assertThrows(InvalidInputException.class, () -> RiskMap.compute(CHIPS, Product.FRENCH_FRIES,
-				new DeepFryer(175), GOLDEN, new double[] { 170 }, 1, 3600, CookSettings.defaults()));
+		InvalidInputException e = assertThrows(InvalidInputException.class,
+				() -> RiskMap.compute(CHIPS, Product.FRENCH_FRIES, new DeepFryer(175), GOLDEN, new double[] { 170 }, 1,
+						3600, CookSettings.defaults()));
 		assertEquals("timeStepS", e.field());
 		e = assertThrows(InvalidInputException.class, () -> RiskMap.compute(CHIPS, Product.BISCUITS, new DeepFryer(175),
 				GOLDEN, new double[] { 170 }, 30, 600, CookSettings.defaults()));

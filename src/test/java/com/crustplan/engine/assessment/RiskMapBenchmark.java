@@ -1,6 +1,5 @@
 package com.crustplan.engine.assessment;
 
-
 import java.util.concurrent.TimeUnit;
 
 import org.openjdk.jmh.annotations.Benchmark;
@@ -23,8 +22,9 @@ import com.crustplan.engine.layers.Grid;
 import com.crustplan.engine.layers.Layers;
 
 /**
- * Speed of the acrylamide work: a 30-temperature fry risk map (goal: 60 ms) and the per-step layer
- * update alone. Run with {@code java -cp target/test-classes:<test classpath> org.openjdk.jmh.Main RiskMapBenchmark}.
+ * Speed of the acrylamide work: a 30-temperature fry risk map (goal: 60 ms) and the
+ * per-step layer update alone. Run with
+ * {@code java -cp target/test-classes:<test classpath> org.openjdk.jmh.Main RiskMapBenchmark}.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
@@ -67,7 +67,10 @@ public class RiskMapBenchmark {
 			return crust(i) ? 0.2 + 0.08 * depth(i) : 1;
 		}
 
-		/** A fry: six dried, hot layers under each face, a wet interior at its boiling point. */
+		/**
+		 * A fry: six dried, hot layers under each face, a wet interior at its boiling
+		 * point.
+		 */
 		private boolean crust(int i) {
 			return depth(i) < 6;
 		}
@@ -95,8 +98,8 @@ public class RiskMapBenchmark {
 
 	@Benchmark
 	public RiskMap fryerMap30Temperatures() {
-		return RiskMap.compute(chips, Product.FRENCH_FRIES, new DeepFryer(170), Target.stage("golden"), temperatures, 30,
-				900, CookSettings.defaults());
+		return RiskMap.compute(chips, Product.FRENCH_FRIES, new DeepFryer(170), Target.stage("golden"), temperatures,
+				30, 900, CookSettings.defaults());
 	}
 
 	/** 1200 steps (10 min at 0.5 s) of the layer update alone, on a frying state. */

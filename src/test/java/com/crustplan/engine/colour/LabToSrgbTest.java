@@ -9,26 +9,28 @@ import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.api.Test;
 
 /**
- * CIE 1976 L*a*b* (D65) → sRGB (IEC 61966-2-1) against published reference pairs and against the JDK's
- * own colour management (java.awt.color, an ICC implementation that is independent of our code).
+ * CIE 1976 L*a*b* (D65) → sRGB (IEC 61966-2-1) against published reference pairs and
+ * against the JDK's own colour management (java.awt.color, an ICC implementation that is
+ * independent of our code).
  */
 class LabToSrgbTest {
 
 	@ParameterizedTest(name = "Lab({0}, {1}, {2}) → {3}")
 	@CsvSource({
-			// Neutral greys and white: L* 100 is the reference white, L* 50 is Y = 0.1842, which the sRGB
+			// Neutral greys and white: L* 100 is the reference white, L* 50 is Y =
+			// 0.1842, which the sRGB
 			// curve encodes as 0.4663 → 119 = 0x77 (IEC 61966-2-1; CIE 15:2004).
-			"100, 0, 0, #ffffff",
-			"50, 0, 0, #777777",
-			"0, 0, 0, #000000",
-			// The sRGB primaries in L*a*b* (D65), as tabulated in colour-science references (e.g. Lindbloom's
-			// tables, computed from IEC 61966-2-1 and CIE 15:2004): red (53.2408, 80.0925, 67.2032),
+			"100, 0, 0, #ffffff", "50, 0, 0, #777777", "0, 0, 0, #000000",
+			// The sRGB primaries in L*a*b* (D65), as tabulated in colour-science
+			// references (e.g. Lindbloom's
+			// tables, computed from IEC 61966-2-1 and CIE 15:2004): red (53.2408,
+			// 80.0925, 67.2032),
 			// green (87.7347, −86.1827, 83.1793), blue (32.2970, 79.1875, −107.8602).
-			"53.2408, 80.0925, 67.2032, #ff0000",
-			"87.7347, -86.1827, 83.1793, #00ff00",
+			"53.2408, 80.0925, 67.2032, #ff0000", "87.7347, -86.1827, 83.1793, #00ff00",
 			"32.2970, 79.1875, -107.8602, #0000ff" })
 	void shouldMatchPublishedReferencePairs(double l, double a, double b, String hex) {
-		// Exact hex match: the reference values are given to 4 decimals, far finer than one 8-bit step.
+		// Exact hex match: the reference values are given to 4 decimals, far finer than
+		// one 8-bit step.
 		assertEquals(hex, new Lab(l, a, b).hex());
 	}
 
@@ -36,11 +38,16 @@ class LabToSrgbTest {
 	@CsvSource({ "80, -0.5, 18", "62, 10, 32", "40, 22, 12", "64, 2, 28", "30, 14, 22", "20, 5, -5", "90, -10, 30",
 			"75, 20, -10", "50, 0, 0" })
 	void shouldMatchTheJdkColourManagement(double l, double a, double b) {
-		// java.awt.color.ColorSpace.CS_sRGB converts from the ICC profile connection space, which is CIE XYZ
-		// relative to D50. So: Lab → XYZ(D65) by the CIE 1976 inverse (CIE 15:2004 §8.2.1), Bradford
-		// chromatic adaptation D65 → D50 (the ICC's chosen transform; matrix from Lindbloom's published
-		// tables), then the JDK. Tolerance 0.5/255 per channel: the JDK works in float with 16-bit profile
-		// tables, and IEC 61966-2-1 rounds its matrix to 4 digits; seen differences are below 0.1/255.
+		// java.awt.color.ColorSpace.CS_sRGB converts from the ICC profile connection
+		// space, which is CIE XYZ
+		// relative to D50. So: Lab → XYZ(D65) by the CIE 1976 inverse (CIE 15:2004
+		// §8.2.1), Bradford
+		// chromatic adaptation D65 → D50 (the ICC's chosen transform; matrix from
+		// Lindbloom's published
+		// tables), then the JDK. Tolerance 0.5/255 per channel: the JDK works in float
+		// with 16-bit profile
+		// tables, and IEC 61966-2-1 rounds its matrix to 4 digits; seen differences are
+		// below 0.1/255.
 		float[] expected = ColorSpace.getInstance(ColorSpace.CS_sRGB).fromCIEXYZ(toD50(labToXyzD65(l, a, b)));
 		Srgb actual = Srgb.fromLab(new Lab(l, a, b));
 		double tol = 0.5 / 255;
@@ -59,8 +66,10 @@ class LabToSrgbTest {
 
 	@Test
 	void shouldAgreeWithTheJdkOnTheReferenceWhite() {
-		// The D50 white of the ICC connection space must come out as sRGB white (ICC.1; the JDK's profile):
-		// this guards the adaptation step the comparison above relies on. Tolerance 1e-4, the JDK's float.
+		// The D50 white of the ICC connection space must come out as sRGB white (ICC.1;
+		// the JDK's profile):
+		// this guards the adaptation step the comparison above relies on. Tolerance 1e-4,
+		// the JDK's float.
 		float[] white = ColorSpace.getInstance(ColorSpace.CS_sRGB).fromCIEXYZ(toD50(labToXyzD65(100, 0, 0)));
 		for (float c : white) {
 			assertEquals(1.0, c, 1e-4);

@@ -14,11 +14,13 @@ import com.crustplan.engine.heat.Oven;
 import com.crustplan.engine.heat.PanContact;
 
 /**
- * Step and grid convergence of whole cooks: the time to a target colour at the default settings (31 nodes,
- * Δt 0.5 s) against a run with twice the nodes and a quarter of the step. 5 % is the tolerance: a plan read
- * to the nearest quarter minute on a 5 min sear, and well above the conduction error alone (HeatConductionTest).
- * Under a radiant grill the drying front is a fraction of a millimetre thick and crosses the face nodes one by
- * one, so the default grid is allowed 10 % there — still well inside the spread of the calibrated browning rates.
+ * Step and grid convergence of whole cooks: the time to a target colour at the default
+ * settings (31 nodes, Δt 0.5 s) against a run with twice the nodes and a quarter of the
+ * step. 5 % is the tolerance: a plan read to the nearest quarter minute on a 5 min sear,
+ * and well above the conduction error alone (HeatConductionTest). Under a radiant grill
+ * the drying front is a fraction of a millimetre thick and crosses the face nodes one by
+ * one, so the default grid is allowed 10 % there — still well inside the spread of the
+ * calibrated browning rates.
  */
 class CookConvergenceTest {
 
@@ -38,7 +40,8 @@ class CookConvergenceTest {
 	}
 
 	private static void assertConverged(Surface surface, HeatSetup setup, String stage, double tolerance) {
-		double coarse = timeToTarget(surface, setup, stage, CookSettings.DEFAULT_NODES, CookSettings.DEFAULT_TIME_STEP_S);
+		double coarse = timeToTarget(surface, setup, stage, CookSettings.DEFAULT_NODES,
+				CookSettings.DEFAULT_TIME_STEP_S);
 		double fine = timeToTarget(surface, setup, stage, 2 * CookSettings.DEFAULT_NODES - 1,
 				CookSettings.DEFAULT_TIME_STEP_S / 4);
 		assertEquals(fine, coarse, tolerance * fine, String.format("defaults %.1f s, refined %.1f s", coarse, fine));
@@ -46,7 +49,8 @@ class CookConvergenceTest {
 
 	@Test
 	void shouldConvergeMonotonicallyAsTheStepIsHalved() {
-		// First-order time stepping: successive halvings of Δt must change the answer by less each time
+		// First-order time stepping: successive halvings of Δt must change the answer by
+		// less each time
 		// (no oscillation, no drift), on a pan sear and a fry.
 		Object[][] cases = { { Surface.defaults(FoodCategory.MEAT), new PanContact(220, true, 0), "browned" },
 				{ Surface.defaults(FoodCategory.POTATO), new DeepFryer(175), "golden" } };
@@ -54,7 +58,8 @@ class CookConvergenceTest {
 			double previousChange = Double.MAX_VALUE;
 			double previous = Double.NaN;
 			for (double dt : new double[] { 1, 0.5, 0.25, 0.125 }) {
-				double t = timeToTarget((Surface) c[0], (HeatSetup) c[1], (String) c[2], CookSettings.DEFAULT_NODES, dt);
+				double t = timeToTarget((Surface) c[0], (HeatSetup) c[1], (String) c[2], CookSettings.DEFAULT_NODES,
+						dt);
 				if (!Double.isNaN(previous)) {
 					double change = Math.abs(t - previous);
 					assertTrue(change < previousChange, c[1] + ": change " + change + " s at Δt " + dt);

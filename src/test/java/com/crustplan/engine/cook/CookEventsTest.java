@@ -14,9 +14,10 @@ import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.heat.PanContact;
 
 /**
- * Events and listeners of the cook, checked against the run's own series: an event fires where the
- * quantity it watches crosses its threshold (linear interpolation inside the step, so to within what the
- * quantity moves in one step), and a stopping handler ends the cook there.
+ * Events and listeners of the cook, checked against the run's own series: an event fires
+ * where the quantity it watches crosses its threshold (linear interpolation inside the
+ * step, so to within what the quantity moves in one step), and a stopping handler ends
+ * the cook there.
  */
 class CookEventsTest {
 

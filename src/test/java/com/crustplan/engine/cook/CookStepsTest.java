@@ -15,7 +15,10 @@ import com.crustplan.engine.heat.Rest;
 import com.crustplan.engine.heat.Oven;
 import com.crustplan.engine.heat.PanContact;
 
-/** Cooks in several steps: the state carries across step boundaries, and each step ends as it says. */
+/**
+ * Cooks in several steps: the state carries across step boundaries, and each step ends as
+ * it says.
+ */
 class CookStepsTest {
 
 	private static final Surface STEAK = Surface.defaults(FoodCategory.MEAT).withThicknessMm(30);
@@ -26,7 +29,10 @@ class CookStepsTest {
 		return CookSimulation.runSteps(STEAK, steps, Target.stage("browned"), coreC, SETTINGS, LayerReaction.NONE);
 	}
 
-	/** A boundary between two identical steps changes nothing: conservation of the state across it. */
+	/**
+	 * A boundary between two identical steps changes nothing: conservation of the state
+	 * across it.
+	 */
 	@Test
 	void twoIdenticalStepsEqualOneStepOfTheirCombinedLength() {
 		HeatSetup pan = new PanContact(230, true, 60);
@@ -46,16 +52,17 @@ class CookStepsTest {
 	}
 
 	/**
-	 * Sear, oven to 52 °C at the core, rest 5 min in kitchen air: the oven step ends on the core, and the
-	 * core keeps rising after the pull (carry-over, as every kitchen knows: a few kelvin for a thick cut).
+	 * Sear, oven to 52 °C at the core, rest 5 min in kitchen air: the oven step ends on
+	 * the core, and the core keeps rising after the pull (carry-over, as every kitchen
+	 * knows: a few kelvin for a thick cut).
 	 */
 	@Test
 	void searThenOvenToCoreThenRestCarriesOver() {
 		HeatSetup pan = new PanContact(240, true, 60);
 		HeatSetup oven = new Oven(180, true, 0);
 		HeatSetup kitchen = new Rest(22);
-		StepsResult r = run(List.of(CookStep.timed(pan, 180), CookStep.toCore(oven, 52, 3600), CookStep.timed(kitchen, 300)),
-				55.0);
+		StepsResult r = run(
+				List.of(CookStep.timed(pan, 180), CookStep.toCore(oven, 52, 3600), CookStep.timed(kitchen, 300)), 55.0);
 		assertEquals(3, r.steps().size());
 		CookStep.Record ovenStep = r.steps().get(1);
 		assertEquals(CookStep.Ending.CORE, ovenStep.endedBy());

@@ -19,19 +19,22 @@ import com.crustplan.engine.properties.ThermalProperties;
 import com.crustplan.engine.water.Atmosphere;
 
 /**
- * First law over whole runs: the heat that crossed the faces minus the enthalpy the vapour carried off
- * must equal the change of the food's enthalpy, computed here independently from the final state with the
- * Choi &amp; Okos cp integrals (ThermalProperties.enthalpy, checked against Simpson's rule in
- * ChoiOkosPropertiesTest): each node's composition from the category's dry fractions and its moisture,
- * standing water as liquid water. Tolerance 1 % of the heat in (project validation list); the
- * linearisation of the face fluxes and cp taken at the start of each step are first-order in Δt and stay
- * far below it when the balance is kept.
+ * First law over whole runs: the heat that crossed the faces minus the enthalpy the
+ * vapour carried off must equal the change of the food's enthalpy, computed here
+ * independently from the final state with the Choi &amp; Okos cp integrals
+ * (ThermalProperties.enthalpy, checked against Simpson's rule in ChoiOkosPropertiesTest):
+ * each node's composition from the category's dry fractions and its moisture, standing
+ * water as liquid water. Tolerance 1 % of the heat in (project validation list); the
+ * linearisation of the face fluxes and cp taken at the start of each step are first-order
+ * in Δt and stay far below it when the balance is kept.
  */
 class EnergyBalanceTest {
 
 	private static final double TOLERANCE_SHARE_OF_HEAT_IN = 0.01;
 
-	/** Enthalpy of the food and the water standing on it relative to 0 °C, J/m² of face. */
+	/**
+	 * Enthalpy of the food and the water standing on it relative to 0 °C, J/m² of face.
+	 */
 	static double foodEnthalpy(Surface surface, double[] temperatureK, double[] moisture, double[] dryMass,
 			double[] standingWater) {
 		double[] dry = surface.composition().dryMatterFractions();
@@ -54,12 +57,15 @@ class EnergyBalanceTest {
 	/** Runs the cook and returns (heat in − vapour out − ΔH) / heat in. */
 	static double relativeGap(Surface surface, HeatSetup setup, double horizonS) {
 		// run on past the target for as long as it takes to cover the whole horizon
-		CookSettings settings = CookSettings.defaults().withHorizonS(horizonS).withRunPastTargetFraction(1e6)
+		CookSettings settings = CookSettings.defaults()
+			.withHorizonS(horizonS)
+			.withRunPastTargetFraction(1e6)
 			.withRecordSeries(false);
 		CookResult result = CookSimulation.run(surface, setup, darkest(surface.category()), settings);
 		CookResult.FinalState end = result.finalState();
 		int n = end.temperatureK().length;
-		// initial state: uniform temperature and moisture, the same dry mass per node (dry matter never moves)
+		// initial state: uniform temperature and moisture, the same dry mass per node
+		// (dry matter never moves)
 		double[] t0 = new double[n];
 		Arrays.fill(t0, surface.initialTemperatureC() + 273.15);
 		double[] x0 = new double[n];
@@ -84,7 +90,8 @@ class EnergyBalanceTest {
 		assertEquals(0, gap, TOLERANCE_SHARE_OF_HEAT_IN, String.format("energy gap %.2f %% of heat in", 100 * gap));
 	}
 
-	// ---------------------------------------------------------------- whole cooks, each mode
+	// ---------------------------------------------------------------- whole cooks, each
+	// mode
 
 	@Test
 	void shouldBalanceEnergyOverAWholePanSear() {
@@ -106,36 +113,43 @@ class EnergyBalanceTest {
 		assertBalanced(Surface.defaults(FoodCategory.FISH), new RadiantGrill(800, 0), 300);
 	}
 
-	// ---------------------------------------------------------------- phases that balance today
+	// ---------------------------------------------------------------- phases that
+	// balance today
 
 	@Test
 	void shouldBalanceEnergyInASteamOvenThatKeepsTheFaceWet() {
-		// 100 % steam at 100 °C condenses on a 40 mm cold steak for 30 min: condensation (negative vapour out)
-		// carries nearly all the heat; the faces never dry, so no bare-face evaporation is involved.
+		// 100 % steam at 100 °C condenses on a 40 mm cold steak for 30 min: condensation
+		// (negative vapour out)
+		// carries nearly all the heat; the faces never dry, so no bare-face evaporation
+		// is involved.
 		assertBalanced(Surface.defaults(FoodCategory.MEAT).withSurfaceWaterGPerM2(1000).withThicknessMm(40),
 				new Oven(100, false, 100), 1800);
 	}
 
 	@Test
 	void shouldBalanceEnergyWhileStandingWaterEvaporatesInAHotOven() {
-		// The constant-rate period: 1.5 kg/m² of standing water on a warm 50 mm piece in a dry 200 °C fan oven
-		// for 5 min (the film lasts about 8 min): convection, wall radiation and film evaporation only.
-		assertBalanced(Surface.defaults(FoodCategory.MEAT).withSurfaceWaterGPerM2(1500).withThicknessMm(50)
+		// The constant-rate period: 1.5 kg/m² of standing water on a warm 50 mm piece in
+		// a dry 200 °C fan oven
+		// for 5 min (the film lasts about 8 min): convection, wall radiation and film
+		// evaporation only.
+		assertBalanced(Surface.defaults(FoodCategory.MEAT)
+			.withSurfaceWaterGPerM2(1500)
+			.withThicknessMm(50)
 			.withInitialTemperatureC(45), new Oven(200, true, Atmosphere.KITCHEN_STEAM_FRACTION * 100), 300);
 	}
 
 	@Test
 	void shouldBalanceEnergyWhileAWetFaceBoilsOnAPan() {
-		// 2 kg/m² of water boiling off a steak's face on a 220 °C pan for one minute: contact heat and the
+		// 2 kg/m² of water boiling off a steak's face on a 220 °C pan for one minute:
+		// contact heat and the
 		// boiling of standing water at 100 °C.
-		assertBalanced(Surface.defaults(FoodCategory.MEAT).withSurfaceWaterGPerM2(2000),
-				new PanContact(220, true, 0), 60);
+		assertBalanced(Surface.defaults(FoodCategory.MEAT).withSurfaceWaterGPerM2(2000), new PanContact(220, true, 0),
+				60);
 	}
 
 	@Test
 	void shouldBalanceEnergyWhileAWetFaceBoilsUnderAGrill() {
-		assertBalanced(Surface.defaults(FoodCategory.FISH).withSurfaceWaterGPerM2(2000),
-				new RadiantGrill(800, 0), 60);
+		assertBalanced(Surface.defaults(FoodCategory.FISH).withSurfaceWaterGPerM2(2000), new RadiantGrill(800, 0), 60);
 	}
 
 }

@@ -16,19 +16,27 @@ import com.crustplan.engine.heat.PanContact;
 import com.crustplan.engine.heat.HeatedBody;
 import com.crustplan.engine.heat.PanBody;
 
-/** Pans and fryers with a body: what a load draws from them, checked against energy balances. */
+/**
+ * Pans and fryers with a body: what a load draws from them, checked against energy
+ * balances.
+ */
 class EquipmentLoadTest {
 
 	private static final Surface STEAKS = Surface.defaults(FoodCategory.MEAT).withThicknessMm(25);
 
 	private static double panAfter(List<Sample> series, double s) {
-		return series.stream().filter(x -> Math.abs(x.timeS() - s) < 1e-6).findFirst().orElseThrow().heatSourceTemperatureC();
+		return series.stream()
+			.filter(x -> Math.abs(x.timeS() - s) < 1e-6)
+			.findFirst()
+			.orElseThrow()
+			.heatSourceTemperatureC();
 	}
 
 	/**
-	 * Two cold 25 mm steaks covering half a 2.3 kg cast-iron pan at 230 °C draw about 76 kJ in the first
-	 * 2 min; with no reserve of heat the pan falls about 70 K (derived: 76 kJ / (2.3 kg × 420 J/kg·K),
-	 * less what the flame still gives). A cook who turns the flame up keeps it within a few kelvin.
+	 * Two cold 25 mm steaks covering half a 2.3 kg cast-iron pan at 230 °C draw about 76
+	 * kJ in the first 2 min; with no reserve of heat the pan falls about 70 K (derived:
+	 * 76 kJ / (2.3 kg × 420 J/kg·K), less what the flame still gives). A cook who turns
+	 * the flame up keeps it within a few kelvin.
 	 */
 	@Test
 	void crowdedPanOnAFixedFlameFallsTensOfKelvinAndAKeptUpOneHolds() {
@@ -44,8 +52,9 @@ class EquipmentLoadTest {
 	}
 
 	/**
-	 * Energy balance of oil plus food over a fry: heat from the element = oil's sensible heat + heat to
-	 * the food + losses, and the heat the oil gave equals what the food's two faces took in.
+	 * Energy balance of oil plus food over a fry: heat from the element = oil's sensible
+	 * heat + heat to the food + losses, and the heat the oil gave equals what the food's
+	 * two faces took in.
 	 */
 	@Test
 	void fryerEnergyBalancesWithTheFood() {

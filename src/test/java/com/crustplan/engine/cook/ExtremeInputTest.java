@@ -17,9 +17,10 @@ import com.crustplan.engine.heat.Oven;
 import com.crustplan.engine.heat.PanContact;
 
 /**
- * Random surfaces and setups across the whole accepted input range (seeded, so a failure repeats): every run
- * either gives finite temperatures, moisture and colour throughout, or refuses with a field error a cook can
- * act on. No NaN or absurd temperature may reach a page or the API.
+ * Random surfaces and setups across the whole accepted input range (seeded, so a failure
+ * repeats): every run either gives finite temperatures, moisture and colour throughout,
+ * or refuses with a field error a cook can act on. No NaN or absurd temperature may reach
+ * a page or the API.
  */
 class ExtremeInputTest {
 
@@ -62,7 +63,8 @@ class ExtremeInputTest {
 				assertThat(refused.reason()).isNotBlank();
 			}
 		}
-		// most of the space is followed; refusals are the extremes (sub-millimetre pieces, flooded faces)
+		// most of the space is followed; refusals are the extremes (sub-millimetre
+		// pieces, flooded faces)
 		assertThat(finished).isGreaterThan(60);
 	}
 

@@ -33,8 +33,8 @@ import com.crustplan.engine.message.Temperature;
 import com.crustplan.engine.message.TemperatureDifference;
 
 /**
- * The doneness judge on real engine runs, with the published or trade threshold named beside each check,
- * and each suggestion re-checked by a forward run of the engine.
+ * The doneness judge on real engine runs, with the published or trade threshold named
+ * beside each check, and each suggestion re-checked by a forward run of the engine.
  */
 class DonenessJudgeTest {
 
@@ -51,7 +51,10 @@ class DonenessJudgeTest {
 	/** A baguette as a 60 mm slab of lean dough. */
 	static final Surface BAGUETTE = BREAD.withThicknessMm(60);
 
-	/** Dry kitchen air as the oven atmosphere: about 1.6 % steam by volume (25 °C, 50 % RH). */
+	/**
+	 * Dry kitchen air as the oven atmosphere: about 1.6 % steam by volume (25 °C, 50 %
+	 * RH).
+	 */
 	static final double DRY = 1.6;
 
 	static List<DonenessWarning> judge(Surface s, HeatSetup h, Target t) {
@@ -89,7 +92,8 @@ class DonenessJudgeTest {
 
 		@Test
 		void shouldCallChickenGoldenAtANinetyNineDegreeCoreDry() {
-			// skin-on chicken in a dry 200 °C fan oven: golden at about 20 min with the core near 99 °C
+			// skin-on chicken in a dry 200 °C fan oven: golden at about 20 min with the
+			// core near 99 °C
 			CookResult r = AcrylamideCook.run(CHICKEN, new Oven(200, true, DRY), Target.stage("golden"));
 			assertThat(r.coreTemperatureAtTargetC()).isGreaterThan(95);
 			DonenessWarning w = only(DonenessJudge.judge(CHICKEN, new Oven(200, true, DRY), r, Cut.WHOLE),
@@ -104,22 +108,26 @@ class DonenessJudgeTest {
 
 		@Test
 		void shouldBringTheChickenCoreIntoTheJuicyRangeWhenBrownedFirstAndFinishedToTheFoodCode() {
-			// the suggestion as a forward run: golden in a 200 °C pan, then a 180 °C oven until the centre reads 74 °C
+			// the suggestion as a forward run: golden in a 200 °C pan, then a 180 °C oven
+			// until the centre reads 74 °C
 			StepsResult r = steps(CHICKEN, Target.stage("golden"), 74.0,
 					CookStep.toColour(new PanContact(200, true, 60), Target.stage("golden"), 3600),
 					CookStep.toCore(new Oven(180, true, DRY), 74.0, 3600));
 			assertThat(r.colourReached()).isTrue();
 			assertThat(r.coreReached()).isTrue();
-			// FDA Food Code 2022 74 °C reached, under the 80 °C juiciness limit (common practice)
+			// FDA Food Code 2022 74 °C reached, under the 80 °C juiciness limit (common
+			// practice)
 			assertThat(DonenessJudge.peakCoreC(r.cook(), r.cook().simulatedS(), Double.NaN)).isBetween(74.0, 80.0);
-			assertThat(codes(DonenessJudge.judge(CHICKEN, List.of(CookStep.timed(new PanContact(200, true, 60), 1)),
-					r, Cut.WHOLE))).isEmpty();
+			assertThat(codes(DonenessJudge.judge(CHICKEN, List.of(CookStep.timed(new PanContact(200, true, 60), 1)), r,
+					Cut.WHOLE)))
+				.isEmpty();
 		}
 
 		@Test
 		void shouldCallASteakBrownedInTheOvenWellPastWellDoneAndFixItBySearingFirst() {
 			List<DonenessWarning> w = judge(STEAK, new Oven(200, true, DRY), Target.stage("browned"));
-			// whole-muscle meat is well done by about 70 °C (common practice doneness words)
+			// whole-muscle meat is well done by about 70 °C (common practice doneness
+			// words)
 			assertThat(celsius(reason(only(w, "core-past-juiciness")).args().get(2))).isEqualTo(70);
 			List<CookStep> searThenOven = List.of(
 					CookStep.toColour(new PanContact(220, true, 60), Target.stage("browned"), 3600),
@@ -160,7 +168,8 @@ class DonenessJudgeTest {
 			CookResult hot = AcrylamideCook.run(CHICKEN, new PanContact(200, true, 60), Target.stage("golden"));
 			CookResult lower = AcrylamideCook.run(CHICKEN, new PanContact(180, true, 60), Target.stage("golden"));
 			assertThat(lower.reached()).isTrue();
-			// FDA Food Code 2022 poultry 74 °C reached at golden, under the 80 °C juiciness limit
+			// FDA Food Code 2022 poultry 74 °C reached at golden, under the 80 °C
+			// juiciness limit
 			assertThat(lower.coreTemperatureAtTargetC()).isBetween(74.0, 80.0);
 			assertThat(lower.timeToTargetS()).isGreaterThan(hot.timeToTargetS());
 			assertThat(DonenessJudge.judge(CHICKEN, new PanContact(180, true, 60), lower, Cut.WHOLE)).isEmpty();
@@ -168,7 +177,8 @@ class DonenessJudgeTest {
 
 		@Test
 		void shouldReachTheFoodCodeWhenAThickPieceIsFinishedInTheOven() {
-			// the suggestion's second half: a 60 mm piece coloured in a 240 °C pan, then a 180 °C oven to 74 °C
+			// the suggestion's second half: a 60 mm piece coloured in a 240 °C pan, then
+			// a 180 °C oven to 74 °C
 			Surface thick = CHICKEN.withThicknessMm(60);
 			List<DonenessWarning> before = judge(thick, new PanContact(240, true, 0), Target.stage("light-golden"));
 			Message s = suggestion(only(before, "core-below-food-code"));
@@ -184,7 +194,8 @@ class DonenessJudgeTest {
 
 		@Test
 		void shouldHoldMincedMeatToTheComminutedFigure() {
-			// the same run judged as a whole cut and as a burger patty (FDA Food Code 2022: 63 °C whole, 68 °C minced)
+			// the same run judged as a whole cut and as a burger patty (FDA Food Code
+			// 2022: 63 °C whole, 68 °C minced)
 			Surface patty = STEAK.withThicknessMm(13);
 			HeatSetup pan = new PanContact(220, true, 60);
 			CookResult r = AcrylamideCook.run(patty, pan, Target.stage("browned"));
@@ -214,15 +225,18 @@ class DonenessJudgeTest {
 
 		@Test
 		void shouldBringTheCrumbCloserToBakedWhenBakedCoolerAndFlatter() {
-			// the suggestion as forward runs: 40 K cooler raises the crumb at golden; a flatter piece as well
+			// the suggestion as forward runs: 40 K cooler raises the crumb at golden; a
+			// flatter piece as well
 			double hot = AcrylamideCook.run(BAGUETTE, new Oven(230, false, DRY), Target.stage("golden"))
 				.coreTemperatureAtTargetC();
 			double cooler = AcrylamideCook.run(BAGUETTE, new Oven(190, false, DRY), Target.stage("golden"))
 				.coreTemperatureAtTargetC();
-			double flatter = AcrylamideCook.run(BREAD.withThicknessMm(20), new Oven(190, false, DRY),
-					Target.stage("golden")).coreTemperatureAtTargetC();
+			double flatter = AcrylamideCook
+				.run(BREAD.withThicknessMm(20), new Oven(190, false, DRY), Target.stage("golden"))
+				.coreTemperatureAtTargetC();
 			assertThat(cooler).isGreaterThan(hot);
-			// a 20 mm piece at 190 °C is baked through (≥ 96 °C, bakers' probe) when golden
+			// a 20 mm piece at 190 °C is baked through (≥ 96 °C, bakers' probe) when
+			// golden
 			assertThat(flatter).isGreaterThanOrEqualTo(96);
 		}
 
@@ -230,7 +244,8 @@ class DonenessJudgeTest {
 		void shouldCallAFryColouredBeforeItsCentreBoilsSoftAndFixItAtOneSeventyFive() {
 			List<DonenessWarning> w = judge(FRIES, new DeepFryer(190), Target.stage("golden"));
 			DonenessWarning soft = only(w, "centre-not-cooked");
-			// a cooked centre sits at its boiling point, ≈ 100 °C (taken as 98 °C at the centre node)
+			// a cooked centre sits at its boiling point, ≈ 100 °C (taken as 98 °C at the
+			// centre node)
 			assertThat(celsius(reason(soft).args().get(2))).isEqualTo(98);
 			// Regulation (EU) 2017/2158, Annex II: fry potato products below 175 °C
 			assertThat(suggestion(soft).args().get(0)).isEqualTo(Temperature.celsius(175));
@@ -240,12 +255,10 @@ class DonenessJudgeTest {
 		@Test
 		void shouldCallAThickFrySoftAndFixItByCuttingItToHalf() {
 			Surface thick = FRIES.withThicknessMm(20);
-			DonenessWarning soft = only(judge(thick, new DeepFryer(175), Target.stage("golden")),
-					"centre-not-cooked");
+			DonenessWarning soft = only(judge(thick, new DeepFryer(175), Target.stage("golden")), "centre-not-cooked");
 			// half the thickness heats about four times sooner (Fourier number t·α/L²)
 			assertThat(suggestion(soft).args().get(1)).isEqualTo(Quantity.of(10, "mm"));
-			assertThat(codes(judge(FRIES.withThicknessMm(10), new DeepFryer(175), Target.stage("golden"))))
-				.isEmpty();
+			assertThat(codes(judge(FRIES.withThicknessMm(10), new DeepFryer(175), Target.stage("golden")))).isEmpty();
 		}
 
 	}
@@ -255,17 +268,20 @@ class DonenessJudgeTest {
 
 		@Test
 		void shouldSayWhenAThinBreadIsBakedLongBeforeItColoursAndBringThemCloserWhenHotter() {
-			// a 12 mm flatbread in a 170 °C oven: the crumb passes 96 °C (bakers' probe) at about 10 min, golden only at 38
+			// a 12 mm flatbread in a 170 °C oven: the crumb passes 96 °C (bakers' probe)
+			// at about 10 min, golden only at 38
 			Surface flat = BREAD.withThicknessMm(12);
 			HeatSetup cool = new Oven(170, false, DRY);
 			CookResult r = AcrylamideCook.run(flat, cool, Target.stage("golden"));
 			DonenessWarning late = only(DonenessJudge.judge(flat, cool, r, Cut.WHOLE), "colour-after-core");
 			assertThat(suggestion(late).code()).isEqualTo("suggestion.hotter");
 			assertThat(suggestion(late).args().get(0)).isEqualTo(TemperatureDifference.kelvin(30));
-			// the suggestion as a forward run: 30 K hotter brings the colour and the baked crumb closer together
+			// the suggestion as a forward run: 30 K hotter brings the colour and the
+			// baked crumb closer together
 			CookResult hotter = AcrylamideCook.run(flat, new Oven(200, false, DRY), Target.stage("golden"));
 			double gapCool = r.timeToTargetS() - DonenessJudge.firstReachedS(r.series(), 96, r.timeToTargetS());
-			double gapHot = hotter.timeToTargetS() - DonenessJudge.firstReachedS(hotter.series(), 96, hotter.timeToTargetS());
+			double gapHot = hotter.timeToTargetS()
+					- DonenessJudge.firstReachedS(hotter.series(), 96, hotter.timeToTargetS());
 			assertThat(gapHot).isLessThan(gapCool / 2);
 		}
 
@@ -274,14 +290,17 @@ class DonenessJudgeTest {
 	@Nested
 	class Thresholds {
 
-		/** A two-sample cook whose centre reaches {@code coreC} when the colour is reached at 600 s. */
+		/**
+		 * A two-sample cook whose centre reaches {@code coreC} when the colour is reached
+		 * at 600 s.
+		 */
 		CookResult cook(double coreC) {
 			Lab lab = new Lab(60, 10, 30);
 			List<Sample> series = List.of(new Sample(0, 20, 20, 5, 1, 1, 0, 0, lab, 0, 0, Double.NaN),
 					new Sample(600, 150, 30, coreC, 0.5, 0.2, 0, 0.5, lab, 0, 0, Double.NaN));
 			double[] one = { 0 };
-			return new CookResult(Outcome.REACHED, Outcome.REACHED.explanation(), 600, 0.5, lab, 6, coreC, 0, 0, 150, 0.5,
-					600, series, List.of(), null, new CookResult.FinalState(one, one, one, one, one));
+			return new CookResult(Outcome.REACHED, Outcome.REACHED.explanation(), 600, 0.5, lab, 6, coreC, 0, 0, 150,
+					0.5, 600, series, List.of(), null, new CookResult.FinalState(one, one, one, one, one));
 		}
 
 		List<String> judged(FoodCategory c, double coreC, Cut cut) {
@@ -290,7 +309,8 @@ class DonenessJudgeTest {
 
 		@Test
 		void shouldDrawTheFoodCodeLinesAtTheCodesOwnFigures() {
-			// FDA Food Code 2022, 3-401.11: poultry 74 °C, whole cuts 63 °C, comminuted 68 °C
+			// FDA Food Code 2022, 3-401.11: poultry 74 °C, whole cuts 63 °C, comminuted
+			// 68 °C
 			assertThat(judged(FoodCategory.POULTRY_SKIN, 73.9, Cut.WHOLE)).containsExactly("core-below-food-code");
 			assertThat(judged(FoodCategory.POULTRY_SKIN, 74.0, Cut.WHOLE)).isEmpty();
 			assertThat(judged(FoodCategory.MEAT, 62.9, Cut.WHOLE)).containsExactly("core-below-food-code");
@@ -302,7 +322,8 @@ class DonenessJudgeTest {
 
 		@Test
 		void shouldDrawTheJuicinessAndBakedLinesAtTheTradesFigures() {
-			// common practice: meat well done ≈ 70 °C, poultry breast dry past ≈ 80 °C, fish past ≈ 65 °C
+			// common practice: meat well done ≈ 70 °C, poultry breast dry past ≈ 80 °C,
+			// fish past ≈ 65 °C
 			assertThat(judged(FoodCategory.MEAT, 70.0, Cut.WHOLE)).isEmpty();
 			assertThat(judged(FoodCategory.MEAT, 70.1, Cut.WHOLE)).containsExactly("core-past-juiciness");
 			assertThat(judged(FoodCategory.POULTRY_SKIN, 80.1, Cut.WHOLE)).containsExactly("core-past-juiciness");

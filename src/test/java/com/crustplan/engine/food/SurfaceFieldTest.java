@@ -23,7 +23,8 @@ class SurfaceFieldTest {
 	record Row(List<String> keys, String unit, double min, double max) {
 	}
 
-	private static final Pattern ROW = Pattern.compile("^\\s*\\|([^|]+)\\|([^|]*)\\|\\s*(-?[\\d.]+) to (-?[\\d.]+)\\s*\\|\\s*$");
+	private static final Pattern ROW = Pattern
+		.compile("^\\s*\\|([^|]+)\\|([^|]*)\\|\\s*(-?[\\d.]+) to (-?[\\d.]+)\\s*\\|\\s*$");
 
 	private static final Pattern KEY = Pattern.compile("`(\\w+)`");
 
@@ -33,13 +34,17 @@ class SurfaceFieldTest {
 			Matcher m = ROW.matcher(line);
 			if (m.matches()) {
 				List<String> keys = KEY.matcher(m.group(1)).results().map(r -> r.group(1)).toList();
-				rows.add(new Row(keys, m.group(2).trim(), Double.parseDouble(m.group(3)), Double.parseDouble(m.group(4))));
+				rows.add(new Row(keys, m.group(2).trim(), Double.parseDouble(m.group(3)),
+						Double.parseDouble(m.group(4))));
 			}
 		}
 		return rows;
 	}
 
-	/** The API documentation (README, "JSON API v1") states each field's range as the engine checks it. */
+	/**
+	 * The API documentation (README, "JSON API v1") states each field's range as the
+	 * engine checks it.
+	 */
 	@ParameterizedTest
 	@EnumSource(SurfaceField.class)
 	void shouldBeDocumentedWithItsRangeAndUnit(SurfaceField f) throws IOException {
@@ -62,26 +67,36 @@ class SurfaceFieldTest {
 		});
 	}
 
-	/** pH is dimensionless; food pH tables (FDA, approximate pH of foods) run from about 2 to 9. */
+	/**
+	 * pH is dimensionless; food pH tables (FDA, approximate pH of foods) run from about 2
+	 * to 9.
+	 */
 	@Test
 	void shouldSpanThePhOfFoods() {
 		assertThat(SurfaceField.PH.unit()).isEmpty();
 		assertThat(SurfaceField.PH.accepts(2.0)).isTrue(); // lime juice, about pH 2
-		assertThat(SurfaceField.PH.accepts(9.0)).isTrue(); // egg white after storage, about pH 9
+		assertThat(SurfaceField.PH.accepts(9.0)).isTrue(); // egg white after storage,
+															// about pH 9
 	}
 
-	/** The engine's message names the field and the range, as the plan page has always shown it. */
+	/**
+	 * The engine's message names the field and the range, as the plan page has always
+	 * shown it.
+	 */
 	@Test
 	void shouldNameTheFieldAndTheRangeWhenRefusing() {
 		assertThatThrownBy(() -> SurfaceField.THICKNESS.check(0.4)).isInstanceOf(InvalidInputException.class)
 			.hasMessage("thicknessMm: must be a number from 0.5 to 200");
-		assertThatThrownBy(() -> SurfaceField.WATER.check(Double.NaN)).hasMessage("waterPct: must be a number from 0 to 100");
+		assertThatThrownBy(() -> SurfaceField.WATER.check(Double.NaN))
+			.hasMessage("waterPct: must be a number from 0 to 100");
 		assertThatThrownBy(() -> SurfaceField.INITIAL_TEMPERATURE.check(81))
 			.hasMessage("initialTemperatureC: must be a number from -20 to 80");
 		assertThat(SurfaceField.ASPARAGINE.check(50_000)).isEqualTo(50_000);
 	}
 
-	/** Every category's defaults lie inside the ranges (a new surface starts from them). */
+	/**
+	 * Every category's defaults lie inside the ranges (a new surface starts from them).
+	 */
 	@ParameterizedTest
 	@EnumSource(FoodCategory.class)
 	void shouldHoldEachCategorysDefaults(FoodCategory c) {

@@ -6,9 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 
 /**
- * The lumped pan or oil body against its closed form: with linear losses (no radiation) and a constant
- * input, m·c·dT/dt = P − h·A·(T − T_room) gives T(t) = T∞ + (T₀ − T∞)·exp(−t/τ), T∞ = T_room + P/(h·A),
- * τ = m·c/(h·A) (lumped capacitance, Incropera §5.2).
+ * The lumped pan or oil body against its closed form: with linear losses (no radiation)
+ * and a constant input, m·c·dT/dt = P − h·A·(T − T_room) gives T(t) = T∞ + (T₀ −
+ * T∞)·exp(−t/τ), T∞ = T_room + P/(h·A), τ = m·c/(h·A) (lumped capacitance, Incropera
+ * §5.2).
  */
 class HeatedBodyTest {
 
@@ -21,19 +22,22 @@ class HeatedBodyTest {
 		double h = 10;
 		double power = 3200;
 		double setK = 448.15;
-		HeatedBody oil = new HeatedBody(c, area, 0, h, power, HeatedBody.Control.THERMOSTAT, setK, ROOM_K, 0.05, Double.NaN);
+		HeatedBody oil = new HeatedBody(c, area, 0, h, power, HeatedBody.Control.THERMOSTAT, setK, ROOM_K, 0.05,
+				Double.NaN);
 		double startK = setK - 30;
 		oil.preheatTo(startK);
 		double tInf = ROOM_K + power / (h * area);
 		double tau = c / (h * area);
 		double dt = 0.5;
 		double t = 0;
-		// below the proportional band the heater runs at full power: the closed form holds there
+		// below the proportional band the heater runs at full power: the closed form
+		// holds there
 		while (oil.temperatureK() < setK - HeatedBody.THERMOSTAT_BAND_K - 1) {
 			oil.advance(dt);
 			t += dt;
 			double exact = tInf + (startK - tInf) * Math.exp(-t / tau);
-			// explicit Euler on a time constant of hours: error far below 0.01 K over minutes
+			// explicit Euler on a time constant of hours: error far below 0.01 K over
+			// minutes
 			assertEquals(exact, oil.temperatureK(), 0.01, "at " + t + " s");
 		}
 		assertTrue(t > 60 && t < 600, "30 K back in minutes, as catering fryers recover: " + t + " s");

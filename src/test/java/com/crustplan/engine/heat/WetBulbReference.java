@@ -2,18 +2,22 @@ package com.crustplan.engine.heat;
 
 import com.crustplan.engine.water.SaturationPressure;
 
-/** A wet-bulb solver written for the tests, independent of the engine's {@link WetBulb}. */
+/**
+ * A wet-bulb solver written for the tests, independent of the engine's {@link WetBulb}.
+ */
 public final class WetBulbReference {
 
 	private WetBulbReference() {
 	}
 
 	/**
-	 * Wet face temperature, °C, from h(T∞ − T) + εσ(T_wall⁴ − T⁴) = h_fg·h_m·(p_sat(T) − p_v,∞)/(R_v·T_film),
-	 * the Chilton–Colburn analogy (Le = 0.85) in its vapour-density form with both densities at the film
-	 * temperature (Incropera §6.7): an implementation independent of the engine's.
+	 * Wet face temperature, °C, from h(T∞ − T) + εσ(T_wall⁴ − T⁴) = h_fg·h_m·(p_sat(T) −
+	 * p_v,∞)/(R_v·T_film), the Chilton–Colburn analogy (Le = 0.85) in its vapour-density
+	 * form with both densities at the film temperature (Incropera §6.7): an
+	 * implementation independent of the engine's.
 	 */
-	public static double vapourDensityWetBulbC(double gasC, double humidityRatio, double h, double emissivity, double wallC) {
+	public static double vapourDensityWetBulbC(double gasC, double humidityRatio, double h, double emissivity,
+			double wallC) {
 		double rv = 461.51805; // IAPWS R6-95
 		double ra = 287.05; // ISO 2533
 		double p = 101_325;
@@ -31,7 +35,8 @@ public final class WetBulbReference {
 			double rho = p * (1 - y) / (ra * film) + p * y / (rv * film);
 			double hm = h / (rho * cp * Math.pow(0.85, 2.0 / 3.0));
 			double heat = h * (tg - t) + emissivity * 5.670374419e-8 * (Math.pow(tw, 4) - Math.pow(t, 4));
-			double latent = (2501e3 - 2.36e3 * (t - 273.15)) * hm * (SaturationPressure.pascal(t) - vapourPressureGas) / (rv * film);
+			double latent = (2501e3 - 2.36e3 * (t - 273.15)) * hm * (SaturationPressure.pascal(t) - vapourPressureGas)
+					/ (rv * film);
 			if (heat > latent) {
 				lo = t;
 			}

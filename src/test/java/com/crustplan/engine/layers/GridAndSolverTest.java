@@ -17,8 +17,10 @@ class GridAndSolverTest {
 
 	@Test
 	void shouldTileTheThicknessWithControlVolumes() {
-		// Vertex-centred finite volumes (Patankar, Numerical Heat Transfer and Fluid Flow, §4.6, "Practice A":
-		// faces midway between nodes): the volumes must add up to the thickness exactly, half volumes at the faces.
+		// Vertex-centred finite volumes (Patankar, Numerical Heat Transfer and Fluid
+		// Flow, §4.6, "Practice A":
+		// faces midway between nodes): the volumes must add up to the thickness exactly,
+		// half volumes at the faces.
 		for (double clustering : new double[] { 0, Grid.DEFAULT_CLUSTERING, 1 }) {
 			Grid g = new Grid(0.025, 25, clustering);
 			double sum = 0;
@@ -60,8 +62,10 @@ class GridAndSolverTest {
 
 	@Test
 	void shouldSolveTridiagonalSystemsLikeADenseLuDecomposition() {
-		// Against Hipparchus' LU decomposition with partial pivoting on random diagonally dominant systems;
-		// relative 1e-10: both are direct solvers in double precision on well-conditioned matrices.
+		// Against Hipparchus' LU decomposition with partial pivoting on random diagonally
+		// dominant systems;
+		// relative 1e-10: both are direct solvers in double precision on well-conditioned
+		// matrices.
 		Random random = new Random(42);
 		for (int trial = 0; trial < 20; trial++) {
 			int n = 3 + random.nextInt(60);
@@ -96,7 +100,8 @@ class GridAndSolverTest {
 
 	@Test
 	void shouldConserveEnergyInAnInsulatedSlab() {
-		// With both faces adiabatic, Σ C_i T_i is invariant under the backward-Euler step (the interface fluxes
+		// With both faces adiabatic, Σ C_i T_i is invariant under the backward-Euler step
+		// (the interface fluxes
 		// cancel pairwise): a discrete form of the first law. Relative 1e-12.
 		Grid g = new Grid(0.02, 25, Grid.DEFAULT_CLUSTERING);
 		int n = g.size();

@@ -10,27 +10,36 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 /**
- * The backward-Euler finite-volume conduction step with constant properties against the analytic
- * solutions of Incropera, Fundamentals of Heat and Mass Transfer, ch. 5, and its convergence order.
+ * The backward-Euler finite-volume conduction step with constant properties against the
+ * analytic solutions of Incropera, Fundamentals of Heat and Mass Transfer, ch. 5, and its
+ * convergence order.
  */
 class HeatConductionTest {
 
-	/** Tolerance asked for by the project's validation list: 0.5 K against each analytic solution. */
+	/**
+	 * Tolerance asked for by the project's validation list: 0.5 K against each analytic
+	 * solution.
+	 */
 	private static final double HALF_KELVIN = 0.5;
 
 	// ---------------------------------------------------------------- analytic solutions
 
 	/**
-	 * Semi-infinite solid, initially at Ti, surface convection to T∞ from t = 0 (Incropera §5.7, eq. 5.60):
-	 * (T − Ti)/(T∞ − Ti) = erfc(η) − exp(hx/k + h²αt/k²)·erfc(η + h√(αt)/k), η = x/(2√(αt)).
+	 * Semi-infinite solid, initially at Ti, surface convection to T∞ from t = 0
+	 * (Incropera §5.7, eq. 5.60): (T − Ti)/(T∞ − Ti) = erfc(η) − exp(hx/k +
+	 * h²αt/k²)·erfc(η + h√(αt)/k), η = x/(2√(αt)).
 	 */
 	static double semiInfinite(double x, double t, double ti, double tInf, double h, double k, double alpha) {
 		double s = Math.sqrt(alpha * t);
 		double eta = x / (2 * s);
-		return ti + (tInf - ti) * (Erf.erfc(eta) - Math.exp(h * x / k + h * h * alpha * t / (k * k)) * Erf.erfc(eta + h * s / k));
+		return ti + (tInf - ti)
+				* (Erf.erfc(eta) - Math.exp(h * x / k + h * h * alpha * t / (k * k)) * Erf.erfc(eta + h * s / k));
 	}
 
-	/** The first {@code m} positive roots of ζ·tan ζ = Bi, the n-th in ((n−1)π, (n−1)π + π/2). */
+	/**
+	 * The first {@code m} positive roots of ζ·tan ζ = Bi, the n-th in ((n−1)π, (n−1)π +
+	 * π/2).
+	 */
 	static double[] eigenvalues(double biot, int m) {
 		BrentSolver solver = new BrentSolver(1e-14);
 		double[] z = new double[m];
@@ -43,9 +52,9 @@ class HeatConductionTest {
 	}
 
 	/**
-	 * Plane wall of half-thickness L with convection on both faces (Incropera §5.5, eq. 5.39): θ* = Σ Cn
-	 * exp(−ζn² Fo) cos(ζn x*), Cn = 4 sin ζn/(2ζn + sin 2ζn). 200 terms: at Fo ≥ 0.05 the neglected tail is
-	 * below exp(−(199π)²·0.05), i.e. nothing.
+	 * Plane wall of half-thickness L with convection on both faces (Incropera §5.5, eq.
+	 * 5.39): θ* = Σ Cn exp(−ζn² Fo) cos(ζn x*), Cn = 4 sin ζn/(2ζn + sin 2ζn). 200 terms:
+	 * at Fo ≥ 0.05 the neglected tail is below exp(−(199π)²·0.05), i.e. nothing.
 	 */
 	static double planeWall(double biot, double xStar, double fourier) {
 		double theta = 0;
@@ -55,9 +64,13 @@ class HeatConductionTest {
 		return theta;
 	}
 
-	// ---------------------------------------------------------------- the numerical solution
+	// ---------------------------------------------------------------- the numerical
+	// solution
 
-	/** Marches a slab at uniform Ti with convection h·(T∞ − T) on face 0 and h1 on face 1 (0: adiabatic). */
+	/**
+	 * Marches a slab at uniform Ti with convection h·(T∞ − T) on face 0 and h1 on face 1
+	 * (0: adiabatic).
+	 */
 	static double[] march(Grid grid, double k, double rhoCp, double ti, double tInf, double h0, double h1, double endS,
 			double dt) {
 		int n = grid.size();
@@ -82,15 +95,20 @@ class HeatConductionTest {
 
 	@Test
 	void shouldMatchTheSemiInfiniteSolidWithSurfaceConvection() {
-		// Incropera §5.7, eq. 5.60 with Ti 393 K, T∞ 355 K, h 50 W/m²K, k 10 W/mK, α 4.029e-6 m²/s: at x = 3 mm
-		// after 100 s the solid is at 389.54 K (worked example in a published heat-transfer library's
+		// Incropera §5.7, eq. 5.60 with Ti 393 K, T∞ 355 K, h 50 W/m²K, k 10 W/mK, α
+		// 4.029e-6 m²/s: at x = 3 mm
+		// after 100 s the solid is at 389.54 K (worked example in a published
+		// heat-transfer library's
 		// documentation, recomputed here with Hipparchus' erfc).
 		double alpha = 4.029e-6;
 		double k = 10;
 		assertEquals(389.54, semiInfinite(0.003, 100, 393, 355, 50, k, alpha), 0.005);
-		// A 0.2 m slab is 10 penetration depths √(αt) = 20 mm thick: erfc(5) ≈ 1.5e-12, so its insulated back
-		// face cannot be felt and it acts as semi-infinite. Uniform 0.25 mm spacing puts a node on x = 3 mm
-		// (node 12) and keeps the spatial error far below the 0.5 K allowed; Δt = 0.1 s likewise for time.
+		// A 0.2 m slab is 10 penetration depths √(αt) = 20 mm thick: erfc(5) ≈ 1.5e-12,
+		// so its insulated back
+		// face cannot be felt and it acts as semi-infinite. Uniform 0.25 mm spacing puts
+		// a node on x = 3 mm
+		// (node 12) and keeps the spatial error far below the 0.5 K allowed; Δt = 0.1 s
+		// likewise for time.
 		Grid grid = Grid.uniform(0.2, 801);
 		double[] t = march(grid, k, k / alpha, 393, 355, 50, 0, 100, 0.1);
 		assertEquals(0.003, grid.position(12), 1e-12);
@@ -101,7 +119,8 @@ class HeatConductionTest {
 	@ParameterizedTest(name = "Bi {0}: ζ1 {1}, C1 {2}")
 	@CsvSource({ "0.1, 0.3111, 1.0161", "1, 0.8603, 1.1191", "10, 1.4289, 1.2620" })
 	void shouldFindTheTabulatedFirstEigenvalues(double biot, double zeta1, double c1) {
-		// Incropera Table 5.1 (plane wall): ζ1 and C1 to 4 decimals; tolerance half the last digit.
+		// Incropera Table 5.1 (plane wall): ζ1 and C1 to 4 decimals; tolerance half the
+		// last digit.
 		double z = eigenvalues(biot, 1)[0];
 		assertEquals(zeta1, z, 5e-5);
 		assertEquals(c1, 4 * Math.sin(z) / (2 * z + Math.sin(2 * z)), 5e-5);
@@ -110,9 +129,12 @@ class HeatConductionTest {
 	@ParameterizedTest(name = "Bi {0}, Fo {1}")
 	@CsvSource({ "0.1, 0.05", "0.1, 0.2", "0.1, 1", "1, 0.05", "1, 0.2", "1, 1", "10, 0.05", "10, 0.2", "10, 1" })
 	void shouldMatchThePlaneWallSeriesSolutionOnTheProductionGrid(double biot, double fourier) {
-		// Incropera §5.5, eq. 5.39 (full series, so Fo below 0.2 is checked too). A food-like slab: 2L = 20 mm,
-		// k 0.5 W/mK, ρcp 4 MJ/m³K (α = 1.25e-7 m²/s), from 20 °C into 200 °C gas, h = Bi·k/L on both faces.
-		// Grid and step are the simulation's defaults (25 nodes with face clustering, Δt 0.5 s), so this also
+		// Incropera §5.5, eq. 5.39 (full series, so Fo below 0.2 is checked too). A
+		// food-like slab: 2L = 20 mm,
+		// k 0.5 W/mK, ρcp 4 MJ/m³K (α = 1.25e-7 m²/s), from 20 °C into 200 °C gas, h =
+		// Bi·k/L on both faces.
+		// Grid and step are the simulation's defaults (25 nodes with face clustering, Δt
+		// 0.5 s), so this also
 		// shows that the defaults keep conduction within 0.5 K of the analytic answer.
 		double half = 0.01;
 		double k = 0.5;
@@ -134,10 +156,14 @@ class HeatConductionTest {
 
 	@Test
 	void shouldMatchTheFullSeriesBrassSlab() {
-		// Çengel & Ghajar, Heat and Mass Transfer, transient conduction example (quoted; recomputed here by the
-		// full series): a 40 mm brass plate, k 110 W/mK, ρ 8530 kg/m³, cp 380 J/kgK, from 20 °C in 500 °C
-		// gas at h 120 W/m²K for 7 min has a surface at 279.76 °C. Our series must give the printed value to
-		// its last digit, and the simulation must be within 0.5 K on the default 25-node grid with Δt 0.5 s.
+		// Çengel & Ghajar, Heat and Mass Transfer, transient conduction example (quoted;
+		// recomputed here by the
+		// full series): a 40 mm brass plate, k 110 W/mK, ρ 8530 kg/m³, cp 380 J/kgK, from
+		// 20 °C in 500 °C
+		// gas at h 120 W/m²K for 7 min has a surface at 279.76 °C. Our series must give
+		// the printed value to
+		// its last digit, and the simulation must be within 0.5 K on the default 25-node
+		// grid with Δt 0.5 s.
 		double half = 0.02;
 		double k = 110;
 		double rhoCp = 8530 * 380.0;
@@ -151,9 +177,12 @@ class HeatConductionTest {
 
 	@Test
 	void shouldHalveTheErrorWhenTheTimeStepIsHalved() {
-		// Backward Euler is first order in time: halving Δt should halve the error (observed order 0.7–1.3).
-		// A fine uniform grid (201 nodes over the half-slab, adiabatic centre) keeps the spatial error well
-		// below the temporal one at these steps. Reference: plane-wall series, Bi 1, Fo 0.5 (Incropera eq. 5.39).
+		// Backward Euler is first order in time: halving Δt should halve the error
+		// (observed order 0.7–1.3).
+		// A fine uniform grid (201 nodes over the half-slab, adiabatic centre) keeps the
+		// spatial error well
+		// below the temporal one at these steps. Reference: plane-wall series, Bi 1, Fo
+		// 0.5 (Incropera eq. 5.39).
 		double half = 0.01;
 		double k = 0.5;
 		double rhoCp = 4e6;
@@ -162,7 +191,8 @@ class HeatConductionTest {
 		double exact = 473.15 + (293.15 - 473.15) * planeWall(1, 1, 0.5);
 		double previous = Double.NaN;
 		for (double dt : new double[] { 40, 20, 10, 5 }) {
-			double error = Math.abs(march(Grid.uniform(half, 201), k, rhoCp, 293.15, 473.15, h, 0, time, dt)[0] - exact);
+			double error = Math
+				.abs(march(Grid.uniform(half, 201), k, rhoCp, 293.15, 473.15, h, 0, time, dt)[0] - exact);
 			if (!Double.isNaN(previous)) {
 				double order = Math.log(previous / error) / Math.log(2);
 				assertTrue(order > 0.7 && order < 1.3, "observed order " + order + " at Δt " + dt);
@@ -173,9 +203,12 @@ class HeatConductionTest {
 
 	@Test
 	void shouldReduceTheErrorWhenTheGridIsRefined() {
-		// The vertex-centred finite volume with half cells at the faces is second order in space; each halving
-		// of the spacing must cut the error at least threefold (4 expected; the allowance covers the small
-		// time-step error left at Δt 0.01 s). Both the uniform and the production (clustered) grid are checked.
+		// The vertex-centred finite volume with half cells at the faces is second order
+		// in space; each halving
+		// of the spacing must cut the error at least threefold (4 expected; the allowance
+		// covers the small
+		// time-step error left at Δt 0.01 s). Both the uniform and the production
+		// (clustered) grid are checked.
 		// Reference: plane-wall series, Bi 1, Fo 0.2 (Incropera eq. 5.39).
 		double half = 0.01;
 		double k = 0.5;
@@ -189,8 +222,8 @@ class HeatConductionTest {
 				double[] t = march(new Grid(half, nodes, clustering), k, rhoCp, 293.15, 473.15, h, 0, time, 0.01);
 				double error = Math.abs(t[0] - exact);
 				if (!Double.isNaN(previous)) {
-					assertTrue(previous / error > 3, "clustering " + clustering + ", " + nodes + " nodes: error " + error
-							+ " after " + previous);
+					assertTrue(previous / error > 3, "clustering " + clustering + ", " + nodes + " nodes: error "
+							+ error + " after " + previous);
 				}
 				previous = error;
 			}

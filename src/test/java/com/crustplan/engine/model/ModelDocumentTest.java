@@ -13,8 +13,8 @@ import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 
 /**
- * The model section of DEVELOPERS.md is generated from the engine's constants. Regenerate it with
- * {@code mvn test -Dtest=ModelDocumentTest -Dcrustplan.writeDocs=true}.
+ * The model section of DEVELOPERS.md is generated from the engine's constants. Regenerate
+ * it with {@code mvn test -Dtest=ModelDocumentTest -Dcrustplan.writeDocs=true}.
  */
 class ModelDocumentTest {
 
@@ -30,7 +30,8 @@ class ModelDocumentTest {
 		String generated = "\n\n" + ModelDocument.markdown(ModelCatalogue.sections());
 		String current = guide.substring(begin + ModelDocument.BEGIN.length(), end);
 		if (Boolean.getBoolean("crustplan.writeDocs")) {
-			Files.writeString(GUIDE, guide.substring(0, begin + ModelDocument.BEGIN.length()) + generated + guide.substring(end),
+			Files.writeString(GUIDE,
+					guide.substring(0, begin + ModelDocument.BEGIN.length()) + generated + guide.substring(end),
 					StandardCharsets.UTF_8);
 			return;
 		}

@@ -8,16 +8,22 @@ import org.junit.jupiter.api.Test;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.model.Parameter;
 
-/** The GAB sorption isotherm, X = Xm·C·K·aw / ((1 − K·aw)(1 − K·aw + C·K·aw)), and its inverse. */
+/**
+ * The GAB sorption isotherm, X = Xm·C·K·aw / ((1 − K·aw)(1 − K·aw + C·K·aw)), and its
+ * inverse.
+ */
 class GabIsothermTest {
 
 	/** Potato, 40–50 °C: Xm 0.209, C 4.416, K 0.976 (Chemkhi et al. 2004, quoted). */
-	private static final GabIsotherm POTATO = new GabIsotherm(Parameter.secondary("Xm", "", 0.209, "", "Chemkhi et al. 2004"),
-			Parameter.secondary("C", "", 4.416, "", "Chemkhi et al. 2004"), Parameter.secondary("K", "", 0.976, "", "Chemkhi et al. 2004"));
+	private static final GabIsotherm POTATO = new GabIsotherm(
+			Parameter.secondary("Xm", "", 0.209, "", "Chemkhi et al. 2004"),
+			Parameter.secondary("C", "", 4.416, "", "Chemkhi et al. 2004"),
+			Parameter.secondary("K", "", 0.976, "", "Chemkhi et al. 2004"));
 
 	@Test
 	void shouldEvaluateTheGabEquationForPotato() {
-		// GAB equation written out by hand with Chemkhi et al.'s constants (van den Berg 1985 form);
+		// GAB equation written out by hand with Chemkhi et al.'s constants (van den Berg
+		// 1985 form);
 		// tolerance 1e-12, the same arithmetic.
 		for (double aw = 0.05; aw < 1; aw += 0.05) {
 			double ka = 0.976 * aw;
@@ -31,7 +37,8 @@ class GabIsothermTest {
 
 	@Test
 	void shouldInvertTheIsothermForEveryCategory() {
-		// The inverse (positive root of the GAB quadratic) must return the water activity it came from, for
+		// The inverse (positive root of the GAB quadratic) must return the water activity
+		// it came from, for
 		// every category's isotherm; 1e-9 covers rounding.
 		for (FoodCategory c : FoodCategory.values()) {
 			GabIsotherm g = c.isotherm();
@@ -58,8 +65,10 @@ class GabIsothermTest {
 
 	@Test
 	void shouldRaiseTheBoilingPointOfBoundWater() {
-		// Water at activity aw boils where aw·p_sat(T) = 101.325 kPa: aw 1 → 99.97 °C, aw 0.5 → p_sat = 202.65 kPa →
-		// 120.6 °C (IAPWS-IF97 saturation line; steam tables give 120.21 °C at 200 kPa). Tolerance 0.05 K.
+		// Water at activity aw boils where aw·p_sat(T) = 101.325 kPa: aw 1 → 99.97 °C, aw
+		// 0.5 → p_sat = 202.65 kPa →
+		// 120.6 °C (IAPWS-IF97 saturation line; steam tables give 120.21 °C at 200 kPa).
+		// Tolerance 0.05 K.
 		assertEquals(373.12, WaterVapour.boilingTemperatureK(1.0), 0.05);
 		assertEquals(SaturationPressure.saturationTemperatureK(202_650), WaterVapour.boilingTemperatureK(0.5), 1e-9);
 		assertEquals(120.21 + 273.15, SaturationPressure.saturationTemperatureK(200_000), 0.05);
