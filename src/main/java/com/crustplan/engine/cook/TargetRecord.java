@@ -20,7 +20,8 @@ final class TargetRecord implements EventHandler {
 	private double surfaceExtent = Double.NaN;
 
 	/**
-	 * @param settings the run-past share and horizon, or null to go on as before */
+	 * @param settings the run-past share and horizon, or null to go on as before
+	 */
 	TargetRecord(CookSettings settings) {
 		this.settings = settings;
 	}
