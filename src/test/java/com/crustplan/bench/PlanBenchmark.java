@@ -1,5 +1,6 @@
 package com.crustplan.bench;
 
+import java.util.List;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
@@ -19,7 +20,15 @@ import org.openjdk.jmh.annotations.Warmup;
 
 import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.assessment.RiskMap;
+import com.crustplan.engine.assessment.AcrylamideCook;
 import com.crustplan.engine.cook.CookResult;
+import com.crustplan.engine.cook.CookStep;
+import com.crustplan.engine.cook.StepsResult;
+import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.heat.Oven;
+import com.crustplan.engine.heat.PanContact;
+import com.crustplan.engine.heat.Rest;
 import com.crustplan.engine.cook.CookSettings;
 
 /**
@@ -65,6 +74,20 @@ public class PlanBenchmark {
 	public CookResult chipsFryer175Golden() {
 		return Plans.chips(DEFAULTS);
 	}
+
+	/**
+	 * A 30 mm steak: sear 3 min in a 240 °C pan, fan oven at 180 °C to 52 °C core, rest 5
+	 * min (series recorded).
+	 */
+	@Benchmark
+	public StepsResult steakSearOvenRestThreeSteps() {
+		return AcrylamideCook.runSteps(THICK_STEAK, SEAR_OVEN_REST, Plans.BROWNED, 52.0, DEFAULTS);
+	}
+
+	private static final Surface THICK_STEAK = Surface.defaults(FoodCategory.MEAT).withThicknessMm(30);
+
+	private static final List<CookStep> SEAR_OVEN_REST = List.of(CookStep.timed(new PanContact(240, true, 60), 180),
+			CookStep.toCore(new Oven(180, true, 1.6), 52, 3600), CookStep.timed(new Rest(22), 300));
 
 	/**
 	 * Twice the nodes at twice the step: about the same work, closer to converged (see
