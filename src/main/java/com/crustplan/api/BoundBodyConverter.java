@@ -12,6 +12,7 @@ import org.springframework.core.ResolvableType;
 import org.springframework.http.HttpInputMessage;
 import org.springframework.http.HttpOutputMessage;
 import org.springframework.http.MediaType;
+import org.springframework.http.converter.HttpMessageNotWritableException;
 import org.springframework.http.converter.SmartHttpMessageConverter;
 
 import tools.jackson.core.JacksonException;
@@ -112,7 +113,9 @@ final class BoundBodyConverter implements SmartHttpMessageConverter<Bound<?>> {
 	@Override
 	public void write(Bound<?> value, ResolvableType type, MediaType contentType, HttpOutputMessage output,
 			Map<String, Object> hints) {
-		throw new UnsupportedOperationException("request bodies only");
+		// canWrite is false: Spring never asks this converter to write; a bound body is
+		// read-only
+		throw new HttpMessageNotWritableException("a bound request body is never written");
 	}
 
 	private static String shortMessage(JacksonException e) {
