@@ -183,12 +183,14 @@ public class SecurityConfig {
 	}
 
 	/**
-	 * A throttled sign-in says so and for how long; any other failure is the usual "do
-	 * not match".
+	 * A throttled sign-in says so and for how long; an account that could not be read
+	 * (the database down or full) says that, not "wrong password"; any other failure is
+	 * the usual "do not match".
 	 */
-	private static AuthenticationFailureHandler signInFailed() {
+	static AuthenticationFailureHandler signInFailed() {
 		return (req, res, e) -> {
-			String to = e instanceof SignInThrottle.Refused r ? "/signin?locked=" + r.minutes() : "/signin?error";
+			String to = e instanceof SignInThrottle.Refused r ? "/signin?locked=" + r.minutes()
+					: e instanceof InternalAuthenticationServiceException ? "/signin?unavailable" : "/signin?error";
 			res.sendRedirect(req.getContextPath() + to);
 		};
 	}
