@@ -32,12 +32,12 @@ public enum FoodCategory {
 		.browning(new BrowningKinetics(new ArrheniusRate(Parameter.commonPractice("k0",
 				"pre-exponential factor, meat surface browning", 2.0e5, "1/s",
 				"calibrated so a patted-dry 25 mm steak in a 220 °C oiled pan is browned in 3–4 min per side (common practice)"),
-				Isotherms.ZANONI_EA),
+				Isotherms.BORROWED_EA),
 				Parameter.assumption("aw,ref", "water activity at which the meat rate is referenced", 0.4, "–",
 						"rate referenced to a dry crust, like the bread fit"),
 				Parameter.secondary("pH,ref", "typical pH of beef", 5.6, "–",
 						"beef 5.5–5.8 (quoted in food pH tables)"),
-				Parameter.commonPractice("RS,ref", "reducing sugar of the reference meat", 0.1, "%",
+				Parameter.fromMemory("RS,ref", "reducing sugar of the reference meat", 0.1, "%",
 						"glucose and ribose in post-rigor muscle ≈ 0.1 % (from memory)"),
 				Parameter.commonPractice("P,ref", "protein of the reference meat", 21, "%",
 						"lean beef (common practice)")))
@@ -65,13 +65,12 @@ public enum FoodCategory {
 		.browning(new BrowningKinetics(new ArrheniusRate(
 				Parameter.commonPractice("k0", "pre-exponential factor, poultry skin browning", 1.5e5, "1/s",
 						"calibrated so skin-on chicken in a 200 °C fan oven is golden in 20–30 min (common practice)"),
-				Isotherms.ZANONI_EA),
+				Isotherms.BORROWED_EA),
 				Parameter.assumption("aw,ref", "water activity at which the rate is referenced", 0.4, "–", "dry crust"),
 				Parameter.secondary("pH,ref", "typical pH of poultry", 6.0, "–",
 						"poultry 5.7–6.0 (quoted in food pH tables)"),
-				Parameter.commonPractice("RS,ref", "reducing sugar of the reference skin", 0.05, "%", "from memory"),
-				Parameter.commonPractice("P,ref", "protein of the reference skin", 13, "%",
-						"chicken skin (from memory)")))
+				Parameter.fromMemory("RS,ref", "reducing sugar of the reference skin", 0.05, "%", "from memory"),
+				Parameter.fromMemory("P,ref", "protein of the reference skin", 13, "%", "chicken skin (from memory)")))
 		.colourPath(ColourPath.of("pale skin → golden → mahogany; anchors from memory",
 				new double[][] { { 0, 70, 4, 14 }, { 0.4, 60, 10, 30 }, { 0.7, 48, 14, 30 }, { 1, 33, 14, 22 } }))
 		.stages(List.of(BrowningStage.byLightness("light-golden", "Light golden", 64),
@@ -90,11 +89,11 @@ public enum FoodCategory {
 				"taken between poultry leg (41) and beef (51) of Puolanne & Kivikari 2000; not measured for fish"))
 		.initialPorosity(Parameter.assumption("ε0", "initial gas fraction of fish muscle", 0, "–", "pore-free"))
 		.isotherm(Isotherms.MEAT)
-		.browning(new BrowningKinetics(new ArrheniusRate(
-				Parameter.published("k0", "pre-exponential factor, fish surface L* under radiant grilling", 4759, "1/s",
-						"J Food Eng 116:130–137 (2013), first-order L* kinetics, radiant grilling"),
-				Parameter.published("Ea", "activation energy, fish surface L* under radiant grilling", 50.7e3, "J/mol",
-						"J Food Eng 116:130–137 (2013)")),
+		.browning(new BrowningKinetics(new ArrheniusRate(Parameter.fromMemory("k0",
+				"pre-exponential factor, fish surface L* under radiant grilling", 4759, "1/s",
+				"J Food Eng 116:130–137 (2013), first-order L* kinetics, radiant grilling; read there, authors from memory"),
+				Parameter.fromMemory("Ea", "activation energy, fish surface L* under radiant grilling", 50.7e3, "J/mol",
+						"J Food Eng 116:130–137 (2013); read there, authors from memory")),
 				Parameter.assumption("aw,ref", "water activity at which the fish rate is referenced", 0.8, "–",
 						"measured on real grilled surfaces, taken at the peak so the factor never exceeds 1"),
 				Parameter.fromMemory("pH,ref", "typical pH of fish muscle", 6.4, "–",
@@ -132,7 +131,7 @@ public enum FoodCategory {
 		.browning(new BrowningKinetics(new ArrheniusRate(
 				Parameter.commonPractice("k0", "pre-exponential factor, potato surface browning", 1.5e5, "1/s",
 						"calibrated so 10 mm chips in 175 °C oil are golden in 6–8 min (common practice)"),
-				Isotherms.ZANONI_EA),
+				Isotherms.BORROWED_EA),
 				Parameter.assumption("aw,ref", "water activity at which the potato rate is referenced", 0.4, "–",
 						"dry crust"),
 				Parameter.published("pH,ref", "typical pH of potato", 5.8, "–",
@@ -229,10 +228,10 @@ public enum FoodCategory {
 				"far lower than meat (from memory); not measured"))
 		.initialPorosity(Parameter.assumption("ε0", "initial gas fraction", 0.02, "–", "from memory"))
 		.isotherm(Isotherms.POTATO)
-		.browning(new BrowningKinetics(new ArrheniusRate(
-				Parameter.commonPractice("k0", "pre-exponential factor (potato kinetics borrowed)", 1.5e5, "1/s",
-						"potato value; vegetables differ mainly by their sugar, which the reactant factor carries"),
-				Isotherms.ZANONI_EA),
+		.browning(new BrowningKinetics(new ArrheniusRate(Parameter.assumption("k0",
+				"pre-exponential factor (potato kinetics borrowed)", 1.5e5, "1/s",
+				"the potato value, not calibrated for vegetables (assumption): they differ mainly by their sugar, which the reactant factor carries"),
+				Isotherms.BORROWED_EA),
 				Parameter.assumption("aw,ref", "water activity at which the rate is referenced", 0.4, "–", "dry crust"),
 				Parameter.published("pH,ref", "pH of potato (kinetics borrowed)", 5.8, "–",
 						"FDA, approximate pH of foods"),
@@ -336,6 +335,14 @@ public enum FoodCategory {
 
 		static final Parameter ZANONI_EA = Parameter.published("Ea", "activation energy of crust browning", 64_151,
 				"J/mol", "Zanoni, Peri & Bruno 1995, LWT 28:604–609 (bread crust ΔE)");
+
+		/**
+		 * The same number where it was never measured: meat, poultry, potato and
+		 * vegetables borrow it.
+		 */
+		static final Parameter BORROWED_EA = Parameter.assumption("Ea",
+				"activation energy of surface browning (bread value)", ZANONI_EA.value(), "J/mol",
+				"measured on bread crust (Zanoni, Peri & Bruno 1995, LWT 28:604–609); applied to this food without a measurement of its own (assumption)");
 
 		static final GabIsotherm POTATO = new GabIsotherm(
 				Parameter.secondary("Xm", "GAB monolayer moisture, potato", 0.209, "kg/kg d.b.",
