@@ -1,6 +1,8 @@
 package com.crustplan.plan;
 
+import java.util.EnumSet;
 import java.util.List;
+import java.util.Set;
 
 import com.crustplan.engine.cook.CookResult;
 import com.crustplan.engine.food.FoodCategory;
@@ -35,6 +37,18 @@ public record PlanReport(Surface surface, HeatSetup setup, Message targetLabel, 
 	public FoodCategory category() {
 		return surface.category();
 	}
+
+	/**
+	 * Acrylamide forms from asparagine and sugars in starchy foods (EFSA CONTAM Panel
+	 * 2015 opinion); muscle foods carry too little asparagine for the card to say
+	 * anything. Shown for starchy categories and wherever a benchmark level applies.
+	 */
+	public boolean acrylamideMatters() {
+		return STARCHY.contains(category()) || (acrylamide != null && acrylamide.benchmarkUgPerKg() != null);
+	}
+
+	private static final Set<FoodCategory> STARCHY = EnumSet.of(FoodCategory.POTATO, FoodCategory.BREAD,
+			FoodCategory.SWEET_DOUGH, FoodCategory.VEGETABLE);
 
 	public boolean reached() {
 		return coreOnly() ? steps.result().coreReached() : result.reached();

@@ -100,9 +100,12 @@ public enum FoodCategory {
 						"white fish 6.2–6.6 (from memory)"),
 				Parameter.fromMemory("RS,ref", "reducing sugar of fish muscle", 0.05, "%", "from memory"),
 				Parameter.fromMemory("P,ref", "protein of fish muscle", 20, "%", "white fish (from memory)")))
-		// Raw anchor: pale pink-white, raw fillet as the eye sees it on a white board (from
-		// memory). An instrument reads translucent raw flesh near L* 50 because light passes
-		// into it, but drawn on a screen that value is a flat grey no cook recognises. Kept
+		// Raw anchor: pale pink-white, raw fillet as the eye sees it on a white board
+		// (from
+		// memory). An instrument reads translucent raw flesh near L* 50 because light
+		// passes
+		// into it, but drawn on a screen that value is a flat grey no cook recognises.
+		// Kept
 		// just paler than the opaque-white anchor so the path only darkens and the stage
 		// extents (resolved from the opaque white onwards) do not move.
 		.colourPath(ColourPath.of("raw pink-white → opaque white → golden → dark; anchors from memory",
