@@ -100,14 +100,10 @@ public enum FoodCategory {
 						"white fish 6.2–6.6 (from memory)"),
 				Parameter.fromMemory("RS,ref", "reducing sugar of fish muscle", 0.05, "%", "from memory"),
 				Parameter.fromMemory("P,ref", "protein of fish muscle", 20, "%", "white fish (from memory)")))
-		// Raw anchor: pale pink-white, raw fillet as the eye sees it on a white board
-		// (from
-		// memory). An instrument reads translucent raw flesh near L* 50 because light
-		// passes
-		// into it, but drawn on a screen that value is a flat grey no cook recognises.
-		// Kept
-		// just paler than the opaque-white anchor so the path only darkens and the stage
-		// extents (resolved from the opaque white onwards) do not move.
+		// Raw anchor: pale pink-white, a raw fillet as the eye sees it (from memory).
+		// Instruments read translucent raw flesh near L* 50 as light passes into it,
+		// but on a screen that is a flat grey. Kept just paler than opaque white so
+		// the path only darkens and the stage extents do not move.
 		.colourPath(ColourPath.of("raw pink-white → opaque white → golden → dark; anchors from memory",
 				new double[][] { { 0, 77, 5, 6 }, { 0.06, 76, 0, 10 }, { 0.45, 62, 8, 28 }, { 1, 35, 10, 20 } }))
 		.stages(List.of(BrowningStage.byLightness("light-golden", "Light golden", 70),
