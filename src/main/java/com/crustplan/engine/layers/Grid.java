@@ -20,7 +20,27 @@ public final class Grid {
 
 	private final double thickness;
 
+	/** Area of the interface between node i and i+1 per unit of outside face. */
+	private final double[] area;
+
+	private final int shape;
+
 	public Grid(double thicknessM, int nodes, double clustering) {
+		this(thicknessM, nodes, clustering, 0);
+	}
+
+	/**
+	 * A grid for a body of shape factor m: 0 a slab of the given thickness (node 0 and
+	 * node n−1 both faces), 1 an infinite cylinder and 2 a sphere of the given radius,
+	 * node 0 on the outside surface and node n−1 on the centre (a symmetry point, no
+	 * flux). Interface areas go as r^m and volumes as r^(m+1)/(m+1), both per unit of
+	 * outside surface, so every capacity and conductance stays "per m² of face".
+	 */
+	public Grid(double thicknessM, int nodes, double clustering, int shape) {
+		if (shape < 0 || shape > 2) {
+			throw new IllegalArgumentException("shape factor must be 0, 1 or 2");
+		}
+		this.shape = shape;
 		if (nodes < 3) {
 			throw new IllegalArgumentException("at least 3 nodes");
 		}
@@ -42,6 +62,25 @@ public final class Grid {
 			double left = i == 0 ? 0 : 0.5 * (position[i] + position[i - 1]);
 			double right = i == last ? thicknessM : 0.5 * (position[i] + position[i + 1]);
 			width[i] = right - left;
+		}
+		area = new double[nodes];
+		for (int i = 0; i < nodes; i++) {
+			area[i] = 1;
+		}
+		if (shape > 0) {
+			// depth x from the surface is radius r = R − x; volume per unit outside area
+			// is (r_out^(m+1) − r_in^(m+1)) / ((m+1)·R^m)
+			double r = thicknessM;
+			for (int i = 0; i < nodes; i++) {
+				double left = i == 0 ? 0 : 0.5 * (position[i] + position[i - 1]);
+				double right = i == last ? thicknessM : 0.5 * (position[i] + position[i + 1]);
+				double outer = (r - left) / r;
+				double inner = (r - right) / r;
+				width[i] = r * (Math.pow(outer, shape + 1) - Math.pow(inner, shape + 1)) / (shape + 1);
+				if (i < last) {
+					area[i] = Math.pow(inner, shape);
+				}
+			}
 		}
 	}
 
@@ -65,6 +104,19 @@ public final class Grid {
 	/** Distance between node i and node i+1, m. */
 	public double spacing(int i) {
 		return position[i + 1] - position[i];
+	}
+
+	/**
+	 * Area of the interface between node i and i+1 per unit of outside face: 1 for a
+	 * slab.
+	 */
+	public double faceArea(int i) {
+		return area[i];
+	}
+
+	/** Shape factor: 0 slab, 1 cylinder, 2 sphere. */
+	public int shape() {
+		return shape;
 	}
 
 	public double thickness() {

@@ -72,7 +72,7 @@ public final class HeatConduction {
 		}
 		for (int i = 0; i < n - 1; i++) {
 			double d = grid.spacing(i);
-			double g = 1 / (0.5 * d / conductivity[i] + 0.5 * d / conductivity[i + 1]);
+			double g = grid.faceArea(i) / (0.5 * d / conductivity[i] + 0.5 * d / conductivity[i + 1]);
 			diag[i] += g;
 			diag[i + 1] += g;
 			upper[i] = -g;

@@ -66,7 +66,7 @@ public final class MoistureDiffusion {
 		for (int i = 0; i < n - 1; i++) {
 			double d = grid.spacing(i);
 			double dryDensity = 0.5 * (dryMass[i] / volume[i] + dryMass[i + 1] / volume[i + 1]);
-			double g = dryDensity
+			double g = grid.faceArea(i) * dryDensity
 					* diffusivity.at(0.5 * (temperature[i] + temperature[i + 1]), 0.5 * (moisture[i] + moisture[i + 1]))
 					/ d;
 			conductance[i] = g;

@@ -230,4 +230,42 @@ class HeatConductionTest {
 		}
 	}
 
+	@ParameterizedTest(name = "shape {0}, Bi {1}, Fo {4}")
+	@CsvSource({ "1, 1, 1.2558, 1.2071, 0.3", "1, 1, 1.2558, 1.2071, 1", "1, 10, 2.1795, 1.5677, 0.3",
+			"1, 10, 2.1795, 1.5677, 1", "2, 1, 1.5708, 1.2732, 0.3", "2, 1, 1.5708, 1.2732, 1",
+			"2, 10, 2.8363, 1.9249, 0.3", "2, 10, 2.8363, 1.9249, 0.6" })
+	void shouldMatchTheOneTermSeriesAtTheCentreOfACylinderAndASphere(int shape, double biot, double zeta1, double c1,
+			double fourier) {
+		// Incropera Table 5.1 (infinite cylinder, sphere: ζ1, C1) and eqs. 5.49–5.52: at
+		// the centre J0(0) = 1 and sin(ζ1 r*)/(ζ1 r*) → 1, so θ0* = C1 exp(−ζ1² Fo),
+		// valid
+		// for Fo > 0.2. Radius 10 mm, k 0.5 W/mK, ρcp 4 MJ/m³K, Bi = h·r0/k, heat in from
+		// the outside surface only (node 0), centre a symmetry point (node n−1, no flux).
+		// Default 25-node clustered grid and Δt 0.5 s; centre excess temperature within 2
+		// %.
+		double radius = 0.01;
+		double k = 0.5;
+		double rhoCp = 4e6;
+		double h = biot * k / radius;
+		double time = fourier * radius * radius / (k / rhoCp);
+		Grid grid = new Grid(radius, 25, Grid.DEFAULT_CLUSTERING, shape);
+		double[] t = march(grid, k, rhoCp, 293.15, 473.15, h, 0, time, 0.5);
+		double exact = c1 * Math.exp(-zeta1 * zeta1 * fourier);
+		double numeric = (t[24] - 473.15) / (293.15 - 473.15);
+		assertEquals(exact, numeric, 0.02 * exact, "centre θ*");
+	}
+
+	@Test
+	void shouldGiveTheVolumeOfACylinderAndASphere() {
+		// Geometry: per unit outside area, a cylinder holds r0/2 and a sphere r0/3 (V/A).
+		for (int shape = 0; shape <= 2; shape++) {
+			Grid grid = new Grid(0.01, 25, Grid.DEFAULT_CLUSTERING, shape);
+			double sum = 0;
+			for (int i = 0; i < grid.size(); i++) {
+				sum += grid.width(i);
+			}
+			assertEquals(0.01 / (shape + 1), sum, 1e-15);
+		}
+	}
+
 }
