@@ -15,8 +15,9 @@ import com.crustplan.engine.heat.DeepFryer;
 import com.crustplan.engine.heat.PanContact;
 
 /**
- * Each category's browning k0 was calibrated to a kitchen-practice claim (the comment beside the
- * constant in FoodCategory); these tests re-run that claim so a later change that breaks it fails.
+ * Each category's browning k0 was calibrated to a kitchen-practice claim (the comment
+ * beside the constant in FoodCategory); these tests re-run that claim so a later change
+ * that breaks it fails.
  */
 class CategoryCalibrationTest {
 
@@ -25,8 +26,8 @@ class CategoryCalibrationTest {
 	@Test
 	@DisplayName("potato k0: 10 mm chips in 175 °C oil are golden in 6–8 min (common practice)")
 	void potatoChipsGoldenInSixToEightMinutes() {
-		CookResult r = CookSimulation.run(Surface.defaults(FoodCategory.POTATO).withThicknessMm(10),
-				new DeepFryer(175), Target.stage("golden"), SETTINGS);
+		CookResult r = CookSimulation.run(Surface.defaults(FoodCategory.POTATO).withThicknessMm(10), new DeepFryer(175),
+				Target.stage("golden"), SETTINGS);
 		assertTrue(r.reached(), String.valueOf(r.explanation()));
 		double min = r.timeToTargetS() / 60;
 		assertTrue(min >= 6 && min <= 8, "golden at " + min + " min");
