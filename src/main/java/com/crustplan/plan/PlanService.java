@@ -104,7 +104,8 @@ public class PlanService {
 					String.format(Locale.ROOT, "must be from 1 to %.0f minutes", MAX_HORIZON_MINUTES));
 		}
 		CookSettings settings = CookSettings.defaults().withHorizonS(horizonMinutes * 60);
-		CookResult result = AcrylamideCook.run(surface, setup, target, settings);
+		AcrylamideCook.Inside<CookResult> inside = AcrylamideCook.runInside(surface, setup, target, settings);
+		CookResult result = inside.result();
 		AcrylamideEstimate estimate = AcrylamideEstimate.of(surface, product, setup, target, result);
 		// where no benchmark applies (meat, fish, vegetables) acrylamide is not the
 		// kitchen's concern: no changes offered
@@ -117,7 +118,8 @@ public class PlanService {
 					Message.of("warning.with-basis", a.message(), Text.of(a.basis()))));
 		}
 		return new PlanReport(surface, setup, target.describe(surface.category()), horizonMinutes, result, warnings,
-				cautions(surface, setup), AcrylamideView.of(estimate, mitigations), swatches(result));
+				cautions(surface, setup), AcrylamideView.of(estimate, mitigations), swatches(result), null,
+				CutFace.of(inside.interior()));
 	}
 
 	/**
