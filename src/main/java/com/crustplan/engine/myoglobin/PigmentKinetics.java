@@ -7,6 +7,7 @@ import com.crustplan.engine.colour.ColourPath;
 import com.crustplan.engine.colour.Lab;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.kinetics.ArrheniusRate;
+import com.crustplan.engine.model.Evidence;
 import com.crustplan.engine.model.Parameter;
 
 /**
@@ -20,17 +21,18 @@ public enum PigmentKinetics {
 
 	/** Red meat: raw red → pink → grey-brown. */
 	MEAT(new ArrheniusRate(Parameters.BEEF_K0, Parameters.BEEF_EA), Parameters.LOIN_FACTOR,
-			ColourPath.of("raw red → pink → grey-brown cut face of beef; L*a*b* anchors from memory",
-					new double[][] { { 0, 40, 22, 12 }, { 0.4, 50, 17, 13 }, { 0.8, 54, 9, 15 }, { 1, 53, 8, 15 } })),
+			ColourPath.of(Evidence.FROM_MEMORY,
+					"raw red → pink → grey-brown cut face of beef; L*a*b* anchors from memory",
+					new double[][] { { 0, 40, 26, 14 }, { 0.4, 50, 19, 14 }, { 0.8, 54, 9, 15 }, { 1, 53, 8, 15 } })),
 
 	/** Poultry: raw translucent pink → white. */
 	POULTRY(new ArrheniusRate(Parameters.POULTRY_K0, Parameters.POULTRY_EA), Parameters.POULTRY_FACTOR,
-			ColourPath.of("raw pink → cooked white of chicken breast; L*a*b* anchors from memory",
+			ColourPath.of(Evidence.FROM_MEMORY, "raw pink → cooked white of chicken breast; L*a*b* anchors from memory",
 					new double[][] { { 0, 52, 8, 6 }, { 0.8, 80, 2, 14 }, { 1, 80, 2, 14 } })),
 
 	/** Fish: translucent → opaque white. */
 	FISH(new ArrheniusRate(Parameters.FISH_K0, Parameters.FISH_EA), Parameters.FISH_FACTOR,
-			ColourPath.of("translucent → opaque white fish flesh; L*a*b* anchors from memory",
+			ColourPath.of(Evidence.FROM_MEMORY, "translucent → opaque white fish flesh; L*a*b* anchors from memory",
 					new double[][] { { 0, 58, 5, 5 }, { 0.8, 82, 0, 8 }, { 1, 82, 0, 8 } }));
 
 	/**
