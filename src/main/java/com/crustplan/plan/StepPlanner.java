@@ -126,7 +126,7 @@ final class StepPlanner {
 		// acrylamide changes are worked out for one setup; a plan in steps shows the
 		// estimate without them
 		return new PlanReport(surface, first, label, horizonMinutes, result, warnings, cautions,
-				AcrylamideView.of(estimate, List.of()), PlanService.swatches(result), report,
+				AcrylamideView.of(estimate, List.of()), PlanService.swatches(result, category, inside.face()), report,
 				CutFace.of(inside.interior()));
 	}
 

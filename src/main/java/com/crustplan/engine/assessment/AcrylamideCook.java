@@ -15,6 +15,7 @@ import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.myoglobin.InteriorProfile;
 import com.crustplan.engine.myoglobin.InteriorWatch;
 import com.crustplan.engine.myoglobin.PigmentKinetics;
+import com.crustplan.engine.myoglobin.SurfaceGreying;
 
 /**
  * A cook with acrylamide formation running in every layer: what plans, maps and
@@ -46,7 +47,7 @@ public final class AcrylamideCook {
 	 * A run and the cut face of its inside (null where the category's inside is not
 	 * judged by colour: bread, potato, vegetables).
 	 */
-	public record Inside<R>(R result, InteriorProfile interior) {
+	public record Inside<R>(R result, InteriorProfile interior, SurfaceGreying.FaceHistory face) {
 	}
 
 	/**
@@ -56,13 +57,13 @@ public final class AcrylamideCook {
 	 */
 	public static Inside<CookResult> runInside(Surface surface, HeatSetup setup, Target target, CookSettings settings) {
 		if (PigmentKinetics.forCategory(surface.category()).isEmpty()) {
-			return new Inside<>(run(surface, setup, target, settings), null);
+			return new Inside<>(run(surface, setup, target, settings), null, null);
 		}
 		InteriorWatch watch = new InteriorWatch(AcrylamideFormation.REACTION);
 		CookResult result = CookSimulation.of(surface, setup, settings, watch)
 			.on(CookEvent.targetColourReached(target.extentFor(surface.category())), watch)
 			.run(target);
-		return new Inside<>(result, watch.profile());
+		return new Inside<>(result, watch.profile(), watch.faceHistory());
 	}
 
 	/**
@@ -72,11 +73,11 @@ public final class AcrylamideCook {
 	public static Inside<StepsResult> runStepsInside(Surface surface, List<CookStep> steps, Target colour,
 			Double coreTargetC, CookSettings settings) {
 		if (PigmentKinetics.forCategory(surface.category()).isEmpty()) {
-			return new Inside<>(runSteps(surface, steps, colour, coreTargetC, settings), null);
+			return new Inside<>(runSteps(surface, steps, colour, coreTargetC, settings), null, null);
 		}
 		InteriorWatch watch = new InteriorWatch(AcrylamideFormation.REACTION);
 		StepsResult result = CookSimulation.runSteps(surface, steps, colour, coreTargetC, settings, watch);
-		return new Inside<>(result, watch.profile());
+		return new Inside<>(result, watch.profile(), watch.faceHistory());
 	}
 
 }

@@ -60,6 +60,14 @@ public final class InteriorWatch implements LayerReaction.Factory, EventHandler 
 		return Double.POSITIVE_INFINITY;
 	}
 
+	/** Face 0's share of pigment denatured over the whole run. */
+	public SurfaceGreying.FaceHistory faceHistory() {
+		if (pigment == null) {
+			throw new IllegalStateException("the watch has not run");
+		}
+		return pigment.faceHistory();
+	}
+
 	/** The cut face at the pull if one was marked, else as the run ended. */
 	public InteriorProfile profile() {
 		if (atPull != null) {

@@ -14,7 +14,8 @@ import com.crustplan.engine.layers.Layers;
  * layer's own temperature (see {@link PigmentKinetics}), with the hottest each layer got
  * and the browning of both faces, so the cut face can be drawn at any moment. Levels are
  * in % of the pigment denatured: the crust level is face 0's layer, the portion level
- * mass-weighted. One instance belongs to one run; {@link #step} allocates nothing.
+ * mass-weighted. One instance belongs to one run; {@link #step} allocates only to grow
+ * the face's history.
  */
 public final class MyoglobinDenaturation implements LayerReaction {
 
@@ -43,6 +44,8 @@ public final class MyoglobinDenaturation implements LayerReaction {
 	private double face;
 
 	private double portion;
+
+	private final SurfaceGreying.FaceHistory history = new SurfaceGreying.FaceHistory();
 
 	/**
 	 * @throws IllegalArgumentException for a category whose inside is not judged by
@@ -87,6 +90,7 @@ public final class MyoglobinDenaturation implements LayerReaction {
 		}
 		timeS = layers.timeS();
 		face = 100 * (1 - nativeShare[0]);
+		history.add(timeS, 1 - nativeShare[0]);
 		portion = mass > 0 ? 100 * denatured / mass : 0;
 	}
 
@@ -102,6 +106,11 @@ public final class MyoglobinDenaturation implements LayerReaction {
 		}
 		return InteriorProfile.of(category, kinetics, grid.shape(), grid.thickness() * 1000, depth, denatured, peakC,
 				waterActivity, extent0, extent1, timeS);
+	}
+
+	/** Face 0's share of pigment denatured over the run so far. */
+	public SurfaceGreying.FaceHistory faceHistory() {
+		return history;
 	}
 
 	/** % of the pigment denatured in face 0's layer. */

@@ -144,4 +144,18 @@ class MyoglobinDenaturationTest {
 		assertThat(CentreDoneness.describe(FoodCategory.FISH, 64).code()).isEqualTo("interior.centre.fish.done");
 	}
 
+	@Test
+	@DisplayName("The steamed steak's surface is drawn grey, not raw red, though it never browned")
+	void shouldDrawASteamedFaceGrey() {
+		AcrylamideCook.Inside<StepsResult> run = AcrylamideCook.runStepsInside(Surface.defaults(FoodCategory.MEAT),
+				List.of(CookStep.timed(new Oven(100, true, 100), 1800)), null, null, SETTINGS);
+		double end = run.result().cook().simulatedS();
+		double extent = run.result().cook().finalBrowningExtent();
+		assertThat(extent).isLessThan(0.02);
+		var face = SurfaceGreying.colour(FoodCategory.MEAT, extent, run.face().at(end));
+		assertThat(face.a()).isLessThan(12);
+		// raw red at the start: a* well above
+		assertThat(SurfaceGreying.colour(FoodCategory.MEAT, 0, run.face().at(0)).a()).isGreaterThan(20);
+	}
+
 }
