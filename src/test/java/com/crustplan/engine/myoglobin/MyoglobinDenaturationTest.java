@@ -158,4 +158,24 @@ class MyoglobinDenaturationTest {
 		assertThat(SurfaceGreying.colour(FoodCategory.MEAT, 0, run.face().at(0)).a()).isGreaterThan(20);
 	}
 
+	@Test
+	@DisplayName("Hunt, Sørheim & Slinde 1999 (J Food Sci 64:847): patties red inside at 55 °C, browner at 65 and 75 °C")
+	void shouldBrownPattiesProgressivelyWithEndpointTemperature() {
+		Surface patty = Surface.defaults(FoodCategory.MEAT).withThicknessMm(13);
+		PanContact pan = new PanContact(200, true, 60);
+		double previousA = Double.POSITIVE_INFINITY;
+		for (double endpoint : new double[] { 55, 65, 75 }) {
+			InteriorProfile p = AcrylamideCook
+				.runStepsInside(patty, List.of(CookStep.toCore(pan, endpoint, 1800)), null, null, SETTINGS)
+				.interior();
+			double a = PigmentKinetics.MEAT.colourAt(p.centreDenatured()).a();
+			if (endpoint == 55) {
+				// red and undercooked-looking (deoxymyoglobin patties in the study)
+				assertThat(a).isGreaterThan(20);
+			}
+			assertThat(a).as("centre a* at %s °C", endpoint).isLessThan(previousA);
+			previousA = a;
+		}
+	}
+
 }
