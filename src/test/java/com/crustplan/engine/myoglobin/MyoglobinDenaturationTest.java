@@ -18,6 +18,8 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.Oven;
 import com.crustplan.engine.heat.PanContact;
+import com.crustplan.engine.layers.Grid;
+import com.crustplan.engine.layers.Layers;
 
 /**
  * The inside's pigment against published kinetics and what every cook sees on a cut
@@ -176,6 +178,63 @@ class MyoglobinDenaturationTest {
 			assertThat(a).as("centre a* at %s °C", endpoint).isLessThan(previousA);
 			previousA = a;
 		}
+	}
+
+	@Test
+	@DisplayName("A round piece (strip or ball) has one surface and its centre at the radius: one band, measured inwards")
+	void shouldMeasureARoundPieceFromItsSurface() {
+		Grid grid = new Grid(0.010, 21, Grid.DEFAULT_CLUSTERING, 2);
+		Surface ball = Surface.defaults(FoodCategory.MEAT);
+		MyoglobinDenaturation pigment = new MyoglobinDenaturation(ball, grid);
+		// hot outside 3 mm at 90 °C, the rest at 20 °C, held a minute
+		Layers layers = new Layers() {
+
+			@Override
+			public Grid grid() {
+				return grid;
+			}
+
+			@Override
+			public int size() {
+				return grid.size();
+			}
+
+			@Override
+			public double temperatureK(int i) {
+				return (grid.position(i) < 0.003 ? 90 : 20) + 273.15;
+			}
+
+			@Override
+			public double moisture(int i) {
+				return 2.5;
+			}
+
+			@Override
+			public double waterActivity(int i) {
+				return 1;
+			}
+
+			@Override
+			public double dryMass(int i) {
+				return grid.width(i);
+			}
+
+			@Override
+			public double timeS() {
+				return 60;
+			}
+
+		};
+		for (int k = 0; k < 60; k++) {
+			pigment.step(layers, 1);
+		}
+		InteriorProfile p = pigment.profile();
+		assertThat(p.slab()).isFalse();
+		assertThat(p.bandMm()[1]).isNaN();
+		assertThat(p.bandMm()[0]).isBetween(2.5, 3.5);
+		assertThat(p.cookedThrough()).isFalse();
+		assertThat(p.centrePeakC()).isCloseTo(20, within(1e-9));
+		assertThat(p.band().code()).isEqualTo("interior.band.meat.even");
 	}
 
 }
