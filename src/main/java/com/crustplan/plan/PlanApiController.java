@@ -24,6 +24,7 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.SurfaceField;
 import com.crustplan.surface.CategoryDefaults;
 import com.crustplan.engine.input.InvalidInputException;
+import com.crustplan.engine.myoglobin.InteriorProfile;
 import com.crustplan.system.MessageText;
 
 import com.fasterxml.jackson.annotation.JsonInclude;
@@ -156,6 +157,32 @@ class PlanApiController {
 	}
 
 	/**
+	 * The inside of meat, poultry or fish when it comes off: each grid layer from face 0
+	 * (depth, share of pigment denatured, hottest °C, colour), the crust and cooked band
+	 * under each face (mm; the second face absent for a round piece), and the centre.
+	 */
+	record Interior(List<InteriorLayer> profile, double crustMm, Double crustOtherFaceMm, double cookedBandMm,
+			Double cookedBandOtherFaceMm, boolean cookedThrough, double centrePeakTemperatureC,
+			double centreDenaturedFraction, String centreCode, String centre, String band, double atS) {
+
+		static Interior of(InteriorProfile p, MessageText text) {
+			List<InteriorLayer> layers = p.layers()
+				.stream()
+				.map(l -> new InteriorLayer(l.depthMm(), l.denatured(), l.peakC(), l.colour().lightness(),
+						l.colour().a(), l.colour().b(), l.colour().hex()))
+				.toList();
+			return new Interior(layers, p.crustMm()[0], PlanReport.finite(p.crustMm()[1]), p.bandMm()[0],
+					PlanReport.finite(p.bandMm()[1]), p.cookedThrough(), p.centrePeakC(), p.centreDenatured(),
+					p.centre().code(), text.celsius(p.centre()), text.celsius(p.band()), p.atS());
+		}
+
+	}
+
+	record InteriorLayer(double depthMm, double denaturedFraction, double peakTemperatureC, double lightness, double a,
+			double b, String colorHex) {
+	}
+
+	/**
 	 * The answer; a plan in steps adds its steps, core target, target order and timeline
 	 * (absent otherwise).
 	 */
@@ -167,7 +194,8 @@ class PlanApiController {
 			@JsonInclude(JsonInclude.Include.NON_NULL) Double coreTargetC,
 			@JsonInclude(JsonInclude.Include.NON_NULL) Double coreTargetReachedS,
 			@JsonInclude(JsonInclude.Include.NON_NULL) TargetOrder targets,
-			@JsonInclude(JsonInclude.Include.NON_NULL) List<Checkpoint> timeline) {
+			@JsonInclude(JsonInclude.Include.NON_NULL) List<Checkpoint> timeline,
+			@JsonInclude(JsonInclude.Include.NON_NULL) Interior interior) {
 
 		static PlanResponse of(PlanReport r, MessageText text, List<String> deprecations) {
 			List<Double> t = new ArrayList<>();
@@ -214,7 +242,8 @@ class PlanApiController {
 					new Series(t, surface, core, aw, lightness, hex, hasBody ? source : null),
 					r.warnings().stream().map(w -> new Warning(w.code(), text.celsius(w.message()))).toList(),
 					text.celsius(r.cautions()), text.celsius(r.result().assumptions()), deprecations, steps,
-					st == null ? null : st.coreTargetC(), st == null ? null : st.coreTargetReachedS(), order, timeline);
+					st == null ? null : st.coreTargetC(), st == null ? null : st.coreTargetReachedS(), order, timeline,
+					r.hasCutFace() ? Interior.of(r.cutFace().profile(), text) : null);
 		}
 
 	}

@@ -17,12 +17,25 @@ import com.crustplan.engine.message.Message;
  */
 public record PlanReport(Surface surface, HeatSetup setup, Message targetLabel, double horizonMinutes,
 		CookResult result, List<PlanWarning> warnings, List<Message> cautions, AcrylamideView acrylamide,
-		List<Swatch> swatches, StepsReport steps) {
+		List<Swatch> swatches, StepsReport steps, CutFace cutFace) {
 
 	/** A one-setup plan. */
 	public PlanReport(Surface surface, HeatSetup setup, Message targetLabel, double horizonMinutes, CookResult result,
 			List<PlanWarning> warnings, List<Message> cautions, AcrylamideView acrylamide, List<Swatch> swatches) {
-		this(surface, setup, targetLabel, horizonMinutes, result, warnings, cautions, acrylamide, swatches, null);
+		this(surface, setup, targetLabel, horizonMinutes, result, warnings, cautions, acrylamide, swatches, null, null);
+	}
+
+	/** A plan without a cut face (a category whose inside is not judged by colour). */
+	public PlanReport(Surface surface, HeatSetup setup, Message targetLabel, double horizonMinutes, CookResult result,
+			List<PlanWarning> warnings, List<Message> cautions, AcrylamideView acrylamide, List<Swatch> swatches,
+			StepsReport steps) {
+		this(surface, setup, targetLabel, horizonMinutes, result, warnings, cautions, acrylamide, swatches, steps,
+				null);
+	}
+
+	/** Whether the plan draws the cut face of the piece (meat, poultry, fish). */
+	public boolean hasCutFace() {
+		return cutFace != null;
 	}
 
 	public boolean stepped() {

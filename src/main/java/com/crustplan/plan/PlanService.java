@@ -27,7 +27,10 @@ import com.crustplan.engine.doneness.DonenessWarning;
 import com.crustplan.engine.doneness.FoodCode;
 import com.crustplan.engine.doneness.FoodCode.Cut;
 import com.crustplan.engine.input.InvalidInputException;
+import com.crustplan.engine.colour.Lab;
+import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.myoglobin.SurfaceGreying;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.heat.DeepFryer;
 import com.crustplan.engine.heat.RadiantGrill;
@@ -104,7 +107,8 @@ public class PlanService {
 					String.format(Locale.ROOT, "must be from 1 to %.0f minutes", MAX_HORIZON_MINUTES));
 		}
 		CookSettings settings = CookSettings.defaults().withHorizonS(horizonMinutes * 60);
-		CookResult result = AcrylamideCook.run(surface, setup, target, settings);
+		AcrylamideCook.Inside<CookResult> inside = AcrylamideCook.runInside(surface, setup, target, settings);
+		CookResult result = inside.result();
 		AcrylamideEstimate estimate = AcrylamideEstimate.of(surface, product, setup, target, result);
 		// where no benchmark applies (meat, fish, vegetables) acrylamide is not the
 		// kitchen's concern: no changes offered
@@ -117,7 +121,8 @@ public class PlanService {
 					Message.of("warning.with-basis", a.message(), Text.of(a.basis()))));
 		}
 		return new PlanReport(surface, setup, target.describe(surface.category()), horizonMinutes, result, warnings,
-				cautions(surface, setup), AcrylamideView.of(estimate, mitigations), swatches(result));
+				cautions(surface, setup), AcrylamideView.of(estimate, mitigations),
+				swatches(result, surface.category(), inside.face()), null, CutFace.of(inside.interior()));
 	}
 
 	/**
@@ -274,6 +279,14 @@ public class PlanService {
 
 	/** Evenly spaced swatches over the run; the one nearest the target time is marked. */
 	static List<Swatch> swatches(CookResult result) {
+		return swatches(result, null, null);
+	}
+
+	/**
+	 * As {@link #swatches(CookResult)}; where the face's pigment history is known (red
+	 * meat) a face that denatured before it browned is drawn grey, not raw red.
+	 */
+	static List<Swatch> swatches(CookResult result, FoodCategory category, SurfaceGreying.FaceHistory face) {
 		List<Sample> s = result.series();
 		if (s.isEmpty()) {
 			return List.of();
@@ -298,7 +311,9 @@ public class PlanService {
 		List<Swatch> out = new ArrayList<>();
 		for (int i : picks) {
 			Sample x = s.get(i);
-			out.add(new Swatch(x.timeS(), x.colourHex(), x.colour().lightness(), i == targetIndex));
+			Lab c = face == null || !SurfaceGreying.applies(category) ? x.colour()
+					: SurfaceGreying.colour(category, x.browningExtent(), face.at(x.timeS()));
+			out.add(new Swatch(x.timeS(), c.hex(), c.lightness(), i == targetIndex));
 		}
 		return out;
 	}

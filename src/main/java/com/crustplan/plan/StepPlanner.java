@@ -89,7 +89,9 @@ final class StepPlanner {
 			}
 		}
 		CookSettings settings = CookSettings.defaults().withHorizonS(horizonMinutes * 60);
-		StepsResult run = AcrylamideCook.runSteps(surface, steps, colour, coreTargetC, settings);
+		AcrylamideCook.Inside<StepsResult> inside = AcrylamideCook.runStepsInside(surface, steps, colour, coreTargetC,
+				settings);
+		StepsResult run = inside.result();
 		CookResult result = run.cook();
 		// a plan with no colour target is never flagged darker than the colour guide:
 		// judge it at the lightest stage
@@ -124,7 +126,8 @@ final class StepPlanner {
 		// acrylamide changes are worked out for one setup; a plan in steps shows the
 		// estimate without them
 		return new PlanReport(surface, first, label, horizonMinutes, result, warnings, cautions,
-				AcrylamideView.of(estimate, List.of()), PlanService.swatches(result), report);
+				AcrylamideView.of(estimate, List.of()), PlanService.swatches(result, category, inside.face()), report,
+				CutFace.of(inside.interior()));
 	}
 
 	private static List<PlanWarning> warnings(Surface surface, List<CookStep> steps, StepsResult run, Target colour,

@@ -7,7 +7,6 @@ import com.crustplan.engine.heat.RadiantGrill;
 import com.crustplan.engine.heat.Oven;
 import com.crustplan.engine.heat.PanContact;
 import com.crustplan.engine.input.InvalidInputException;
-import com.crustplan.engine.water.Atmosphere;
 
 /**
  * Builds the engine's heat setup from what a cook sets, in °C. Shared by the setup form,
@@ -23,13 +22,13 @@ public final class HeatSettings {
 	 * Dry oven air when no steam is given: kitchen air drawn in, about 1.6 % steam by
 	 * volume.
 	 */
-	public static final double DEFAULT_STEAM_PCT = Math.round(Atmosphere.KITCHEN_STEAM_FRACTION * 1000) / 10.0;
+	public static final double DEFAULT_STEAM_PCT = HeatSetup.DEFAULT_OVEN_STEAM.value();
 
 	/**
 	 * Turned once a minute in a pan or under a grill unless told otherwise (common
 	 * practice).
 	 */
-	public static final double DEFAULT_FLIP_EVERY_S = 60;
+	public static final double DEFAULT_FLIP_EVERY_S = HeatSetup.DEFAULT_TURN_EVERY.value();
 
 	/**
 	 * A grill is a salamander unless told otherwise: the kitchen's usual radiant grill.

@@ -199,6 +199,25 @@ class MessageCatalogueTest {
 		sample("warning.target-not-reached", m("outcome.too-slow"));
 		sample("doneness.moment.colour");
 		sample("doneness.moment.end");
+		sample("interior.centre.meat.raw", c(44), c(50));
+		sample("interior.centre.meat.rare", c(51), c(50), c(52));
+		sample("interior.centre.meat.medium-rare", c(56), c(55), c(57));
+		sample("interior.centre.meat.medium", c(61), c(60), c(63));
+		sample("interior.centre.meat.medium-well", c(66), c(65), c(68));
+		sample("interior.centre.meat.well", c(98), c(70));
+		sample("interior.centre.poultry.done", c(77), StatedTemperature.of(74, 165));
+		sample("interior.centre.poultry.under", c(69), StatedTemperature.of(74, 165));
+		sample("interior.centre.fish.done", c(64), StatedTemperature.of(63, 145));
+		sample("interior.centre.fish.under", c(52), StatedTemperature.of(63, 145));
+		sample("interior.band.meat", Quantity.of(3.4, "mm", 1), Quantity.of(2.6, "mm", 1));
+		sample("interior.band.meat.even", Quantity.of(3.4, "mm", 1));
+		sample("interior.through.meat");
+		sample("interior.band.poultry", Quantity.of(6.2, "mm", 1), Quantity.of(4.1, "mm", 1));
+		sample("interior.band.poultry.even", Quantity.of(6.2, "mm", 1));
+		sample("interior.through.poultry");
+		sample("interior.band.fish", Quantity.of(5.5, "mm", 1), Quantity.of(3.9, "mm", 1));
+		sample("interior.band.fish.even", Quantity.of(5.5, "mm", 1));
+		sample("interior.through.fish");
 		sample("warning.food-code.poultry", m("doneness.moment.colour"), c(52), StatedTemperature.of(74, 165));
 		sample("warning.food-code.whole-cut", m("doneness.moment.colour"), c(48), StatedTemperature.of(63, 145),
 				StatedTemperature.of(68, 155));

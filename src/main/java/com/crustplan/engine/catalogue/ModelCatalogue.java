@@ -13,6 +13,8 @@ import com.crustplan.engine.browning.Caramelisation;
 import com.crustplan.engine.browning.WaterActivityFactor;
 import com.crustplan.engine.cook.CookSettings;
 import com.crustplan.engine.doneness.DonenessChapter;
+import com.crustplan.engine.food.DefaultMakeUp;
+import com.crustplan.engine.myoglobin.InteriorChapter;
 import com.crustplan.engine.food.Acidity;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.heat.GrillKind;
@@ -47,6 +49,8 @@ public final class ModelCatalogue {
 		s.add(colour());
 		s.add(AcrylamideChapter.section());
 		s.add(DonenessChapter.section());
+		s.add(InteriorChapter.section());
+		s.add(defaults());
 		return List.copyOf(s);
 	}
 
@@ -224,6 +228,11 @@ public final class ModelCatalogue {
 				"Each category's surface runs through its own anchors; stages are defined by L* limits, or by extent where the path is "
 						+ "not monotone in L* (raw red meat lightens as it greys before it browns).",
 				List.of()));
+		for (FoodCategory c : FoodCategory.values()) {
+			eq.add(new Equation("Colour path: " + c.label(), "anchor colours along the browning extent B",
+					c.colourPath().source(),
+					c.colourPath().anchorParameters(c.label() + " surface", "browning extent")));
+		}
 		eq.add(new Equation("Colour difference", "ΔE*ab = √(ΔL*² + Δa*² + Δb*²)", "CIE 1976.", List.of()));
 		eq.add(new Equation("Swatches",
 				"L*a*b* → XYZ (D65, CIE 1976 inverse) → linear RGB (IEC 61966-2-1 matrix) → sRGB transfer curve",
@@ -231,6 +240,18 @@ public final class ModelCatalogue {
 		return new ModelSection("Colour", eq, List
 			.of("Anchor colours of most paths are from memory of published ranges, not a measured colour chart: a screen swatch is a guide, "
 					+ "not a standard; use the kitchen's own colour guide at the station."));
+	}
+
+	private static ModelSection defaults() {
+		List<Equation> eq = new ArrayList<>();
+		for (FoodCategory c : FoodCategory.values()) {
+			eq.add(new Equation("Default make-up: " + c.label(), "x₀ (% by mass) and Asn₀ (mg/kg) of a new surface",
+					"What a new surface of the category starts from; a cook enters the product's own figures where known.",
+					DefaultMakeUp.parameters(c)));
+		}
+		return new ModelSection("Default make-up of each category", eq, List.of(
+				"Typical values, not a particular product: reducing sugar and asparagine vary several-fold between lots and varieties.",
+				"Measure or ask the supplier for the reducing sugar of potatoes: it drives both colour and acrylamide."));
 	}
 
 }

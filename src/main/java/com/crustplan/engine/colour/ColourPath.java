@@ -2,6 +2,12 @@ package com.crustplan.engine.colour;
 
 import java.util.List;
 
+import java.util.ArrayList;
+import java.util.Locale;
+
+import com.crustplan.engine.model.Evidence;
+import com.crustplan.engine.model.Parameter;
+
 /**
  * The colour a category's surface takes as its browning extent runs from 0 to 1: a
  * polyline through L*a*b* anchor colours at given extents. Colour paths need not be
@@ -17,7 +23,12 @@ public final class ColourPath {
 
 	private final String source;
 
-	public ColourPath(List<Anchor> anchors, String source) {
+	private final Evidence evidence;
+
+	/**
+	 * @param evidence how well the anchor colours are known (catalogued with the model)
+	 */
+	public ColourPath(List<Anchor> anchors, String source, Evidence evidence) {
 		if (anchors.size() < 2 || anchors.get(0).extent() != 0 || anchors.get(anchors.size() - 1).extent() != 1) {
 			throw new IllegalArgumentException("a colour path needs anchors at extent 0 and 1");
 		}
@@ -28,14 +39,35 @@ public final class ColourPath {
 		}
 		this.anchors = List.copyOf(anchors);
 		this.source = source;
+		this.evidence = evidence;
 	}
 
-	public static ColourPath of(String source, double[][] extentLab) {
+	public static ColourPath of(Evidence evidence, String source, double[][] extentLab) {
 		Anchor[] a = new Anchor[extentLab.length];
 		for (int i = 0; i < extentLab.length; i++) {
 			a[i] = new Anchor(extentLab[i][0], new Lab(extentLab[i][1], extentLab[i][2], extentLab[i][3]));
 		}
-		return new ColourPath(List.of(a), source);
+		return new ColourPath(List.of(a), source, evidence);
+	}
+
+	public Evidence evidence() {
+		return evidence;
+	}
+
+	/**
+	 * The anchors as catalogue parameters, one each: its L*, with the extent, a* and b*
+	 * in the description, labelled as the path is.
+	 * @param what what the path colours ("Red meat surface"), and what its extent means
+	 */
+	public List<Parameter> anchorParameters(String what, String extentName) {
+		List<Parameter> out = new ArrayList<>();
+		for (Anchor a : anchors) {
+			out.add(new Parameter(
+					"L*(" + a.extent() + ")", String.format(Locale.ROOT, "%s at %s %.2f: L* (a* %.1f, b* %.1f)", what,
+							extentName, a.extent(), a.colour().a(), a.colour().b()),
+					a.colour().lightness(), "L*", source, evidence));
+		}
+		return out;
 	}
 
 	public List<Anchor> anchors() {

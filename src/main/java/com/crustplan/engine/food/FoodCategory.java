@@ -6,13 +6,15 @@ import java.util.Optional;
 import com.crustplan.engine.kinetics.ArrheniusRate;
 import com.crustplan.engine.browning.BrowningKinetics;
 import com.crustplan.engine.colour.ColourPath;
+import com.crustplan.engine.model.Evidence;
 import com.crustplan.engine.model.Parameter;
 import com.crustplan.engine.water.GabIsotherm;
 
 /**
  * Food categories: each supplies defaults for a new surface, a sorption isotherm,
  * browning kinetics, a colour path and named browning stages. Compositions are typical
- * values, not a particular product.
+ * values, not a particular product; where each default make-up comes from is in
+ * {@link DefaultMakeUp}.
  */
 public enum FoodCategory {
 
@@ -31,7 +33,11 @@ public enum FoodCategory {
 		.isotherm(Isotherms.MEAT)
 		.browning(new BrowningKinetics(new ArrheniusRate(Parameter.commonPractice("k0",
 				"pre-exponential factor, meat surface browning", 2.0e5, "1/s",
-				"calibrated so a patted-dry 25 mm steak in a 220 °C oiled pan is browned in 3–4 min per side (common practice)"),
+				"calibrated to 2–5 min a side for a patted-dry steak in a 170–220 °C oiled pan (common practice):"
+						+ " a 25 mm steak, not turned, is browned in 2.6 min at 220 °C (CategoryCalibrationTest) and in under"
+						+ " 8 min at 170 °C (BrowningTradeFactsTest). The 3–4 min a side often quoted at 220 °C is not met:"
+						+ " a k0 that gives it (1.1×10⁵) takes 10.6 min at 170 °C, so the temperature dependence (the"
+						+ " borrowed activation energy), not k0, is what disagrees"),
 				Isotherms.BORROWED_EA),
 				Parameter.assumption("aw,ref", "water activity at which the meat rate is referenced", 0.4, "–",
 						"rate referenced to a dry crust, like the bread fit"),
@@ -41,7 +47,7 @@ public enum FoodCategory {
 						"glucose and ribose in post-rigor muscle ≈ 0.1 % (from memory)"),
 				Parameter.commonPractice("P,ref", "protein of the reference meat", 21, "%",
 						"lean beef (common practice)")))
-		.colourPath(ColourPath.of(
+		.colourPath(ColourPath.of(Evidence.FROM_MEMORY,
 				"raw red → grey → brown → dark crust; L*a*b* anchors from memory of published meat colour ranges",
 				new double[][] { { 0, 40, 22, 12 }, { 0.08, 50, 10, 14 }, { 0.45, 38, 12, 20 }, { 1, 22, 6, 9 } }))
 		.stages(List.of(BrowningStage.byExtent("grey", "Grey, barely seared", 0.08),
@@ -71,7 +77,7 @@ public enum FoodCategory {
 						"poultry 5.7–6.0 (quoted in food pH tables)"),
 				Parameter.fromMemory("RS,ref", "reducing sugar of the reference skin", 0.05, "%", "from memory"),
 				Parameter.fromMemory("P,ref", "protein of the reference skin", 13, "%", "chicken skin (from memory)")))
-		.colourPath(ColourPath.of("pale skin → golden → mahogany; anchors from memory",
+		.colourPath(ColourPath.of(Evidence.FROM_MEMORY, "pale skin → golden → mahogany; anchors from memory",
 				new double[][] { { 0, 70, 4, 14 }, { 0.4, 60, 10, 30 }, { 0.7, 48, 14, 30 }, { 1, 33, 14, 22 } }))
 		.stages(List.of(BrowningStage.byLightness("light-golden", "Light golden", 64),
 				BrowningStage.byLightness("golden", "Golden", 58),
@@ -104,7 +110,8 @@ public enum FoodCategory {
 		// Instruments read translucent raw flesh near L* 50 as light passes into it,
 		// but on a screen that is a flat grey. Kept just paler than opaque white so
 		// the path only darkens and the stage extents do not move.
-		.colourPath(ColourPath.of("raw pink-white → opaque white → golden → dark; anchors from memory",
+		.colourPath(ColourPath.of(Evidence.FROM_MEMORY,
+				"raw pink-white → opaque white → golden → dark; anchors from memory",
 				new double[][] { { 0, 77, 5, 6 }, { 0.06, 76, 0, 10 }, { 0.45, 62, 8, 28 }, { 1, 35, 10, 20 } }))
 		.stages(List.of(BrowningStage.byLightness("light-golden", "Light golden", 70),
 				BrowningStage.byLightness("golden", "Golden", 63),
@@ -143,7 +150,8 @@ public enum FoodCategory {
 				Parameter.fromMemory("RS,ref", "reducing sugar of a frying potato", 0.4, "%",
 						"glucose + fructose 2.8–69 mmol/kg in retail potatoes (Vivanti et al. 2006); 0.4 % typical of frying varieties"),
 				Parameter.fromMemory("P,ref", "protein of potato", 2, "%", "from memory")))
-		.colourPath(ColourPath.of("raw → pale → golden → brown; anchors from memory of published fry colour ranges",
+		.colourPath(ColourPath.of(Evidence.FROM_MEMORY,
+				"raw → pale → golden → brown; anchors from memory of published fry colour ranges",
 				new double[][] { { 0, 74, -2, 18 }, { 0.35, 64, 2, 28 }, { 0.7, 52, 9, 30 }, { 1, 38, 12, 24 } }))
 		.stages(List.of(BrowningStage.byLightness("pale", "Pale", 70),
 				BrowningStage.byLightness("light-golden", "Light golden", 66),
@@ -177,7 +185,8 @@ public enum FoodCategory {
 		// L* 80 → 25, a* −0.5 → 15, b* 18 → 30 (quoted ranges); the end point is cut at
 		// ΔE = 52 so
 		// that ΔE from the dough colour equals 52·extent, as in Zanoni's fit.
-		.colourPath(ColourPath.of("dough (80, −0.5, 18) towards (25, 15, 30), ΔE∞ = 52 (Zanoni, Peri & Bruno 1995)",
+		.colourPath(ColourPath.of(Evidence.SECONDARY,
+				"dough (80, −0.5, 18) towards (25, 15, 30), ΔE∞ = 52 (Zanoni, Peri & Bruno 1995)",
 				new double[][] { { 0, 80, -0.5, 18 },
 						{ 1, 80 - 55 * 0.8904, -0.5 + 15.5 * 0.8904, 18 + 12 * 0.8904 } }))
 		.stages(List.of(BrowningStage.byLightness("pale", "Pale", 72),
@@ -213,7 +222,7 @@ public enum FoodCategory {
 						"FDA, approximate pH of foods"),
 				Parameter.fromMemory("RS,ref", "reducing sugar of lean bread dough", 1.5, "%", "from memory"),
 				Parameter.fromMemory("P,ref", "protein of bread dough", 9, "%", "from memory")))
-		.colourPath(ColourPath.of("pale dough → golden → dark brown; anchors from memory",
+		.colourPath(ColourPath.of(Evidence.FROM_MEMORY, "pale dough → golden → dark brown; anchors from memory",
 				new double[][] { { 0, 78, 0, 22 }, { 0.4, 62, 10, 32 }, { 1, 30, 14, 22 } }))
 		.stages(List.of(BrowningStage.byLightness("pale", "Pale", 72),
 				BrowningStage.byLightness("light-golden", "Light golden", 66),
@@ -241,7 +250,8 @@ public enum FoodCategory {
 						"FDA, approximate pH of foods"),
 				Parameter.fromMemory("RS,ref", "reducing sugar of a frying potato", 0.4, "%", "as potato"),
 				Parameter.fromMemory("P,ref", "protein of potato", 2, "%", "as potato")))
-		.colourPath(ColourPath.of("raw → translucent → golden → deep brown; anchors from memory (onion)",
+		.colourPath(ColourPath.of(Evidence.FROM_MEMORY,
+				"raw → translucent → golden → deep brown; anchors from memory (onion)",
 				new double[][] { { 0, 85, -2, 15 }, { 0.45, 62, 8, 35 }, { 1, 32, 12, 22 } }))
 		.stages(List.of(BrowningStage.byLightness("light-golden", "Light golden", 72),
 				BrowningStage.byLightness("golden", "Golden", 64),

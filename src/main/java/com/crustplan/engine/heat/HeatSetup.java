@@ -48,6 +48,19 @@ public sealed interface HeatSetup permits PanContact, Oven, RadiantGrill, DeepFr
 	Parameter OVEN_WALL_EMISSIVITY = Parameter.secondary("ε_wall", "oven walls radiate at the air temperature", 0.9,
 			"–", "75–80 % of an industrial oven's flux is radiant (Baik et al. 1999, J Food Sci 64:688)");
 
+	/**
+	 * An oven with no steam given holds kitchen air drawn in: the food's own vapour,
+	 * which raises the steam share of a loaded oven, is not counted.
+	 */
+	Parameter DEFAULT_OVEN_STEAM = Parameter.assumption("y_oven",
+			"steam share of the oven atmosphere when none is given",
+			Math.round(Atmosphere.KITCHEN_STEAM_FRACTION * 1000) / 10.0, "%",
+			"kitchen air (25 °C, 50 % RH) drawn in; the load's own vapour is not counted (assumption)");
+
+	Parameter DEFAULT_TURN_EVERY = Parameter.commonPractice("Δt_turn",
+			"turning interval in a pan or under a grill when none is given", 60, "s",
+			"turned once a minute (common practice)");
+
 	FaceSchedule schedule();
 
 	/** A key for the mode, used in the API and pages. */
@@ -69,7 +82,7 @@ public sealed interface HeatSetup permits PanContact, Oven, RadiantGrill, DeepFr
 	static List<Parameter> parameters() {
 		return List.of(KITCHEN_AIR_C, NATURAL_CONVECTION, CONTACT_WITH_FAT, CONTACT_DRY, OVEN_STILL, OVEN_FAN,
 				GrillKind.FOOD_RADIUS, OIL_QUIET, OIL_BUBBLING, OVEN_WALL_EMISSIVITY, Radiation.FOOD_EMISSIVITY,
-				GasExchange.LEWIS_NUMBER, RadiantGrill.CHAR_SURFACE);
+				GasExchange.LEWIS_NUMBER, RadiantGrill.CHAR_SURFACE, DEFAULT_OVEN_STEAM, DEFAULT_TURN_EVERY);
 	}
 
 }

@@ -1,5 +1,6 @@
 package com.crustplan.engine.calibration;
 
+import static org.assertj.core.api.Assertions.assertThat;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.DisplayName;
@@ -12,7 +13,10 @@ import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.DeepFryer;
+import com.crustplan.engine.heat.Oven;
 import com.crustplan.engine.heat.PanContact;
+import com.crustplan.engine.model.Evidence;
+import com.crustplan.engine.model.Parameter;
 
 /**
  * Each category's browning k0 was calibrated to a kitchen-practice claim (the comment
@@ -31,6 +35,56 @@ class CategoryCalibrationTest {
 		assertTrue(r.reached(), String.valueOf(r.explanation()));
 		double min = r.timeToTargetS() / 60;
 		assertTrue(min >= 6 && min <= 8, "golden at " + min + " min");
+	}
+
+	@Test
+	@DisplayName("meat k0: a patted-dry 25 mm steak in a 220 °C oiled pan is browned within 2–5 min a side (common practice)")
+	void meatSteakBrownedWithinTwoToFiveMinutesASide() {
+		// one side down, not turned: the time a cook gives each side. Today 2.6 min, the
+		// short end: the 3–4 min often quoted for 220 °C is not met (see the k0 comment)
+		CookResult r = CookSimulation.run(Surface.defaults(FoodCategory.MEAT).withThicknessMm(25),
+				new PanContact(220, true, 0), Target.stage("browned"), SETTINGS);
+		assertTrue(r.reached(), String.valueOf(r.explanation()));
+		double min = r.timeToTargetS() / 60;
+		assertTrue(min >= 2 && min <= 5, "browned at " + min + " min");
+	}
+
+	@Test
+	@DisplayName("poultry k0: skin-on chicken in a 200 °C fan oven is golden in 20–30 min (common practice)")
+	void poultrySkinGoldenInTwentyToThirtyMinutes() {
+		CookResult r = CookSimulation.run(Surface.defaults(FoodCategory.POULTRY_SKIN), new Oven(200, true, 1.6),
+				Target.stage("golden"), SETTINGS);
+		assertTrue(r.reached(), String.valueOf(r.explanation()));
+		double min = r.timeToTargetS() / 60;
+		assertTrue(min >= 20 && min <= 30, "golden at " + min + " min");
+	}
+
+	@Test
+	@DisplayName("bread and sweet-dough k0: Zanoni, Peri & Bruno 1995 (LWT 28:604), 42 000 1/s, published, not calibrated")
+	void breadKineticsArePublishedNotCalibrated() {
+		for (FoodCategory c : new FoodCategory[] { FoodCategory.BREAD, FoodCategory.SWEET_DOUGH }) {
+			Parameter k0 = c.browning().rate().preExponential();
+			assertThat(k0.value()).as(c.key()).isEqualTo(42_000);
+			assertThat(k0.evidence()).as(c.key()).isEqualTo(Evidence.PUBLISHED);
+			assertThat(k0.source()).as(c.key()).contains("Zanoni");
+		}
+	}
+
+	@Test
+	@DisplayName("fish k0: the first-order L* fit of radial grilling (J Food Eng 116:130, 2013), 4759 1/s, authors from memory")
+	void fishKineticsAreTheGrillingFit() {
+		Parameter k0 = FoodCategory.FISH.browning().rate().preExponential();
+		assertThat(k0.value()).isEqualTo(4759);
+		assertThat(k0.evidence()).isEqualTo(Evidence.FROM_MEMORY);
+		assertThat(FoodCategory.FISH.browning().rate().activationEnergy().value()).isEqualTo(50.7e3);
+	}
+
+	@Test
+	@DisplayName("vegetable k0: the potato calibration borrowed, labelled an assumption, never calibrated for vegetables")
+	void vegetableBorrowsThePotatoValue() {
+		Parameter k0 = FoodCategory.VEGETABLE.browning().rate().preExponential();
+		assertThat(k0.value()).isEqualTo(FoodCategory.POTATO.browning().rate().preExponential().value());
+		assertThat(k0.evidence()).isEqualTo(Evidence.ASSUMPTION);
 	}
 
 }

@@ -1,0 +1,86 @@
+package com.crustplan.plan;
+
+import static org.hamcrest.Matchers.containsString;
+import static org.hamcrest.Matchers.greaterThan;
+import static org.hamcrest.Matchers.not;
+import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.anonymous;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.content;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.http.MediaType;
+import org.springframework.security.test.context.support.WithMockUser;
+import org.springframework.test.web.servlet.MockMvc;
+
+import com.crustplan.CrustplanTest;
+import com.crustplan.DemoData;
+
+/**
+ * The cut face on the plan page: drawn for meat, poultry and fish, not for bread or
+ * fries; the API carries the profile, band depth and centre.
+ */
+@CrustplanTest
+@WithMockUser(username = "chef", roles = "CHEF")
+class CutFacePagesTest {
+
+	@Autowired
+	MockMvc mvc;
+
+	@Autowired
+	DemoData demo;
+
+	@ParameterizedTest
+	@CsvSource({ "'Sirloin steak, 30 mm, patted dry', 'Plancha, high', browned",
+			"'Chicken thigh, skin on', 'Combi oven, dry fan', golden",
+			"'Hake fillet, skin side', 'Combi oven, dry fan', golden" })
+	void shouldDrawTheCutFaceForMuscleFoods(String surface, String setup, String stage) throws Exception {
+		mvc.perform(get("/plan").param("surfaceId", String.valueOf(demo.surface(surface)))
+			.param("setupId", String.valueOf(demo.setup(setup)))
+			.param("targetStage", stage))
+			.andExpect(status().isOk())
+			.andExpect(content().string(containsString("id=\"cut-face-drawing\"")))
+			.andExpect(content().string(containsString("<svg")))
+			.andExpect(content().string(containsString("Centre at ")));
+	}
+
+	@ParameterizedTest
+	@CsvSource({ "'Chips, 10 mm, blanched', 'Fryer, chips', golden", "'Sourdough loaf', 'Deck oven, bread', golden" })
+	void shouldNotDrawACutFaceForBreadOrFries(String surface, String setup, String stage) throws Exception {
+		mvc.perform(get("/plan").param("surfaceId", String.valueOf(demo.surface(surface)))
+			.param("setupId", String.valueOf(demo.setup(setup)))
+			.param("targetStage", stage))
+			.andExpect(status().isOk())
+			.andExpect(content().string(not(containsString("cut-face-drawing"))));
+	}
+
+	@Test
+	void shouldCarryTheInteriorInTheApiAnswerForASteamedSteak() throws Exception {
+		String steamed = """
+				{ "surface": { "category": "meat", "thicknessMm": 25 },
+				  "steps": [ { "heat": { "mode": "oven", "temperatureC": 100, "fan": true, "steamPct": 100 },
+				               "minutes": 30 } ],
+				  "target": { "coreTemperatureC": 95 },
+				  "horizonMinutes": 40 }""";
+		mvc.perform(post("/api/v1/plans").with(anonymous()).contentType(MediaType.APPLICATION_JSON).content(steamed))
+			.andExpect(status().isOk())
+			.andExpect(jsonPath("$.interior.cookedThrough").value(true))
+			.andExpect(jsonPath("$.interior.centreCode").value("interior.centre.meat.well"))
+			.andExpect(jsonPath("$.interior.centrePeakTemperatureC").value(greaterThan(95.0)))
+			.andExpect(jsonPath("$.interior.profile.length()").value(greaterThan(10)))
+			.andExpect(jsonPath("$.interior.band").value(containsString("right through")));
+	}
+
+	@Test
+	void shouldLeaveTheInteriorOutForFries() throws Exception {
+		mvc.perform(post("/api/v1/plans").with(anonymous())
+			.contentType(MediaType.APPLICATION_JSON)
+			.content(PlanApiTest.CHIPS)).andExpect(status().isOk()).andExpect(jsonPath("$.interior").doesNotExist());
+	}
+
+}
