@@ -1,21 +1,60 @@
 package com.crustplan.engine.cook;
 
+import com.crustplan.engine.food.Shape;
 import com.crustplan.engine.heat.FaceExchange;
+import com.crustplan.engine.heat.FaceFlux;
 import com.crustplan.engine.heat.FaceSchedule;
 import com.crustplan.engine.heat.HeatedBody;
+import com.crustplan.engine.message.Message;
 
 /**
  * The heat the food is in now: the current step's face schedule, on a clock that starts
  * with the step (a flip every 60 s counts from when the food went into that pan).
+ * <p>
+ * A slab's two faces see the schedule's two faces. A strip, cube or ball has one outer
+ * face (face 0) and a centre (face 1's node) that is a symmetry point: the centre
+ * exchanges nothing, and the outer face sees both of the schedule's faces at once, the
+ * heated one over the shape's share of its surface ({@link TurnedSurface}).
  */
 final class ActiveHeat {
+
+	/** The centre of a cylinder or sphere: no flux crosses it (symmetry). */
+	static final FaceExchange CENTRE = new FaceExchange() {
+		@Override
+		public void evaluate(double surfaceK, double waterActivity, double boilingFlux, FaceFlux out) {
+			out.heatFlux = 0;
+			out.heatFluxSlope = 0;
+			out.evaporation = 0;
+			out.evaporationSlopeT = 0;
+			out.evaporationSlopeAw = 0;
+		}
+
+		@Override
+		public Message describe() {
+			throw new UnsupportedOperationException("the centre of a piece is not a face");
+		}
+	};
 
 	private FaceSchedule schedule;
 
 	private double startS;
 
-	ActiveHeat(FaceSchedule schedule) {
+	private final boolean radial;
+
+	private final double heatedShare;
+
+	/**
+	 * The outer face's last blend, kept while the schedule's pair of exchanges is the
+	 * same.
+	 */
+	private TurnedSurface turned;
+
+	private double turnedShare;
+
+	ActiveHeat(FaceSchedule schedule, Shape shape) {
 		this.schedule = schedule;
+		this.radial = shape.factor() > 0;
+		this.heatedShare = TurnedSurface.shareOf(shape);
 	}
 
 	/** Moves the food into another heat at time startS. */
@@ -25,7 +64,27 @@ final class ActiveHeat {
 	}
 
 	FaceExchange at(int face, double timeS) {
-		return schedule.at(face, timeS - startS);
+		double t = timeS - startS;
+		if (!radial) {
+			return schedule.at(face, t);
+		}
+		if (face == 1) {
+			return CENTRE;
+		}
+		FaceExchange a = schedule.at(0, t);
+		FaceExchange b = schedule.at(1, t);
+		if (a == b) {
+			return a;
+		}
+		boolean aHeated = schedule.heated(0, t);
+		boolean oneHeated = aHeated != schedule.heated(1, t);
+		FaceExchange heated = aHeated ? a : b;
+		FaceExchange open = aHeated ? b : a;
+		if (turned == null || turned.heated() != heated || turned.open() != open) {
+			turned = new TurnedSurface(heated, open, oneHeated ? heatedShare : 0.5);
+			turnedShare = Math.max(turnedShare, oneHeated ? heatedShare : 0.5);
+		}
+		return turned;
 	}
 
 	/**
@@ -34,6 +93,14 @@ final class ActiveHeat {
 	 */
 	double nextChangeAfter(double timeS) {
 		return startS + schedule.nextChangeAfter(timeS - startS);
+	}
+
+	/**
+	 * The share of the outer surface that faced the heat where a strip, cube or ball met
+	 * a heat that differs from side to side; 0 if it never did.
+	 */
+	double turnedShare() {
+		return turnedShare;
 	}
 
 	/**

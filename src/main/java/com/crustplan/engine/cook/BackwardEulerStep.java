@@ -64,7 +64,7 @@ final class BackwardEulerStep {
 		}
 		for (int face = 0; face < 2; face++) {
 			if (schedule.at(face, now).body() == body) {
-				body.draw(heat.faceHeatFlux[face]);
+				body.draw(heat.bodyHeatFlux[face]);
 			}
 		}
 		body.advance(dt);
