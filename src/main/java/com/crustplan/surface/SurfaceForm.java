@@ -114,6 +114,11 @@ public record SurfaceForm(
 				req("initialTemperatureC", initialTemperatureC()), toShape());
 	}
 
+	/** The shape named, or a slab where it names none or none known (for labels). */
+	public Shape toShapeOrSlab() {
+		return Shape.byKey(shape).orElse(Shape.SLAB);
+	}
+
 	/**
 	 * The shape named; a form saved before shapes existed (a plan's stored inputs) names
 	 * none and was planned as a slab, so it stays one. Throws
