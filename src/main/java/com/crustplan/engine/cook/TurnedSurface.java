@@ -1,5 +1,7 @@
 package com.crustplan.engine.cook;
 
+import java.util.List;
+
 import com.crustplan.engine.food.Shape;
 import com.crustplan.engine.heat.FaceExchange;
 import com.crustplan.engine.heat.FaceFlux;
@@ -21,22 +23,22 @@ import com.crustplan.engine.model.Parameter;
  * ring of fat a rolled ball sits in, taken the same). All assumptions, not measurements.
  * One instance per run: it holds the scratch of its last evaluation.
  */
-final class TurnedSurface implements FaceExchange {
+public final class TurnedSurface implements FaceExchange {
 
 	/** One side of four faces the heat (assumption: a square strip lying on a side). */
-	static final Parameter STRIP_SHARE = Parameter.assumption("s_strip",
+	public static final Parameter STRIP_SHARE = Parameter.assumption("s_strip",
 			"share of a turned strip's surface facing the pan or grill", 0.25, "",
 			"assumption: one side of a square strip's four faces the heat at a time");
 
 	/** One face of six faces the heat (assumption). */
-	static final Parameter CUBE_SHARE = Parameter.assumption("s_cube",
+	public static final Parameter CUBE_SHARE = Parameter.assumption("s_cube",
 			"share of a turned cube's surface facing the pan or grill", 1.0 / 6, "",
 			"assumption: one face of a cube's six faces the heat at a time");
 
 	/**
 	 * Projected area over surface, πr²/4πr² (geometry; its use for a pan an assumption).
 	 */
-	static final Parameter BALL_SHARE = Parameter.assumption("s_ball",
+	public static final Parameter BALL_SHARE = Parameter.assumption("s_ball",
 			"share of a rolled ball's surface facing the pan or grill", 0.25, "",
 			"assumption: a ball's projected area over its surface (πr²/4πr²), taken for a pan's fat ring too");
 
@@ -60,6 +62,10 @@ final class TurnedSurface implements FaceExchange {
 		this.heated = heated;
 		this.open = open;
 		this.share = share;
+	}
+
+	public static List<Parameter> parameters() {
+		return List.of(STRIP_SHARE, CUBE_SHARE, BALL_SHARE);
 	}
 
 	/** The share of a shape's surface that faces the heated side at a time. */
