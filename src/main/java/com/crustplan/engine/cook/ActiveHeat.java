@@ -13,8 +13,12 @@ import com.crustplan.engine.message.Message;
  * <p>
  * A slab's two faces see the schedule's two faces. A strip, cube or ball has one outer
  * face (face 0) and a centre (face 1's node) that is a symmetry point: the centre
- * exchanges nothing, and the outer face sees both of the schedule's faces at once, the
- * heated one over the shape's share of its surface ({@link TurnedSurface}).
+ * exchanges nothing. Where the two faces' heats differ (a pan, a grill) the piece is
+ * taken as turned side by side, each side down for as long as the schedule keeps a face
+ * down: every part of its surface then faces the heat for the shape's share s of the
+ * time, so the outer face sees the heated exchange for one turn and the open one for the
+ * next 1/s − 1 turns (a strip: one down, three up). A piece that is never turned sees
+ * both at once, weighted by the share ({@link TurnedSurface}).
  */
 final class ActiveHeat {
 
@@ -55,12 +59,24 @@ final class ActiveHeat {
 		this.schedule = schedule;
 		this.radial = shape.factor() > 0;
 		this.heatedShare = TurnedSurface.shareOf(shape);
+		this.turnS = schedule.nextChangeAfter(0);
 	}
+
+	/**
+	 * How long a side stays down, s (the schedule's first change); +∞ if never turned.
+	 */
+	private double turnS;
 
 	/** Moves the food into another heat at time startS. */
 	void use(FaceSchedule next, double start) {
 		this.schedule = next;
 		this.startS = start;
+		this.turnS = next.nextChangeAfter(0);
+	}
+
+	/** Whether a strip, cube or ball is turned side by side in this heat. */
+	private boolean timeShared() {
+		return radial && !schedule.symmetric() && Double.isFinite(turnS) && turnS > 0;
 	}
 
 	FaceExchange at(int face, double timeS) {
@@ -80,6 +96,10 @@ final class ActiveHeat {
 		boolean oneHeated = aHeated != schedule.heated(1, t);
 		FaceExchange heated = aHeated ? a : b;
 		FaceExchange open = aHeated ? b : a;
+		if (oneHeated && timeShared()) {
+			turnedShare = Math.max(turnedShare, heatedShare);
+			return t - Math.floor(t / cycleS()) * cycleS() < turnS - 1e-9 ? heated : open;
+		}
 		if (turned == null || turned.heated() != heated || turned.open() != open) {
 			turned = new TurnedSurface(heated, open, oneHeated ? heatedShare : 0.5);
 			turnedShare = Math.max(turnedShare, oneHeated ? heatedShare : 0.5);
@@ -92,7 +112,27 @@ final class ActiveHeat {
 	 * change.
 	 */
 	double nextChangeAfter(double timeS) {
-		return startS + schedule.nextChangeAfter(timeS - startS);
+		double t = timeS - startS;
+		if (timeShared()) {
+			double cycle = cycleS();
+			double start = Math.floor(t / cycle) * cycle;
+			return startS + (t < start + turnS - 1e-9 ? start + turnS : start + cycle);
+		}
+		return startS + schedule.nextChangeAfter(t);
+	}
+
+	/** One round of a turned piece: each side down once, s. */
+	private double cycleS() {
+		return turnS / heatedShare;
+	}
+
+	/**
+	 * The share of the time the outer face the model follows touches the heat: 1 for a
+	 * slab and for an unturned or evenly heated piece, s for a turned strip, cube or
+	 * ball.
+	 */
+	double touchingShare() {
+		return timeShared() ? heatedShare : 1;
 	}
 
 	/**

@@ -123,11 +123,41 @@ final class HeatStep {
 			account.heatIn(faceHeatFlux[face] * dt);
 			faceEvaporation[face] += evaporationSlope[face] * dT;
 		}
+		if (schedule.touchingShare() < 1) {
+			underTurnedPiece(dt);
+		}
 		for (int face = 0; face < 2; face++) {
 			standingWater(face, dt);
 		}
 		boiling.recordBoilingFlux(dt);
 	}
+
+	/**
+	 * A turned strip, cube or ball always has one side down, though the one side the
+	 * model follows is down only for its share of the time: while it is, the pan loses
+	 * what it takes; while it is up, the pan loses what the side down took on average
+	 * over its last turn, so the pan sees the steady load of the whole piece.
+	 */
+	private void underTurnedPiece(double dt) {
+		if (exchangeAt[0].body() != null) {
+			contactJ += faceHeatFlux[0] * dt;
+			contactS += dt;
+		}
+		else {
+			if (contactS > 0) {
+				lastContactFlux = contactJ / contactS;
+				contactJ = 0;
+				contactS = 0;
+			}
+			bodyHeatFlux[0] = lastContactFlux;
+		}
+	}
+
+	private double contactJ;
+
+	private double contactS;
+
+	private double lastContactFlux;
 
 	private void linearise(int face, FaceExchange exchange) {
 		CookState.Face f = state.face(face);

@@ -10,12 +10,12 @@ import com.crustplan.engine.message.Message;
 import com.crustplan.engine.model.Parameter;
 
 /**
- * The one outer face of a strip, cube or ball under a heat that differs from side to side
- * (a pan, a grill): the piece is taken as turned or rolled often enough that its whole
- * surface shares the heated side, so at every instant the face sees the heated exchange
- * over a share s of its surface and the open one over the rest, q = s·q_heated + (1 −
- * s)·q_open (and likewise for evaporation). A slab keeps its two faces and its flips; it
- * never comes here.
+ * The share s of a strip's, cube's or ball's surface that faces the heat of a pan or
+ * grill at a time, and the one outer face of such a piece that is never turned: it sees
+ * the heated exchange over the share s of its surface and the open one over the rest, q =
+ * s·q_heated + (1 − s)·q_open (and likewise for evaporation). A piece that is turned
+ * instead sees each in turn ({@link ActiveHeat}); a slab keeps its two faces and its
+ * flips and never comes here.
  * <p>
  * The share is the part of the surface that faces the heat at a time: one side of a
  * square strip's four, one face of a cube's six, and for a ball its projected area over
