@@ -98,7 +98,9 @@ final class ActiveHeat {
 		FaceExchange open = aHeated ? b : a;
 		if (oneHeated && timeShared()) {
 			turnedShare = Math.max(turnedShare, heatedShare);
-			return t - Math.floor(t / cycleS()) * cycleS() < turnS - 1e-9 ? heated : open;
+			// a step starting on a turn (to rounding) belongs to the turn it starts
+			double u = t + 1e-9;
+			return u - Math.floor(u / cycleS()) * cycleS() < turnS ? heated : open;
 		}
 		if (turned == null || turned.heated() != heated || turned.open() != open) {
 			turned = new TurnedSurface(heated, open, oneHeated ? heatedShare : 0.5);
@@ -115,8 +117,9 @@ final class ActiveHeat {
 		double t = timeS - startS;
 		if (timeShared()) {
 			double cycle = cycleS();
-			double start = Math.floor(t / cycle) * cycle;
-			return startS + (t < start + turnS - 1e-9 ? start + turnS : start + cycle);
+			double u = t + 1e-9;
+			double start = Math.floor(u / cycle) * cycle;
+			return startS + (u < start + turnS ? start + turnS : start + cycle);
 		}
 		return startS + schedule.nextChangeAfter(t);
 	}
