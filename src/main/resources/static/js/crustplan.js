@@ -34,6 +34,17 @@
     }
     form.elements.category.addEventListener('change', products);
     products();
+    // the one size field reads as the shape says: thickness, width, edge or diameter
+    var shape = form.elements.shape;
+    var sizeLabel = form.querySelector('label[for="thicknessMm"] span');
+    if (shape && sizeLabel) {
+      var size = function () {
+        var o = shape.options[shape.selectedIndex];
+        if (o && o.dataset.size) { sizeLabel.textContent = o.dataset.size; }
+      };
+      shape.addEventListener('change', size);
+      size();
+    }
     var defaults = JSON.parse(form.dataset.defaults || '{}');
     var fill = document.getElementById('fill-defaults');
     if (fill) {
@@ -44,6 +55,7 @@
           if (k === 'phPlaceholder') { form.elements.ph.value = ''; form.elements.ph.placeholder = 'typical ' + d[k]; return; }
           if (form.elements[k]) { form.elements[k].value = d[k]; }
         });
+        if (shape) { shape.dispatchEvent(new Event('change')); }
         remainder();
       });
     }

@@ -53,6 +53,7 @@ class PlanApiController {
 		List<Map<String, Object>> out = new ArrayList<>();
 		for (FoodCategory c : FoodCategory.values()) {
 			Map<String, Object> d = CategoryDefaults.of(c, List.of(SurfaceField.values()));
+			d.put("shape", c.defaultShape().key());
 			List<Map<String, Object>> stages = new ArrayList<>();
 			for (BrowningStage s : c.stages()) {
 				Map<String, Object> m = new LinkedHashMap<>();
@@ -69,6 +70,7 @@ class PlanApiController {
 				m.put("label", p.label());
 				m.put("benchmarkUgPerKg", p.benchmark().map(b -> b.microgramsPerKg()).orElse(null));
 				m.put("default", p == Product.defaultFor(c));
+				m.put("shape", p.usualShape().key());
 				products.add(m);
 			}
 			Map<String, Object> cat = new LinkedHashMap<>();

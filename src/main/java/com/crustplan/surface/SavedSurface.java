@@ -7,6 +7,7 @@ import jakarta.persistence.Table;
 import com.crustplan.system.KitchenRecord;
 import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.Shape;
 
 /**
  * A surface the kitchen keeps (a cut, a dough, a batch of potatoes). Never handed to the
@@ -53,8 +54,13 @@ public class SavedSurface extends KitchenRecord {
 	@Column(name = "surface_water_g_per_m2", nullable = false)
 	private double surfaceWaterGPerM2;
 
+	/** The size as the shape reads it: thickness, width, edge or diameter. */
 	@Column(name = "thickness_mm", nullable = false)
 	private double thicknessMm;
+
+	/** slab, strip, cube or ball ({@link Shape#key()}). */
+	@Column(nullable = false, length = 16)
+	private String shape = Shape.SLAB.key();
 
 	private Double ph;
 
@@ -92,6 +98,7 @@ public class SavedSurface extends KitchenRecord {
 		asparagineMgPerKg = f.asparagineMgPerKg();
 		surfaceWaterGPerM2 = f.surfaceWaterGPerM2();
 		thicknessMm = f.thicknessMm();
+		shape = f.toShape().key();
 		ph = f.ph();
 		bicarbonateGPerKg = f.bicarbonateGPerKg();
 		acidGPerKg = f.acidGPerKg();
@@ -167,6 +174,20 @@ public class SavedSurface extends KitchenRecord {
 
 	public double getThicknessMm() {
 		return thicknessMm;
+	}
+
+	public String getShape() {
+		return shape;
+	}
+
+	/** The shape's kitchen name; an unknown key is shown as it is stored. */
+	public String getShapeLabel() {
+		return Shape.byKey(shape).map(Shape::label).orElse(shape);
+	}
+
+	/** What the size means for this shape: Thickness, Width, Edge or Diameter. */
+	public String getSizeLabel() {
+		return Shape.byKey(shape).map(Shape::sizeLabel).orElse("Size");
 	}
 
 	public Double getPh() {

@@ -104,14 +104,15 @@ class SurfaceApiController {
 	record SurfaceJson(long id, String name, String category, String product, double waterPct, double proteinPct,
 			double fatPct, double reducingSugarPct, double sucrosePct, double starchPct, double fibrePct, double ashPct,
 			double asparagineMgPerKg, double surfaceWaterGPerM2, double thicknessMm, @JsonProperty("pH") Double ph,
-			double bicarbonateGPerKg, double acidGPerKg, double initialTemperatureC, String notes, Instant updatedAt) {
+			double bicarbonateGPerKg, double acidGPerKg, double initialTemperatureC, String shape, String notes,
+			Instant updatedAt) {
 
 		static SurfaceJson of(SavedSurface s) {
 			return new SurfaceJson(s.getId(), s.getName(), s.getCategory(), s.getProduct(), s.getWaterPct(),
 					s.getProteinPct(), s.getFatPct(), s.getReducingSugarPct(), s.getSucrosePct(), s.getStarchPct(),
 					s.getFibrePct(), s.getAshPct(), s.getAsparagineMgPerKg(), s.getSurfaceWaterGPerM2(),
 					s.getThicknessMm(), s.getPh(), s.getBicarbonateGPerKg(), s.getAcidGPerKg(),
-					s.getInitialTemperatureC(), s.getNotes(), s.getUpdatedAt());
+					s.getInitialTemperatureC(), s.getShape(), s.getNotes(), s.getUpdatedAt());
 		}
 
 	}

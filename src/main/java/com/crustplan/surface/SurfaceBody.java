@@ -7,6 +7,7 @@ import com.crustplan.api.FieldErrors;
 import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.Shape;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 
@@ -14,12 +15,14 @@ import com.fasterxml.jackson.annotation.JsonProperty;
 
 /**
  * The API's {@code surface} object, as the plans and surfaces APIs both take it. Left-out
- * values take the category's defaults; every error is named {@code surface.<field>}.
+ * values take the category's defaults (the shape: the product's usual one); every error
+ * is named {@code surface.<field>}. {@code thicknessMm} is the size as the shape reads
+ * it: a slab's thickness, a strip's width, a cube's edge, a ball's diameter.
  */
 public record SurfaceBody(String category, String product, Double waterPct, Double proteinPct, Double fatPct,
 		Double reducingSugarPct, Double sucrosePct, Double starchPct, Double fibrePct, Double ashPct,
 		Double asparagineMgPerKg, Double surfaceWaterGPerM2, Double thicknessMm, @JsonProperty("pH") Double ph,
-		Double bicarbonateGPerKg, Double acidGPerKg, Double initialTemperatureC) {
+		Double bicarbonateGPerKg, Double acidGPerKg, Double initialTemperatureC, String shape) {
 
 	/** Longest category or product key read (the longest key is far shorter). */
 	static final int KEY_MAX = 80;
@@ -35,12 +38,33 @@ public record SurfaceBody(String category, String product, Double waterPct, Doub
 		if (c == null) {
 			return new Read(null, null);
 		}
-		Surface s = surface(c, errors);
-		return new Read(s, product(c, errors));
+		Product p = product(c, errors);
+		Shape form = shape(p != null ? p.usualShape() : c.defaultShape(), errors);
+		Surface s = surface(c, form, errors);
+		return new Read(s, p);
 	}
 
-	private Surface surface(FoodCategory c, FieldErrors errors) {
-		if (errors.hasUnder("surface.")) {
+	/**
+	 * The shape as sent, or where none is sent the usual shape of the product (of the
+	 * category when no product is named); null when it names no shape.
+	 */
+	private Shape shape(Shape usual, FieldErrors errors) {
+		String key = errors.text("surface.shape", shape, KEY_MAX);
+		if (errors.has("surface.shape")) {
+			return null;
+		}
+		if (key == null) {
+			return usual;
+		}
+		Shape s = Shape.byKey(key).orElse(null);
+		if (s == null) {
+			errors.add("surface.shape", "'" + key + "' is not a shape; use one of " + Shape.keys());
+		}
+		return s;
+	}
+
+	private Surface surface(FoodCategory c, Shape form, FieldErrors errors) {
+		if (errors.hasUnder("surface.") || form == null) {
 			return null;
 		}
 		Composition d = c.defaultComposition();
@@ -52,7 +76,7 @@ public record SurfaceBody(String category, String product, Double waterPct, Doub
 					or(asparagineMgPerKg, c.defaultAsparagineMgPerKg()),
 					or(surfaceWaterGPerM2, c.defaultSurfaceWaterGPerM2()), or(thicknessMm, c.defaultThicknessMm()), ph,
 					or(bicarbonateGPerKg, 0), or(acidGPerKg, 0),
-					or(initialTemperatureC, c.defaultInitialTemperatureC()));
+					or(initialTemperatureC, c.defaultInitialTemperatureC()), form);
 		}
 		catch (InvalidInputException e) {
 			errors.add("surface." + e.field(), e.reason());

@@ -22,6 +22,7 @@ import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.Shape;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.food.SurfaceField;
@@ -221,6 +222,7 @@ class SurfaceController {
 		model.addAttribute("title", title);
 		model.addAttribute("categories", Arrays.asList(FoodCategory.values()));
 		model.addAttribute("products", Arrays.asList(Product.values()));
+		model.addAttribute("shapes", Arrays.asList(Shape.values()));
 		model.addAttribute("derived", derived(shown));
 		model.addAttribute("defaultsJson", json.write(defaultsByKey(units)));
 		model.addAttribute("thicknessRange", InRange.Check.range(SurfaceField.THICKNESS));
@@ -256,6 +258,7 @@ class SurfaceController {
 		for (FoodCategory c : FoodCategory.values()) {
 			Map<String, Object> d = CategoryDefaults.of(c, FILLED_BY_DEFAULTS);
 			d.put("phPlaceholder", c.defaultPh());
+			d.put("shape", c.defaultShape().key());
 			d.put("initialTemperature", Math.round(units.fromCelsius(c.defaultInitialTemperatureC()) * 10) / 10.0);
 			all.put(c.key(), d);
 		}

@@ -7,6 +7,7 @@ import jakarta.validation.constraints.Size;
 import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.Shape;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.food.SurfaceField;
@@ -37,11 +38,12 @@ public record SurfaceForm(
 		@NotNull(message = "required (0 for none)") @InRange(SurfaceField.BICARBONATE) Double bicarbonateGPerKg,
 		@NotNull(message = "required (0 for none)") @InRange(SurfaceField.ACID) Double acidGPerKg,
 		@NotNull(message = "required") Double initialTemperature, String temperatureUnit,
-		@Size(max = 1000, message = "at most 1000 characters") String notes) {
+		@Size(max = 1000, message = "at most 1000 characters") String notes,
+		@Size(max = 16, message = "choose from the list") String shape) {
 
-	/** A new form with the category's defaults. */
+	/** A new form with the category's defaults, in the category's usual shape. */
 	public static SurfaceForm defaults(FoodCategory c, String name, TemperatureUnit unit) {
-		return of(Surface.defaults(c), name, null, null).inUnit(unit);
+		return of(Surface.typical(c), name, null, null).inUnit(unit);
 	}
 
 	/**
@@ -53,7 +55,7 @@ public record SurfaceForm(
 		return new SurfaceForm(name, s.category().key(), product, k.waterPct(), k.proteinPct(), k.fatPct(),
 				k.reducingSugarPct(), k.sucrosePct(), k.starchPct(), k.fibrePct(), k.ashPct(), s.asparagineMgPerKg(),
 				s.surfaceWaterGPerM2(), s.thicknessMm(), s.phOverride(), s.bicarbonateGPerKg(), s.acidGPerKg(),
-				s.initialTemperatureC(), TemperatureUnit.CELSIUS.code(), notes);
+				s.initialTemperatureC(), TemperatureUnit.CELSIUS.code(), notes, s.shape().key());
 	}
 
 	public static SurfaceForm of(SavedSurface s, TemperatureUnit unit) {
@@ -61,7 +63,7 @@ public record SurfaceForm(
 				s.getFatPct(), s.getReducingSugarPct(), s.getSucrosePct(), s.getStarchPct(), s.getFibrePct(),
 				s.getAshPct(), s.getAsparagineMgPerKg(), s.getSurfaceWaterGPerM2(), s.getThicknessMm(), s.getPh(),
 				s.getBicarbonateGPerKg(), s.getAcidGPerKg(), round1(unit.fromCelsius(s.getInitialTemperatureC())),
-				unit.code(), s.getNotes());
+				unit.code(), s.getNotes(), s.getShape());
 	}
 
 	public SurfaceForm withName(String newName) {
@@ -84,7 +86,7 @@ public record SurfaceForm(
 	private SurfaceForm with(String newName, Double temperature, String unitCode) {
 		return new SurfaceForm(newName, category, product, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct,
 				starchPct, fibrePct, ashPct, asparagineMgPerKg, surfaceWaterGPerM2, thicknessMm, ph, bicarbonateGPerKg,
-				acidGPerKg, temperature, unitCode, notes);
+				acidGPerKg, temperature, unitCode, notes, shape);
 	}
 
 	public TemperatureUnit unit() {
@@ -109,7 +111,26 @@ public record SurfaceForm(
 		return new Surface(c, composition, req("asparagineMgPerKg", asparagineMgPerKg),
 				req("surfaceWaterGPerM2", surfaceWaterGPerM2), req("thicknessMm", thicknessMm), ph,
 				req("bicarbonateGPerKg", bicarbonateGPerKg), req("acidGPerKg", acidGPerKg),
-				req("initialTemperatureC", initialTemperatureC()));
+				req("initialTemperatureC", initialTemperatureC()), toShape());
+	}
+
+	/** The shape named, or a slab where it names none or none known (for labels). */
+	public Shape toShapeOrSlab() {
+		return Shape.byKey(shape).orElse(Shape.SLAB);
+	}
+
+	/**
+	 * The shape named; a form saved before shapes existed (a plan's stored inputs) names
+	 * none and was planned as a slab, so it stays one. Throws
+	 * {@link InvalidInputException} (field {@code shape}) for a name it does not know.
+	 */
+	public Shape toShape() {
+		if (shape == null || shape.isBlank()) {
+			return Shape.SLAB;
+		}
+		return Shape.byKey(shape)
+			.orElseThrow(() -> new InvalidInputException("shape",
+					"'" + shape + "' is not a shape; use one of " + Shape.keys()));
 	}
 
 	/**

@@ -57,7 +57,8 @@ class SurfaceFormRangesTest {
 				v.getOrDefault("surfaceWaterGPerM2", f.surfaceWaterGPerM2()),
 				v.getOrDefault("thicknessMm", f.thicknessMm()), v.getOrDefault("ph", f.ph()),
 				v.getOrDefault("bicarbonateGPerKg", f.bicarbonateGPerKg()),
-				v.getOrDefault("acidGPerKg", f.acidGPerKg()), f.initialTemperature(), f.temperatureUnit(), f.notes());
+				v.getOrDefault("acidGPerKg", f.acidGPerKg()), f.initialTemperature(), f.temperatureUnit(), f.notes(),
+				f.shape());
 	}
 
 	static Set<String> messages(SurfaceForm f, String field) {

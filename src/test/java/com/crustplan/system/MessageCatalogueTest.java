@@ -137,6 +137,10 @@ class MessageCatalogueTest {
 				Quantity.of(0.5, "kg", 2));
 		sample("exchange.rest", c(22));
 		sample("assumption.surface.slab", q(12, "mm"));
+		sample("assumption.surface.strip", q(10, "mm"));
+		sample("assumption.surface.cube", q(35, "mm"));
+		sample("assumption.surface.ball", q(40, "mm"));
+		sample("assumption.surface.turned", q(25, "%"));
 		sample("assumption.surface.ph", PlainNumber.of(5.8, 2), q(51, "mmol/(pH·kg)"));
 		sample("assumption.surface.ph.after-additions", PlainNumber.of(6.4, 2), q(51, "mmol/(pH·kg)"));
 		sample("assumption.surface.category", Text.of("red meat"));

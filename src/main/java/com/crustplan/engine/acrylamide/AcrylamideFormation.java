@@ -14,9 +14,12 @@ import com.crustplan.engine.layers.Layers;
  * Concentrations are kept per kg of dry matter so drying does not change them; the
  * reported levels are per kg of the food as eaten.
  * <p>
- * The crust is the outer 1 mm of face 0 (half the thickness for thinner pieces): the face
- * a {@code Sample} calls the surface. The portion is the whole piece, mass-weighted. One
- * instance belongs to one run; {@link #step} allocates nothing.
+ * The crust is the outer 1 mm of face 0 (half the thickness for thinner slabs, the whole
+ * radius for thinner strips, cubes and balls): the face a {@code Sample} calls the
+ * surface. The portion is the whole piece, mass-weighted over the grid's control volumes,
+ * which for a strip, cube or ball are cylindrical or spherical shells: the portion figure
+ * follows the shape's real crust-to-volume ratio. One instance belongs to one run;
+ * {@link #step} allocates nothing.
  */
 public final class AcrylamideFormation implements LayerReaction {
 
@@ -69,17 +72,36 @@ public final class AcrylamideFormation implements LayerReaction {
 		double rs0 = initialReducingSugar(surface.composition());
 		Arrays.fill(asparagine, asn0);
 		Arrays.fill(sugar, rs0);
-		crustDepthM = Math.min(AcrylamideModel.CRUST_DEPTH.value(), 0.5 * grid.thickness());
+		int m = grid.shape();
+		// a slab's face 0 owns half its thickness; a strip's, cube's or ball's one face
+		// owns the whole radius
+		crustDepthM = Math.min(AcrylamideModel.CRUST_DEPTH.value(), m == 0 ? 0.5 * grid.thickness() : grid.thickness());
 		for (int i = 0; i < n; i++) {
 			double left = i == 0 ? 0 : 0.5 * (grid.position(i - 1) + grid.position(i));
 			double right = i == n - 1 ? grid.thickness() : 0.5 * (grid.position(i) + grid.position(i + 1));
-			crustWeight[i] = Math.max(0, Math.min(1, (crustDepthM - left) / (right - left)));
+			crustWeight[i] = m == 0 ? Math.max(0, Math.min(1, (crustDepthM - left) / (right - left)))
+					: shellShare(grid.thickness(), m, left, right, crustDepthM);
 		}
 		phFactor = phFactor(surface.ph());
 		rates = RateTable.of(kinetics);
 		skipBelowK = AcrylamideModel.SKIP_BELOW.value();
 		gateDry = AcrylamideModel.GATE_DRY.value();
 		gateWet = AcrylamideModel.GATE_WET.value();
+	}
+
+	/**
+	 * The share of a cylindrical (m = 1) or spherical (m = 2) shell between depths left
+	 * and right below the surface of radius r that lies within the outer crust of depth
+	 * d: volumes go as r^(m+1), so a crust shell of a thin strip holds more of the piece
+	 * than slab area × depth would.
+	 */
+	static double shellShare(double r, int m, double left, double right, double d) {
+		if (d <= left) {
+			return 0;
+		}
+		double cut = Math.min(d, right);
+		double outer = Math.pow(r - left, m + 1);
+		return (outer - Math.pow(r - cut, m + 1)) / (outer - Math.pow(r - right, m + 1));
 	}
 
 	/** Free asparagine, mmol per kg dry matter. */

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Optional;
 
 import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.Shape;
 import com.crustplan.engine.input.InvalidInputException;
 
 /**
@@ -61,6 +62,19 @@ public enum Product {
 
 	public FoodCategory category() {
 		return category;
+	}
+
+	/**
+	 * The shape a new surface sold as this starts from: crisps are slices, roast potatoes
+	 * chunks (rösti and wedges are set by hand: slab, strip), otherwise the category's
+	 * (common practice).
+	 */
+	public Shape usualShape() {
+		return switch (this) {
+			case POTATO_CRISPS -> Shape.SLAB;
+			case OTHER_POTATO -> Shape.CUBE;
+			default -> category.defaultShape();
+		};
 	}
 
 	/** The Annex IV benchmark level, or empty where the regulation sets none. */

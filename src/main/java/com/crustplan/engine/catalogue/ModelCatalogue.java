@@ -18,6 +18,7 @@ import com.crustplan.engine.myoglobin.InteriorChapter;
 import com.crustplan.engine.food.Acidity;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.heat.GrillKind;
+import com.crustplan.engine.cook.TurnedSurface;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.heat.RadiantGrill;
 import com.crustplan.engine.heat.Oven;
@@ -132,6 +133,12 @@ public final class ModelCatalogue {
 		eq.add(new Equation("Pan contact", "q = h_c·(T_pan − Ts)",
 				"Through a fat film or a dry pan; the upper face is an open face in kitchen air; a flip swaps the faces.",
 				List.of(HeatSetup.CONTACT_WITH_FAT, HeatSetup.CONTACT_DRY)));
+		eq.add(new Equation("Turned strip, cube or ball",
+				"heated for t_flip, open for (1/s − 1)·t_flip;  unturned: q = s·q_heated + (1 − s)·q_open",
+				"A strip, cube or ball has one outer face; in a pan or under a grill it is taken as turned side by side, each side down "
+						+ "for the flip interval, so every part of its surface faces the heat a share s of the time. Left unturned, the heat "
+						+ "is spread over its surface in the same share. A slab keeps its two faces and its flips.",
+				TurnedSurface.parameters()));
 		eq.add(new Equation("Oven atmosphere", "p_v = y·p_atm;  humidity ratio w = 0.622·y/(1 − y)",
 				"The oven input is the steam share y of the oven atmosphere by volume (dry kitchen air ≈ 1.6 %, pure steam 100 %), shown with its dew point. "
 						+ "Relative humidity at the oven temperature is no cook's scale: 10 % RH at 175 °C is already about 88 % steam.",

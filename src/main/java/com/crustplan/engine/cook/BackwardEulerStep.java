@@ -63,8 +63,9 @@ final class BackwardEulerStep {
 			return;
 		}
 		for (int face = 0; face < 2; face++) {
-			if (schedule.at(face, now).body() == body) {
-				body.draw(heat.faceHeatFlux[face]);
+			// a turned piece has a side down while the side the model follows is up
+			if (schedule.at(face, now).body() == body || (face == 0 && schedule.touchingShare() < 1)) {
+				body.draw(heat.bodyHeatFlux[face]);
 			}
 		}
 		body.advance(dt);

@@ -11,6 +11,7 @@ import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.layers.Grid;
 import com.crustplan.engine.layers.Layers;
 import com.crustplan.engine.message.Message;
+import com.crustplan.engine.message.Quantity;
 import com.crustplan.engine.properties.ThermalProperties;
 
 /**
@@ -47,9 +48,12 @@ public final class CookSimulation {
 	private CookSimulation(Surface surface, HeatSetup setup, CookSettings settings, LayerReaction.Factory reaction) {
 		this.surface = surface;
 		this.setup = setup;
-		this.heat = new ActiveHeat(setup.schedule());
+		this.heat = new ActiveHeat(setup.schedule(), surface.shape());
 		this.settings = settings;
-		Grid grid = new Grid(surface.thicknessMm() / 1000, settings.nodes(), Grid.DEFAULT_CLUSTERING);
+		// a slab spans its thickness between two heated faces; a strip, cube or ball its
+		// radius from the heated outer face to the centre
+		Grid grid = new Grid(surface.shape().gridLengthM(surface.thicknessMm()), settings.nodes(),
+				Grid.DEFAULT_CLUSTERING, surface.shape().factor());
 		double x0 = surface.composition().moistureDryBasis();
 		MatrixProperties properties = new MatrixProperties(surface.composition().dryMatterFractions(), grid.size());
 		double matrixVolume = ThermalProperties.specificVolume(properties.massFractions(x0),
@@ -301,6 +305,9 @@ public final class CookSimulation {
 		Message explanation = CookSummary.explain(outcome, watch.maxSurfaceK(), state.browningExtent(0), state.time);
 		List<Message> assumptions = new ArrayList<>(heatAssumptions);
 		assumptions.addAll(CookSummary.surfaceAssumptions(surface));
+		if (heat.turnedShare() > 0) {
+			assumptions.add(Message.of("assumption.surface.turned", Quantity.of(100 * heat.turnedShare(), "%")));
+		}
 		return new CookResult(outcome, explanation, target.reachedAtS(), targetExtent,
 				noColourTarget ? null : surface.category().colourPath().colourAt(targetExtent), surface.ph(),
 				target.coreK() - 273.15, target.crustLevel(), target.portionLevel(), watch.maxSurfaceK() - 273.15,

@@ -31,8 +31,15 @@ public final class CookState implements Layers {
 
 	final double[] volume;
 
-	/** Face 0 (the node at x = 0) and face 1 (the last node). */
+	/**
+	 * Face 0 (the node at x = 0) and face 1 (the last node). A radial grid (strip, cube,
+	 * ball) has only face 0, its outer surface; its last node is the centre, and face 1
+	 * stays an empty record there (no standing water, no browning, no exchange).
+	 */
 	final Face[] faces = { new Face(), new Face() };
+
+	/** 2 for a slab, 1 for a cylinder or sphere. */
+	private final int faceCount;
 
 	double time;
 
@@ -41,6 +48,7 @@ public final class CookState implements Layers {
 		this.grid = grid;
 		this.isotherm = isotherm;
 		this.n = grid.size();
+		this.faceCount = grid.shape() == 0 ? 2 : 1;
 		temperature = new double[n];
 		moisture = new double[n];
 		dryMass = new double[n];
@@ -52,7 +60,14 @@ public final class CookState implements Layers {
 			dryMass[i] = bulkDensity * volume[i] / (1 + moistureDryBasis);
 		}
 		faces[0].standingWater = standingWaterKgPerM2;
-		faces[1].standingWater = standingWaterKgPerM2;
+		faces[1].standingWater = faceCount == 2 ? standingWaterKgPerM2 : 0;
+	}
+
+	/**
+	 * The heated faces: 2 for a slab, 1 (the outer surface) for a strip, cube or ball.
+	 */
+	int faceCount() {
+		return faceCount;
 	}
 
 	/** The node that carries a face. */
@@ -60,9 +75,9 @@ public final class CookState implements Layers {
 		return face == 0 ? 0 : n - 1;
 	}
 
-	/** The face a node carries, or −1 for an inner node. */
+	/** The face a node carries, or −1 for an inner node (and for the centre). */
 	int faceOf(int i) {
-		return i == 0 ? 0 : i == n - 1 ? 1 : -1;
+		return i == 0 ? 0 : i == n - 1 && faceCount == 2 ? 1 : -1;
 	}
 
 	Face face(int face) {
@@ -108,17 +123,24 @@ public final class CookState implements Layers {
 		return m;
 	}
 
-	/** Centre temperature, K (the mid-thickness, interpolated). */
+	/**
+	 * Centre temperature, K: the mid-thickness of a slab (interpolated), the centre node
+	 * of a strip, cube or ball.
+	 */
 	public double coreK() {
-		return grid.interpolate(temperature, 0.5 * grid.thickness());
+		return faceCount == 2 ? grid.interpolate(temperature, 0.5 * grid.thickness()) : temperature[n - 1];
 	}
 
 	public double surfaceK() {
 		return temperature[0];
 	}
 
+	/**
+	 * The face away from the heat of a slab, K; for a strip, cube or ball, whose one
+	 * outer face is all its surface, that face.
+	 */
 	public double otherFaceK() {
-		return temperature[n - 1];
+		return faceCount == 2 ? temperature[n - 1] : temperature[0];
 	}
 
 	/** Browning extent at a face, 0 (raw) to 1 (the colour path's end). */

@@ -47,7 +47,13 @@ final class CookSummary {
 	static List<Message> surfaceAssumptions(Surface surface) {
 		FoodCategory category = surface.category();
 		List<Message> a = new ArrayList<>();
-		a.add(Message.of("assumption.surface.slab", Quantity.of(surface.thicknessMm(), "mm")));
+		Quantity size = Quantity.of(surface.thicknessMm(), "mm");
+		a.add(switch (surface.shape()) {
+			case SLAB -> Message.of("assumption.surface.slab", size);
+			case STRIP -> Message.of("assumption.surface.strip", size);
+			case CUBE -> Message.of("assumption.surface.cube", size);
+			case BALL -> Message.of("assumption.surface.ball", size);
+		});
 		boolean added = surface.bicarbonateGPerKg() > 0 || surface.acidGPerKg() > 0;
 		a.add(Message.of(added ? "assumption.surface.ph.after-additions" : "assumption.surface.ph",
 				PlainNumber.of(surface.ph(), 2), Quantity.of(category.bufferCapacity().value(), "mmol/(pH·kg)")));

@@ -56,10 +56,20 @@ final class HeatStep {
 
 	private final double[] evaporationSlope = new double[2];
 
+	/** Each face's exchange as last linearised. */
+	private final FaceExchange[] exchangeAt = new FaceExchange[2];
+
 	/**
 	 * Heat into each face over the last step, W/m² (what a pan or the oil gave up to it).
 	 */
 	final double[] faceHeatFlux = new double[2];
+
+	/**
+	 * Heat the pan or oil gave up over the last step per m² of the food touching it,
+	 * W/m²: the face's own flux, except where a turned strip, cube or ball touches the
+	 * body with only part of its surface.
+	 */
+	final double[] bodyHeatFlux = new double[2];
 
 	/**
 	 * Evaporation from each bare face into the gas, kg/(m²·s), as this step drew latent
@@ -92,8 +102,10 @@ final class HeatStep {
 			conduction.assemble(temperature, properties.capacity, properties.conductivity, dt, faceSlope[0],
 					faceSource[0], faceSlope[1], faceSource[1]);
 			boiling.solve(solution, dt);
-			double moved = Math.max(Math.abs(solution[0] - linearisedAt[0]),
-					Math.abs(solution[n - 1] - linearisedAt[1]));
+			double moved = Math.abs(solution[0] - linearisedAt[0]);
+			if (state.faceCount() == 2) {
+				moved = Math.max(moved, Math.abs(solution[n - 1] - linearisedAt[1]));
+			}
 			if (moved < FACE_LINEARISATION_K) {
 				break;
 			}
@@ -106,8 +118,13 @@ final class HeatStep {
 			// afterwards)
 			double dT = solution[state.faceNode(face)] - linearisedAt[face];
 			faceHeatFlux[face] = heatFluxAtStart[face] + heatSlope[face] * dT;
+			bodyHeatFlux[face] = exchangeAt[face] instanceof TurnedSurface t ? t.bodyHeatFlux + t.bodyHeatFluxSlope * dT
+					: faceHeatFlux[face];
 			account.heatIn(faceHeatFlux[face] * dt);
 			faceEvaporation[face] += evaporationSlope[face] * dT;
+		}
+		if (schedule.touchingShare() < 1) {
+			underTurnedPiece(dt);
 		}
 		for (int face = 0; face < 2; face++) {
 			standingWater(face, dt);
@@ -115,8 +132,36 @@ final class HeatStep {
 		boiling.recordBoilingFlux(dt);
 	}
 
+	/**
+	 * A turned strip, cube or ball always has one side down, though the one side the
+	 * model follows is down only for its share of the time: while it is, the pan loses
+	 * what it takes; while it is up, the pan loses what the side down took on average
+	 * over its last turn, so the pan sees the steady load of the whole piece.
+	 */
+	private void underTurnedPiece(double dt) {
+		if (exchangeAt[0].body() != null) {
+			contactJ += faceHeatFlux[0] * dt;
+			contactS += dt;
+		}
+		else {
+			if (contactS > 0) {
+				lastContactFlux = contactJ / contactS;
+				contactJ = 0;
+				contactS = 0;
+			}
+			bodyHeatFlux[0] = lastContactFlux;
+		}
+	}
+
+	private double contactJ;
+
+	private double contactS;
+
+	private double lastContactFlux;
+
 	private void linearise(int face, FaceExchange exchange) {
 		CookState.Face f = state.face(face);
+		exchangeAt[face] = exchange;
 		double aw = state.faceWaterActivity(face);
 		double t = linearisedAt[face];
 		exchange.evaluate(t, aw, f.boilingFlux, flux);

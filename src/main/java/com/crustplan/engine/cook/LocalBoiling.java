@@ -28,7 +28,10 @@ final class LocalBoiling {
 
 	private final double[] pinnedTemperature;
 
-	/** Water boiled off in the step under each half of the piece, kg/m². */
+	/**
+	 * Water boiled off in the step under each half of the piece, kg/m² (a strip, cube or
+	 * ball: all of it under its one outer face).
+	 */
 	private final double[] boiled = new double[2];
 
 	LocalBoiling(CookState state, HeatConduction conduction, EnergyAccount account) {
@@ -129,7 +132,7 @@ final class LocalBoiling {
 	 */
 	private void boilOff(int i, double energy, double boilingK) {
 		int face = state.faceOf(i);
-		int half = state.grid().position(i) < 0.5 * state.grid().thickness() ? 0 : 1;
+		int half = state.faceCount() == 1 || state.grid().position(i) < 0.5 * state.grid().thickness() ? 0 : 1;
 		double latent = WaterVapour.latentHeat(boilingK);
 		double m = Math.min(energy / latent, state.availableWater(i));
 		double left = m;

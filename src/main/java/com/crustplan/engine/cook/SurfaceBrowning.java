@@ -44,7 +44,7 @@ final class SurfaceBrowning {
 	}
 
 	void step(CookState state, double dt) {
-		for (int face = 0; face < 2; face++) {
+		for (int face = 0; face < state.faceCount(); face++) {
 			double aw = state.faceWaterActivity(face);
 			double t = state.temperature[state.faceNode(face)];
 			double k = kinetics.rate().at(t)

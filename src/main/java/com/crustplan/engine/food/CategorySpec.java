@@ -28,6 +28,8 @@ final class CategorySpec {
 
 	double thicknessMm = Double.NaN;
 
+	Shape shape;
+
 	double ph = Double.NaN;
 
 	double initialTemperatureC = Double.NaN;
@@ -68,6 +70,12 @@ final class CategorySpec {
 
 	CategorySpec thicknessMm(double v) {
 		this.thicknessMm = v;
+		return this;
+	}
+
+	/** The usual form of a piece of this category, which a new surface starts from. */
+	CategorySpec shape(Shape s) {
+		this.shape = s;
 		return this;
 	}
 
@@ -123,8 +131,8 @@ final class CategorySpec {
 	 * loading.
 	 */
 	CategorySpec complete() {
-		if (parts == null || bufferCapacity == null || initialPorosity == null || isotherm == null || browning == null
-				|| colourPath == null || stages == null) {
+		if (parts == null || shape == null || bufferCapacity == null || initialPorosity == null || isotherm == null
+				|| browning == null || colourPath == null || stages == null) {
 			throw new IllegalStateException("food category " + key + ": every part must be given");
 		}
 		SurfaceField.PH.check(ph);

@@ -24,6 +24,8 @@ public enum FoodCategory {
 		.asparagineMgPerKg(50)
 		.surfaceWaterGPerM2(10)
 		.thicknessMm(25)
+		// a steak or chop: two broad faces (common practice)
+		.shape(Shape.SLAB)
 		.ph(5.6)
 		.initialTemperatureC(5)
 		.bufferCapacity(Parameter.published("β", "buffer capacity of post-rigor beef muscle", 51, "mmol H⁺/(pH·kg)",
@@ -61,6 +63,8 @@ public enum FoodCategory {
 		.asparagineMgPerKg(30)
 		.surfaceWaterGPerM2(15)
 		.thicknessMm(20)
+		// a breast or thigh, skin side and flesh side (common practice)
+		.shape(Shape.SLAB)
 		.ph(6.0)
 		.initialTemperatureC(5)
 		.bufferCapacity(Parameter.published("β", "buffer capacity of broiler breast muscle", 58, "mmol H⁺/(pH·kg)",
@@ -89,6 +93,8 @@ public enum FoodCategory {
 		.asparagineMgPerKg(20)
 		.surfaceWaterGPerM2(10)
 		.thicknessMm(20)
+		// a fillet or portion (common practice)
+		.shape(Shape.SLAB)
 		.ph(6.4)
 		.initialTemperatureC(3)
 		.bufferCapacity(Parameter.assumption("β", "buffer capacity of fish muscle", 45, "mmol H⁺/(pH·kg)",
@@ -132,6 +138,8 @@ public enum FoodCategory {
 		.asparagineMgPerKg(3000)
 		.surfaceWaterGPerM2(20)
 		.thicknessMm(10)
+		// French fries, the category's usual product, are cut in strips (common practice)
+		.shape(Shape.STRIP)
 		.ph(5.8)
 		.initialTemperatureC(5)
 		.bufferCapacity(Parameter.assumption("β", "buffer capacity of potato tissue", 15, "mmol H⁺/(pH·kg)",
@@ -166,6 +174,8 @@ public enum FoodCategory {
 		.asparagineMgPerKg(150)
 		.surfaceWaterGPerM2(0)
 		.thicknessMm(30)
+		// a slice or a flat loaf, heated top and bottom (common practice)
+		.shape(Shape.SLAB)
 		.ph(5.4)
 		.initialTemperatureC(22)
 		.bufferCapacity(Parameter.assumption("β", "buffer capacity of bread dough", 20, "mmol H⁺/(pH·kg)",
@@ -207,6 +217,8 @@ public enum FoodCategory {
 		.asparagineMgPerKg(120)
 		.surfaceWaterGPerM2(0)
 		.thicknessMm(15)
+		// biscuits and buns as flat pieces (common practice)
+		.shape(Shape.SLAB)
 		.ph(6.5)
 		.initialTemperatureC(20)
 		.bufferCapacity(Parameter.assumption("β", "buffer capacity of sweet dough", 20, "mmol H⁺/(pH·kg)",
@@ -235,6 +247,8 @@ public enum FoodCategory {
 		.asparagineMgPerKg(100)
 		.surfaceWaterGPerM2(10)
 		.thicknessMm(6)
+		// slices or rings of vegetable (common practice)
+		.shape(Shape.SLAB)
 		.ph(5.5)
 		.initialTemperatureC(5)
 		.bufferCapacity(Parameter.assumption("β", "buffer capacity of vegetable tissue", 15, "mmol H⁺/(pH·kg)",
@@ -306,6 +320,11 @@ public enum FoodCategory {
 
 	public double defaultThicknessMm() {
 		return spec.thicknessMm;
+	}
+
+	/** The usual shape of a piece of this category (fries: strips). */
+	public Shape defaultShape() {
+		return spec.shape;
 	}
 
 	public double defaultPh() {

@@ -1,5 +1,10 @@
 package com.crustplan.engine.food;
 
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+
 /**
  * The form of a piece as the layer grid sees it, with its shape factor m (0 slab, 1
  * infinite cylinder, 2 sphere) and the size a cook gives (thickness for a slab, width or
@@ -13,21 +18,54 @@ package com.crustplan.engine.food;
 public enum Shape {
 
 	/** Heated on both faces; the size is the full thickness. */
-	SLAB(0),
+	SLAB(0, "Flat piece (steak, fillet, slice, loaf)", "Thickness"),
 
 	/** Long square or round strip (fries, wedges, sausages) as an infinite cylinder. */
-	STRIP(1),
+	STRIP(1, "Long strip (fries, wedges, sausage)", "Width"),
 
 	/** Cube (roast-potato chunks) as the sphere of equal surface-to-volume ratio. */
-	CUBE(2),
+	CUBE(2, "Chunk or cube (roast potatoes)", "Edge"),
 
 	/** Ball (meatballs, choux) as a sphere. */
-	BALL(2);
+	BALL(2, "Ball (meatball, choux bun)", "Diameter");
 
 	private final int factor;
 
-	Shape(int factor) {
+	private final String label;
+
+	private final String sizeLabel;
+
+	Shape(int factor, String label, String sizeLabel) {
 		this.factor = factor;
+		this.label = label;
+		this.sizeLabel = sizeLabel;
+	}
+
+	/** The key in the API, the form and the database: slab, strip, cube, ball. */
+	public String key() {
+		return name().toLowerCase(Locale.ROOT);
+	}
+
+	/** A kitchen name with examples, for the form. */
+	public String label() {
+		return label;
+	}
+
+	/**
+	 * What the one size field means for this shape: thickness, width (side or diameter),
+	 * edge, diameter.
+	 */
+	public String sizeLabel() {
+		return sizeLabel;
+	}
+
+	public static Optional<Shape> byKey(String key) {
+		return Arrays.stream(values()).filter(s -> s.key().equalsIgnoreCase(key == null ? "" : key.trim())).findFirst();
+	}
+
+	/** The keys, for messages that list what is allowed. */
+	public static List<String> keys() {
+		return Arrays.stream(values()).map(Shape::key).toList();
 	}
 
 	/** Shape factor m of the conduction and moisture equations. */
