@@ -75,6 +75,12 @@ public record StationCard(long planId, String planName, String surfaceName, Food
 
 	}
 
+	/**
+	 * A colour reached this close to the pull is reached at the pull: a few of the
+	 * engine's time steps (assumption; the card shows whole seconds).
+	 */
+	static final double SAME_MOMENT_S = 2;
+
 	static StationCard of(SavedPlan saved, PlanInputs inputs, PlanReport report) {
 		FoodCategory category = report.category();
 		FoodCode code = FoodCode.forCategory(category, FoodCode.Cut.WHOLE);
@@ -86,8 +92,8 @@ public record StationCard(long planId, String planName, String surfaceName, Food
 		return new StationCard(saved.getId(), saved.getName(), saved.getSurfaceName(), category,
 				report.surface().thicknessMm(), report.targetLabel(),
 				report.stepped() ? report.steps().coreTargetC() : null, report.reached(), offHeatS(report),
-				readyS(report), equipment, LineTimeline.of(report, inputs.colourTarget()), colours(report),
-				LineTimeline.coreAtPullC(report), report.stepped(), code,
+				readyS(report), equipment, LineTimeline.of(report, inputs.colourTarget()),
+				colours(report, offHeatS(report)), LineTimeline.coreAtPullC(report), report.stepped(), code,
 				code == null && Double.isFinite(done) ? done : null,
 				report.acrylamideMatters() ? report.acrylamide() : null, oil, pan, oven);
 	}
@@ -184,7 +190,7 @@ public record StationCard(long planId, String planName, String surfaceName, Food
 	 * The target colour (as predicted at the target time) between the category's stage
 	 * before and after it; a plan with no colour target shows the colour it ends at.
 	 */
-	static List<Colour> colours(PlanReport report) {
+	static List<Colour> colours(PlanReport report, Double offHeatS) {
 		CookResult result = report.result();
 		ColourPath path = report.category().colourPath();
 		List<Sample> series = result.series();
@@ -218,6 +224,11 @@ public record StationCard(long planId, String planName, String surfaceName, Food
 		String hex = byColour && result.targetColour() != null ? result.targetColour().hex()
 				: path.colourAt(extent).hex();
 		Double atS = byColour ? finite(result.timeToTargetS()) : null;
+		// a step that ends at the colour ends on the next time step: the card gives one
+		// time for the one moment
+		if (atS != null && offHeatS != null && Math.abs(atS - offHeatS) <= SAME_MOMENT_S) {
+			atS = offHeatS;
+		}
 		out.add(new Colour("target", null, hex, atS));
 		if (after != null) {
 			double e = after.extentOn(path);
