@@ -23,6 +23,14 @@ public class Formats {
 		return celsius == null ? "–" : bothScales(celsius);
 	}
 
+	/**
+	 * A rule's figures as the rule states them in each scale ("68 °C / 155 °F", where a
+	 * conversion would give 154 °F).
+	 */
+	public String tempStated(double celsius, double fahrenheit) {
+		return String.format(Locale.ROOT, "%.0f%s°C%s/ %.0f%s°F", celsius, NBSP, NBSP, fahrenheit, NBSP);
+	}
+
 	static String bothScales(double celsius) {
 		if (!Double.isFinite(celsius)) {
 			return "–";
