@@ -41,13 +41,15 @@ import com.crustplan.setup.SetupForm;
  * @param code the food code's minimum for the category, or null where it sets none
  * @param doneAtC where the code sets none, the core at which the food counts as cooked
  * (common practice, {@link DonenessLimits}); null where neither applies
+ * @param dryAboveC the core past which the food dries out (common practice,
+ * {@link DonenessLimits}); null where none is set
  * @param acrylamide the estimate, only where acrylamide matters
  * ({@link PlanReport#acrylamideMatters()}), else null
  */
 public record StationCard(long planId, String planName, String surfaceName, FoodCategory category, double thicknessMm,
 		Message target, Double coreTargetC, boolean reached, Double offHeatS, Double readyS, List<Equipment> equipment,
 		List<Checkpoint> timeline, List<Colour> colours, Double coreAtPullC, boolean stepped, FoodCode code,
-		Double doneAtC, AcrylamideView acrylamide, boolean hotOil, boolean hotPan, boolean hotOven) {
+		Double doneAtC, Double dryAboveC, AcrylamideView acrylamide, boolean hotOil, boolean hotPan, boolean hotOven) {
 
 	public StationCard {
 		equipment = List.copyOf(equipment);
@@ -94,7 +96,7 @@ public record StationCard(long planId, String planName, String surfaceName, Food
 				report.stepped() ? report.steps().coreTargetC() : null, report.reached(), offHeatS(report),
 				readyS(report), equipment, LineTimeline.of(report, inputs.colourTarget()),
 				colours(report, offHeatS(report)), LineTimeline.coreAtPullC(report), report.stepped(), code,
-				code == null && Double.isFinite(done) ? done : null,
+				code == null && Double.isFinite(done) ? done : null, finite(DonenessLimits.dryAboveC(category)),
 				report.acrylamideMatters() ? report.acrylamide() : null, oil, pan, oven);
 	}
 
@@ -123,6 +125,10 @@ public record StationCard(long planId, String planName, String surfaceName, Food
 	/** Whether the predicted core at the pull reaches the code's minimum. */
 	public boolean meetsCode() {
 		return code != null && coreAtPullC != null && coreAtPullC >= code.celsius();
+	}
+
+	public boolean pastDry() {
+		return dryAboveC != null && coreAtPullC != null && coreAtPullC > dryAboveC;
 	}
 
 	public boolean meetsDone() {

@@ -32,6 +32,14 @@ import org.springframework.boot.test.web.server.LocalServerPort;
 
 import com.crustplan.CrustplanTest;
 import com.crustplan.DemoData;
+import com.crustplan.plan.PlanInputs;
+import com.crustplan.plan.PlanService;
+import com.crustplan.plan.SavedPlanService;
+import com.crustplan.setup.SetupForm;
+import com.crustplan.setup.SetupService;
+import com.crustplan.surface.SurfaceForm;
+import com.crustplan.surface.SurfaceService;
+import com.crustplan.system.TemperatureUnit;
 
 /**
  * The station card printed by Chromium's own print-to-PDF, as a cook's browser prints it
@@ -62,6 +70,25 @@ class StationCardInBrowserTest {
 
 	@LocalServerPort
 	int port;
+
+	@Autowired
+	SurfaceService surfaces;
+
+	@Autowired
+	SetupService setups;
+
+	@Autowired
+	PlanService planner;
+
+	@Autowired
+	SavedPlanService saved;
+
+	/** A one-setup plan saved as the plan page saves it. */
+	long saveOneSetup(String surface, String setup, String stage) {
+		PlanInputs in = new PlanInputs(SurfaceForm.of(surfaces.get(demo.surface(surface)), TemperatureUnit.CELSIUS),
+				SetupForm.of(setups.get(demo.setup(setup)), TemperatureUnit.CELSIUS), stage, null, 60);
+		return saved.save(surface + " card", surface, setup, in, planner.plan(in), "chef").getId();
+	}
 
 	@Autowired
 	DemoData demo;
@@ -134,8 +161,19 @@ class StationCardInBrowserTest {
 	@Test
 	void shouldPrintEveryDemoCardOnOnePageAtA5AndA6WithTheTargetColourInThePixels() throws Exception {
 		signIn();
+		String[] names = new String[DEMO_PLANS.length + 2];
+		long[] ids = new long[names.length];
 		for (int i = 0; i < DEMO_PLANS.length; i++) {
-			long id = demo.plan(DEMO_PLANS[i]);
+			names[i] = DEMO_PLANS[i];
+			ids[i] = demo.plan(DEMO_PLANS[i]);
+		}
+		// one-setup plans: a fryer and an oven, with their own cautions and code minimum
+		names[DEMO_PLANS.length] = "chips in one fry";
+		ids[DEMO_PLANS.length] = saveOneSetup("Chips, 10 mm, blanched", "Fryer, chips", "golden");
+		names[DEMO_PLANS.length + 1] = "chicken thighs in the oven";
+		ids[DEMO_PLANS.length + 1] = saveOneSetup("Chicken thigh, skin on", "Combi oven, dry fan", "golden");
+		for (int i = 0; i < names.length; i++) {
+			long id = ids[i];
 			for (String size : new String[] { "a5", "a6" }) {
 				driver.get(url("/plans/" + id + "/card" + (size.equals("a6") ? "?size=a6" : "")));
 				String hex = driver.findElement(By.cssSelector("#card-colours .c-target svg"))
@@ -143,7 +181,7 @@ class StationCardInBrowserTest {
 				byte[] pdf = print(size.equals("a5") ? A5 : A6);
 				keep("card-" + i + "-" + size, pdf);
 				try (PDDocument doc = Loader.loadPDF(pdf)) {
-					assertThat(doc.getNumberOfPages()).as(DEMO_PLANS[i] + " at " + size + ": one page").isEqualTo(1);
+					assertThat(doc.getNumberOfPages()).as(names[i] + " at " + size + ": one page").isEqualTo(1);
 					PDRectangle media = doc.getPage(0).getMediaBox();
 					assertThat(media.getWidth() / PT_PER_MM).as("paper width, mm (ISO 216)")
 						.isCloseTo(size.equals("a5") ? 148 : 105, org.assertj.core.data.Offset.offset(1.0));
@@ -152,7 +190,7 @@ class StationCardInBrowserTest {
 					// 110 dpi: the target swatch is about 2 × 1 cm at A6, some 4000
 					// pixels
 					BufferedImage page = new PDFRenderer(doc).renderImageWithDPI(0, 110, ImageType.RGB);
-					assertThat(pixelsOf(page, hex)).as(DEMO_PLANS[i] + " at " + size + ": target " + hex + " printed")
+					assertThat(pixelsOf(page, hex)).as(names[i] + " at " + size + ": target " + hex + " printed")
 						.isGreaterThan(1000);
 				}
 			}
