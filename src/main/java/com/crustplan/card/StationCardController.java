@@ -43,11 +43,12 @@ class StationCardController {
 		}
 		model.addAttribute("size", paper);
 		model.addAttribute("saved", plan);
-		model.addAttribute("planUrl",
-				ServletUriComponentsBuilder.fromCurrentContextPath()
-					.path("/plans/{id}")
-					.buildAndExpand(id)
-					.toUriString());
+		String planUrl = ServletUriComponentsBuilder.fromCurrentContextPath()
+			.path("/plans/{id}")
+			.buildAndExpand(id)
+			.toUriString();
+		model.addAttribute("planUrl", planUrl);
+		model.addAttribute("qr", PlanLinkCode.of(planUrl));
 		try {
 			PlanInputs inputs = saved.inputs(plan);
 			model.addAttribute("card", StationCard.of(plan, inputs, planner.plan(inputs)));

@@ -7,9 +7,15 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.Base64;
+import java.util.Map;
 
 import javax.imageio.ImageIO;
 
+import com.google.zxing.BinaryBitmap;
+import com.google.zxing.DecodeHintType;
+import com.google.zxing.RGBLuminanceSource;
+import com.google.zxing.common.HybridBinarizer;
+import com.google.zxing.qrcode.QRCodeReader;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
@@ -158,6 +164,13 @@ class StationCardInBrowserTest {
 		return n;
 	}
 
+	static String readQr(BufferedImage image) throws Exception {
+		int[] rgb = image.getRGB(0, 0, image.getWidth(), image.getHeight(), null, 0, image.getWidth());
+		BinaryBitmap bitmap = new BinaryBitmap(
+				new HybridBinarizer(new RGBLuminanceSource(image.getWidth(), image.getHeight(), rgb)));
+		return new QRCodeReader().decode(bitmap, Map.of(DecodeHintType.TRY_HARDER, true)).getText();
+	}
+
 	@Test
 	void shouldPrintEveryDemoCardOnOnePageAtA5AndA6WithTheTargetColourInThePixels() throws Exception {
 		signIn();
@@ -178,6 +191,7 @@ class StationCardInBrowserTest {
 				driver.get(url("/plans/" + id + "/card" + (size.equals("a6") ? "?size=a6" : "")));
 				String hex = driver.findElement(By.cssSelector("#card-colours .c-target svg"))
 					.getDomAttribute("data-hex");
+				String planUrl = driver.findElement(By.cssSelector(".card-foot .plan-link")).getText();
 				byte[] pdf = print(size.equals("a5") ? A5 : A6);
 				keep("card-" + i + "-" + size, pdf);
 				try (PDDocument doc = Loader.loadPDF(pdf)) {
@@ -192,6 +206,10 @@ class StationCardInBrowserTest {
 					BufferedImage page = new PDFRenderer(doc).renderImageWithDPI(0, 110, ImageType.RGB);
 					assertThat(pixelsOf(page, hex)).as(names[i] + " at " + size + ": target " + hex + " printed")
 						.isGreaterThan(1000);
+					// the QR code, read back from the printed page by ZXing's own reader
+					assertThat(readQr(new PDFRenderer(doc).renderImageWithDPI(0, 200, ImageType.RGB)))
+						.as(names[i] + " at " + size + ": QR code")
+						.isEqualTo(planUrl);
 				}
 			}
 		}
