@@ -14,6 +14,7 @@ import javax.imageio.ImageIO;
 import com.google.zxing.BinaryBitmap;
 import com.google.zxing.DecodeHintType;
 import com.google.zxing.RGBLuminanceSource;
+import com.google.zxing.ReaderException;
 import com.google.zxing.common.HybridBinarizer;
 import com.google.zxing.qrcode.QRCodeReader;
 import org.apache.pdfbox.Loader;
@@ -164,11 +165,17 @@ class StationCardInBrowserTest {
 		return n;
 	}
 
-	static String readQr(BufferedImage image) throws Exception {
+	/** The QR code on a rendered page, as ZXing reads it (300 dpi: an office printer). */
+	static String readQr(BufferedImage image, String what) {
 		int[] rgb = image.getRGB(0, 0, image.getWidth(), image.getHeight(), null, 0, image.getWidth());
 		BinaryBitmap bitmap = new BinaryBitmap(
 				new HybridBinarizer(new RGBLuminanceSource(image.getWidth(), image.getHeight(), rgb)));
-		return new QRCodeReader().decode(bitmap, Map.of(DecodeHintType.TRY_HARDER, true)).getText();
+		try {
+			return new QRCodeReader().decode(bitmap, Map.of(DecodeHintType.TRY_HARDER, true)).getText();
+		}
+		catch (ReaderException e) {
+			throw new AssertionError(what + ": no QR code read from the printed page", e);
+		}
 	}
 
 	@Test
@@ -207,7 +214,8 @@ class StationCardInBrowserTest {
 					assertThat(pixelsOf(page, hex)).as(names[i] + " at " + size + ": target " + hex + " printed")
 						.isGreaterThan(1000);
 					// the QR code, read back from the printed page by ZXing's own reader
-					assertThat(readQr(new PDFRenderer(doc).renderImageWithDPI(0, 200, ImageType.RGB)))
+					assertThat(readQr(new PDFRenderer(doc).renderImageWithDPI(0, 300, ImageType.RGB),
+							names[i] + " at " + size))
 						.as(names[i] + " at " + size + ": QR code")
 						.isEqualTo(planUrl);
 				}
