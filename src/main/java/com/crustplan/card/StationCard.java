@@ -235,7 +235,8 @@ public record StationCard(long planId, String planName, String surfaceName, Food
 		if (atS != null && offHeatS != null && Math.abs(atS - offHeatS) <= SAME_MOMENT_S) {
 			atS = offHeatS;
 		}
-		out.add(new Colour("target", null, hex, atS));
+		// a plan aimed at the core alone shows the colour it ends at, named as such
+		out.add(new Colour("target", byColour ? null : "Colour at the end", hex, atS));
 		if (after != null) {
 			double e = after.extentOn(path);
 			out.add(new Colour("after", after.label(), path.colourAt(e).hex(), firstAt(series, e)));

@@ -12,6 +12,8 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.view;
 
+import java.util.List;
+
 import jakarta.servlet.http.Cookie;
 
 import org.junit.jupiter.api.Nested;
@@ -24,7 +26,16 @@ import org.springframework.test.web.servlet.request.RequestPostProcessor;
 
 import com.crustplan.CrustplanTest;
 import com.crustplan.DemoData;
+import com.crustplan.plan.PlanInputs;
+import com.crustplan.plan.PlanService;
+import com.crustplan.plan.PlanStep;
 import com.crustplan.plan.SavedPlan;
+import com.crustplan.plan.SavedPlanService;
+import com.crustplan.setup.SetupForm;
+import com.crustplan.setup.SetupService;
+import com.crustplan.surface.SurfaceForm;
+import com.crustplan.surface.SurfaceService;
+import com.crustplan.system.TemperatureUnit;
 import com.crustplan.plan.SavedPlanRepository;
 
 @CrustplanTest
@@ -42,6 +53,18 @@ class StationCardPagesTest {
 
 	@Autowired
 	SavedPlanRepository plans;
+
+	@Autowired
+	SavedPlanService saved;
+
+	@Autowired
+	PlanService planner;
+
+	@Autowired
+	SurfaceService surfaces;
+
+	@Autowired
+	SetupService setups;
 
 	static String both(int c, int f) {
 		return c + NB + "°C" + NB + "/ " + f + NB + "°F";
@@ -132,6 +155,43 @@ class StationCardPagesTest {
 			.contains(both(74, 165))
 			.contains("Hot oven")
 			.doesNotContain("minced");
+	}
+
+	long save(String name, PlanInputs in) {
+		return saved.save(name, in.surface().name(), "steps", in, planner.plan(in), "chef").getId();
+	}
+
+	SurfaceForm surface(String name) {
+		return SurfaceForm.of(surfaces.get(demo.surface(name)), TemperatureUnit.CELSIUS);
+	}
+
+	SetupForm setup(String name) {
+		return SetupForm.of(setups.get(demo.setup(name)), TemperatureUnit.CELSIUS);
+	}
+
+	@Test
+	void shouldSaySoWhenThePlanDoesNotReachItsTarget() throws Exception {
+		// 10 mm chips take 6–8 min to golden at 175 °C (common practice, the
+		// calibration test's figure): one minute of frying is not enough
+		long id = save("One minute of chips",
+				new PlanInputs(surface("Chips, 10 mm, blanched"), setup("Fryer, chips"), "golden", null, 1));
+		mvc.perform(get("/plans/{id}/card", id))
+			.andExpect(status().isOk())
+			.andExpect(content().string(containsString("Target not reached in this plan")))
+			.andExpect(content().string(containsString("No core figure")))
+			.andExpect(content().string(not(containsString("Off the heat at"))));
+	}
+
+	@Test
+	void shouldShowTheEndColourForAPlanAimedAtTheCoreAlone() throws Exception {
+		SetupForm oven = setup("Fan oven, dry, roast finish");
+		PlanInputs in = new PlanInputs(surface("Sirloin steak, 30 mm, patted dry"), oven, null, null, 60,
+				List.of(new PlanStep(oven, oven.name(), null, 40.0, null, null, 55.0)), 55.0);
+		mvc.perform(get("/plans/{id}/card", save("Oven to 55", in)))
+			.andExpect(status().isOk())
+			.andExpect(content().string(containsString("Colour at the end")))
+			.andExpect(content().string(containsString("Pull at " + both(55, 131) + " core")))
+			.andExpect(content().string(not(containsString("Target colour:"))));
 	}
 
 	@Test
