@@ -179,7 +179,9 @@ public record StationCard(long planId, String planName, String surfaceName, Food
 			details.add(Boolean.FALSE.equals(f.fatFilm()) ? "dry pan" : "thin film of fat");
 		}
 		if (mode == HeatMode.GRILL && f.heatFluxKwPerM2() != null) {
-			details.add(Math.round(f.heatFluxKwPerM2()) + " kW/m² at the food");
+			// the temperature shown is the element's, worked out from the measured flux
+			details
+				.add(Math.round(f.heatFluxKwPerM2()) + " kW/m² at the food (element temperature worked out from it)");
 		}
 		if (mode == HeatMode.GRILL && f.distanceMm() != null) {
 			details.add(Math.round(f.distanceMm()) + " mm below the element");
