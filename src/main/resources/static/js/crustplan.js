@@ -267,7 +267,16 @@
     box.dataset.rendered = 'true';
   }
 
+  // a print button shows only where script can print (the page prints without it too)
+  function printButtons() {
+    Array.prototype.forEach.call(document.querySelectorAll('[data-print]'), function (b) {
+      b.hidden = false;
+      b.addEventListener('click', function () { window.print(); });
+    });
+  }
+
   document.addEventListener('DOMContentLoaded', function () {
+    printButtons();
     surfaceForm();
     setupForm();
     planForm();

@@ -205,7 +205,7 @@ final class StepPlanner {
 			CookStep step = steps.get(r.index());
 			HeatSetup h = step.setup();
 			out.add(new StepsReport.Checkpoint(r.startS(), "step", into(h)));
-			flips(h.schedule(), r, out);
+			flips(h.schedule(), r.startS(), r.durationS(), out);
 			if (r.endedBy() == CookStep.Ending.CORE) {
 				double probeAt = firstTimeCoreAbove(series, r.startS(), r.endS(),
 						step.coreTemperatureC() - PROBE_AHEAD_K);
@@ -244,7 +244,7 @@ final class StepPlanner {
 		return out;
 	}
 
-	private static Message into(HeatSetup h) {
+	static Message into(HeatSetup h) {
 		Temperature t = Temperature.celsius(h.temperatureC());
 		if (h instanceof PanContact) {
 			return Message.of("timeline.into.pan", t);
@@ -261,20 +261,21 @@ final class StepPlanner {
 		return Message.of("timeline.into.rest", t);
 	}
 
-	private static void flips(FaceSchedule schedule, CookStep.Record r, List<StepsReport.Checkpoint> out) {
+	/** The flips of a step that starts at {@code startS} and lasts {@code durationS}. */
+	static void flips(FaceSchedule schedule, double startS, double durationS, List<StepsReport.Checkpoint> out) {
 		List<Double> at = new ArrayList<>();
 		double t = schedule.nextChangeAfter(0);
-		while (t < r.durationS() - 1e-6) {
+		while (t < durationS - 1e-6) {
 			at.add(t);
 			t = schedule.nextChangeAfter(t + 1e-6);
 		}
 		if (at.size() > FLIPS_LISTED) {
-			out.add(new StepsReport.Checkpoint(r.startS() + at.get(0), "flip",
+			out.add(new StepsReport.Checkpoint(startS + at.get(0), "flip",
 					Message.of("timeline.flips", Duration.seconds(at.get(0)), PlainNumber.of(at.size(), 0))));
 			return;
 		}
 		for (double f : at) {
-			out.add(new StepsReport.Checkpoint(r.startS() + f, "flip", Message.of("timeline.flip")));
+			out.add(new StepsReport.Checkpoint(startS + f, "flip", Message.of("timeline.flip")));
 		}
 	}
 

@@ -15,6 +15,30 @@ public class Formats {
 		return celsius == null ? "–" : unit.format(celsius);
 	}
 
+	/** A no-break space: a figure never parts from its unit at a line end. */
+	static final String NBSP = "\u00a0";
+
+	/** "230 °C / 446 °F", for pages read in either scale (the station card). */
+	public String tempBoth(Double celsius) {
+		return celsius == null ? "–" : bothScales(celsius);
+	}
+
+	/**
+	 * A rule's figures as the rule states them in each scale ("68 °C / 155 °F", where a
+	 * conversion would give 154 °F).
+	 */
+	public String tempStated(double celsius, double fahrenheit) {
+		return String.format(Locale.ROOT, "%.0f%s°C%s/ %.0f%s°F", celsius, NBSP, NBSP, fahrenheit, NBSP);
+	}
+
+	static String bothScales(double celsius) {
+		if (!Double.isFinite(celsius)) {
+			return "–";
+		}
+		return String.format(Locale.ROOT, "%.0f%s°C%s/ %.0f%s°F", celsius, NBSP, NBSP,
+				TemperatureUnit.FAHRENHEIT.fromCelsius(celsius), NBSP);
+	}
+
 	/** Minutes and seconds the way a kitchen timer shows them. */
 	public static String duration(double seconds) {
 		if (!Double.isFinite(seconds)) {

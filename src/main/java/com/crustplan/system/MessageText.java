@@ -68,6 +68,37 @@ public class MessageText {
 		return render(messages, TemperatureUnit.CELSIUS);
 	}
 
+	/**
+	 * Every temperature in both scales, "230 °C / 446 °F": a station card hangs where
+	 * cooks of either habit read it, so it names both (a code's figures as the code
+	 * states them).
+	 */
+	public String bothScales(Message message) {
+		if (message == null) {
+			return "";
+		}
+		Object[] args = message.args().stream().map(this::bothScales).toArray();
+		return source.getMessage(message.code(), args, LOCALE);
+	}
+
+	private String bothScales(Argument a) {
+		if (a instanceof Message m) {
+			return bothScales(m);
+		}
+		if (a instanceof Temperature t) {
+			return Formats.bothScales(t.celsius());
+		}
+		if (a instanceof StatedTemperature s) {
+			return whole(s.celsius()) + Formats.NBSP + "°C" + Formats.NBSP + "/ " + whole(s.fahrenheit()) + Formats.NBSP
+					+ "°F";
+		}
+		if (a instanceof TemperatureDifference d) {
+			return whole(d.kelvin()) + " K / " + whole(TemperatureUnit.FAHRENHEIT.differenceFromCelsius(d.kelvin()))
+					+ " °F";
+		}
+		return argument(a, TemperatureUnit.CELSIUS);
+	}
+
 	String argument(Argument a, TemperatureUnit unit) {
 		if (a instanceof Message m) {
 			return render(m, unit);
