@@ -21,8 +21,8 @@ import com.crustplan.surface.SurfaceBody;
  * see {@code api/Bound}); {@link #toRequest} checks what binding cannot and builds the
  * engine's inputs.
  */
-public record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double horizonMinutes, Boolean mitigations,
-		List<StepsReader.StepBody> steps) {
+public record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double horizonMinutes,
+		Boolean mitigations, List<StepsReader.StepBody> steps) {
 
 	/** Longest mode or stage key read. */
 	static final int KEY_MAX = 80;

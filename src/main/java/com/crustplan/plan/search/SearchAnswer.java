@@ -18,7 +18,9 @@ public record SearchAnswer(SearchGoal goal, List<Trial> trials, int bestIndex, S
 		notes = List.copyOf(notes);
 	}
 
-	/** "least-acrylamide" where acrylamide matters, "gentlest" (lowest setting) elsewhere. */
+	/**
+	 * "least-acrylamide" where acrylamide matters, "gentlest" (lowest setting) elsewhere.
+	 */
 	public static final String LEAST_ACRYLAMIDE = "least-acrylamide";
 
 	public static final String GENTLEST = "gentlest";
@@ -39,9 +41,9 @@ public record SearchAnswer(SearchGoal goal, List<Trial> trials, int bestIndex, S
 	}
 
 	/**
-	 * A change that might make the goal reachable: {@code code} (thinner, drier, ph, acid,
-	 * finish-in-oven), what to do, and what the model found with it: {@code works} with
-	 * the best setting after the change ({@code best}), or why it still fails.
+	 * A change that might make the goal reachable: {@code code} (thinner, drier, ph,
+	 * acid, finish-in-oven), what to do, and what the model found with it: {@code works}
+	 * with the best setting after the change ({@code best}), or why it still fails.
 	 */
 	public record Alternative(String code, String change, boolean works, Trial best, String outcome) {
 	}

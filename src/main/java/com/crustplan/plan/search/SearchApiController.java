@@ -57,8 +57,8 @@ class SearchApiController {
 			return ResponseEntity.ok().contentType(MediaType.APPLICATION_JSON).body(SearchResponse.of(a));
 		}
 		catch (InvalidInputException e) {
-			throw InvalidRequestException.of(e.field().startsWith("target") || e.field().startsWith("range")
-					? e.field() : "surface." + e.field(), e.reason());
+			throw InvalidRequestException.of(e.field().startsWith("target") || e.field().startsWith("range") ? e.field()
+					: "surface." + e.field(), e.reason());
 		}
 	}
 
@@ -110,8 +110,7 @@ class SearchApiController {
 
 	}
 
-	record Goal(String stage, Double lightness, Double coreTemperatureC, double withinMinutes,
-			boolean underBenchmark) {
+	record Goal(String stage, Double lightness, Double coreTemperatureC, double withinMinutes, boolean underBenchmark) {
 	}
 
 	record Verified(Double timeToGoalS, Double coreC, Double portionUgPerKg) {
@@ -160,14 +159,13 @@ class SearchApiController {
 		try {
 			List<SettingMap.Row> rows = SettingMap.compute(req.food().surface(), req.food().product(), req.template(),
 					req.range(), req.target(), req.stepS(), req.maxS());
-			return ResponseEntity.ok()
-				.contentType(MediaType.APPLICATION_JSON)
-				.body(MapResponse.of(req, rows));
+			return ResponseEntity.ok().contentType(MediaType.APPLICATION_JSON).body(MapResponse.of(req, rows));
 		}
 		catch (InvalidInputException e) {
 			String f = e.field();
 			throw InvalidRequestException.of(
-					f.startsWith("target") || f.startsWith("range") || f.equals("stepMinutes") ? f : "range", e.reason());
+					f.startsWith("target") || f.startsWith("range") || f.equals("stepMinutes") ? f : "range",
+					e.reason());
 		}
 	}
 
@@ -189,8 +187,9 @@ class SearchApiController {
 			errors.add("stepMinutes", "must be from 0.5 to 60 minutes");
 		}
 		else if (minutes != null && minutes / step > SettingMap.MAX_COLUMNS + 1e-9) {
-			errors.add("stepMinutes", "at most " + SettingMap.MAX_COLUMNS + " time columns per map (this one has "
-					+ (int) Math.ceil(minutes / step) + "): use a longer stepMinutes or fewer minutes");
+			errors.add("stepMinutes",
+					"at most " + SettingMap.MAX_COLUMNS + " time steps per map after the start (this one has "
+							+ (int) Math.ceil(minutes / step) + "): use a longer stepMinutes or fewer minutes");
 		}
 		else if (minutes != null && step > minutes) {
 			errors.add("stepMinutes", "must not be longer than minutes");
@@ -205,8 +204,7 @@ class SearchApiController {
 			@JsonInclude(JsonInclude.Include.NON_NULL) String zone) {
 	}
 
-	record MapRow(Setting setting, @JsonInclude(JsonInclude.Include.NON_NULL) Double targetReachedS,
-			List<Cell> cells) {
+	record MapRow(Setting setting, @JsonInclude(JsonInclude.Include.NON_NULL) Double targetReachedS, List<Cell> cells) {
 	}
 
 	record MapResponse(String category, String product, String mode, Double benchmarkUgPerKg, String target,
@@ -228,8 +226,8 @@ class SearchApiController {
 							finite(c.coreTemperatureC()), finite(c.portionUgPerKg()), zone(c.zone())));
 				}
 				n += cells.size();
-				out.add(new MapRow(Setting.of(r.setup()),
-						req.target() == null ? null : finite(r.row().targetTimeS()), cells));
+				out.add(new MapRow(Setting.of(r.setup()), req.target() == null ? null : finite(r.row().targetTimeS()),
+						cells));
 			}
 			Target t = req.target();
 			return new MapResponse(category.key(), req.food().product().key(), req.template().mode(),

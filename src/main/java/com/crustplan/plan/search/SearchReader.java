@@ -106,8 +106,8 @@ class SearchReader {
 	}
 
 	/**
-	 * The range asked, or the mode's usual one; more than {@link SettingRange#MAX_SETTINGS}
-	 * settings is refused on {@code range}.
+	 * The range asked, or the mode's usual one; more than
+	 * {@link SettingRange#MAX_SETTINGS} settings is refused on {@code range}.
 	 */
 	SettingRange range(SearchBody.RangeBody r, HeatSetup template, FieldErrors errors) {
 		if (template == null) {

@@ -40,8 +40,9 @@ final class SettingMap {
 	static List<Row> compute(Surface surface, Product product, HeatSetup template, SettingRange range, Target target,
 			double stepS, double maxS) {
 		if (maxS / stepS > MAX_COLUMNS + 1e-9) {
-			throw new InvalidInputException("stepMinutes", "at most " + MAX_COLUMNS + " time columns per map (this one has "
-					+ (int) Math.ceil(maxS / stepS) + "): use a longer stepMinutes or fewer minutes");
+			throw new InvalidInputException("stepMinutes",
+					"at most " + MAX_COLUMNS + " time steps per map after the start (this one has "
+							+ (int) Math.ceil(maxS / stepS) + "): use a longer stepMinutes or fewer minutes");
 		}
 		double[] temperatures = range.temperaturesC().stream().mapToDouble(Double::doubleValue).toArray();
 		// a map without a target runs to its end: the darkest stage stands in and is
@@ -53,8 +54,8 @@ final class SettingMap {
 		for (double steam : steams) {
 			HeatSetup t = Double.isNaN(steam) ? template
 					: new Oven(((Oven) template).airTemperatureC(), ((Oven) template).fan(), steam);
-			bySteam.put(steam, RiskMap.compute(surface, product, t, driver, temperatures, stepS, maxS,
-					CookSettings.defaults()));
+			bySteam.put(steam,
+					RiskMap.compute(surface, product, t, driver, temperatures, stepS, maxS, CookSettings.defaults()));
 		}
 		List<Row> rows = new ArrayList<>();
 		for (int i = 0; i < temperatures.length; i++) {

@@ -62,8 +62,8 @@ public record SettingRange(double fromC, double toC, double stepC, List<Double> 
 	}
 
 	/**
-	 * The template at each setting, temperatures outermost; the engine's range checks name
-	 * {@code range.fromC}, {@code range.toC} or {@code range.steamPct}.
+	 * The template at each setting, temperatures outermost; the engine's range checks
+	 * name {@code range.fromC}, {@code range.toC} or {@code range.steamPct}.
 	 */
 	public List<HeatSetup> settings(HeatSetup template) {
 		List<HeatSetup> out = new ArrayList<>();

@@ -10,6 +10,7 @@ import java.util.stream.IntStream;
 import org.springframework.stereotype.Service;
 
 import com.crustplan.engine.assessment.AcrylamideCook;
+import com.crustplan.engine.assessment.AcrylamideWarnings;
 import com.crustplan.engine.assessment.BenchmarkLevel;
 import com.crustplan.engine.assessment.Mitigations;
 import com.crustplan.engine.assessment.Product;
@@ -46,8 +47,7 @@ import com.crustplan.system.TemperatureUnit;
 public class SettingSearch {
 
 	/**
-	 * A cut one size down: 10 mm chips to 7 mm, a 30 mm steak to 21 mm (common
-	 * practice).
+	 * A cut one size down: 10 mm chips to 7 mm, a 30 mm steak to 21 mm (common practice).
 	 */
 	static final double THINNER_FACTOR = 0.7;
 
@@ -64,10 +64,12 @@ public class SettingSearch {
 	static final double BICARBONATE_PINCH_G_PER_KG = 1.0;
 
 	/**
-	 * Finishing oven for a sear-then-oven plan: dry fan oven at 160 °C (common
-	 * practice).
+	 * Finishing oven for a sear-then-oven plan: dry fan oven at 160 °C (common practice).
 	 */
 	static final double FINISH_OVEN_C = 160;
+
+	/** Regulation (EU) 2017/2158, Annex II Part A: fry cut potato below 175 °C. */
+	static final double FRY_BELOW_C = AcrylamideWarnings.MAX_FRYING_C.value();
 
 	/** How much longer the fastest setting is run to say how long it would take. */
 	static final double LONGER_FACTOR = 3;
@@ -97,6 +99,16 @@ public class SettingSearch {
 		int best = best(trials, goal, acrylamideMatters);
 		String markedBy = acrylamideMatters ? SearchAnswer.LEAST_ACRYLAMIDE : SearchAnswer.GENTLEST;
 		Double level = benchmark == null ? null : benchmark.microgramsPerKg();
+		if (best >= 0 && surface.category() == FoodCategory.POTATO && trials.get(best).setup() instanceof DeepFryer f
+				&& f.oilTemperatureC() > FRY_BELOW_C) {
+			cooler(trials, goal)
+				.ifPresent(c -> notes.add("The EU measures (Regulation (EU) 2017/2158, Annex II) "
+						+ "asks for frying below " + unit.format(FRY_BELOW_C) + "; of the settings at or below it, "
+						+ label(c.setup(), unit) + " gets there in " + Formats.duration(c.doneS())
+						+ (Double.isFinite(c.portionUgPerKg())
+								? " with " + Formats.number(c.portionUgPerKg(), 0) + " µg/kg in the portion" : "")
+						+ "."));
+		}
 		if (best >= 0) {
 			return new SearchAnswer(goal, trials, best, markedBy, level,
 					verify(surface, product, trials.get(best).setup(), goal), List.of(), List.of(), notes);
@@ -107,7 +119,19 @@ public class SettingSearch {
 		return new SearchAnswer(goal, trials, -1, markedBy, level, null, why, alternatives, notes);
 	}
 
-	/** Every setting run once for the time asked; runs are independent, so in parallel. */
+	/**
+	 * The least-acrylamide setting at or below the frying measure that satisfies the
+	 * goal.
+	 */
+	private static Optional<Trial> cooler(List<Trial> trials, SearchGoal goal) {
+		return trials.stream()
+			.filter(t -> t.satisfies(goal) && t.temperatureC() <= FRY_BELOW_C)
+			.min(Comparator.comparingDouble(Trial::portionUgPerKg));
+	}
+
+	/**
+	 * Every setting run once for the time asked; runs are independent, so in parallel.
+	 */
 	static List<Trial> trials(Surface surface, Product product, List<HeatSetup> settings, SearchGoal goal) {
 		BenchmarkLevel benchmark = product.benchmark().orElse(null);
 		return IntStream.range(0, settings.size())
@@ -127,8 +151,8 @@ public class SettingSearch {
 		double coreS = goal.coreC() == null ? Double.NaN : r.coreReachedAtS();
 		boolean colourOk = goal.colour() == null || Double.isFinite(colourS);
 		boolean coreOk = goal.coreC() == null || Double.isFinite(coreS);
-		double doneS = colourOk && coreOk ? Math.max(goal.colour() == null ? 0 : colourS,
-				goal.coreC() == null ? 0 : coreS) : Double.NaN;
+		double doneS = colourOk && coreOk
+				? Math.max(goal.colour() == null ? 0 : colourS, goal.coreC() == null ? 0 : coreS) : Double.NaN;
 		List<Sample> series = r.cook().series();
 		double portion;
 		double core;
@@ -155,8 +179,9 @@ public class SettingSearch {
 				under);
 	}
 
+	/** The first recorded moment at or after {@code t}: the colour the cook then sees. */
 	private static Sample at(List<Sample> s, double t) {
-		return s.stream().min(Comparator.comparingDouble(x -> Math.abs(x.timeS() - t))).orElseThrow();
+		return s.stream().filter(x -> x.timeS() >= t - 1e-6).findFirst().orElse(s.get(s.size() - 1));
 	}
 
 	private static double interpolate(List<Sample> s, double t, java.util.function.ToDoubleFunction<Sample> f) {
@@ -192,10 +217,9 @@ public class SettingSearch {
 	static int best(List<Trial> trials, SearchGoal goal, boolean byAcrylamide) {
 		Comparator<Trial> gentlest = Comparator.comparingDouble(Trial::temperatureC)
 			.thenComparingDouble(t -> t.setup() instanceof Oven o ? o.steamPct() : 0);
-		Comparator<Trial> order = byAcrylamide
-				? Comparator.comparingDouble((Trial t) -> Double.isFinite(t.portionUgPerKg()) ? t.portionUgPerKg()
-						: Double.MAX_VALUE).thenComparing(gentlest)
-				: gentlest;
+		Comparator<Trial> order = byAcrylamide ? Comparator
+			.comparingDouble((Trial t) -> Double.isFinite(t.portionUgPerKg()) ? t.portionUgPerKg() : Double.MAX_VALUE)
+			.thenComparing(gentlest) : gentlest;
 		return IntStream.range(0, trials.size())
 			.filter(i -> trials.get(i).satisfies(goal))
 			.boxed()
@@ -232,9 +256,7 @@ public class SettingSearch {
 		String target = goalText(surface.category(), goal, unit);
 		List<Trial> inTime = trials.stream().filter(Trial::inTime).toList();
 		if (inTime.isEmpty()) {
-			Trial fastest = trials.stream()
-				.max(Comparator.comparingDouble(Trial::temperatureC))
-				.orElseThrow();
+			Trial fastest = trials.stream().max(Comparator.comparingDouble(Trial::temperatureC)).orElseThrow();
 			double longer = Math.min(goal.withinS() * LONGER_FACTOR, CookSettings.MAX_HORIZON_S);
 			Trial slow = trial(surface, product.benchmark().orElse(null), fastest.setup(), goal, longer);
 			String s = "No setting in the range reaches " + target + " within " + within + ".";
@@ -262,16 +284,16 @@ public class SettingSearch {
 		else if (goal.underBenchmark() && benchmark != null) {
 			Trial least = inTime.stream().min(Comparator.comparingDouble(Trial::portionUgPerKg)).orElseThrow();
 			why.add("Every setting that reaches " + target + " within " + within + " is above the benchmark level of "
-					+ Formats.number(benchmark, 0) + " µg/kg: the least is "
-					+ Formats.number(least.portionUgPerKg(), 0) + " µg/kg, at " + label(least.setup(), unit) + ".");
+					+ Formats.number(benchmark, 0) + " µg/kg: the least is " + Formats.number(least.portionUgPerKg(), 0)
+					+ " µg/kg, at " + label(least.setup(), unit) + ".");
 		}
 		return why;
 	}
 
 	/**
-	 * The nearest changes, each re-run over the same settings: one cut size down, a
-	 * drier surface, a pH tweak (bicarbonate where acrylamide does not matter, an acid
-	 * dip against the benchmark) and, with a core target, colour first then the oven.
+	 * The nearest changes, each re-run over the same settings: one cut size down, a drier
+	 * surface, a pH tweak (bicarbonate where acrylamide does not matter, an acid dip
+	 * against the benchmark) and, with a core target, colour first then the oven.
 	 */
 	List<SearchAnswer.Alternative> alternatives(Surface surface, Product product, List<HeatSetup> settings,
 			List<Trial> trials, SearchGoal goal, boolean acrylamideMatters, TemperatureUnit unit) {
@@ -288,8 +310,8 @@ public class SettingSearch {
 			double drier = surface.surfaceWaterGPerM2() * DRIER_FACTOR;
 			out.add(changed(surface.withSurfaceWaterGPerM2(drier), product, settings, goal, "drier",
 					"Dry the surface: pat dry or drain well, to about " + Formats.number(drier, 0)
-							+ " g/m² of surface water instead of "
-							+ Formats.number(surface.surfaceWaterGPerM2(), 0) + ".",
+							+ " g/m² of surface water instead of " + Formats.number(surface.surfaceWaterGPerM2(), 0)
+							+ ".",
 					acrylamideMatters, unit));
 		}
 		if (slow && !acrylamideMatters) {
@@ -302,8 +324,7 @@ public class SettingSearch {
 					acrylamideMatters, unit));
 		}
 		if (!slow && goal.underBenchmark() && product.benchmark().isPresent()) {
-			double acid = Math.min(SurfaceField.ACID.max(),
-					surface.acidGPerKg() + Mitigations.ACID_DIP_UPTAKE.value());
+			double acid = Math.min(SurfaceField.ACID.max(), surface.acidGPerKg() + Mitigations.ACID_DIP_UPTAKE.value());
 			out.add(changed(surface.withAcidGPerKg(acid), product, settings, goal, "acid",
 					"Lower the surface pH: a dip in about 1 % citric acid before cooking (about "
 							+ Formats.number(Mitigations.ACID_DIP_UPTAKE.value(), 1)
@@ -362,8 +383,8 @@ public class SettingSearch {
 							+ Formats.duration(goal.withinS()) + " this way either."));
 		}
 		double done = Math.max(core, colour);
-		Trial t = new Trial(first, colour, core, done, portion == null ? Double.NaN : portion, goal.coreC(), null,
-				null, true, under);
+		Trial t = new Trial(first, colour, core, done, portion == null ? Double.NaN : portion, goal.coreC(), null, null,
+				true, under);
 		if (!under) {
 			return Optional.of(new SearchAnswer.Alternative("finish-in-oven", change, false, null,
 					"Re-run: done in " + Formats.duration(done) + ", but above the benchmark level."));
@@ -380,12 +401,10 @@ public class SettingSearch {
 	/** The goal as a cook reads it: "golden and a core of 63 °C". */
 	static String goalText(FoodCategory category, SearchGoal goal, TemperatureUnit unit) {
 		String colour = goal.colour() == null ? null
-				: goal.colour().stage() != null
-						? category.stage(goal.colour().stage())
-							.map(BrowningStage::label)
-							.orElse(goal.colour().stage())
-							.toLowerCase(Locale.ROOT)
-						: "L* " + Formats.number(goal.colour().lightness(), 0);
+				: goal.colour().stage() != null ? category.stage(goal.colour().stage())
+					.map(BrowningStage::label)
+					.orElse(goal.colour().stage())
+					.toLowerCase(Locale.ROOT) : "L* " + Formats.number(goal.colour().lightness(), 0);
 		String core = goal.coreC() == null ? null : "a core of " + unit.format(goal.coreC());
 		return colour == null ? core : core == null ? colour : colour + " and " + core;
 	}
