@@ -38,6 +38,11 @@ public record SearchAnswer(SearchGoal goal, List<Trial> trials, int bestIndex, S
 	 * acrylamide (µg/kg, NaN where the plan gives none).
 	 */
 	public record Verified(double timeS, double coreC, double portionUgPerKg) {
+
+		public boolean hasPortion() {
+			return Double.isFinite(portionUgPerKg);
+		}
+
 	}
 
 	/**

@@ -16,6 +16,14 @@ public record Trial(HeatSetup setup, double colourS, double coreS, double doneS,
 		return inTime && (!goal.underBenchmark() || underBenchmark);
 	}
 
+	public boolean colourReached() {
+		return Double.isFinite(colourS);
+	}
+
+	public boolean coreReached() {
+		return Double.isFinite(coreS);
+	}
+
 	public double temperatureC() {
 		return setup.temperatureC();
 	}
