@@ -27,6 +27,7 @@ import com.crustplan.engine.doneness.DonenessWarning;
 import com.crustplan.engine.doneness.FoodCode;
 import com.crustplan.engine.doneness.FoodCode.Cut;
 import com.crustplan.engine.input.InvalidInputException;
+import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.heat.DeepFryer;
@@ -248,7 +249,11 @@ public class PlanService {
 		double step = Math.max(30, Math.ceil(span / RISK_MAP_COLUMNS / 30) * 30);
 		RiskMap map = RiskMap.compute(surface, product, setup, target, riskMapTemperatures(setup), step,
 				step * Math.ceil(span / step), settings);
-		return RiskMapView.of(map, surface.category().colourPath(), surfaceName, setupName);
+		FoodCategory category = surface.category();
+		String stage = target.stage() != null
+				? category.stage(target.stage()).map(s -> s.label()).orElse(target.stage())
+				: "L* " + Math.round(target.lightness());
+		return RiskMapView.of(map, category.colourPath(), surfaceName, setupName, target.extentFor(category), stage);
 	}
 
 	/** The mode's usual range in even steps, with the setup's own temperature added. */
