@@ -57,7 +57,7 @@ class RiskMapReadingTest {
 		assertThat(Formats.duration(target.atS())).isEqualTo(Formats.duration(report.timeToTargetS()));
 		assertThat(target.portionUgPerKg()).isEqualTo(own.targetPortionUgPerKg());
 		assertThat(Math.round(target.portionUgPerKg())).isEqualTo(Math.round(report.acrylamide().portionUgPerKg()));
-		assertThat(html).contains("at " + new Formats().clock(target.atS()));
+		assertThat(html).contains(">" + new Formats().clock(target.atS()) + "<");
 		// "Target reached" comes before the first time column
 		assertThat(html.indexOf("Target reached")).isLessThan(html.indexOf("class=\"num risk-time\""));
 		// zones named in a legend; no bare "!!" on food-coloured cells
