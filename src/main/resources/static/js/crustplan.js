@@ -255,6 +255,27 @@
     box.dataset.rendered = 'true';
   }
 
+  // find a setting: offer only the stages of the chosen surface's category, as the plan form does
+  function searchForm() {
+    var form = document.getElementById('search-form');
+    if (!form) { return; }
+    var surface = form.elements.surfaceId;
+    var stage = form.elements.targetStage;
+    function filter() {
+      var opt = surface.options[surface.selectedIndex];
+      var cat = opt ? opt.dataset.category : null;
+      Array.prototype.forEach.call(stage.querySelectorAll('optgroup'), function (g) {
+        var on = !cat || g.dataset.category === cat;
+        g.hidden = !on;
+        g.disabled = !on;
+      });
+      var chosen = stage.options[stage.selectedIndex];
+      if (chosen && chosen.parentNode.disabled) { stage.value = ''; }
+    }
+    surface.addEventListener('change', filter);
+    filter();
+  }
+
   // compare: one line per plan on each chart, coloured and dashed as the table's keys
   function compareCharts() {
     var box = document.getElementById('compare-charts');
@@ -288,6 +309,7 @@
     setupForm();
     planForm();
     charts();
+    searchForm();
     compareCharts();
   });
 }());

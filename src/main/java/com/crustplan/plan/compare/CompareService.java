@@ -163,7 +163,7 @@ public class CompareService {
 		if (ca != null && cb != null) {
 			double d = cb - ca;
 			parts.add(Math.abs(d) < SAME_CORE_K ? "same core"
-					: "core " + Formats.number(Math.abs(unit.differenceFromCelsius(d)), 0) + " " + unit.symbol()
+					: "core " + Formats.number(Math.abs(unit.differenceFromCelsius(d)), 0) + "\u00a0" + unit.symbol()
 							+ (d < 0 ? " cooler" : " hotter"));
 		}
 		Double pa = first.acrylamideMatters() ? first.acrylamide().portionUgPerKg() : null;
