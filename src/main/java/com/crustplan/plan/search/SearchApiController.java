@@ -76,6 +76,7 @@ class SearchApiController {
 			errors.add("target", "give a stage or lightness, a coreTemperatureC, or both");
 		}
 		Double within = SearchReader.minutes("withinMinutes", b.withinMinutes(), null, errors);
+		SearchReader.checkWork(range, within, "withinMinutes", errors);
 		if (!errors.isEmpty()) {
 			return null;
 		}
@@ -194,6 +195,7 @@ class SearchApiController {
 		else if (minutes != null && step > minutes) {
 			errors.add("stepMinutes", "must not be longer than minutes");
 		}
+		SearchReader.checkWork(range, minutes, "minutes", errors);
 		if (!errors.isEmpty()) {
 			return null;
 		}

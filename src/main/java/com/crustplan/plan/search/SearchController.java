@@ -126,6 +126,7 @@ class SearchController {
 			errors.add("target", "choose a colour, a core temperature, or both");
 		}
 		Double within = SearchReader.minutes("withinMinutes", form.withinMinutes(), null, errors);
+		SearchReader.checkWork(r, within, "withinMinutes", errors);
 		for (FieldError e : errors.list()) {
 			String field = FIELDS.get(e.field());
 			if (field != null && !result.hasFieldErrors(field)) {

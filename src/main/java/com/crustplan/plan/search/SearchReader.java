@@ -23,6 +23,7 @@ import com.crustplan.surface.SavedSurface;
 import com.crustplan.surface.SurfaceBody;
 import com.crustplan.surface.SurfaceForm;
 import com.crustplan.surface.SurfaceService;
+import com.crustplan.system.Formats;
 import com.crustplan.system.NotFoundException;
 
 /**
@@ -197,6 +198,24 @@ class SearchReader {
 			return null;
 		}
 		return c;
+	}
+
+	/**
+	 * The work bound: settings × minutes at most
+	 * {@link SettingRange#MAX_SETTING_MINUTES}; refused on {@code field} saying so.
+	 */
+	static void checkWork(SettingRange range, Double minutes, String field, FieldErrors errors) {
+		if (range == null || minutes == null) {
+			return;
+		}
+		int n = range.count();
+		if (n * minutes > SettingRange.MAX_SETTING_MINUTES + 1e-9) {
+			errors.add(field,
+					String.format(Locale.ROOT,
+							"%d settings × %s min is more cooking than one request may simulate (at most %.0f "
+									+ "setting-minutes): use fewer settings or fewer minutes",
+							n, Formats.number(minutes, 1), SettingRange.MAX_SETTING_MINUTES));
+		}
 	}
 
 	/** Minutes from 1 to the engine's 6 h; required unless {@code fallback} is given. */

@@ -25,6 +25,13 @@ public record SettingRange(double fromC, double toC, double stepC, List<Double> 
 	 */
 	public static final int MAX_SETTINGS = 15;
 
+	/**
+	 * Most simulated cooking one search or map runs, settings × minutes: about 6 s of
+	 * work on two cores (calibrated to the demo plans: about 450 simulated minutes a
+	 * second).
+	 */
+	public static final double MAX_SETTING_MINUTES = 2700;
+
 	public SettingRange {
 		steamPcts = steamPcts == null ? List.of() : List.copyOf(steamPcts);
 	}

@@ -71,8 +71,20 @@ public class SettingSearch {
 	/** Regulation (EU) 2017/2158, Annex II Part A: fry cut potato below 175 °C. */
 	static final double FRY_BELOW_C = AcrylamideWarnings.MAX_FRYING_C.value();
 
-	/** How much longer the fastest setting is run to say how long it would take. */
+	/**
+	 * How much longer the fastest setting is run to say how long it would take: three
+	 * times the time asked, at most an hour more (readability; bounds the work).
+	 */
 	static final double LONGER_FACTOR = 3;
+
+	static final double LONGER_MAX_EXTRA_S = 3600;
+
+	/**
+	 * Simulated cooking each alternative may re-run, settings × minutes; above it the
+	 * alternative is re-run at settings spread evenly over the range, the hottest always
+	 * among them (bounds the work of an infeasible search).
+	 */
+	static final double ALTERNATIVE_SETTING_MINUTES = 600;
 
 	private final PlanService planner;
 
@@ -145,8 +157,11 @@ public class SettingSearch {
 	 * series runs on past them.
 	 */
 	static Trial trial(Surface surface, BenchmarkLevel benchmark, HeatSetup setup, SearchGoal goal, double horizonS) {
-		StepsResult r = AcrylamideCook.runSteps(surface, List.of(CookStep.timed(setup, horizonS)), goal.colour(),
-				goal.coreC(), CookSettings.defaults().withHorizonS(horizonS));
+		// with one target the run ends there; with both it goes on until the later one
+		CookStep step = goal.coreC() == null ? CookStep.toColour(setup, goal.colour(), horizonS) : goal.colour() == null
+				? CookStep.toCore(setup, goal.coreC(), horizonS) : CookStep.timed(setup, horizonS);
+		StepsResult r = AcrylamideCook.runSteps(surface, List.of(step), goal.colour(), goal.coreC(),
+				CookSettings.defaults().withHorizonS(horizonS));
 		double colourS = goal.colour() == null ? Double.NaN : r.cook().timeToTargetS();
 		double coreS = goal.coreC() == null ? Double.NaN : r.coreReachedAtS();
 		boolean colourOk = goal.colour() == null || Double.isFinite(colourS);
@@ -257,7 +272,8 @@ public class SettingSearch {
 		List<Trial> inTime = trials.stream().filter(Trial::inTime).toList();
 		if (inTime.isEmpty()) {
 			Trial fastest = trials.stream().max(Comparator.comparingDouble(Trial::temperatureC)).orElseThrow();
-			double longer = Math.min(goal.withinS() * LONGER_FACTOR, CookSettings.MAX_HORIZON_S);
+			double longer = Math.min(Math.min(goal.withinS() * LONGER_FACTOR, goal.withinS() + LONGER_MAX_EXTRA_S),
+					CookSettings.MAX_HORIZON_S);
 			Trial slow = trial(surface, product.benchmark().orElse(null), fastest.setup(), goal, longer);
 			String s = "No setting in the range reaches " + target + " within " + within + ".";
 			if (slow.inTime()) {
@@ -276,6 +292,14 @@ public class SettingSearch {
 						+ Formats.duration(fastest.colourS()) + ", but the core stays below "
 						+ unit.format(goal.coreC()) + " (" + unit.format(fastest.coreAtDoneC())
 						+ " at the end): the heat does not get to the centre in time.");
+			}
+			if (goal.coreC() != null && !(fastest.setup() instanceof RadiantGrill)
+					&& fastest.temperatureC() <= goal.coreC()) {
+				// heat flows from hot to cold: the centre never passes the air, oil or
+				// pan
+				why.add("The centre cannot get hotter than the heat around it: the hottest setting, "
+						+ unit.format(fastest.temperatureC()) + ", is not above the " + unit.format(goal.coreC())
+						+ " asked.");
 			}
 			if (settings.get(0) instanceof RadiantGrill) {
 				why.add("A grill stops where the surface would char, so a hotter element is not always sooner.");
@@ -339,17 +363,42 @@ public class SettingSearch {
 
 	private SearchAnswer.Alternative changed(Surface changed, Product product, List<HeatSetup> settings,
 			SearchGoal goal, String code, String change, boolean acrylamideMatters, TemperatureUnit unit) {
-		List<Trial> again = trials(changed, product, settings, goal);
+		List<HeatSetup> tried = spread(settings, goal);
+		List<Trial> again = trials(changed, product, tried, goal);
 		int best = best(again, goal, acrylamideMatters);
+		String rerun = tried.size() == settings.size() ? "Re-run: "
+				: "Re-run at " + tried.size() + " of the " + settings.size() + " settings: ";
 		if (best < 0) {
 			boolean inTime = again.stream().anyMatch(Trial::inTime);
 			return new SearchAnswer.Alternative(code, change, false, null,
-					inTime ? "Re-run: reaches the target in time, but still above the benchmark level."
-							: "Re-run: still no setting in the range gets there in time.");
+					rerun + (inTime ? "reaches the target in time, but still above the benchmark level."
+							: "still no setting gets there in time."));
 		}
 		Trial t = again.get(best);
-		return new SearchAnswer.Alternative(code, change, true, t, "Re-run: " + label(t.setup(), unit)
-				+ " gets there in " + Formats.duration(t.doneS()) + acrylamideText(t, acrylamideMatters) + ".");
+		return new SearchAnswer.Alternative(code, change, true, t, rerun + label(t.setup(), unit) + " gets there in "
+				+ Formats.duration(t.doneS()) + acrylamideText(t, acrylamideMatters) + ".");
+	}
+
+	/** The settings an alternative is re-run at, within its share of the work. */
+	static List<HeatSetup> spread(List<HeatSetup> settings, SearchGoal goal) {
+		int k = (int) Math.max(1,
+				Math.min(settings.size(), Math.floor(ALTERNATIVE_SETTING_MINUTES / goal.withinMinutes())));
+		if (k >= settings.size()) {
+			return settings;
+		}
+		List<HeatSetup> out = new ArrayList<>();
+		for (int i = 0; i < k; i++) {
+			// from the hottest down, evenly spaced
+			int j = settings.size() - 1 - (int) Math.round(i * (settings.size() - 1) / (double) Math.max(1, k - 1));
+			if (k == 1) {
+				j = settings.size() - 1;
+			}
+			HeatSetup h = settings.get(j);
+			if (!out.contains(h)) {
+				out.add(0, h);
+			}
+		}
+		return out;
 	}
 
 	/**

@@ -295,6 +295,16 @@ class SettingSearchApiTest {
 		}
 
 		@Test
+		void shouldBoundTheSimulatedWorkAndSaySo() throws Exception {
+			isProblem(search("""
+					{ "surface": %s, "heat": { "mode": "oven" }, "range": { "fromC": 150, "toC": 290, "stepC": 10 },
+					  "target": { "stage": "golden" }, "withinMinutes": 360 }""".formatted(CHIPS)), 400)
+				.andExpect(jsonPath("$.errors[0].field").value("withinMinutes"))
+				.andExpect(jsonPath("$.errors[0].message", containsString("15 settings × 360 min")))
+				.andExpect(jsonPath("$.errors[0].message", containsString("2700 setting-minutes")));
+		}
+
+		@Test
 		void shouldRefuseARangeTheWrongWayRoundAndSteamOutsideAnOven() throws Exception {
 			isProblem(search("""
 					{ "surface": %s, "heat": { "mode": "fryer" },
