@@ -330,7 +330,8 @@ public class SettingSearch {
 							+ Formats.number(surface.thicknessMm(), 1) + " mm.",
 					acrylamideMatters, unit));
 		}
-		if (slow && surface.surfaceWaterGPerM2() >= 2) {
+		// water and pH change the colour's pace, not the centre's
+		if (slow && goal.colour() != null && surface.surfaceWaterGPerM2() >= 2) {
 			double drier = surface.surfaceWaterGPerM2() * DRIER_FACTOR;
 			out.add(changed(surface.withSurfaceWaterGPerM2(drier), product, settings, goal, "drier",
 					"Dry the surface: pat dry or drain well, to about " + Formats.number(drier, 0)
@@ -338,7 +339,7 @@ public class SettingSearch {
 							+ ".",
 					acrylamideMatters, unit));
 		}
-		if (slow && !acrylamideMatters) {
+		if (slow && goal.colour() != null && !acrylamideMatters) {
 			double bicarbonate = Math.min(SurfaceField.BICARBONATE.max(),
 					surface.bicarbonateGPerKg() + BICARBONATE_PINCH_G_PER_KG);
 			out.add(changed(surface.withBicarbonateGPerKg(bicarbonate), product, settings, goal, "ph",

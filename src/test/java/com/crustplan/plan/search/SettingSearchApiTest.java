@@ -34,6 +34,7 @@ import com.crustplan.engine.heat.Oven;
 import com.crustplan.engine.heat.PanContact;
 import com.crustplan.plan.PlanReport;
 import com.crustplan.plan.PlanService;
+import com.crustplan.setup.HeatSettings;
 
 import tools.jackson.databind.json.JsonMapper;
 
@@ -121,7 +122,7 @@ class SettingSearchApiTest {
 		return switch ((String) s.get("mode")) {
 			case "fryer" -> new DeepFryer(t);
 			case "oven" -> new Oven(t, true, ((Number) s.get("steamPct")).doubleValue());
-			case "pan" -> new PanContact(t, true, 60, null);
+			case "pan" -> new PanContact(t, HeatSettings.DEFAULT_FAT_FILM, HeatSettings.DEFAULT_FLIP_EVERY_S, null);
 			default -> throw new IllegalArgumentException(s.toString());
 		};
 	}
@@ -229,6 +230,50 @@ class SettingSearchApiTest {
 			.andExpect(jsonPath("$.alternatives[*].code", hasItem("finish-in-oven")))
 			// meat: no acrylamide concern, so a pinch of bicarbonate is offered
 			.andExpect(jsonPath("$.alternatives[*].code", hasItem("ph")));
+	}
+
+	/**
+	 * A 12 mm steak browned with a core of 55 °C within 8 min: every setting re-planned.
+	 */
+	@Test
+	void shouldFindPanSettingsForAColourAndACoreTogether() throws Exception {
+		Map<String, Object> a = answer(search("""
+				{ "surface": { "category": "meat", "thicknessMm": 12 }, "heat": { "mode": "pan" },
+				  "range": { "fromC": 180, "toC": 240, "stepC": 20 },
+				  "target": { "stage": "browned", "coreTemperatureC": 55 }, "withinMinutes": 8 }""")
+			.andExpect(status().isOk())
+			.andExpect(jsonPath("$.found").value(true))
+			.andExpect(jsonPath("$.markedBy").value("gentlest")));
+		replanEverySatisfyingSetting(a, Surface.defaults(FoodCategory.MEAT).withThicknessMm(12),
+				Product.defaultFor(FoodCategory.MEAT), Target.stage("browned"), 55.0, 8, false);
+	}
+
+	/**
+	 * A 20 mm steak cannot reach 55 °C at the centre within 6 min in a pan; one cut size
+	 * down it can, and that answer is re-planned here in one timed step with the cut.
+	 */
+	@Test
+	@SuppressWarnings("unchecked")
+	void shouldOfferAThinnerCutThatReallyGetsThereWhenTheCoreLags() throws Exception {
+		Map<String, Object> a = answer(search("""
+				{ "surface": { "category": "meat", "thicknessMm": 20 }, "heat": { "mode": "pan" },
+				  "range": { "fromC": 200, "toC": 240, "stepC": 20 },
+				  "target": { "stage": "browned", "coreTemperatureC": 55 }, "withinMinutes": 6 }""")
+			.andExpect(status().isOk())
+			.andExpect(jsonPath("$.found").value(false))
+			.andExpect(jsonPath("$.why[1]", containsString("the heat does not get to the centre in time"))));
+		Map<String, Object> thinner = ((List<Map<String, Object>>) a.get("alternatives")).stream()
+			.filter(x -> "thinner".equals(x.get("code")))
+			.findFirst()
+			.orElseThrow();
+		assertThat((Boolean) thinner.get("works")).isTrue();
+		assertThat((String) thinner.get("change")).contains("14 mm instead of 20 mm");
+		HeatSetup h = setup((Map<String, Object>) ((Map<String, Object>) thinner.get("best")).get("setting"));
+		PlanReport r = planner.planSteps(Surface.defaults(FoodCategory.MEAT).withThicknessMm(14),
+				Product.defaultFor(FoodCategory.MEAT), List.of(CookStep.timed(h, 6 * 60)), List.of("pan"),
+				Target.stage("browned"), 55.0, 6);
+		assertThat(r.steps().coreTargetReachedS()).isNotNull().isLessThanOrEqualTo(6 * 60);
+		assertThat(r.timeToTargetS()).isNotNull().isLessThanOrEqualTo(6 * 60);
 	}
 
 	/**
