@@ -98,6 +98,30 @@ class ComparePagesTest {
 			.contains("\"core\"");
 	}
 
+	/**
+	 * In °F the core difference is a difference: 1 K = 1.8 °F (NIST SP 811, §B.9), not a
+	 * converted temperature; the first plan is the reference, so the order turns "sooner"
+	 * into "later".
+	 */
+	@Test
+	void shouldSayTheDifferencesInFahrenheitAndAgainstWhicheverPlanIsFirst() throws Exception {
+		MvcResult r = mvc
+			.perform(get("/plans/compare").param("ids", at180 + "," + at175)
+				.cookie(new jakarta.servlet.http.Cookie("crustplan-units", "F")))
+			.andExpect(status().isOk())
+			.andReturn();
+		Comparison c = (Comparison) r.getModelAndView().getModel().get("comparison");
+		String diff = c.entries().get(1).difference();
+		double dt = c.entries().get(1).report().timeToTargetS() - c.entries().get(0).report().timeToTargetS();
+		assertThat(diff).startsWith(Formats.duration(dt) + " later").doesNotContain("°C");
+		double dc = c.entries().get(1).report().coreTemperatureAtTargetC()
+				- c.entries().get(0).report().coreTemperatureAtTargetC();
+		if (Math.abs(dc) >= CompareService.SAME_CORE_K) {
+			assertThat(diff).contains("core " + Formats.number(Math.abs(dc) * 1.8, 0) + "\u00a0°F");
+		}
+		assertThat(r.getResponse().getContentAsString()).contains("°F").doesNotContain(" °C<");
+	}
+
 	@Test
 	void shouldTakeTheListsCheckboxesAsRepeatedIds() throws Exception {
 		mvc.perform(get("/plans/compare").param("ids", String.valueOf(at180), String.valueOf(at175)))

@@ -101,7 +101,7 @@ class SearchPagesTest {
 	@Test
 	void shouldShowFahrenheitAndReadTheRangeInIt() throws Exception {
 		MvcResult r = mvc
-			.perform(get("/plans/search").cookie(new Cookie("units", "F"))
+			.perform(get("/plans/search").cookie(new Cookie("crustplan-units", "F"))
 				.param("surfaceId", chips())
 				.param("setupId", fryer())
 				.param("targetStage", "golden")
