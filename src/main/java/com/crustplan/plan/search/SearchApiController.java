@@ -170,7 +170,10 @@ class SearchApiController {
 		}
 	}
 
-	/** Longest map unless told: 20 min, a fry, sear or bake of the demo kitchen. */
+	/**
+	 * Longest map unless told: 20 min, longer than most fries and sears (common
+	 * practice).
+	 */
 	static final double DEFAULT_MAP_MINUTES = 20;
 
 	private MapRequest read(MapBody b, Principal user, FieldErrors errors) {

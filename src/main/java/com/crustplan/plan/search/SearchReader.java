@@ -97,8 +97,11 @@ class SearchReader {
 		}
 		Double t = heat.temperatureC();
 		if (t == null) {
+			// a stand-in the range replaces: the range's first setting, or the mode's
+			// usual one
 			HeatMode mode = HeatMode.byKey(heat.mode()).orElse(null);
-			t = range != null && range.fromC() != null ? range.fromC() : mode == HeatMode.FRYER ? 170 : 200;
+			t = range != null && range.fromC() != null ? range.fromC()
+					: SettingRange.usualFor(mode == null ? "" : mode.key()).fromC();
 		}
 		PlanBody.HeatBody filled = new PlanBody.HeatBody(heat.mode(), t, heat.fan(), heat.fatFilm(), heat.steamPct(),
 				heat.relativeHumidityPct(), heat.flipEverySeconds(), heat.grill(), null, heat.distanceMm(), heat.pan(),

@@ -6,10 +6,8 @@ import java.util.Locale;
 import java.util.TreeSet;
 
 import com.crustplan.engine.assessment.HeatSetups;
-import com.crustplan.engine.heat.DeepFryer;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.heat.Oven;
-import com.crustplan.engine.heat.RadiantGrill;
 import com.crustplan.engine.input.InvalidInputException;
 
 /**
@@ -42,10 +40,15 @@ public record SettingRange(double fromC, double toC, double stepC, List<Double> 
 	 * (from memory); pan surfaces and oven air 150–250 °C by 10 (common practice).
 	 */
 	public static SettingRange usualFor(HeatSetup template) {
-		if (template instanceof DeepFryer) {
+		return usualFor(template.mode());
+	}
+
+	/** The same by the mode's key (pan, oven, grill, fryer). */
+	public static SettingRange usualFor(String mode) {
+		if ("fryer".equals(mode)) {
 			return new SettingRange(150, 190, 5, List.of());
 		}
-		if (template instanceof RadiantGrill) {
+		if ("grill".equals(mode)) {
 			return new SettingRange(500, 1000, 50, List.of());
 		}
 		return new SettingRange(150, 250, 10, List.of());

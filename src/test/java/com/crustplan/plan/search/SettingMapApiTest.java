@@ -93,6 +93,17 @@ class SettingMapApiTest {
 			.andExpect(jsonPath("$.errors[0].field").value("range.steamPct"));
 	}
 
+	/** A grill map without a temperature takes the usual element range, 500–1000 °C. */
+	@Test
+	void shouldMapAGrillOverItsUsualElementRange() throws Exception {
+		map("""
+				{ "surface": { "category": "meat", "thicknessMm": 15 }, "heat": { "mode": "grill" },
+				  "minutes": 10, "stepMinutes": 2 }""").andExpect(status().isOk())
+			.andExpect(jsonPath("$.rows.length()").value(11))
+			.andExpect(jsonPath("$.rows[0].setting.temperatureC").value(500.0))
+			.andExpect(jsonPath("$.rows[0].cells[0].zone").doesNotExist());
+	}
+
 	@Test
 	void shouldBoundTheGridAndSaySo() throws Exception {
 		SettingSearchApiTest.isProblem(
