@@ -275,11 +275,62 @@
     });
   }
 
+  // find a setting: offer only the stages of the chosen surface's category, as the plan form does
+  function searchForm() {
+    var form = document.getElementById('search-form');
+    if (!form) { return; }
+    var surface = form.elements.surfaceId;
+    var stage = form.elements.targetStage;
+    function filter() {
+      var opt = surface.options[surface.selectedIndex];
+      var cat = opt ? opt.dataset.category : null;
+      Array.prototype.forEach.call(stage.querySelectorAll('optgroup'), function (g) {
+        var on = !cat || g.dataset.category === cat;
+        g.hidden = !on;
+        g.disabled = !on;
+      });
+      var chosen = stage.options[stage.selectedIndex];
+      if (chosen && chosen.parentNode.disabled) { stage.value = ''; }
+    }
+    surface.addEventListener('change', filter);
+    filter();
+  }
+
+  // compare: one line per plan on each chart, coloured and dashed as the table's keys
+  function compareCharts() {
+    var box = document.getElementById('compare-charts');
+    if (!box || !box.dataset.compare || typeof Chart === 'undefined') { return; }
+    var d = JSON.parse(box.dataset.compare);
+    Chart.defaults.font.family = getComputedStyle(document.body).fontFamily;
+    Chart.defaults.color = INK;
+    var end = 0;
+    d.plans.forEach(function (p) { if (p.timeMin.length) { end = Math.max(end, p.timeMin[p.timeMin.length - 1]); } });
+    function chart(id, key, title) {
+      var sets = d.plans.map(function (p) {
+        var dash = p.dash ? p.dash.split(' ').map(Number) : [];
+        return line(p.label, p.timeMin, p[key], p.colour, { borderDash: dash });
+      });
+      new Chart(document.getElementById(id), {
+        type: 'line',
+        data: { datasets: sets },
+        options: { responsive: true, maintainAspectRatio: false, animation: false,
+          interaction: { mode: 'nearest', axis: 'x', intersect: false },
+          plugins: { legend: { position: 'bottom', labels: { boxWidth: 14, color: INK } } },
+          scales: { x: axis('Time (min)', { type: 'linear', min: 0, max: end || undefined }), y: axis(title + ' (' + d.unit + ')') } }
+      });
+    }
+    chart('chart-compare-surface', 'surface', 'Surface');
+    chart('chart-compare-core', 'core', 'Core');
+    box.dataset.rendered = 'true';
+  }
+
   document.addEventListener('DOMContentLoaded', function () {
     printButtons();
     surfaceForm();
     setupForm();
     planForm();
     charts();
+    searchForm();
+    compareCharts();
   });
 }());

@@ -21,8 +21,8 @@ import com.crustplan.surface.SurfaceBody;
  * see {@code api/Bound}); {@link #toRequest} checks what binding cannot and builds the
  * engine's inputs.
  */
-record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double horizonMinutes, Boolean mitigations,
-		List<StepsReader.StepBody> steps) {
+public record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double horizonMinutes,
+		Boolean mitigations, List<StepsReader.StepBody> steps) {
 
 	/** Longest mode or stage key read. */
 	static final int KEY_MAX = 80;
@@ -34,18 +34,18 @@ record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double ho
 	 * oil is held at its set temperature whatever the load, as before they existed, so
 	 * older requests get the same answer.
 	 */
-	record HeatBody(String mode, Double temperatureC, Boolean fan, Boolean fatFilm, Double steamPct,
+	public record HeatBody(String mode, Double temperatureC, Boolean fan, Boolean fatFilm, Double steamPct,
 			Double relativeHumidityPct, Double flipEverySeconds, String grill, Double heatFluxKwPerM2,
 			Double distanceMm, PanObject pan, FryerObject fryer) {
 	}
 
 	/** A pan's body; each value left out takes the default for a typical line pan. */
-	record PanObject(String material, Double massKg, Double diameterCm, Double powerKw, String control,
+	public record PanObject(String material, Double massKg, Double diameterCm, Double powerKw, String control,
 			Double coverPct) {
 	}
 
 	/** A fryer's body; each value left out takes the default for a typical line fryer. */
-	record FryerObject(Double oilLitres, Double heaterKw, Double loadKg) {
+	public record FryerObject(Double oilLitres, Double heaterKw, Double loadKg) {
 	}
 
 	/**
@@ -61,7 +61,7 @@ record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double ho
 	 * A colour ({@code stage} or {@code lightness}); a plan in steps may also or instead
 	 * aim at a core temperature.
 	 */
-	record TargetBody(String stage, Double lightness, Double coreTemperatureC) {
+	public record TargetBody(String stage, Double lightness, Double coreTemperatureC) {
 	}
 
 	/**
@@ -125,7 +125,7 @@ record PlanBody(SurfaceBody surface, HeatBody heat, TargetBody target, Double ho
 	 * A heat object; its fields' errors are named under {@code at} ("heat",
 	 * "steps[1].heat").
 	 */
-	static HeatSetup heat(HeatBody h, String at, FieldErrors errors) {
+	public static HeatSetup heat(HeatBody h, String at, FieldErrors errors) {
 		String key = errors.text(at + ".mode", h.mode(), KEY_MAX);
 		HeatMode mode = key == null ? null : HeatMode.byKey(key).orElse(null);
 		if (mode == null && !errors.has(at + ".mode")) {

@@ -57,7 +57,12 @@ public record PlanReport(Surface surface, HeatSetup setup, Message targetLabel, 
 	 * anything. Shown for starchy categories and wherever a benchmark level applies.
 	 */
 	public boolean acrylamideMatters() {
-		return STARCHY.contains(category()) || (acrylamide != null && acrylamide.benchmarkUgPerKg() != null);
+		return acrylamideMatters(category(), acrylamide != null && acrylamide.benchmarkUgPerKg() != null);
+	}
+
+	/** The same rule for a food not yet planned (searches, maps). */
+	public static boolean acrylamideMatters(FoodCategory category, boolean hasBenchmark) {
+		return STARCHY.contains(category) || hasBenchmark;
 	}
 
 	private static final Set<FoodCategory> STARCHY = EnumSet.of(FoodCategory.POTATO, FoodCategory.BREAD,

@@ -253,7 +253,11 @@ public class PlanService {
 		double step = Math.max(30, Math.ceil(span / RISK_MAP_COLUMNS / 30) * 30);
 		RiskMap map = RiskMap.compute(surface, product, setup, target, riskMapTemperatures(setup), step,
 				step * Math.ceil(span / step), settings);
-		return RiskMapView.of(map, surface.category().colourPath(), surfaceName, setupName);
+		FoodCategory category = surface.category();
+		String stage = target.stage() != null
+				? category.stage(target.stage()).map(s -> s.label()).orElse(target.stage())
+				: "L* " + Math.round(target.lightness());
+		return RiskMapView.of(map, category.colourPath(), surfaceName, setupName, target.extentFor(category), stage);
 	}
 
 	/** The mode's usual range in even steps, with the setup's own temperature added. */

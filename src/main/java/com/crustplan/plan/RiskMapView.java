@@ -3,6 +3,7 @@ package com.crustplan.plan;
 import java.util.ArrayList;
 import java.util.List;
 
+import com.crustplan.engine.assessment.AcrylamideZone;
 import com.crustplan.engine.assessment.RiskMap;
 import com.crustplan.engine.colour.ColourPath;
 import com.crustplan.engine.message.Message;
@@ -18,11 +19,39 @@ public record RiskMapView(String surfaceName, String setupName, Message targetLa
 	public record Row(double temperatureC, Double targetTimeS, Double targetPortionUgPerKg, List<Cell> cells) {
 	}
 
-	/** {@code zone} is low / elevated / high, or null where no benchmark applies. */
-	public record Cell(String hex, String stageLabel, double portionUgPerKg, String zone, boolean target) {
+	/**
+	 * {@code zone} is low / elevated / high, or null where no benchmark applies. The
+	 * target cell holds the plan's own figures at the moment the target is reached
+	 * ({@code atS}), not those of the column's time; {@code atS} is that column's time
+	 * elsewhere.
+	 */
+	public record Cell(String hex, String stageLabel, double portionUgPerKg, String zone, String zoneLabel,
+			boolean target, double atS) {
+
+		static Cell of(String hex, String stageLabel, double portionUgPerKg, AcrylamideZone z, boolean target,
+				double atS) {
+			String key = key(z);
+			return new Cell(hex, stageLabel, portionUgPerKg, key, key == null ? null : z.label() + ": " + z.meaning(),
+					target, atS);
+		}
+
 	}
 
-	static RiskMapView of(RiskMap map, ColourPath path, String surfaceName, String setupName) {
+	private static String key(AcrylamideZone z) {
+		return switch (z) {
+			case LOW -> "low";
+			case ELEVATED -> "elevated";
+			case HIGH -> "high";
+			default -> null;
+		};
+	}
+
+	/**
+	 * @param targetExtent the target's browning extent on the path
+	 * @param targetStage what the target is called in a cell's label
+	 */
+	static RiskMapView of(RiskMap map, ColourPath path, String surfaceName, String setupName, double targetExtent,
+			String targetStage) {
 		List<Double> times = new ArrayList<>();
 		List<Row> rows = new ArrayList<>();
 		for (RiskMap.Row r : map.rows()) {
@@ -34,14 +63,19 @@ public record RiskMapView(String surfaceName, String setupName, Message targetLa
 				}
 				boolean target = !marked && r.reachesTarget() && c.timeS() >= r.targetTimeS() - 1e-9;
 				marked |= target;
-				String zone = switch (c.zone()) {
-					case LOW -> "low";
-					case ELEVATED -> "elevated";
-					case HIGH -> "high";
-					default -> null;
-				};
-				cells.add(new Cell(path.colourAt(c.browningExtent()).hex(), c.stageLabel(), c.portionUgPerKg(), zone,
-						target));
+				if (target) {
+					// the cell past the target shows the target's own moment: the plan's
+					// time, colour and acrylamide, not the next column's
+					double portion = r.targetPortionUgPerKg();
+					AcrylamideZone z = map.benchmarkOrNull() == null ? AcrylamideZone.NO_BENCHMARK
+							: map.benchmarkOrNull().zoneOf(portion);
+					cells.add(
+							Cell.of(path.colourAt(targetExtent).hex(), targetStage, portion, z, true, r.targetTimeS()));
+				}
+				else {
+					cells.add(Cell.of(path.colourAt(c.browningExtent()).hex(), c.stageLabel(), c.portionUgPerKg(),
+							c.zone(), false, c.timeS()));
+				}
 			}
 			rows.add(new Row(r.temperatureC(), PlanReport.finite(r.targetTimeS()),
 					PlanReport.finite(r.targetPortionUgPerKg()), cells));

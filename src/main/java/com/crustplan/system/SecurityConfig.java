@@ -90,7 +90,7 @@ public class SecurityConfig {
 		http.securityMatcher(new AndRequestMatcher(api, basic))
 			.authorizeHttpRequests(auth -> auth.requestMatchers(HttpMethod.GET, "/api/v1/categories")
 				.permitAll()
-				.requestMatchers(HttpMethod.POST, "/api/v1/plans")
+				.requestMatchers(HttpMethod.POST, "/api/v1/plans", "/api/v1/plans/search", "/api/v1/maps")
 				.permitAll()
 				.requestMatchers(HttpMethod.GET, "/api/**")
 				.hasRole(COOK)
@@ -122,7 +122,9 @@ public class SecurityConfig {
 			.permitAll()
 			.requestMatchers(HttpMethod.GET, "/api/v1/categories")
 			.permitAll()
-			.requestMatchers(HttpMethod.POST, "/api/v1/plans")
+			// searches and maps compute and save nothing, like plans; a saved surface in
+			// them needs a signed-in user (checked where it is read)
+			.requestMatchers(HttpMethod.POST, "/api/v1/plans", "/api/v1/plans/search", "/api/v1/maps")
 			.permitAll()
 			.requestMatchers("/admin/**")
 			.hasRole(ADMIN)
@@ -147,6 +149,8 @@ public class SecurityConfig {
 			// the open plan API keeps no session state, so it carries no CSRF token
 			.csrf(csrf -> csrf.ignoringRequestMatchers(
 					PathPatternRequestMatcher.withDefaults().matcher(HttpMethod.POST, "/api/v1/plans"),
+					PathPatternRequestMatcher.withDefaults().matcher(HttpMethod.POST, "/api/v1/plans/search"),
+					PathPatternRequestMatcher.withDefaults().matcher(HttpMethod.POST, "/api/v1/maps"),
 					PathPatternRequestMatcher.withDefaults().matcher(HttpMethod.GET, "/api/v1/categories")))
 			.exceptionHandling(ex -> ex.defaultAuthenticationEntryPointFor(SecurityConfig::apiUnauthorized, api)
 				.defaultAccessDeniedHandlerFor(SecurityConfig::apiDenied, api)

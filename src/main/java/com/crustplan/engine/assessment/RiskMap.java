@@ -55,10 +55,10 @@ public record RiskMap(FoodCategory category, Product product, String mode, Messa
 
 	/**
 	 * One time at one temperature; {@code stageKey} "unbrowned" before the category's
-	 * first stage.
+	 * first stage; the core temperature for maps that aim at a doneness too.
 	 */
 	public record Cell(double timeS, String stageKey, String stageLabel, double browningExtent, double crustUgPerKg,
-			double portionUgPerKg, AcrylamideZone zone) {
+			double portionUgPerKg, AcrylamideZone zone, double coreTemperatureC) {
 	}
 
 	public static final String UNBROWNED_KEY = "unbrowned";
@@ -120,7 +120,8 @@ public record RiskMap(FoodCategory category, Product product, String mode, Messa
 				double portion = s.portionAcrylamideUgPerKg();
 				cells.add(new Cell(s.timeS(), k < 0 ? UNBROWNED_KEY : stages.get(k).key(),
 						k < 0 ? "Unbrowned" : stages.get(k).label(), s.browningExtent(), s.crustAcrylamideUgPerKg(),
-						portion, benchmark == null ? AcrylamideZone.NO_BENCHMARK : benchmark.zoneOf(portion)));
+						portion, benchmark == null ? AcrylamideZone.NO_BENCHMARK : benchmark.zoneOf(portion),
+						s.coreTemperatureC()));
 			}
 			return new Row(t, r.reached() ? r.timeToTargetS() : Double.NaN,
 					r.reached() ? r.portionAcrylamideAtTargetUgPerKg() : Double.NaN, cells);
