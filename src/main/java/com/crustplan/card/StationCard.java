@@ -11,6 +11,7 @@ import com.crustplan.engine.doneness.DonenessLimits;
 import com.crustplan.engine.doneness.FoodCode;
 import com.crustplan.engine.food.BrowningStage;
 import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.Shape;
 import com.crustplan.engine.heat.Rest;
 import com.crustplan.engine.message.Message;
 import com.crustplan.plan.AcrylamideView;
@@ -29,7 +30,8 @@ import com.crustplan.setup.SetupForm;
  * against the food code, the acrylamide zone where it matters, and which cautions apply.
  * Temperatures in °C; the page shows both scales.
  *
- * @param thicknessMm the surface's thickness as entered
+ * @param thicknessMm the piece's size as entered (thickness, width, edge or diameter)
+ * @param shape the piece's shape, which says what the size is
  * @param coreTargetC a plan in steps' core target, °C (null: none)
  * @param offHeatS when the food leaves the heat for good, s from the start (null: never
  * within the plan)
@@ -47,7 +49,7 @@ import com.crustplan.setup.SetupForm;
  * ({@link PlanReport#acrylamideMatters()}), else null
  */
 public record StationCard(long planId, String planName, String surfaceName, FoodCategory category, double thicknessMm,
-		Message target, Double coreTargetC, boolean reached, Double offHeatS, Double readyS, List<Equipment> equipment,
+		Shape shape,		Message target, Double coreTargetC, boolean reached, Double offHeatS, Double readyS, List<Equipment> equipment,
 		List<Checkpoint> timeline, List<Colour> colours, Double coreAtPullC, boolean stepped, FoodCode code,
 		Double doneAtC, Double dryAboveC, AcrylamideView acrylamide, boolean hotOil, boolean hotPan, boolean hotOven) {
 
@@ -92,7 +94,7 @@ public record StationCard(long planId, String planName, String surfaceName, Food
 		boolean pan = equipment.stream().anyMatch(e -> e.mode().equals(HeatMode.PAN.label()));
 		boolean oven = equipment.stream().anyMatch(e -> e.mode().equals(HeatMode.OVEN.label()));
 		return new StationCard(saved.getId(), saved.getName(), saved.getSurfaceName(), category,
-				report.surface().thicknessMm(), report.targetLabel(),
+				report.surface().thicknessMm(), report.surface().shape(), report.targetLabel(),
 				report.stepped() ? report.steps().coreTargetC() : null, report.reached(), offHeatS(report),
 				readyS(report), equipment, LineTimeline.of(report, inputs.colourTarget()),
 				colours(report, offHeatS(report)), LineTimeline.coreAtPullC(report), report.stepped(), code,

@@ -94,7 +94,7 @@ class StationCardPagesTest {
 			.andExpect(status().isOk())
 			.andExpect(view().name("card/card"))
 			.andExpect(content().string(containsString("Sirloin steak, 30 mm, patted dry")))
-			.andExpect(content().string(containsString("30 mm thick")))
+			.andExpect(content().string(containsString("Thickness 30 mm")))
 			// the setups' dials, each in both scales (°F = °C × 9/5 + 32)
 			.andExpect(content().string(containsString(both(230, 446))))
 			.andExpect(content().string(containsString(both(180, 356))))
