@@ -167,6 +167,15 @@ class MessageCatalogueTest {
 		sample("warning.acrylamide.near-benchmark", q(312, "µg/kg"), q(500, "µg/kg"), Text.of("french fries (chips)"));
 		sample("mitigation.basis.same-colour");
 		sample("mitigation.basis.same-time");
+		sample("mitigation.basis.avoided");
+		sample("plan.change.lower-temperature");
+		sample("plan.change.lighter-target");
+		sample("plan.change.soak");
+		sample("plan.change.blanch");
+		sample("plan.change.asparaginase");
+		sample("plan.change.acid-dip");
+		sample("mitigation.lower-temperature.no-gain-here");
+		sample("mitigation.asparaginase.dough-change", Quantity.of(60, "%"));
 		sample("mitigation.no-baseline.title");
 		sample("mitigation.no-baseline.change");
 		sample("mitigation.no-baseline.reason");
