@@ -35,18 +35,45 @@
     form.elements.category.addEventListener('change', products);
     products();
     var defaults = JSON.parse(form.dataset.defaults || '{}');
-    var fill = document.getElementById('fill-defaults');
-    if (fill) {
-      fill.addEventListener('click', function () {
-        var d = defaults[form.elements.category.value];
-        if (!d) { return; }
-        Object.keys(d).forEach(function (k) {
-          if (k === 'phPlaceholder') { form.elements.ph.value = ''; form.elements.ph.placeholder = 'typical ' + d[k]; return; }
-          if (form.elements[k]) { form.elements[k].value = d[k]; }
-        });
-        remainder();
+    var category = form.elements.category;
+    function fillFrom(key) {
+      var d = defaults[key];
+      if (!d) { return; }
+      Object.keys(d).forEach(function (k) {
+        if (k === 'phPlaceholder') { form.elements.ph.value = ''; form.elements.ph.placeholder = 'typical ' + d[k]; return; }
+        if (form.elements[k]) { form.elements[k].value = d[k]; }
+      });
+      remainder();
+    }
+    // whether the chef typed values of their own: any filled field that differs from the category's defaults
+    function typedOver(key) {
+      var d = defaults[key];
+      if (!d) { return false; }
+      return Object.keys(d).some(function (k) {
+        if (k === 'phPlaceholder') { return form.elements.ph.value.trim() !== ''; }
+        var el = form.elements[k];
+        if (!el || el.value.trim() === '') { return false; }
+        return parseFloat(String(el.value).replace(',', '.')) !== Number(d[k]);
       });
     }
+    var fill = document.getElementById('fill-defaults');
+    if (fill) {
+      // with script the refill happens on the page; without it the button asks the server
+      fill.addEventListener('click', function (e) {
+        e.preventDefault();
+        fillFrom(category.value);
+      });
+    }
+    // a new category refills the composition: at once when the values were the old category's, after asking when typed
+    var previous = category.value;
+    category.addEventListener('change', function () {
+      var label = category.options[category.selectedIndex].text;
+      if (!typedOver(previous) || window.confirm('Switch the composition to the typical values of ' + label
+          + '? Your typed values will be replaced. Cancel keeps them.')) {
+        fillFrom(category.value);
+      }
+      previous = category.value;
+    });
   }
 
   function setupForm() {

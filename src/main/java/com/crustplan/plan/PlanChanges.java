@@ -48,7 +48,8 @@ final class PlanChanges {
 			}
 			if (OF_THE_FOOD.contains(code)) {
 				Surface changed = Mitigations.apply(code, surface.toSurface());
-				surface = SurfaceForm.of(changed, surface.name(), surface.product(), surface.notes());
+				surface = SurfaceForm.of(changed, surface.name(), surface.product(), surface.notes(),
+						surface.pretreatment());
 			}
 			else if (in.stepped()) {
 				throw new InvalidInputException("changes",
@@ -71,9 +72,14 @@ final class PlanChanges {
 				List.copyOf(applied));
 	}
 
-	/** The changes of the food already made: the table leaves them out. */
-	static Set<String> done(List<String> applied) {
-		return Set.copyOf(applied.stream().filter(OF_THE_FOOD::contains).toList());
+	/**
+	 * The changes of the food already made, before cooking or in this plan: the table
+	 * leaves them out.
+	 */
+	static Set<String> done(PlanInputs in) {
+		Set<String> done = new java.util.TreeSet<>(in.surface().toPretreatment().done());
+		in.appliedChanges().stream().filter(OF_THE_FOOD::contains).forEach(done::add);
+		return Set.copyOf(done);
 	}
 
 	/** The change's title as the table words it. */

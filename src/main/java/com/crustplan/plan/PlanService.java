@@ -217,7 +217,7 @@ public class PlanService {
 	public PlanReport plan(PlanInputs in) {
 		if (!in.stepped()) {
 			return plan(in.surface().toSurface(), in.surface().toProduct(), in.setup().toHeatSetup(), in.target(),
-					in.horizonMinutes(), true, PlanChanges.done(in.appliedChanges()));
+					in.horizonMinutes(), true, PlanChanges.done(in));
 		}
 		List<CookStep> steps = new ArrayList<>();
 		List<String> labels = new ArrayList<>();

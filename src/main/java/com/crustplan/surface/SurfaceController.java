@@ -4,6 +4,7 @@ import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.stream.Stream;
 
 import jakarta.validation.Valid;
@@ -11,6 +12,7 @@ import jakarta.validation.Valid;
 import org.springframework.dao.ConcurrencyFailureException;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
+import org.springframework.validation.BeanPropertyBindingResult;
 import org.springframework.validation.BindingResult;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.ModelAttribute;
@@ -20,11 +22,14 @@ import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
+import com.crustplan.engine.assessment.Pretreatment;
 import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.food.SurfaceField;
+import com.crustplan.engine.food.TypicalValues;
+import com.crustplan.engine.message.Message;
 import com.crustplan.system.EditConflict;
 import com.crustplan.system.EngineErrors;
 import com.crustplan.system.FormBinding;
@@ -81,7 +86,12 @@ class SurfaceController {
 	@PostMapping("/new")
 	String create(@Valid @ModelAttribute("form") SurfaceForm form, BindingResult result,
 			@RequestParam(name = "formToken", required = false) String token,
+			@RequestParam(name = "refill", required = false) String refill,
 			@ModelAttribute("units") TemperatureUnit units, Model model, RedirectAttributes redirect) {
+		if (refill != null) {
+			model.addAttribute("formToken", FormTokens.keep(token));
+			return refilled(model, form, "/surfaces/new", "New surface", units);
+		}
 		if (!check(form, result)) {
 			model.addAttribute("formToken", FormTokens.keep(token));
 			return form(model, form, result, "/surfaces/new", "New surface", units);
@@ -115,9 +125,14 @@ class SurfaceController {
 	@PostMapping("/{id}/edit")
 	String update(@PathVariable long id, @Valid @ModelAttribute("form") SurfaceForm form, BindingResult result,
 			@RequestParam(name = "version", required = false) Integer version,
+			@RequestParam(name = "refill", required = false) String refill,
 			@ModelAttribute("units") TemperatureUnit units, Model model, RedirectAttributes redirect) {
 		try {
 			SavedSurface existing = surfaces.get(id);
+			if (refill != null) {
+				model.addAttribute("version", version);
+				return refilled(model, form, "/surfaces/" + id + "/edit", "Edit " + existing.getName(), units);
+			}
 			if (!check(form, result)) {
 				model.addAttribute("version", version);
 				return form(model, form, result, "/surfaces/" + id + "/edit", "Edit " + existing.getName(), units);
@@ -204,6 +219,7 @@ class SurfaceController {
 		try {
 			form.toSurface();
 			form.toProduct();
+			form.toPretreatment();
 			return true;
 		}
 		catch (InvalidInputException e) {
@@ -211,6 +227,22 @@ class SurfaceController {
 					"initialTemperature");
 			return false;
 		}
+	}
+
+	/**
+	 * The form again, nothing saved, with the chosen category's typical values filled in
+	 * (the refill button without script).
+	 */
+	private String refilled(Model model, SurfaceForm form, String action, String title, TemperatureUnit units) {
+		Optional<FoodCategory> c = FoodCategory.byKey(form.category() == null ? "" : form.category());
+		if (c.isEmpty()) {
+			BindingResult errors = new BeanPropertyBindingResult(form, "form");
+			errors.rejectValue("category", "unknown", "choose a category from the list");
+			return form(model, form, errors, action, title, units);
+		}
+		model.addAttribute("message", "Filled in the typical values of " + c.get().label()
+				+ ". Nothing is saved until you press Save surface.");
+		return form(model, form.refilledFrom(c.get()), null, action, title, units);
 	}
 
 	private String form(Model model, SurfaceForm form, BindingResult errors, String action, String title,
@@ -221,6 +253,7 @@ class SurfaceController {
 		model.addAttribute("title", title);
 		model.addAttribute("categories", Arrays.asList(FoodCategory.values()));
 		model.addAttribute("products", Arrays.asList(Product.values()));
+		model.addAttribute("pretreatments", Arrays.asList(Pretreatment.values()));
 		model.addAttribute("derived", derived(shown));
 		model.addAttribute("defaultsJson", json.write(defaultsByKey(units)));
 		model.addAttribute("thicknessRange", InRange.Check.range(SurfaceField.THICKNESS));
@@ -232,19 +265,22 @@ class SurfaceController {
 		Double remainder = null;
 		Double ph = null;
 		Double basePh = null;
+		List<Message> atypical = List.of();
 		try {
 			Surface s = f.toSurface();
 			remainder = s.composition().remainderPct();
 			ph = s.ph();
 			basePh = s.basePh();
+			atypical = TypicalValues.check(s);
 		}
 		catch (InvalidInputException | NullPointerException e) {
 			// an incomplete form has no derived values yet; its field errors say why
 		}
-		return new Derived(remainder, ph, basePh);
+		return new Derived(remainder, ph, basePh, atypical);
 	}
 
-	record Derived(Double remainderPct, Double ph, Double basePh) {
+	/** {@code atypical}: precursors far from the category's typical values. */
+	record Derived(Double remainderPct, Double ph, Double basePh, List<Message> atypical) {
 	}
 
 	/**

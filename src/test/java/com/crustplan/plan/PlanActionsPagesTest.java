@@ -162,18 +162,19 @@ class PlanActionsPagesTest {
 			.andReturn()
 			.getResponse()
 			.getContentAsString();
-		assertThat(page).contains("Plan with this change").contains("changes=BLANCH");
+		assertThat(page).contains("Plan with this change").contains("changes=ASPARAGINASE");
+		// the demo chips are blanched: blanching and soaking are not offered again
+		assertThat(page).doesNotContain("data-code=\"BLANCH\"").doesNotContain("data-code=\"SOAK\"");
 		// times as the headline words them, never decimal minutes
 		assertThat(page).containsPattern("\\d+ min \\d\\d s → \\d+ min \\d\\d s");
 		mvc.perform(get("/plan").param("surfaceId", chips())
 			.param("setupId", fryer())
 			.param("targetStage", "golden")
-			.param("changes", "BLANCH"))
+			.param("changes", "ASPARAGINASE"))
 			.andExpect(status().isOk())
 			.andExpect(content().string(containsString("id=\"applied-changes\"")))
-			.andExpect(content().string(containsString("blanched in hot water")))
-			.andExpect(content().string(not(containsString("data-code=\"BLANCH\""))))
-			.andExpect(content().string(not(containsString("data-code=\"SOAK\""))));
+			.andExpect(content().string(containsString("treated with asparaginase")))
+			.andExpect(content().string(not(containsString("data-code=\"ASPARAGINASE\""))));
 	}
 
 	@Test

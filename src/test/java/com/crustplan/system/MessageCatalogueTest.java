@@ -168,6 +168,12 @@ class MessageCatalogueTest {
 		sample("mitigation.basis.same-colour");
 		sample("mitigation.basis.same-time");
 		sample("mitigation.basis.avoided");
+		sample("surface.asparagine-far-below", Quantity.of(50, "mg/kg", 0), Quantity.of(3000, "mg/kg", 0),
+				Text.of("Potato"));
+		sample("surface.asparagine-far-above", Quantity.of(50000, "mg/kg", 0), Quantity.of(3000, "mg/kg", 0),
+				Text.of("Potato"));
+		sample("surface.sugar-far-below", Quantity.of(0, "%", 2), Quantity.of(0.3, "%", 2), Text.of("Potato"));
+		sample("surface.sugar-far-above", Quantity.of(5, "%", 2), Quantity.of(0.3, "%", 2), Text.of("Potato"));
 		sample("plan.change.lower-temperature");
 		sample("plan.change.lighter-target");
 		sample("plan.change.soak");

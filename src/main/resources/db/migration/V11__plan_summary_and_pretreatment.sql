@@ -4,3 +4,6 @@
 ALTER TABLE saved_plan ADD COLUMN core_at_target_c DOUBLE PRECISION;
 ALTER TABLE saved_plan ADD COLUMN portion_acrylamide_ug_per_kg DOUBLE PRECISION;
 ALTER TABLE saved_plan ADD COLUMN acrylamide_zone VARCHAR(16);
+-- What was done to a surface before cooking (soaked, blanched; empty for nothing): the changes that
+-- lower acrylamide no longer offer it again.
+ALTER TABLE surface ADD COLUMN pretreatment VARCHAR(16);
