@@ -121,6 +121,13 @@
         var match = stage.querySelector('optgroup[data-category="' + cat + '"] option[value="' + current + '"]');
         if (match) { match.selected = true; } else { stage.value = ''; }
       }
+      // no target yet: the category's middle stage, as the server picks it
+      var lightness = form.elements.targetLightness;
+      var core = form.elements.coreTarget;
+      if (cat && stage.value === '' && lightness && lightness.value.trim() === '' && (!core || core.value.trim() === '')) {
+        var options = stage.querySelectorAll('optgroup[data-category="' + cat + '"] option');
+        if (options.length) { options[Math.floor(options.length / 2)].selected = true; }
+      }
     }
     surface.addEventListener('change', filter);
     filter();
@@ -244,7 +251,7 @@
 
     var temperatures = [
       line('Surface (' + d.unit + ')', t, d.surfaceTemperature, '#b42318'),
-      line('Other face (' + d.unit + ')', t, d.otherFaceTemperature, '#b7791f', { borderDash: [6, 4], borderWidth: 2 }),
+      line('Far side, away from the heat (' + d.unit + ')', t, d.otherFaceTemperature, '#b7791f', { borderDash: [6, 4], borderWidth: 2 }),
       line('Core (' + d.unit + ')', t, d.coreTemperature, '#1d4ed8')
     ];
     if (d.heatSourceTemperature) {
@@ -259,16 +266,22 @@
       plugins: plugins
     });
 
+    // one scale: how far the surface has browned, with the category's stage names along it and the target on it
     var target = t.map(function () { return d.targetBrowningPct; });
+    var stages = d.stages || [];
+    var stageAt = {};
+    stages.forEach(function (s) { stageAt[s.pct] = s.label; });
     new Chart(document.getElementById('chart-browning'), {
       type: 'line',
       data: { datasets: [
-        line('Browning (% of full)', t, d.browningPct, '#7a3b12'),
-        line('Target', t, target, INK, { borderDash: [8, 5], borderWidth: 2 }),
-        line('Lightness L*', t, d.lightness, '#6b7280', { yAxisID: 'l', borderWidth: 1.5 })
+        line('Browning', t, d.browningPct, '#7a3b12'),
+        line('Target' + (d.targetLabel ? ': ' + d.targetLabel : ''), t, target, INK, { borderDash: [8, 5], borderWidth: 2 })
       ].concat(marker(d.targetBrowningPct, 'Target reached')) },
-      options: Object.assign({}, common, { scales: { x: x, y: axis('Browning (%)', { min: 0, max: 100 }),
-        l: axis('L*', { position: 'right', min: 0, max: 100, grid: { drawOnChartArea: false } }) } }),
+      options: Object.assign({}, common, { scales: { x: x, y: axis('Stage', { min: 0, max: 100,
+        afterBuildTicks: function (scale) {
+          scale.ticks = [{ value: 0 }].concat(stages.map(function (s) { return { value: s.pct }; }));
+        },
+        ticks: { color: INK, autoSkip: false, callback: function (v) { return v === 0 ? 'Raw' : (stageAt[v] || ''); } } }) } }),
       plugins: plugins
     });
 

@@ -22,6 +22,7 @@ import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 import org.springframework.web.util.UriUtils;
 
+import com.crustplan.engine.food.BrowningStage;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.setup.SavedSetup;
@@ -77,10 +78,38 @@ class PlanController {
 			// the save form then replaces this saved plan instead of adding one
 			model.addAttribute("editing", saved.get(editing));
 		}
+		form = withDefaultStage(form, model);
 		if (form.complete() && !result.hasErrors()) {
-			resolve(form, result).ifPresent(inputs -> compute(inputs, form, result, units, model));
+			PlanForm planned = form;
+			resolve(form, result).ifPresent(inputs -> compute(inputs, planned, result, units, model));
 		}
 		return page(model, form, result);
+	}
+
+	/**
+	 * A one-setup plan with no target yet aims at the category's middle stage (golden for
+	 * chips, browned for a steak): kitchen words first, L* for those who measure it.
+	 */
+	private PlanForm withDefaultStage(PlanForm form, Model model) {
+		boolean noTarget = (form.targetStage() == null || form.targetStage().isBlank())
+				&& form.targetLightness() == null && form.coreTarget() == null;
+		if (!noTarget || form.surfaceId() == null || form.stepped()) {
+			return form;
+		}
+		try {
+			FoodCategory c = FoodCategory.byKey(surfaces.get(form.surfaceId()).getCategory()).orElse(null);
+			if (c == null || c.stages().isEmpty()) {
+				return form;
+			}
+			BrowningStage stage = c.stages().get(c.stages().size() / 2);
+			model.addAttribute("defaultStage", stage.label());
+			return new PlanForm(form.surfaceId(), form.setupId(), stage.key(), null, form.horizonMinutes(), form.name(),
+					form.steps(), null, form.temperatureUnit(), form.changes());
+		}
+		catch (NotFoundException e) {
+			// resolve() says that the surface is gone
+			return form;
+		}
 	}
 
 	@GetMapping("/plan/risk-map")

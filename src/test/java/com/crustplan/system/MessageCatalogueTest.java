@@ -111,7 +111,7 @@ class MessageCatalogueTest {
 		sample("outcome.too-cool");
 		sample("outcome.too-slow");
 		sample("outcome.surface-limit");
-		sample("outcome.explained", m("outcome.too-cool"), c(128), PlainNumber.of(0.42, 2), Duration.minutes(9));
+		sample("outcome.explained", m("outcome.too-cool"), c(128), Quantity.of(42, "%", 0), Duration.minutes(9));
 		sample("target.stage", Text.of("Golden"));
 		sample("target.lightness", PlainNumber.of(62, 0));
 		sample("target.core", c(52));
