@@ -11,6 +11,9 @@ import tools.jackson.core.JacksonException;
 import jakarta.validation.Valid;
 
 import org.springframework.dao.ConcurrencyFailureException;
+import org.springframework.http.HttpStatus;
+import org.springframework.http.MediaType;
+import org.springframework.http.ResponseEntity;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.validation.BindingResult;
@@ -31,6 +34,7 @@ import com.crustplan.setup.SetupService;
 import com.crustplan.surface.SavedSurface;
 import com.crustplan.surface.SurfaceForm;
 import com.crustplan.surface.SurfaceService;
+import com.crustplan.system.Downloads;
 import com.crustplan.system.FormBinding;
 import com.crustplan.system.Formats;
 import com.crustplan.system.StaleEditException;
@@ -311,6 +315,23 @@ class PlanController {
 			model.addAttribute("problem", "The saved inputs of this plan cannot be read. They are kept unchanged.");
 		}
 		return "plan/show";
+	}
+
+	/** The saved plan's series as today's model runs it, as CSV for a spreadsheet. */
+	@GetMapping("/plans/{id}/series.csv")
+	ResponseEntity<String> series(@PathVariable long id, @ModelAttribute("units") TemperatureUnit units) {
+		SavedPlan plan = saved.get(id);
+		PlanReport report;
+		try {
+			report = planner.plan(saved.inputs(plan));
+		}
+		catch (InvalidInputException | JacksonException | NullPointerException e) {
+			// the plan page says why; a file with only a header would look like a result
+			return ResponseEntity.status(HttpStatus.CONFLICT)
+				.contentType(MediaType.TEXT_PLAIN)
+				.body("This plan cannot be run with today's model; open it to see why. Nothing was changed.\n");
+		}
+		return Downloads.csv(SeriesCsv.of(report, units), "plan", plan.getName());
 	}
 
 	@GetMapping("/plans/{id}/delete")

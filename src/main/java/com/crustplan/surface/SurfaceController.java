@@ -1,5 +1,6 @@
 package com.crustplan.surface;
 
+import java.io.IOException;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -7,9 +8,12 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.stream.Stream;
 
+import jakarta.servlet.http.HttpServletResponse;
 import jakarta.validation.Valid;
 
 import org.springframework.dao.ConcurrencyFailureException;
+import org.springframework.http.HttpStatus;
+import org.springframework.http.ResponseEntity;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.validation.BeanPropertyBindingResult;
@@ -20,6 +24,7 @@ import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
+import org.springframework.web.multipart.MultipartFile;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 import com.crustplan.engine.assessment.Pretreatment;
@@ -34,7 +39,9 @@ import com.crustplan.system.EditConflict;
 import com.crustplan.system.EngineErrors;
 import com.crustplan.system.FormBinding;
 import com.crustplan.system.FormTokens;
+import com.crustplan.system.Downloads;
 import com.crustplan.system.JsonText;
+import com.crustplan.system.RecordFile;
 import com.crustplan.system.NotFoundException;
 import com.crustplan.system.StaleEditException;
 import com.crustplan.system.TemperatureUnit;
@@ -60,7 +67,13 @@ class SurfaceController {
 
 	private final FormTokens tokens;
 
-	SurfaceController(SurfaceService surfaces, JsonText json, FormTokens tokens) {
+	/** The name of a surface in its file. */
+	static final String KIND = "surface";
+
+	private final RecordFile files;
+
+	SurfaceController(SurfaceService surfaces, JsonText json, FormTokens tokens, RecordFile files) {
+		this.files = files;
 		this.surfaces = surfaces;
 		this.json = json;
 		this.tokens = tokens;
@@ -70,6 +83,47 @@ class SurfaceController {
 	String list(Model model) {
 		model.addAttribute("surfaces", surfaces.all());
 		return "surface/list";
+	}
+
+	/**
+	 * The surface as a file to keep or move to another kitchen; the list's import reads
+	 * it back.
+	 */
+	@GetMapping("/{id}.json")
+	ResponseEntity<String> export(@PathVariable long id) {
+		SavedSurface s = surfaces.get(id);
+		return Downloads.json(files.write(KIND, SurfaceForm.of(s, TemperatureUnit.CELSIUS)), "surface", s.getName());
+	}
+
+	/**
+	 * A surface file read back as a new surface; a file with any wrong field is refused
+	 * whole, naming the field, and nothing is saved.
+	 */
+	@PostMapping("/import")
+	String importFile(@RequestParam(name = "file", required = false) MultipartFile file, Model model,
+			HttpServletResponse response, RedirectAttributes redirect) throws IOException {
+		SurfaceForm form;
+		try {
+			form = files.read(KIND, file == null ? null : file.getBytes(), SurfaceForm.class);
+			form.toSurface();
+			form.toProduct();
+			form.toPretreatment();
+		}
+		catch (RecordFile.Refused e) {
+			return refused(model, response, e.getMessage());
+		}
+		catch (InvalidInputException e) {
+			return refused(model, response, KIND + "." + e.field() + ": " + e.reason());
+		}
+		SavedSurface saved = surfaces.create(form);
+		redirect.addFlashAttribute("message", "Surface “" + saved.getName() + "” imported.");
+		return "redirect:/surfaces/" + saved.getId();
+	}
+
+	private String refused(Model model, HttpServletResponse response, String reason) {
+		response.setStatus(HttpStatus.UNPROCESSABLE_CONTENT.value());
+		model.addAttribute("importError", "The file was not imported, nothing was changed: " + reason + ".");
+		return list(model);
 	}
 
 	@GetMapping("/new")
