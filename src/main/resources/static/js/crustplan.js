@@ -271,13 +271,16 @@
     var stages = d.stages || [];
     var stageAt = {};
     stages.forEach(function (s) { stageAt[s.pct] = s.label; });
+    // the axis ends a little past the darkest stage or the darkest point reached, whichever is higher
+    var top = Math.max.apply(null, stages.map(function (s) { return s.pct; }).concat(d.browningPct.filter(function (v) { return v !== null; }), [d.targetBrowningPct || 0]));
+    var yMax = Math.min(100, Math.ceil((top + 8) / 10) * 10);
     new Chart(document.getElementById('chart-browning'), {
       type: 'line',
       data: { datasets: [
         line('Browning', t, d.browningPct, '#7a3b12'),
         line('Target' + (d.targetLabel ? ': ' + d.targetLabel : ''), t, target, INK, { borderDash: [8, 5], borderWidth: 2 })
       ].concat(marker(d.targetBrowningPct, 'Target reached')) },
-      options: Object.assign({}, common, { scales: { x: x, y: axis('Stage', { min: 0, max: 100,
+      options: Object.assign({}, common, { scales: { x: x, y: axis('Stage', { min: 0, max: yMax,
         afterBuildTicks: function (scale) {
           scale.ticks = [{ value: 0 }].concat(stages.map(function (s) { return { value: s.pct }; }));
         },

@@ -166,7 +166,7 @@ class PlanActionsPagesTest {
 		// the demo chips are blanched: blanching and soaking are not offered again
 		assertThat(page).doesNotContain("data-code=\"BLANCH\"").doesNotContain("data-code=\"SOAK\"");
 		// times as the headline words them, never decimal minutes
-		assertThat(page).containsPattern("\\d+ min \\d\\d s → \\d+ min \\d\\d s");
+		assertThat(page).containsPattern("\\d+ min \\d\\d s</span> → <span class=\"nowrap\">\\d+ min \\d\\d s");
 		mvc.perform(get("/plan").param("surfaceId", chips())
 			.param("setupId", fryer())
 			.param("targetStage", "golden")
