@@ -468,6 +468,12 @@ class PlanController {
 		if (form.complete() && !form.stepped() && form.coreTarget() == null) {
 			model.addAttribute("planLink", PlanLinks.url(form));
 		}
+		if (form.complete() && !form.appliedChanges().isEmpty()) {
+			model.addAttribute("planLinkWithoutChanges",
+					PlanLinks.url(new PlanForm(form.surfaceId(), form.setupId(), form.targetStage(),
+							form.targetLightness(), form.horizonMinutes(), null, form.steps(), form.coreTarget(),
+							form.temperatureUnit(), null)));
+		}
 		return "plan/plan";
 	}
 

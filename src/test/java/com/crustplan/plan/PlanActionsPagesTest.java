@@ -86,6 +86,9 @@ class PlanActionsPagesTest {
 			.andExpect(content().string(containsString("id=\"rerun\"")))
 			.andExpect(content().string(containsString("/plans/" + id + "/edit")))
 			.andExpect(content().string(containsString("/plans/" + id + "/copy")))
+			.andExpect(content().string(containsString("/plans/" + id + "/series.csv")))
+			// the changes table plans from the saved plan too
+			.andExpect(content().string(containsString("Plan with this change")))
 			// saved just now: today's model gives the same figures
 			.andExpect(content().string(not(containsString("id=\"since-saved\""))));
 	}
@@ -174,6 +177,7 @@ class PlanActionsPagesTest {
 			.andExpect(status().isOk())
 			.andExpect(content().string(containsString("id=\"applied-changes\"")))
 			.andExpect(content().string(containsString("treated with asparaginase")))
+			.andExpect(content().string(containsString("id=\"without-changes\"")))
 			.andExpect(content().string(not(containsString("data-code=\"ASPARAGINASE\""))));
 	}
 
