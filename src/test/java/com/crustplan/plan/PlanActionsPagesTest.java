@@ -199,7 +199,11 @@ class PlanActionsPagesTest {
 		mvc.perform(get("/plan").param("surfaceId", roast).param("setupId", oven).param("targetStage", "golden"))
 			.andExpect(status().isOk())
 			.andExpect(content().string(containsString("Browning advice")))
-			.andExpect(content().string(containsString("No EU benchmark level applies to this product")));
+			.andExpect(content().string(containsString("No EU benchmark level applies to this product")))
+			// roasted, not fried: no frying words, and parboiled potatoes are not offered
+			// blanching
+			.andExpect(content().string(not(containsString("before frying"))))
+			.andExpect(content().string(not(containsString("data-code=\"BLANCH\""))));
 	}
 
 	@Test

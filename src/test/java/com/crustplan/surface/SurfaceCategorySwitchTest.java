@@ -75,7 +75,7 @@ class SurfaceCategorySwitchTest {
 		mvc.perform(get(r.getResponse().getRedirectedUrl()))
 			.andExpect(status().isOk())
 			.andExpect(content().string(containsString("id=\"atypical\"")))
-			.andExpect(content().string(containsString("blanched in hot water</span> before cooking")));
+			.andExpect(content().string(containsString("blanched or parboiled in hot water</span> before cooking")));
 	}
 
 	@Test

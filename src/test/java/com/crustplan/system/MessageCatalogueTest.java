@@ -200,6 +200,9 @@ class MessageCatalogueTest {
 		sample("mitigation.soak.change", q(15, "%"));
 		sample("mitigation.blanch.title");
 		sample("mitigation.blanch.change", c(85), q(40, "%"));
+		sample("mitigation.soak.title-cooking");
+		sample("mitigation.blanch.title-cooking");
+		sample("mitigation.blanch.change-cooking", c(85), q(40, "%"));
 		sample("mitigation.asparaginase.title");
 		sample("mitigation.asparaginase.change", q(60, "%"));
 		sample("mitigation.acid-dip.title");

@@ -119,15 +119,19 @@ public final class Mitigations {
 		list.add(lowerTemperature(b));
 		list.add(lighterTarget(b));
 		boolean blanched = done.contains("BLANCH");
+		// the measures are worded for the frying they were measured for only where the
+		// food is fried
+		boolean fried = setup instanceof DeepFryer;
 		if (potato && !blanched && !done.contains("SOAK")) {
-			list.add(rawChange(b, "SOAK", Message.of("mitigation.soak.title"),
+			list.add(rawChange(b, "SOAK", Message.of(fried ? "mitigation.soak.title" : "mitigation.soak.title-cooking"),
 					Message.of("mitigation.soak.change", Quantity.of(SOAK_REMOVAL.value() * 100, "%")), SOAK_REMOVAL,
 					removePrecursors(surface, SOAK_REMOVAL.value(), SOAK_REMOVAL.value())));
 		}
 		if (potato && !blanched) {
-			list.add(rawChange(b, "BLANCH", Message.of("mitigation.blanch.title"),
-					Message.of("mitigation.blanch.change", Temperature.celsius(BLANCH_WATER_C),
-							Quantity.of(BLANCH_REMOVAL.value() * 100, "%")),
+			list.add(rawChange(b, "BLANCH",
+					Message.of(fried ? "mitigation.blanch.title" : "mitigation.blanch.title-cooking"),
+					Message.of(fried ? "mitigation.blanch.change" : "mitigation.blanch.change-cooking",
+							Temperature.celsius(BLANCH_WATER_C), Quantity.of(BLANCH_REMOVAL.value() * 100, "%")),
 					BLANCH_REMOVAL, removePrecursors(surface, BLANCH_REMOVAL.value(), BLANCH_REMOVAL.value())));
 		}
 		// the enzyme is sold for potato products and doughs, not for vegetables or meat

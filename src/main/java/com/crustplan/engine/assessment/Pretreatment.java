@@ -13,7 +13,7 @@ public enum Pretreatment {
 	NONE("", "nothing", Set.of()), SOAKED("soaked", "soaked in cold water", Set.of("SOAK")),
 	// blanching leaches the same sugars as soaking, and more: a blanched food is not
 	// offered soaking either (Pedreschi et al. 2005 measured the two separately)
-	BLANCHED("blanched", "blanched in hot water", Set.of("SOAK", "BLANCH"));
+	BLANCHED("blanched", "blanched or parboiled in hot water", Set.of("SOAK", "BLANCH"));
 
 	private final String key;
 
