@@ -86,6 +86,24 @@ class SurfaceCategorySwitchTest {
 	}
 
 	@Test
+	void shouldKeepThePretreatmentSentThroughTheApi() throws Exception {
+		String blanched = SurfaceApiTest.WEDGES.replace("\"notes\": \"skin on, blanched\",",
+				"\"notes\": \"skin on\", \"pretreatment\": \"blanched\",");
+		mvc.perform(SurfaceApiTest.save(blanched)
+			.with(org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors
+				.httpBasic("chef", "chef-demo")))
+			.andExpect(status().isCreated())
+			.andExpect(org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath("$.pretreatment")
+				.value("blanched"));
+		mvc.perform(SurfaceApiTest.save(blanched.replace("\"blanched\",", "\"fried\","))
+			.with(org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors
+				.httpBasic("chef", "chef-demo")))
+			.andExpect(status().isBadRequest())
+			.andExpect(org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath("$.errors[0].field")
+				.value("pretreatment"));
+	}
+
+	@Test
 	void shouldRefuseAnUnknownPretreatmentNamingTheField() throws Exception {
 		mvc.perform(SurfacePagesTest.potato("/surfaces/new", "pretreatment", "fried twice"))
 			.andExpect(status().isOk())
