@@ -35,6 +35,15 @@ public enum Pretreatment {
 		return label;
 	}
 
+	/** The short form of the label, for a list to choose from. */
+	public String choice() {
+		return switch (this) {
+			case NONE -> "Nothing";
+			case SOAKED -> "Soaked";
+			case BLANCHED -> "Blanched or parboiled";
+		};
+	}
+
 	/** The codes of the changes this stands for (see {@link Mitigations}). */
 	public Set<String> done() {
 		return done;
