@@ -207,6 +207,17 @@ class PlanActionsPagesTest {
 	}
 
 	@Test
+	@WithMockUser(username = "cook", roles = "COOK")
+	void shouldLeaveEditingAndReRunningToAChef() throws Exception {
+		long id = plans.findAll().get(0).getId();
+		mvc.perform(get("/plans/" + id + "/edit")).andExpect(status().isForbidden());
+		mvc.perform(get("/plans/" + id + "/copy")).andExpect(status().isForbidden());
+		mvc.perform(post("/plans/" + id + "/rerun").with(csrf())).andExpect(status().isForbidden());
+		// the series is for everyone who may see the plan
+		mvc.perform(get("/plans/" + id + "/series.csv")).andExpect(status().isOk());
+	}
+
+	@Test
 	void everyPlannableChangeHasAWayToApplyIt() {
 		assertThat(Mitigations.PLANNABLE).containsAll(List.of("SOAK", "BLANCH", "LOWER_TEMPERATURE"));
 	}
