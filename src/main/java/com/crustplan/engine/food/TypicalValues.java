@@ -6,6 +6,7 @@ import java.util.List;
 import com.crustplan.engine.message.Message;
 import com.crustplan.engine.message.Quantity;
 import com.crustplan.engine.message.Text;
+import com.crustplan.engine.model.Parameter;
 
 /**
  * Whether a surface's acrylamide precursors lie near its category's typical values. The
@@ -22,7 +23,9 @@ public final class TypicalValues {
 	 * storage, flours); beyond 4 a value more likely belongs to another food or is a unit
 	 * slip.
 	 */
-	public static final double FAR_FACTOR = 4;
+	public static final Parameter FAR_FACTOR = Parameter.assumption("F_typ",
+			"factor off the category's typical precursor value that the surface page flags", 4, "–",
+			"assumption: category defaults are mid-range; within a category free asparagine and reducing sugar spread about 3× either way (varieties, storage, flours), so beyond 4× a value more likely belongs to another food or is a unit slip");
 
 	private TypicalValues() {
 	}
@@ -37,21 +40,21 @@ public final class TypicalValues {
 		Text category = Text.of(c.label());
 		double asn = s.asparagineMgPerKg();
 		double asnTypical = c.defaultAsparagineMgPerKg();
-		if (asn > asnTypical * FAR_FACTOR) {
+		if (asn > asnTypical * FAR_FACTOR.value()) {
 			out.add(Message.of("surface.asparagine-far-above", Quantity.of(asn, "mg/kg", 0),
 					Quantity.of(asnTypical, "mg/kg", 0), category));
 		}
-		else if (asn < asnTypical / FAR_FACTOR) {
+		else if (asn < asnTypical / FAR_FACTOR.value()) {
 			out.add(Message.of("surface.asparagine-far-below", Quantity.of(asn, "mg/kg", 0),
 					Quantity.of(asnTypical, "mg/kg", 0), category));
 		}
 		double rs = s.composition().reducingSugarPct();
 		double rsTypical = c.defaultComposition().reducingSugarPct();
-		if (rs > rsTypical * FAR_FACTOR) {
+		if (rs > rsTypical * FAR_FACTOR.value()) {
 			out.add(Message.of("surface.sugar-far-above", Quantity.of(rs, "%", 2), Quantity.of(rsTypical, "%", 2),
 					category));
 		}
-		else if (rs < rsTypical / FAR_FACTOR) {
+		else if (rs < rsTypical / FAR_FACTOR.value()) {
 			out.add(Message.of("surface.sugar-far-below", Quantity.of(rs, "%", 2), Quantity.of(rsTypical, "%", 2),
 					category));
 		}
