@@ -46,19 +46,46 @@
       size();
     }
     var defaults = JSON.parse(form.dataset.defaults || '{}');
-    var fill = document.getElementById('fill-defaults');
-    if (fill) {
-      fill.addEventListener('click', function () {
-        var d = defaults[form.elements.category.value];
-        if (!d) { return; }
-        Object.keys(d).forEach(function (k) {
-          if (k === 'phPlaceholder') { form.elements.ph.value = ''; form.elements.ph.placeholder = 'typical ' + d[k]; return; }
-          if (form.elements[k]) { form.elements[k].value = d[k]; }
-        });
-        if (shape) { shape.dispatchEvent(new Event('change')); }
-        remainder();
+    var category = form.elements.category;
+    function fillFrom(key) {
+      var d = defaults[key];
+      if (!d) { return; }
+      Object.keys(d).forEach(function (k) {
+        if (k === 'phPlaceholder') { form.elements.ph.value = ''; form.elements.ph.placeholder = 'typical ' + d[k]; return; }
+        if (form.elements[k]) { form.elements[k].value = d[k]; }
+      });
+      if (shape) { shape.dispatchEvent(new Event('change')); }
+      remainder();
+    }
+    // whether the chef typed values of their own: any filled field that differs from the category's defaults
+    function typedOver(key) {
+      var d = defaults[key];
+      if (!d) { return false; }
+      return Object.keys(d).some(function (k) {
+        if (k === 'phPlaceholder') { return form.elements.ph.value.trim() !== ''; }
+        var el = form.elements[k];
+        if (!el || el.value.trim() === '') { return false; }
+        return parseFloat(String(el.value).replace(',', '.')) !== Number(d[k]);
       });
     }
+    var fill = document.getElementById('fill-defaults');
+    if (fill) {
+      // with script the refill happens on the page; without it the button asks the server
+      fill.addEventListener('click', function (e) {
+        e.preventDefault();
+        fillFrom(category.value);
+      });
+    }
+    // a new category refills the composition: at once when the values were the old category's, after asking when typed
+    var previous = category.value;
+    category.addEventListener('change', function () {
+      var label = category.options[category.selectedIndex].text;
+      if (!typedOver(previous) || window.confirm('Switch the composition to the typical values of ' + label
+          + '? Your typed values will be replaced. Cancel keeps them.')) {
+        fillFrom(category.value);
+      }
+      previous = category.value;
+    });
   }
 
   function setupForm() {
@@ -105,6 +132,13 @@
       if (cat && current) {
         var match = stage.querySelector('optgroup[data-category="' + cat + '"] option[value="' + current + '"]');
         if (match) { match.selected = true; } else { stage.value = ''; }
+      }
+      // no target yet: the category's middle stage, as the server picks it
+      var lightness = form.elements.targetLightness;
+      var core = form.elements.coreTarget;
+      if (cat && stage.value === '' && lightness && lightness.value.trim() === '' && (!core || core.value.trim() === '')) {
+        var options = stage.querySelectorAll('optgroup[data-category="' + cat + '"] option');
+        if (options.length) { options[Math.floor(options.length / 2)].selected = true; }
       }
     }
     surface.addEventListener('change', filter);
@@ -229,7 +263,7 @@
 
     var temperatures = [
       line('Surface (' + d.unit + ')', t, d.surfaceTemperature, '#b42318'),
-      line('Other face (' + d.unit + ')', t, d.otherFaceTemperature, '#b7791f', { borderDash: [6, 4], borderWidth: 2 }),
+      line('Far side, away from the heat (' + d.unit + ')', t, d.otherFaceTemperature, '#b7791f', { borderDash: [6, 4], borderWidth: 2 }),
       line('Core (' + d.unit + ')', t, d.coreTemperature, '#1d4ed8')
     ];
     if (d.heatSourceTemperature) {
@@ -244,16 +278,25 @@
       plugins: plugins
     });
 
+    // one scale: how far the surface has browned, with the category's stage names along it and the target on it
     var target = t.map(function () { return d.targetBrowningPct; });
+    var stages = d.stages || [];
+    var stageAt = {};
+    stages.forEach(function (s) { stageAt[s.pct] = s.label; });
+    // the axis ends a little past the darkest stage or the darkest point reached, whichever is higher
+    var top = Math.max.apply(null, stages.map(function (s) { return s.pct; }).concat(d.browningPct.filter(function (v) { return v !== null; }), [d.targetBrowningPct || 0]));
+    var yMax = Math.min(100, Math.ceil((top + 8) / 10) * 10);
     new Chart(document.getElementById('chart-browning'), {
       type: 'line',
       data: { datasets: [
-        line('Browning (% of full)', t, d.browningPct, '#7a3b12'),
-        line('Target', t, target, INK, { borderDash: [8, 5], borderWidth: 2 }),
-        line('Lightness L*', t, d.lightness, '#6b7280', { yAxisID: 'l', borderWidth: 1.5 })
+        line('Browning', t, d.browningPct, '#7a3b12'),
+        line('Target' + (d.targetLabel ? ': ' + d.targetLabel : ''), t, target, INK, { borderDash: [8, 5], borderWidth: 2 })
       ].concat(marker(d.targetBrowningPct, 'Target reached')) },
-      options: Object.assign({}, common, { scales: { x: x, y: axis('Browning (%)', { min: 0, max: 100 }),
-        l: axis('L*', { position: 'right', min: 0, max: 100, grid: { drawOnChartArea: false } }) } }),
+      options: Object.assign({}, common, { scales: { x: x, y: axis('Stage', { min: 0, max: yMax,
+        afterBuildTicks: function (scale) {
+          scale.ticks = [{ value: 0 }].concat(stages.map(function (s) { return { value: s.pct }; }));
+        },
+        ticks: { color: INK, autoSkip: false, callback: function (v) { return v === 0 ? 'Raw' : (stageAt[v] || ''); } } }) } }),
       plugins: plugins
     });
 

@@ -7,6 +7,7 @@ import java.util.Map;
 
 import com.crustplan.engine.cook.CookStep;
 import com.crustplan.engine.cook.Sample;
+import com.crustplan.engine.food.BrowningStage;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.system.TemperatureUnit;
 
@@ -56,6 +57,23 @@ final class PlanCharts {
 			d.put("heatSourceLabel", "fryer".equals(report.setup().mode()) ? "Oil" : "Pan");
 		}
 		d.put("targetBrowningPct", round(report.result().targetExtent() * 100, 2));
+		// the category's stages along the browning axis: one scale a cook reads
+		List<Map<String, Object>> stages = new ArrayList<>();
+		var category = report.category();
+		double target = report.result().targetExtent();
+		String targetLabel = report.targetLightness() == null ? null : "L* " + Math.round(report.targetLightness());
+		for (BrowningStage s : category.stages()) {
+			double extent = s.extentOn(category.colourPath());
+			Map<String, Object> st = new LinkedHashMap<>();
+			st.put("label", s.label());
+			st.put("pct", round(extent * 100, 2));
+			stages.add(st);
+			if (Math.abs(extent - target) < 1e-6) {
+				targetLabel = s.label();
+			}
+		}
+		d.put("stages", stages);
+		d.put("targetLabel", targetLabel);
 		d.put("targetTimeMin", report.timeToTargetS() == null ? null : round(report.timeToTargetS() / 60, 3));
 		if (report.stepped()) {
 			d.put("steps", bands(report.steps(), unit));

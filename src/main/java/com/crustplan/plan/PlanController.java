@@ -1,5 +1,6 @@
 package com.crustplan.plan;
 
+import java.nio.charset.StandardCharsets;
 import java.security.Principal;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -10,6 +11,9 @@ import tools.jackson.core.JacksonException;
 import jakarta.validation.Valid;
 
 import org.springframework.dao.ConcurrencyFailureException;
+import org.springframework.http.HttpStatus;
+import org.springframework.http.MediaType;
+import org.springframework.http.ResponseEntity;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.validation.BindingResult;
@@ -19,7 +23,9 @@ import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
+import org.springframework.web.util.UriUtils;
 
+import com.crustplan.engine.food.BrowningStage;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.setup.SavedSetup;
@@ -28,7 +34,10 @@ import com.crustplan.setup.SetupService;
 import com.crustplan.surface.SavedSurface;
 import com.crustplan.surface.SurfaceForm;
 import com.crustplan.surface.SurfaceService;
+import com.crustplan.system.Downloads;
 import com.crustplan.system.FormBinding;
+import com.crustplan.system.Formats;
+import com.crustplan.system.StaleEditException;
 import com.crustplan.system.FormTokens;
 import com.crustplan.system.NotFoundException;
 import com.crustplan.system.TemperatureUnit;
@@ -51,8 +60,11 @@ class PlanController {
 
 	private final FormTokens tokens;
 
+	private final Formats fmt;
+
 	PlanController(PlanService planner, SavedPlanService saved, SurfaceService surfaces, SetupService setups,
-			JsonMapper json, FormTokens tokens) {
+			JsonMapper json, FormTokens tokens, Formats fmt) {
+		this.fmt = fmt;
 		this.tokens = tokens;
 		this.planner = planner;
 		this.saved = saved;
@@ -63,12 +75,45 @@ class PlanController {
 
 	@GetMapping("/plan")
 	String plan(@Valid @ModelAttribute("form") PlanForm bound, BindingResult result,
+			@RequestParam(name = "editing", required = false) Long editing,
 			@ModelAttribute("units") TemperatureUnit units, Model model) {
 		PlanForm form = bound.inUnit(units);
+		if (editing != null) {
+			// the save form then replaces this saved plan instead of adding one
+			model.addAttribute("editing", saved.get(editing));
+		}
+		form = withDefaultStage(form, model);
 		if (form.complete() && !result.hasErrors()) {
-			resolve(form, result).ifPresent(inputs -> compute(inputs, form, result, units, model));
+			PlanForm planned = form;
+			resolve(form, result).ifPresent(inputs -> compute(inputs, planned, result, units, model));
 		}
 		return page(model, form, result);
+	}
+
+	/**
+	 * A one-setup plan with no target yet aims at the category's middle stage (golden for
+	 * chips, browned for a steak): kitchen words first, L* for those who measure it.
+	 */
+	private PlanForm withDefaultStage(PlanForm form, Model model) {
+		boolean noTarget = (form.targetStage() == null || form.targetStage().isBlank())
+				&& form.targetLightness() == null && form.coreTarget() == null;
+		if (!noTarget || form.surfaceId() == null || form.stepped()) {
+			return form;
+		}
+		try {
+			FoodCategory c = FoodCategory.byKey(surfaces.get(form.surfaceId()).getCategory()).orElse(null);
+			if (c == null || c.stages().isEmpty()) {
+				return form;
+			}
+			BrowningStage stage = c.stages().get(c.stages().size() / 2);
+			model.addAttribute("defaultStage", stage.label());
+			return new PlanForm(form.surfaceId(), form.setupId(), stage.key(), null, form.horizonMinutes(), form.name(),
+					form.steps(), null, form.temperatureUnit(), form.changes());
+		}
+		catch (NotFoundException e) {
+			// resolve() says that the surface is gone
+			return form;
+		}
 	}
 
 	@GetMapping("/plan/risk-map")
@@ -104,6 +149,119 @@ class PlanController {
 			RedirectAttributes redirect) {
 		model.addAttribute("formToken", FormTokens.keep(token));
 		PlanForm form = bound.inUnit(units);
+		Optional<PlanToSave> ready = checked(form, result, units, model);
+		if (ready.isEmpty()) {
+			return page(model, form, result);
+		}
+		Resolved r = ready.get().resolved();
+		PlanReport report = ready.get().report();
+		// the form's one-time token: a double submit leads to the one plan it saved
+		FormTokens.Submitted plan = tokens.once("plan", token,
+				() -> saved
+					.save(form.name(), r.surfaceName(), r.setupName(), r.inputs(), report,
+							principal == null ? null : principal.getName())
+					.getId());
+		redirect.addFlashAttribute("message", plan.repeat() ? "This form was sent twice; the plan was saved once."
+				: "Plan “" + form.name().trim() + "” saved.");
+		return "redirect:/plans/" + plan.id();
+	}
+
+	/**
+	 * An edit of a saved plan, made on the plan form opened from it: the same plan with
+	 * the new inputs and figures. A plan deleted or changed by someone else meanwhile is
+	 * not overwritten: the form comes back saying so.
+	 */
+	@PostMapping("/plans/{id}/edit")
+	String update(@PathVariable long id, @Valid @ModelAttribute("form") PlanForm bound, BindingResult result,
+			@RequestParam(name = "version", required = false) Integer version,
+			@ModelAttribute("units") TemperatureUnit units, Model model, RedirectAttributes redirect) {
+		PlanForm form = bound.inUnit(units);
+		SavedPlan existing;
+		try {
+			existing = saved.get(id);
+		}
+		catch (NotFoundException e) {
+			result.reject("gone", "This plan was deleted by someone else meanwhile; save it as a new plan.");
+			return page(model, form, result);
+		}
+		model.addAttribute("editing", existing);
+		Optional<PlanToSave> ready = checked(form, result, units, model);
+		if (ready.isEmpty()) {
+			return page(model, form, result);
+		}
+		Resolved r = ready.get().resolved();
+		try {
+			saved.update(id, version, form.name(), r.surfaceName(), r.setupName(), r.inputs(), ready.get().report());
+		}
+		catch (StaleEditException | ConcurrencyFailureException e) {
+			result.reject("stale", "Someone else changed this plan while you edited it; open it again to see theirs,"
+					+ " or save yours as a new plan.");
+			return page(model, form, result);
+		}
+		redirect.addFlashAttribute("message", "Plan “" + form.name().trim() + "” updated.");
+		return "redirect:/plans/" + id;
+	}
+
+	/** The plan form opened from a saved plan, to change and save it again. */
+	@GetMapping("/plans/{id}/edit")
+	String edit(@PathVariable long id) {
+		SavedPlan plan = saved.get(id);
+		return "redirect:" + PlanLinks.url(formOf(plan, plan.getName())) + "&editing=" + id + "&name="
+				+ UriUtils.encodeQueryParam(plan.getName(), StandardCharsets.UTF_8);
+	}
+
+	/** The plan form filled in from a saved plan, to save as a new one. */
+	@GetMapping("/plans/{id}/copy")
+	String copy(@PathVariable long id) {
+		SavedPlan plan = saved.get(id);
+		String name = "Copy of " + plan.getName();
+		name = name.length() > 120 ? name.substring(0, 120) : name;
+		return "redirect:" + PlanLinks.url(formOf(plan, name)) + "&name="
+				+ UriUtils.encodeQueryParam(name, StandardCharsets.UTF_8);
+	}
+
+	/**
+	 * Runs a saved plan against today's model, keeps today's figures for the list and
+	 * says what changed.
+	 */
+	@PostMapping("/plans/{id}/rerun")
+	String rerun(@PathVariable long id, @ModelAttribute("units") TemperatureUnit units, RedirectAttributes redirect) {
+		SavedPlan plan = saved.get(id);
+		try {
+			PlanReport report = planner.plan(saved.inputs(plan));
+			List<String> changes = PlanRerun.differences(plan, report, units, fmt);
+			saved.summarise(id, report);
+			redirect.addFlashAttribute("message",
+					changes.isEmpty() ? "Re-run with today's model: the same time, core and acrylamide as saved."
+							: "Re-run with today's model: " + String.join("; ", changes) + ".");
+		}
+		catch (InvalidInputException e) {
+			redirect.addFlashAttribute("message", "The model no longer accepts this plan's " + e.field() + ": "
+					+ e.reason() + ". The saved values are kept unchanged.");
+		}
+		catch (JacksonException | NullPointerException e) {
+			redirect.addFlashAttribute("message",
+					"The saved inputs of this plan cannot be read. They are kept unchanged.");
+		}
+		return "redirect:/plans/" + id;
+	}
+
+	private PlanForm formOf(SavedPlan plan, String name) {
+		PlanInputs in;
+		try {
+			in = saved.inputs(plan);
+		}
+		catch (JacksonException e) {
+			throw new NotFoundException("Plan inputs of", plan.getId());
+		}
+		return PlanLinks.formOf(plan, in, surfaces.all(), setups.all(), name);
+	}
+
+	record PlanToSave(Resolved resolved, PlanReport report) {
+	}
+
+	/** The checks a plan passes before it is saved; empty with the reasons bound. */
+	private Optional<PlanToSave> checked(PlanForm form, BindingResult result, TemperatureUnit units, Model model) {
 		// a name refused while binding (a control character) already has its error, and
 		// no target to reject on
 		if ((form.name() == null || form.name().isBlank()) && !result.hasFieldErrors("name")) {
@@ -117,26 +275,14 @@ class PlanController {
 					&& !result.hasFieldErrors("horizonMinutes")) {
 				resolve(form, result).ifPresent(inputs -> compute(inputs, form, result, units, model));
 			}
-			return page(model, form, result);
+			return Optional.empty();
 		}
 		Optional<Resolved> resolved = resolve(form, result);
 		if (resolved.isEmpty()) {
-			return page(model, form, result);
+			return Optional.empty();
 		}
 		PlanReport report = compute(resolved.get(), form, result, units, model);
-		if (report == null) {
-			return page(model, form, result);
-		}
-		Resolved r = resolved.get();
-		// the form's one-time token: a double submit leads to the one plan it saved
-		FormTokens.Submitted plan = tokens.once("plan", token,
-				() -> saved
-					.save(form.name(), r.surfaceName(), r.setupName(), r.inputs(), report,
-							principal == null ? null : principal.getName())
-					.getId());
-		redirect.addFlashAttribute("message", plan.repeat() ? "This form was sent twice; the plan was saved once."
-				: "Plan “" + form.name().trim() + "” saved.");
-		return "redirect:/plans/" + plan.id();
+		return report == null ? Optional.empty() : Optional.of(new PlanToSave(resolved.get(), report));
 	}
 
 	@GetMapping("/plans")
@@ -153,6 +299,12 @@ class PlanController {
 			PlanInputs inputs = saved.inputs(plan);
 			PlanReport report = planner.plan(inputs);
 			addReport(model, report, units);
+			model.addAttribute("applied", inputs.appliedChanges().stream().map(PlanChanges::title).toList());
+			model.addAttribute("sinceSaved", PlanRerun.differences(plan, report, units, fmt));
+			PlanForm again = PlanLinks.formOf(plan, inputs, surfaces.all(), setups.all(), null);
+			if (again.complete() && !inputs.stepped()) {
+				model.addAttribute("planLink", PlanLinks.url(again));
+			}
 		}
 		catch (InvalidInputException e) {
 			// kept as saved; the model's limits changed since, so say which value and why
@@ -163,6 +315,23 @@ class PlanController {
 			model.addAttribute("problem", "The saved inputs of this plan cannot be read. They are kept unchanged.");
 		}
 		return "plan/show";
+	}
+
+	/** The saved plan's series as today's model runs it, as CSV for a spreadsheet. */
+	@GetMapping("/plans/{id}/series.csv")
+	ResponseEntity<String> series(@PathVariable long id, @ModelAttribute("units") TemperatureUnit units) {
+		SavedPlan plan = saved.get(id);
+		PlanReport report;
+		try {
+			report = planner.plan(saved.inputs(plan));
+		}
+		catch (InvalidInputException | JacksonException | NullPointerException e) {
+			// the plan page says why; a file with only a header would look like a result
+			return ResponseEntity.status(HttpStatus.CONFLICT)
+				.contentType(MediaType.TEXT_PLAIN)
+				.body("This plan cannot be run with today's model; open it to see why. Nothing was changed.\n");
+		}
+		return Downloads.csv(SeriesCsv.of(report, units), "plan", plan.getName());
 	}
 
 	@GetMapping("/plans/{id}/delete")
@@ -203,7 +372,8 @@ class PlanController {
 			result.rejectValue("surfaceId", "missing", "that surface no longer exists; choose another");
 		}
 		if (form.stepped()) {
-			return surface == null ? Optional.empty() : PlanStepsForm.resolve(form, surface, setups, result);
+			return surface == null ? Optional.empty()
+					: PlanStepsForm.resolve(form, surface, setups, result).flatMap(r -> withChanges(r, form, result));
 		}
 		try {
 			setup = setups.get(form.setupId());
@@ -217,10 +387,28 @@ class PlanController {
 		PlanInputs inputs = new PlanInputs(SurfaceForm.of(surface, TemperatureUnit.CELSIUS),
 				SetupForm.of(setup, TemperatureUnit.CELSIUS), form.targetStage(), form.targetLightness(),
 				form.horizonOrDefault());
-		if (form.coreTarget() != null) {
-			inputs = PlanStepsForm.toCore(inputs, setup.getName(), form);
+		Optional<Resolved> changed = withChanges(new Resolved(inputs, surface.getName(), setup.getName()), form,
+				result);
+		if (changed.isEmpty() || form.coreTarget() == null) {
+			return changed;
 		}
-		return Optional.of(new Resolved(inputs, surface.getName(), setup.getName()));
+		return Optional.of(new Resolved(PlanStepsForm.toCore(changed.get().inputs(), setup.getName(), form),
+				surface.getName(), setup.getName()));
+	}
+
+	/**
+	 * The plan with its acrylamide changes applied; a change that does not fit is an
+	 * error.
+	 */
+	private static Optional<Resolved> withChanges(Resolved r, PlanForm form, BindingResult result) {
+		try {
+			return Optional
+				.of(new Resolved(PlanChanges.apply(r.inputs(), form.appliedChanges()), r.surfaceName(), r.setupName()));
+		}
+		catch (InvalidInputException e) {
+			result.reject("changes", "Changes: " + e.reason());
+			return Optional.empty();
+		}
 	}
 
 	private PlanReport compute(Resolved r, PlanForm form, BindingResult result, TemperatureUnit units, Model model) {
@@ -232,6 +420,7 @@ class PlanController {
 		try {
 			PlanReport report = planner.plan(inputs);
 			addReport(model, report, units);
+			model.addAttribute("applied", inputs.appliedChanges().stream().map(PlanChanges::title).toList());
 			return report;
 		}
 		catch (InvalidInputException e) {
@@ -276,6 +465,15 @@ class PlanController {
 		model.addAttribute("surfaces", surfaces.all());
 		model.addAttribute("setups", setups.all());
 		model.addAttribute("categories", Arrays.asList(FoodCategory.values()));
+		if (form.complete() && !form.stepped() && form.coreTarget() == null) {
+			model.addAttribute("planLink", PlanLinks.url(form));
+		}
+		if (form.complete() && !form.appliedChanges().isEmpty()) {
+			model.addAttribute("planLinkWithoutChanges",
+					PlanLinks.url(new PlanForm(form.surfaceId(), form.setupId(), form.targetStage(),
+							form.targetLightness(), form.horizonMinutes(), null, form.steps(), form.coreTarget(),
+							form.temperatureUnit(), null)));
+		}
 		return "plan/plan";
 	}
 

@@ -22,7 +22,18 @@ public record PlanForm(Long surfaceId, Long setupId, String targetStage,
 		@DecimalMin(value = "1", message = "must be 1 to 360 minutes") @DecimalMax(value = "360",
 				message = "must be 1 to 360 minutes") Double horizonMinutes,
 		@Size(max = 120, message = "at most 120 characters") String name, List<StepForm> steps, Double coreTarget,
-		String temperatureUnit) {
+		String temperatureUnit, @Size(max = 6, message = "at most 6 changes") List<String> changes) {
+
+	/** The acrylamide changes to apply, without blanks and repeats. */
+	public List<String> appliedChanges() {
+		return changes == null ? List.of()
+				: changes.stream()
+					.filter(Objects::nonNull)
+					.map(String::trim)
+					.filter(c -> !c.isEmpty())
+					.distinct()
+					.toList();
+	}
 
 	public boolean complete() {
 		return surfaceId != null && (setupId != null || stepped());
@@ -51,7 +62,7 @@ public record PlanForm(Long surfaceId, Long setupId, String targetStage,
 			.map(s -> new StepForm(s.setup(), s.minutes(), s.stage(), convert(s.core(), from, page)))
 			.toList();
 		return new PlanForm(surfaceId, setupId, targetStage, targetLightness, horizonMinutes, name, converted,
-				convert(coreTarget, from, page), page.code());
+				convert(coreTarget, from, page), page.code(), changes);
 	}
 
 	private static Double convert(Double t, TemperatureUnit from, TemperatureUnit to) {

@@ -14,7 +14,22 @@ import com.crustplan.surface.SurfaceForm;
  * heated step's); plans saved before steps existed have none and read as one-setup plans.
  */
 public record PlanInputs(SurfaceForm surface, SetupForm setup, String targetStage, Double targetLightness,
-		double horizonMinutes, List<PlanStep> steps, Double coreTargetC) {
+		double horizonMinutes, List<PlanStep> steps, Double coreTargetC, List<String> changes) {
+
+	/**
+	 * A plan without acrylamide changes applied ({@code changes}: the codes of
+	 * {@link com.crustplan.engine.assessment.Mitigations#PLANNABLE} already applied to
+	 * the surface, setup and target above; plans saved before changes existed have none).
+	 */
+	public PlanInputs(SurfaceForm surface, SetupForm setup, String targetStage, Double targetLightness,
+			double horizonMinutes, List<PlanStep> steps, Double coreTargetC) {
+		this(surface, setup, targetStage, targetLightness, horizonMinutes, steps, coreTargetC, null);
+	}
+
+	/** The applied change codes, never null. */
+	public List<String> appliedChanges() {
+		return changes == null ? List.of() : changes;
+	}
 
 	/** A one-setup plan. */
 	public PlanInputs(SurfaceForm surface, SetupForm setup, String targetStage, Double targetLightness,

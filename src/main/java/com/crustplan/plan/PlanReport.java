@@ -65,6 +65,22 @@ public record PlanReport(Surface surface, HeatSetup setup, Message targetLabel, 
 		return STARCHY.contains(category) || hasBenchmark;
 	}
 
+	/**
+	 * Whether the category is a starchy food, where acrylamide forms whatever its
+	 * product.
+	 */
+	public static boolean starchy(FoodCategory c) {
+		return STARCHY.contains(c);
+	}
+
+	/**
+	 * Whether an EU benchmark level applies: the changes are then EU measures, else
+	 * browning advice.
+	 */
+	public boolean hasBenchmark() {
+		return acrylamide != null && acrylamide.benchmarkUgPerKg() != null;
+	}
+
 	private static final Set<FoodCategory> STARCHY = EnumSet.of(FoodCategory.POTATO, FoodCategory.BREAD,
 			FoodCategory.SWEET_DOUGH, FoodCategory.VEGETABLE);
 

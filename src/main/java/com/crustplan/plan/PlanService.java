@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import java.util.Set;
 import java.util.TreeSet;
 
 import org.springframework.stereotype.Service;
@@ -85,8 +86,17 @@ public class PlanService {
 	 */
 	public PlanReport plan(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
 			boolean withMitigations) {
-		return reports.get(new ReportKey(surface, product, setup, target, horizonMinutes, withMitigations),
-				k -> compute(surface, product, setup, target, horizonMinutes, withMitigations));
+		return plan(surface, product, setup, target, horizonMinutes, withMitigations, Set.of());
+	}
+
+	/**
+	 * @param done changes of the food already made (codes such as {@code BLANCH}): not
+	 * offered again
+	 */
+	public PlanReport plan(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
+			boolean withMitigations, Set<String> done) {
+		return reports.get(new ReportKey(surface, product, setup, target, horizonMinutes, withMitigations, done),
+				k -> compute(surface, product, setup, target, horizonMinutes, withMitigations, done));
 	}
 
 	/**
@@ -95,13 +105,13 @@ public class PlanService {
 	 * is not part of the key.
 	 */
 	private record ReportKey(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
-			boolean withMitigations) {
+			boolean withMitigations, Set<String> done) {
 	}
 
 	private final ReportCache<ReportKey, PlanReport> reports = new ReportCache<>(ReportCache.PLAN_REPORTS);
 
 	private PlanReport compute(Surface surface, Product product, HeatSetup setup, Target target, double horizonMinutes,
-			boolean withMitigations) {
+			boolean withMitigations, Set<String> done) {
 		if (!Double.isFinite(horizonMinutes) || horizonMinutes < 1 || horizonMinutes > MAX_HORIZON_MINUTES) {
 			throw new InvalidInputException("horizonMinutes",
 					String.format(Locale.ROOT, "must be from 1 to %.0f minutes", MAX_HORIZON_MINUTES));
@@ -110,10 +120,12 @@ public class PlanService {
 		AcrylamideCook.Inside<CookResult> inside = AcrylamideCook.runInside(surface, setup, target, settings);
 		CookResult result = inside.result();
 		AcrylamideEstimate estimate = AcrylamideEstimate.of(surface, product, setup, target, result);
-		// where no benchmark applies (meat, fish, vegetables) acrylamide is not the
-		// kitchen's concern: no changes offered
-		List<Mitigation> mitigations = withMitigations && product.benchmark().isPresent()
-				? Mitigations.compute(surface, product, setup, target, settings) : List.of();
+		// changes are offered where acrylamide matters: a product with a benchmark, or a
+		// starchy food without one (roast potatoes, vegetables), where they are browning
+		// advice rather than an EU measure; muscle foods get none
+		boolean matters = product.benchmark().isPresent() || PlanReport.starchy(surface.category());
+		List<Mitigation> mitigations = withMitigations && matters
+				? Mitigations.compute(surface, product, setup, target, settings, done) : List.of();
 		List<PlanWarning> warnings = warnings(surface, setup, result);
 		surfaceLimit(setup, result).ifPresent(warnings::add);
 		for (AcrylamideWarning a : estimate.warnings()) {
@@ -210,7 +222,7 @@ public class PlanService {
 	public PlanReport plan(PlanInputs in) {
 		if (!in.stepped()) {
 			return plan(in.surface().toSurface(), in.surface().toProduct(), in.setup().toHeatSetup(), in.target(),
-					in.horizonMinutes(), true);
+					in.horizonMinutes(), true, PlanChanges.done(in));
 		}
 		List<CookStep> steps = new ArrayList<>();
 		List<String> labels = new ArrayList<>();

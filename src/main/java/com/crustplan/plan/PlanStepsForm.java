@@ -82,7 +82,7 @@ final class PlanStepsForm {
 		Double core = form.unit(TemperatureUnit.CELSIUS).toCelsius(form.coreTarget());
 		PlanStep step = new PlanStep(in.setup(), setupName, null, null, null, null, core);
 		return new PlanInputs(in.surface(), in.setup(), in.targetStage(), in.targetLightness(), in.horizonMinutes(),
-				List.of(step), core);
+				List.of(step), core, in.changes());
 	}
 
 	/** "Setup A → Setup B → Rest", cut to the column's length. */

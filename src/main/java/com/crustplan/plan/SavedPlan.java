@@ -10,6 +10,8 @@ import jakarta.persistence.Id;
 import jakarta.persistence.Table;
 import jakarta.persistence.Version;
 
+import com.crustplan.engine.assessment.AcrylamideZone;
+
 /** A plan the kitchen named and kept: its inputs as JSON and a summary for lists. */
 @Entity
 @Table(name = "saved_plan")
@@ -49,6 +51,16 @@ public class SavedPlan {
 	@Column(name = "time_to_target_s")
 	private Double timeToTargetS;
 
+	@Column(name = "core_at_target_c")
+	private Double coreAtTargetC;
+
+	@Column(name = "portion_acrylamide_ug_per_kg")
+	private Double portionAcrylamideUgPerKg;
+
+	/** low, elevated or high; null where no benchmark applies. */
+	@Column(name = "acrylamide_zone", length = 16)
+	private String acrylamideZone;
+
 	@Column(name = "created_by", length = 60)
 	private String createdBy;
 
@@ -69,6 +81,59 @@ public class SavedPlan {
 		this.timeToTargetS = timeToTargetS;
 		this.createdBy = createdBy;
 		this.createdAt = Instant.now();
+	}
+
+	/**
+	 * The figures the list shows, from a run of the model (at saving, or a re-run against
+	 * today's model).
+	 */
+	void summarise(PlanReport report) {
+		this.reached = report.reached();
+		this.timeToTargetS = report.timeToTargetS();
+		this.coreAtTargetC = report.coreTemperatureAtTargetC();
+		AcrylamideView a = report.acrylamideMatters() ? report.acrylamide() : null;
+		this.portionAcrylamideUgPerKg = a == null ? null : a.portionUgPerKg();
+		this.acrylamideZone = a == null ? null : a.zone();
+	}
+
+	/** New inputs from an edit, with their figures. */
+	void replace(String name, String surfaceName, String setupName, String targetLabel, String inputsJson,
+			PlanReport report) {
+		this.name = name;
+		this.surfaceName = surfaceName;
+		this.setupName = setupName;
+		this.targetLabel = targetLabel;
+		this.inputsJson = inputsJson;
+		summarise(report);
+	}
+
+	public Double getCoreAtTargetC() {
+		return coreAtTargetC;
+	}
+
+	public Double getPortionAcrylamideUgPerKg() {
+		return portionAcrylamideUgPerKg;
+	}
+
+	public String getAcrylamideZone() {
+		return acrylamideZone;
+	}
+
+	/** The zone in the words the plan page uses; null where there is none. */
+	public String getZoneLabel() {
+		if (acrylamideZone == null) {
+			return null;
+		}
+		return switch (acrylamideZone) {
+			case "low" -> AcrylamideZone.LOW.label();
+			case "elevated" -> AcrylamideZone.ELEVATED.label();
+			case "high" -> AcrylamideZone.HIGH.label();
+			default -> null;
+		};
+	}
+
+	public int getVersion() {
+		return version;
 	}
 
 	public Long getId() {

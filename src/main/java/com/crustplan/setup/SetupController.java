@@ -1,11 +1,15 @@
 package com.crustplan.setup;
 
+import java.io.IOException;
 import java.util.Arrays;
 import java.util.Locale;
 
+import jakarta.servlet.http.HttpServletResponse;
 import jakarta.validation.Valid;
 
 import org.springframework.dao.ConcurrencyFailureException;
+import org.springframework.http.HttpStatus;
+import org.springframework.http.ResponseEntity;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.validation.BindingResult;
@@ -15,11 +19,14 @@ import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
+import org.springframework.web.multipart.MultipartFile;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.system.EditConflict;
+import com.crustplan.system.Downloads;
 import com.crustplan.system.EngineErrors;
+import com.crustplan.system.RecordFile;
 import com.crustplan.system.FormBinding;
 import com.crustplan.system.FormTokens;
 import com.crustplan.system.NotFoundException;
@@ -34,7 +41,13 @@ class SetupController {
 
 	private final FormTokens tokens;
 
-	SetupController(SetupService setups, FormTokens tokens) {
+	/** The name of a setup in its file. */
+	static final String KIND = "setup";
+
+	private final RecordFile files;
+
+	SetupController(SetupService setups, FormTokens tokens, RecordFile files) {
+		this.files = files;
 		this.setups = setups;
 		this.tokens = tokens;
 	}
@@ -43,6 +56,51 @@ class SetupController {
 	String list(Model model) {
 		model.addAttribute("setups", setups.all());
 		return "setup/list";
+	}
+
+	/** One setup with its settings, and the way to plan with it. */
+	@GetMapping("/{id}")
+	String show(@PathVariable long id, Model model) {
+		model.addAttribute("setup", setups.get(id));
+		return "setup/show";
+	}
+
+	/** The setup as a file; the list's import reads it back. */
+	@GetMapping("/{id}.json")
+	ResponseEntity<String> export(@PathVariable long id) {
+		SavedSetup s = setups.get(id);
+		return Downloads.json(files.write(KIND, SetupForm.of(s, TemperatureUnit.CELSIUS)), "setup", s.getName());
+	}
+
+	/**
+	 * A setup file read back as a new setup; a file with any wrong field is refused
+	 * whole, naming the field, and nothing is saved.
+	 */
+	@PostMapping("/import")
+	String importFile(@RequestParam(name = "file", required = false) MultipartFile file, Model model,
+			HttpServletResponse response, RedirectAttributes redirect) throws IOException {
+		SetupForm form;
+		try {
+			form = files.read(KIND, file == null ? null : file.getBytes(), SetupForm.class);
+			form.toHeatSetup();
+			form.panBody();
+			form.fryerBody();
+		}
+		catch (RecordFile.Refused e) {
+			return refused(model, response, e.getMessage());
+		}
+		catch (InvalidInputException e) {
+			return refused(model, response, KIND + "." + e.field() + ": " + e.reason());
+		}
+		SavedSetup saved = setups.create(form);
+		redirect.addFlashAttribute("message", "Setup “" + saved.getName() + "” imported.");
+		return "redirect:/setups/" + saved.getId();
+	}
+
+	private String refused(Model model, HttpServletResponse response, String reason) {
+		response.setStatus(HttpStatus.UNPROCESSABLE_CONTENT.value());
+		model.addAttribute("importError", "The file was not imported, nothing was changed: " + reason + ".");
+		return list(model);
 	}
 
 	@GetMapping("/new")

@@ -103,6 +103,14 @@ public record SetupForm(
 		return v == null || (v instanceof String t && t.isBlank()) ? fallback : v;
 	}
 
+	/** The same setup set to another temperature, kept in this form's unit. */
+	public SetupForm withTemperatureC(double c) {
+		return new SetupForm(name, mode, round1(unit().fromCelsius(c)), temperatureUnit, fan, fatFilm, steamPct,
+				relativeHumidityPct, flipEverySeconds, grill, heatFluxKwPerM2, distanceMm, notes, panMaterial,
+				panMassKg, panDiameterCm, panPowerKw, panControl, panCoverPct, fryerOilLitres, fryerHeaterKw,
+				fryerLoadKg);
+	}
+
 	public SetupForm withName(String newName) {
 		return new SetupForm(newName, mode, temperature, temperatureUnit, fan, fatFilm, steamPct, relativeHumidityPct,
 				flipEverySeconds, grill, heatFluxKwPerM2, distanceMm, notes, panMaterial, panMassKg, panDiameterCm,

@@ -5,6 +5,7 @@ import jakarta.persistence.Entity;
 import jakarta.persistence.Table;
 
 import com.crustplan.system.KitchenRecord;
+import com.crustplan.engine.assessment.Pretreatment;
 import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Shape;
@@ -64,6 +65,10 @@ public class SavedSurface extends KitchenRecord {
 
 	private Double ph;
 
+	/** soaked or blanched; null for nothing done before cooking. */
+	@Column(length = 16)
+	private String pretreatment;
+
 	@Column(name = "bicarbonate_g_per_kg", nullable = false)
 	private double bicarbonateGPerKg;
 
@@ -87,6 +92,8 @@ public class SavedSurface extends KitchenRecord {
 		rename(f.name(), f.notes());
 		category = FoodCategory.byKey(f.category()).map(FoodCategory::key).orElse(f.category());
 		product = f.product() == null || f.product().isBlank() ? null : f.toProduct().key();
+		String done = f.toPretreatment().key();
+		pretreatment = done.isEmpty() ? null : done;
 		waterPct = f.waterPct();
 		proteinPct = f.proteinPct();
 		fatPct = f.fatPct();
@@ -204,6 +211,15 @@ public class SavedSurface extends KitchenRecord {
 
 	public double getInitialTemperatureC() {
 		return initialTemperatureC;
+	}
+
+	public String getPretreatment() {
+		return pretreatment;
+	}
+
+	/** What was done to it before cooking, in words. */
+	public String getPretreatmentLabel() {
+		return Pretreatment.byKey(pretreatment).orElse(Pretreatment.NONE).label();
 	}
 
 }

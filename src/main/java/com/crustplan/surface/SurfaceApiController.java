@@ -13,6 +13,7 @@ import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RestController;
 
+import com.crustplan.engine.assessment.Pretreatment;
 import com.crustplan.api.Bound;
 import com.crustplan.api.FieldErrors;
 import com.crustplan.api.InvalidRequestException;
@@ -68,7 +69,7 @@ class SurfaceApiController {
 	 * A save body: {@code name} (required), {@code notes} and the {@code surface} as a
 	 * plan takes it.
 	 */
-	record SaveBody(String name, String notes, SurfaceBody surface) {
+	record SaveBody(String name, String notes, SurfaceBody surface, String pretreatment) {
 
 		/** Longest name and notes a saved surface keeps (the columns' lengths). */
 		static final int NAME_MAX = 80;
@@ -85,12 +86,16 @@ class SurfaceApiController {
 				errors.add("name", "is required: give the surface a name");
 			}
 			String text = errors.text("notes", notes, NOTES_MAX);
+			String done = errors.text("pretreatment", pretreatment, 16);
+			if (done != null && Pretreatment.byKey(done).isEmpty()) {
+				errors.add("pretreatment", "must be soaked, blanched or empty for nothing done before cooking");
+			}
 			SurfaceBody given = errors.requireObject("surface", surface);
 			SurfaceBody.Read read = given == null ? null : given.read(errors);
 			if (!errors.isEmpty()) {
 				return null;
 			}
-			return SurfaceForm.of(read.surface(), n, given.productKey(read), text);
+			return SurfaceForm.of(read.surface(), n, given.productKey(read), text, done);
 		}
 
 	}
@@ -105,6 +110,7 @@ class SurfaceApiController {
 			double fatPct, double reducingSugarPct, double sucrosePct, double starchPct, double fibrePct, double ashPct,
 			double asparagineMgPerKg, double surfaceWaterGPerM2, double thicknessMm, @JsonProperty("pH") Double ph,
 			double bicarbonateGPerKg, double acidGPerKg, double initialTemperatureC, String shape, String notes,
+			String pretreatment,
 			Instant updatedAt) {
 
 		static SurfaceJson of(SavedSurface s) {
@@ -112,7 +118,7 @@ class SurfaceApiController {
 					s.getProteinPct(), s.getFatPct(), s.getReducingSugarPct(), s.getSucrosePct(), s.getStarchPct(),
 					s.getFibrePct(), s.getAshPct(), s.getAsparagineMgPerKg(), s.getSurfaceWaterGPerM2(),
 					s.getThicknessMm(), s.getPh(), s.getBicarbonateGPerKg(), s.getAcidGPerKg(),
-					s.getInitialTemperatureC(), s.getShape(), s.getNotes(), s.getUpdatedAt());
+					s.getInitialTemperatureC(), s.getShape(), s.getNotes(), s.getPretreatment(), s.getUpdatedAt());
 		}
 
 	}

@@ -1,16 +1,22 @@
 package com.crustplan.surface;
 
+import java.io.IOException;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.stream.Stream;
 
+import jakarta.servlet.http.HttpServletResponse;
 import jakarta.validation.Valid;
 
 import org.springframework.dao.ConcurrencyFailureException;
+import org.springframework.http.HttpStatus;
+import org.springframework.http.ResponseEntity;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
+import org.springframework.validation.BeanPropertyBindingResult;
 import org.springframework.validation.BindingResult;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.ModelAttribute;
@@ -18,19 +24,25 @@ import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
+import org.springframework.web.multipart.MultipartFile;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
+import com.crustplan.engine.assessment.Pretreatment;
 import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Shape;
 import com.crustplan.engine.input.InvalidInputException;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.food.SurfaceField;
+import com.crustplan.engine.food.TypicalValues;
+import com.crustplan.engine.message.Message;
 import com.crustplan.system.EditConflict;
 import com.crustplan.system.EngineErrors;
 import com.crustplan.system.FormBinding;
 import com.crustplan.system.FormTokens;
+import com.crustplan.system.Downloads;
 import com.crustplan.system.JsonText;
+import com.crustplan.system.RecordFile;
 import com.crustplan.system.NotFoundException;
 import com.crustplan.system.StaleEditException;
 import com.crustplan.system.TemperatureUnit;
@@ -56,7 +68,13 @@ class SurfaceController {
 
 	private final FormTokens tokens;
 
-	SurfaceController(SurfaceService surfaces, JsonText json, FormTokens tokens) {
+	/** The name of a surface in its file. */
+	static final String KIND = "surface";
+
+	private final RecordFile files;
+
+	SurfaceController(SurfaceService surfaces, JsonText json, FormTokens tokens, RecordFile files) {
+		this.files = files;
 		this.surfaces = surfaces;
 		this.json = json;
 		this.tokens = tokens;
@@ -66,6 +84,47 @@ class SurfaceController {
 	String list(Model model) {
 		model.addAttribute("surfaces", surfaces.all());
 		return "surface/list";
+	}
+
+	/**
+	 * The surface as a file to keep or move to another kitchen; the list's import reads
+	 * it back.
+	 */
+	@GetMapping("/{id}.json")
+	ResponseEntity<String> export(@PathVariable long id) {
+		SavedSurface s = surfaces.get(id);
+		return Downloads.json(files.write(KIND, SurfaceForm.of(s, TemperatureUnit.CELSIUS)), "surface", s.getName());
+	}
+
+	/**
+	 * A surface file read back as a new surface; a file with any wrong field is refused
+	 * whole, naming the field, and nothing is saved.
+	 */
+	@PostMapping("/import")
+	String importFile(@RequestParam(name = "file", required = false) MultipartFile file, Model model,
+			HttpServletResponse response, RedirectAttributes redirect) throws IOException {
+		SurfaceForm form;
+		try {
+			form = files.read(KIND, file == null ? null : file.getBytes(), SurfaceForm.class);
+			form.toSurface();
+			form.toProduct();
+			form.toPretreatment();
+		}
+		catch (RecordFile.Refused e) {
+			return refused(model, response, e.getMessage());
+		}
+		catch (InvalidInputException e) {
+			return refused(model, response, KIND + "." + e.field() + ": " + e.reason());
+		}
+		SavedSurface saved = surfaces.create(form);
+		redirect.addFlashAttribute("message", "Surface “" + saved.getName() + "” imported.");
+		return "redirect:/surfaces/" + saved.getId();
+	}
+
+	private String refused(Model model, HttpServletResponse response, String reason) {
+		response.setStatus(HttpStatus.UNPROCESSABLE_CONTENT.value());
+		model.addAttribute("importError", "The file was not imported, nothing was changed: " + reason + ".");
+		return list(model);
 	}
 
 	@GetMapping("/new")
@@ -82,7 +141,12 @@ class SurfaceController {
 	@PostMapping("/new")
 	String create(@Valid @ModelAttribute("form") SurfaceForm form, BindingResult result,
 			@RequestParam(name = "formToken", required = false) String token,
+			@RequestParam(name = "refill", required = false) String refill,
 			@ModelAttribute("units") TemperatureUnit units, Model model, RedirectAttributes redirect) {
+		if (refill != null) {
+			model.addAttribute("formToken", FormTokens.keep(token));
+			return refilled(model, form, "/surfaces/new", "New surface", units);
+		}
 		if (!check(form, result)) {
 			model.addAttribute("formToken", FormTokens.keep(token));
 			return form(model, form, result, "/surfaces/new", "New surface", units);
@@ -116,9 +180,14 @@ class SurfaceController {
 	@PostMapping("/{id}/edit")
 	String update(@PathVariable long id, @Valid @ModelAttribute("form") SurfaceForm form, BindingResult result,
 			@RequestParam(name = "version", required = false) Integer version,
+			@RequestParam(name = "refill", required = false) String refill,
 			@ModelAttribute("units") TemperatureUnit units, Model model, RedirectAttributes redirect) {
 		try {
 			SavedSurface existing = surfaces.get(id);
+			if (refill != null) {
+				model.addAttribute("version", version);
+				return refilled(model, form, "/surfaces/" + id + "/edit", "Edit " + existing.getName(), units);
+			}
 			if (!check(form, result)) {
 				model.addAttribute("version", version);
 				return form(model, form, result, "/surfaces/" + id + "/edit", "Edit " + existing.getName(), units);
@@ -205,6 +274,7 @@ class SurfaceController {
 		try {
 			form.toSurface();
 			form.toProduct();
+			form.toPretreatment();
 			return true;
 		}
 		catch (InvalidInputException e) {
@@ -212,6 +282,22 @@ class SurfaceController {
 					"initialTemperature");
 			return false;
 		}
+	}
+
+	/**
+	 * The form again, nothing saved, with the chosen category's typical values filled in
+	 * (the refill button without script).
+	 */
+	private String refilled(Model model, SurfaceForm form, String action, String title, TemperatureUnit units) {
+		Optional<FoodCategory> c = FoodCategory.byKey(form.category() == null ? "" : form.category());
+		if (c.isEmpty()) {
+			BindingResult errors = new BeanPropertyBindingResult(form, "form");
+			errors.rejectValue("category", "unknown", "choose a category from the list");
+			return form(model, form, errors, action, title, units);
+		}
+		model.addAttribute("message", "Filled in the typical values of " + c.get().label()
+				+ ". Nothing is saved until you press Save surface.");
+		return form(model, form.refilledFrom(c.get()), null, action, title, units);
 	}
 
 	private String form(Model model, SurfaceForm form, BindingResult errors, String action, String title,
@@ -223,6 +309,7 @@ class SurfaceController {
 		model.addAttribute("categories", Arrays.asList(FoodCategory.values()));
 		model.addAttribute("products", Arrays.asList(Product.values()));
 		model.addAttribute("shapes", Arrays.asList(Shape.values()));
+		model.addAttribute("pretreatments", Arrays.asList(Pretreatment.values()));
 		model.addAttribute("derived", derived(shown));
 		model.addAttribute("defaultsJson", json.write(defaultsByKey(units)));
 		model.addAttribute("thicknessRange", InRange.Check.range(SurfaceField.THICKNESS));
@@ -234,19 +321,22 @@ class SurfaceController {
 		Double remainder = null;
 		Double ph = null;
 		Double basePh = null;
+		List<Message> atypical = List.of();
 		try {
 			Surface s = f.toSurface();
 			remainder = s.composition().remainderPct();
 			ph = s.ph();
 			basePh = s.basePh();
+			atypical = TypicalValues.check(s);
 		}
 		catch (InvalidInputException | NullPointerException e) {
 			// an incomplete form has no derived values yet; its field errors say why
 		}
-		return new Derived(remainder, ph, basePh);
+		return new Derived(remainder, ph, basePh, atypical);
 	}
 
-	record Derived(Double remainderPct, Double ph, Double basePh) {
+	/** {@code atypical}: precursors far from the category's typical values. */
+	record Derived(Double remainderPct, Double ph, Double basePh, List<Message> atypical) {
 	}
 
 	/**

@@ -4,6 +4,7 @@ import jakarta.validation.constraints.NotBlank;
 import jakarta.validation.constraints.NotNull;
 import jakarta.validation.constraints.Size;
 
+import com.crustplan.engine.assessment.Pretreatment;
 import com.crustplan.engine.assessment.Product;
 import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
@@ -39,7 +40,19 @@ public record SurfaceForm(
 		@NotNull(message = "required (0 for none)") @InRange(SurfaceField.ACID) Double acidGPerKg,
 		@NotNull(message = "required") Double initialTemperature, String temperatureUnit,
 		@Size(max = 1000, message = "at most 1000 characters") String notes,
-		@Size(max = 16, message = "choose from the list") String shape) {
+		@Size(max = 16, message = "choose from the list") String shape,
+		@Size(max = 16, message = "choose from the list") String pretreatment) {
+
+	/** A surface with nothing done to it before cooking, in its category's usual shape. */
+	public SurfaceForm(String name, String category, String product, Double waterPct, Double proteinPct, Double fatPct,
+			Double reducingSugarPct, Double sucrosePct, Double starchPct, Double fibrePct, Double ashPct,
+			Double asparagineMgPerKg, Double surfaceWaterGPerM2, Double thicknessMm, Double ph,
+			Double bicarbonateGPerKg, Double acidGPerKg, Double initialTemperature, String temperatureUnit,
+			String notes) {
+		this(name, category, product, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct, starchPct, fibrePct,
+				ashPct, asparagineMgPerKg, surfaceWaterGPerM2, thicknessMm, ph, bicarbonateGPerKg, acidGPerKg,
+				initialTemperature, temperatureUnit, notes, null, null);
+	}
 
 	/** A new form with the category's defaults, in the category's usual shape. */
 	public static SurfaceForm defaults(FoodCategory c, String name, TemperatureUnit unit) {
@@ -51,11 +64,18 @@ public record SurfaceForm(
 	 * saves as the form would.
 	 */
 	public static SurfaceForm of(Surface s, String name, String product, String notes) {
+		return of(s, name, product, notes, null);
+	}
+
+	/**
+	 * As {@link #of(Surface, String, String, String)}, with what was done to it before.
+	 */
+	public static SurfaceForm of(Surface s, String name, String product, String notes, String pretreatment) {
 		Composition k = s.composition();
 		return new SurfaceForm(name, s.category().key(), product, k.waterPct(), k.proteinPct(), k.fatPct(),
 				k.reducingSugarPct(), k.sucrosePct(), k.starchPct(), k.fibrePct(), k.ashPct(), s.asparagineMgPerKg(),
 				s.surfaceWaterGPerM2(), s.thicknessMm(), s.phOverride(), s.bicarbonateGPerKg(), s.acidGPerKg(),
-				s.initialTemperatureC(), TemperatureUnit.CELSIUS.code(), notes, s.shape().key());
+				s.initialTemperatureC(), TemperatureUnit.CELSIUS.code(), notes, s.shape().key(), pretreatment);
 	}
 
 	public static SurfaceForm of(SavedSurface s, TemperatureUnit unit) {
@@ -63,7 +83,23 @@ public record SurfaceForm(
 				s.getFatPct(), s.getReducingSugarPct(), s.getSucrosePct(), s.getStarchPct(), s.getFibrePct(),
 				s.getAshPct(), s.getAsparagineMgPerKg(), s.getSurfaceWaterGPerM2(), s.getThicknessMm(), s.getPh(),
 				s.getBicarbonateGPerKg(), s.getAcidGPerKg(), round1(unit.fromCelsius(s.getInitialTemperatureC())),
-				unit.code(), s.getNotes(), s.getShape());
+				unit.code(), s.getNotes(), s.getShape(), s.getPretreatment());
+	}
+
+	/**
+	 * The form with the composition, shape and size, asparagine, pH and starting
+	 * temperature of {@code c}'s defaults (what the form's refill button fills in), the
+	 * name, notes and what was done before cooking kept; a product of another category
+	 * falls back to the category's usual one.
+	 */
+	public SurfaceForm refilledFrom(FoodCategory c) {
+		SurfaceForm d = defaults(c, name, unit());
+		boolean productFits = product == null || product.isBlank()
+				|| Product.of(c).stream().anyMatch(p -> p.key().equalsIgnoreCase(product.trim()));
+		return new SurfaceForm(name, c.key(), productFits ? product : "", d.waterPct, d.proteinPct, d.fatPct,
+				d.reducingSugarPct, d.sucrosePct, d.starchPct, d.fibrePct, d.ashPct, d.asparagineMgPerKg,
+				d.surfaceWaterGPerM2, d.thicknessMm, null, bicarbonateGPerKg, acidGPerKg, d.initialTemperature,
+				d.temperatureUnit, notes, d.shape, pretreatment);
 	}
 
 	public SurfaceForm withName(String newName) {
@@ -86,7 +122,7 @@ public record SurfaceForm(
 	private SurfaceForm with(String newName, Double temperature, String unitCode) {
 		return new SurfaceForm(newName, category, product, waterPct, proteinPct, fatPct, reducingSugarPct, sucrosePct,
 				starchPct, fibrePct, ashPct, asparagineMgPerKg, surfaceWaterGPerM2, thicknessMm, ph, bicarbonateGPerKg,
-				acidGPerKg, temperature, unitCode, notes, shape);
+				acidGPerKg, temperature, unitCode, notes, shape, pretreatment);
 	}
 
 	public TemperatureUnit unit() {
@@ -142,6 +178,15 @@ public record SurfaceForm(
 		FoodCategory c = FoodCategory.byKey(category == null ? "" : category)
 			.orElseThrow(() -> new InvalidInputException("category", "is not a category Crustplan knows"));
 		return Product.forSurface(c, product);
+	}
+
+	/**
+	 * What was done to the food before cooking (none, soaked, blanched). Throws
+	 * {@link InvalidInputException} (field {@code pretreatment}) for another value.
+	 */
+	public Pretreatment toPretreatment() {
+		return Pretreatment.byKey(pretreatment)
+			.orElseThrow(() -> new InvalidInputException("pretreatment", "choose nothing, soaked or blanched"));
 	}
 
 	/** The form field an engine field name belongs to; null for checks across fields. */

@@ -131,7 +131,7 @@ public class SecurityConfig {
 			// the pages that lead to a change are a chef's, like the change itself
 			.requestMatchers(HttpMethod.GET, "/surfaces/new", "/surfaces/*/edit", "/surfaces/*/copy",
 					"/surfaces/*/delete", "/setups/new", "/setups/*/edit", "/setups/*/copy", "/setups/*/delete",
-					"/plans/*/delete")
+					"/plans/*/delete", "/plans/*/edit", "/plans/*/copy")
 			.hasRole(CHEF)
 			// recording test cooks is the one write a cook may do
 			.requestMatchers(HttpMethod.POST, "/test-cooks/**")

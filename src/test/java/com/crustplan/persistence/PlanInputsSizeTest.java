@@ -45,7 +45,8 @@ class PlanInputsSizeTest {
 				surface.proteinPct(), surface.fatPct(), surface.reducingSugarPct(), surface.sucrosePct(),
 				surface.starchPct(), surface.fibrePct(), surface.ashPct(), surface.asparagineMgPerKg(),
 				surface.surfaceWaterGPerM2(), surface.thicknessMm(), surface.ph(), surface.bicarbonateGPerKg(),
-				surface.acidGPerKg(), surface.initialTemperature(), surface.temperatureUnit(), notes, surface.shape());
+				surface.acidGPerKg(), surface.initialTemperature(), surface.temperatureUnit(), notes, surface.shape(),
+				surface.pretreatment());
 		SetupForm setup = new SetupForm(name, "fryer", 175.0, "C", false, false, null, null, null, null, null, null,
 				notes);
 		PlanInputs inputs = new PlanInputs(surface, setup, "golden", null, 10);

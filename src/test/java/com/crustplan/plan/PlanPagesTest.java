@@ -258,9 +258,12 @@ class PlanPagesTest {
 		}
 
 		@Test
-		void shouldRejectANoTargetAndABlankPlanName() throws Exception {
+		void shouldAimANoTargetPlanAtTheCategorysMiddleStageAndRejectABlankPlanName() throws Exception {
+			// kitchen words first: no target given means the category's usual stage
+			// (golden for chips), not an L* to enter
 			mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()))
-				.andExpect(model().attributeHasFieldErrors("form", "targetLightness"));
+				.andExpect(model().attribute("defaultStage", "Golden"))
+				.andExpect(model().attributeExists("report"));
 			mvc.perform(post("/plans").with(csrf())
 				.param("surfaceId", chips())
 				.param("setupId", fryer())

@@ -58,7 +58,7 @@ class SurfaceFormRangesTest {
 				v.getOrDefault("thicknessMm", f.thicknessMm()), v.getOrDefault("ph", f.ph()),
 				v.getOrDefault("bicarbonateGPerKg", f.bicarbonateGPerKg()),
 				v.getOrDefault("acidGPerKg", f.acidGPerKg()), f.initialTemperature(), f.temperatureUnit(), f.notes(),
-				f.shape());
+				f.shape(), f.pretreatment());
 	}
 
 	static Set<String> messages(SurfaceForm f, String field) {

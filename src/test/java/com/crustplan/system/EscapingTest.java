@@ -35,7 +35,7 @@ class EscapingTest {
 		f = new SurfaceForm(f.name(), f.category(), f.product(), f.waterPct(), f.proteinPct(), f.fatPct(),
 				f.reducingSugarPct(), f.sucrosePct(), f.starchPct(), f.fibrePct(), f.ashPct(), f.asparagineMgPerKg(),
 				f.surfaceWaterGPerM2(), f.thicknessMm(), f.ph(), f.bicarbonateGPerKg(), f.acidGPerKg(),
-				f.initialTemperature(), f.temperatureUnit(), "note " + SCRIPT, f.shape());
+				f.initialTemperature(), f.temperatureUnit(), "note " + SCRIPT, f.shape(), f.pretreatment());
 		long id = surfaces.create(f).getId();
 		for (String page : new String[] { "/surfaces", "/surfaces/" + id, "/surfaces/" + id + "/edit",
 				"/surfaces/" + id + "/delete", "/plan" }) {

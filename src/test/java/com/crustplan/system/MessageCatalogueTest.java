@@ -111,7 +111,7 @@ class MessageCatalogueTest {
 		sample("outcome.too-cool");
 		sample("outcome.too-slow");
 		sample("outcome.surface-limit");
-		sample("outcome.explained", m("outcome.too-cool"), c(128), PlainNumber.of(0.42, 2), Duration.minutes(9));
+		sample("outcome.explained", m("outcome.too-cool"), c(128), Quantity.of(42, "%", 0), Duration.minutes(9));
 		sample("target.stage", Text.of("Golden"));
 		sample("target.lightness", PlainNumber.of(62, 0));
 		sample("target.core", c(52));
@@ -171,6 +171,21 @@ class MessageCatalogueTest {
 		sample("warning.acrylamide.near-benchmark", q(312, "µg/kg"), q(500, "µg/kg"), Text.of("french fries (chips)"));
 		sample("mitigation.basis.same-colour");
 		sample("mitigation.basis.same-time");
+		sample("mitigation.basis.avoided");
+		sample("surface.asparagine-far-below", Quantity.of(50, "mg/kg", 0), Quantity.of(3000, "mg/kg", 0),
+				Text.of("Potato"));
+		sample("surface.asparagine-far-above", Quantity.of(50000, "mg/kg", 0), Quantity.of(3000, "mg/kg", 0),
+				Text.of("Potato"));
+		sample("surface.sugar-far-below", Quantity.of(0, "%", 2), Quantity.of(0.3, "%", 2), Text.of("Potato"));
+		sample("surface.sugar-far-above", Quantity.of(5, "%", 2), Quantity.of(0.3, "%", 2), Text.of("Potato"));
+		sample("plan.change.lower-temperature");
+		sample("plan.change.lighter-target");
+		sample("plan.change.soak");
+		sample("plan.change.blanch");
+		sample("plan.change.asparaginase");
+		sample("plan.change.acid-dip");
+		sample("mitigation.lower-temperature.no-gain-here");
+		sample("mitigation.asparaginase.dough-change", Quantity.of(60, "%"));
 		sample("mitigation.no-baseline.title");
 		sample("mitigation.no-baseline.change");
 		sample("mitigation.no-baseline.reason");
@@ -189,6 +204,9 @@ class MessageCatalogueTest {
 		sample("mitigation.soak.change", q(15, "%"));
 		sample("mitigation.blanch.title");
 		sample("mitigation.blanch.change", c(85), q(40, "%"));
+		sample("mitigation.soak.title-cooking");
+		sample("mitigation.blanch.title-cooking");
+		sample("mitigation.blanch.change-cooking", c(85), q(40, "%"));
 		sample("mitigation.asparaginase.title");
 		sample("mitigation.asparaginase.change", q(60, "%"));
 		sample("mitigation.acid-dip.title");

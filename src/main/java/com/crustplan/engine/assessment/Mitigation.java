@@ -23,7 +23,12 @@ public record Mitigation(String code, Message title, Message change, String sour
 
 	public enum Basis {
 
-		SAME_COLOUR(Message.of("mitigation.basis.same-colour")), SAME_TIME(Message.of("mitigation.basis.same-time"));
+		SAME_COLOUR(Message.of("mitigation.basis.same-colour")), SAME_TIME(Message.of("mitigation.basis.same-time")),
+		/**
+		 * A practice to keep: "after" is what giving it up would give, cooked for the
+		 * same time.
+		 */
+		AVOIDED(Message.of("mitigation.basis.avoided"));
 
 		private final Message meaning;
 
@@ -35,6 +40,19 @@ public record Mitigation(String code, Message title, Message change, String sour
 			return meaning;
 		}
 
+	}
+
+	/**
+	 * Whether a plan can apply this change in one click: it applies, lowers acrylamide
+	 * and is a change to make (not a practice to keep).
+	 */
+	public boolean plannable() {
+		return applicable && basis != Basis.AVOIDED && effectUgPerKg() < 0 && Mitigations.PLANNABLE.contains(code);
+	}
+
+	/** Whether the changed food, cooked on, reaches the target colour at all. */
+	public boolean afterReachesTarget() {
+		return Double.isFinite(afterMinutes);
 	}
 
 	/** After minus before, µg/kg (negative: less acrylamide). */

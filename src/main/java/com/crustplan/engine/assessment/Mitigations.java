@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.Set;
 
 import com.crustplan.engine.cook.CookResult;
 import com.crustplan.engine.cook.CookSettings;
@@ -78,11 +80,26 @@ public final class Mitigations {
 	private Mitigations() {
 	}
 
+	/** The changes a plan can apply in one click (see {@link #apply}). */
+	public static final Set<String> PLANNABLE = Set.of("LOWER_TEMPERATURE", "LIGHTER_TARGET", "SOAK", "BLANCH",
+			"ASPARAGINASE", "ACID_DIP");
+
 	/**
 	 * All changes for a planned cook, in a fixed order; those that do not apply say why.
 	 */
 	public static List<Mitigation> compute(Surface surface, Product product, HeatSetup setup, Target target,
 			CookSettings base) {
+		return compute(surface, product, setup, target, base, Set.of());
+	}
+
+	/**
+	 * As {@link #compute(Surface, Product, HeatSetup, Target, CookSettings)}, leaving out
+	 * the changes already made to the food as entered ({@code done}: codes such as
+	 * {@code BLANCH}); a blanched food is not offered soaking either, since blanching
+	 * leaches the same sugars and more of them.
+	 */
+	public static List<Mitigation> compute(Surface surface, Product product, HeatSetup setup, Target target,
+			CookSettings base, Set<String> done) {
 		if (product.category() != surface.category()) {
 			throw new InvalidInputException("product",
 					"'" + product.key() + "' is not a product of " + surface.category().label());
@@ -101,25 +118,41 @@ public final class Mitigations {
 		Baseline b = new Baseline(surface, setup, target, settings, baseline);
 		list.add(lowerTemperature(b));
 		list.add(lighterTarget(b));
-		if (potato) {
-			list.add(rawChange(b, "SOAK", Message.of("mitigation.soak.title"),
+		boolean blanched = done.contains("BLANCH");
+		// the measures are worded for the frying they were measured for only where the
+		// food is fried
+		boolean fried = setup instanceof DeepFryer;
+		if (potato && !blanched && !done.contains("SOAK")) {
+			list.add(rawChange(b, "SOAK", Message.of(fried ? "mitigation.soak.title" : "mitigation.soak.title-cooking"),
 					Message.of("mitigation.soak.change", Quantity.of(SOAK_REMOVAL.value() * 100, "%")), SOAK_REMOVAL,
 					removePrecursors(surface, SOAK_REMOVAL.value(), SOAK_REMOVAL.value())));
-			list.add(rawChange(b, "BLANCH", Message.of("mitigation.blanch.title"),
-					Message.of("mitigation.blanch.change", Temperature.celsius(BLANCH_WATER_C),
-							Quantity.of(BLANCH_REMOVAL.value() * 100, "%")),
+		}
+		if (potato && !blanched) {
+			list.add(rawChange(b, "BLANCH",
+					Message.of(fried ? "mitigation.blanch.title" : "mitigation.blanch.title-cooking"),
+					Message.of(fried ? "mitigation.blanch.change" : "mitigation.blanch.change-cooking",
+							Temperature.celsius(BLANCH_WATER_C), Quantity.of(BLANCH_REMOVAL.value() * 100, "%")),
 					BLANCH_REMOVAL, removePrecursors(surface, BLANCH_REMOVAL.value(), BLANCH_REMOVAL.value())));
 		}
-		list.add(rawChange(b, "ASPARAGINASE", Message.of("mitigation.asparaginase.title"),
-				Message.of("mitigation.asparaginase.change", Quantity.of(ASPARAGINASE_REMOVAL.value() * 100, "%")),
-				ASPARAGINASE_REMOVAL, removePrecursors(surface, 0, ASPARAGINASE_REMOVAL.value())));
-		Surface acid = surface.withAcidGPerKg(Math.min(50, surface.acidGPerKg() + ACID_DIP_UPTAKE.value()));
-		list.add(rawChange(b, "ACID_DIP",
-				Message.of(potato ? "mitigation.acid-dip.title" : "mitigation.acid-recipe.title"),
-				Message.of(potato ? "mitigation.acid-dip.change" : "mitigation.acid-recipe.change",
-						Quantity.of(ACID_DIP_UPTAKE.value(), "g", 1), PlainNumber.of(surface.ph(), 2),
-						PlainNumber.of(acid.ph(), 2)),
-				ACID_DIP_UPTAKE, acid));
+		// the enzyme is sold for potato products and doughs, not for vegetables or meat
+		boolean enzymeFood = potato || category == FoodCategory.BREAD || category == FoodCategory.SWEET_DOUGH;
+		if (enzymeFood && !done.contains("ASPARAGINASE")) {
+			list.add(rawChange(b, "ASPARAGINASE", Message.of("mitigation.asparaginase.title"),
+					Message.of(potato ? "mitigation.asparaginase.change" : "mitigation.asparaginase.dough-change",
+							Quantity.of(ASPARAGINASE_REMOVAL.value() * 100, "%")),
+					ASPARAGINASE_REMOVAL, apply("ASPARAGINASE", surface)));
+		}
+		if (!done.contains("ACID_DIP")) {
+			// pieces are dipped; a dough takes the acid in the recipe
+			boolean dip = potato || category == FoodCategory.VEGETABLE;
+			Surface acid = apply("ACID_DIP", surface);
+			list.add(rawChange(b, "ACID_DIP",
+					Message.of(dip ? "mitigation.acid-dip.title" : "mitigation.acid-recipe.title"),
+					Message.of(dip ? "mitigation.acid-dip.change" : "mitigation.acid-recipe.change",
+							Quantity.of(ACID_DIP_UPTAKE.value(), "g", 1), PlainNumber.of(surface.ph(), 2),
+							PlainNumber.of(acid.ph(), 2)),
+					ACID_DIP_UPTAKE, acid));
+		}
 		if (potato) {
 			list.add(warmStorage(b));
 		}
@@ -139,23 +172,51 @@ public final class Mitigations {
 
 	}
 
+	/** The step down a setup's mode takes. */
+	private static Parameter step(HeatSetup setup) {
+		return setup instanceof DeepFryer ? FRYER_STEP_C
+				: setup instanceof RadiantGrill ? GRILL_STEP_C : OVEN_PAN_STEP_C;
+	}
+
+	/**
+	 * The set temperature the lower-temperature change cooks at, °C: one step of the mode
+	 * lower (a fryer never above 170 °C).
+	 */
+	public static double lowerTemperatureC(HeatSetup setup) {
+		double t = setup.temperatureC();
+		double lower = t - step(setup).value();
+		return setup instanceof DeepFryer ? Math.min(lower, 170) : lower;
+	}
+
+	/** The stage one lighter than the target, if the category has one. */
+	public static Optional<BrowningStage> lighterStage(FoodCategory category, Target target) {
+		double extent = target.extentFor(category);
+		return category.stages()
+			.stream()
+			.filter(s -> s.extentOn(category.colourPath()) < extent - 1e-6)
+			.max(Comparator.comparingDouble(s -> s.extentOn(category.colourPath())));
+	}
+
+	/**
+	 * The food after a change of the raw material ({@code SOAK}, {@code BLANCH},
+	 * {@code ASPARAGINASE}, {@code ACID_DIP}), as the table computes it.
+	 * @throws InvalidInputException naming field {@code change} for any other code
+	 */
+	public static Surface apply(String code, Surface surface) {
+		return switch (code) {
+			case "SOAK" -> removePrecursors(surface, SOAK_REMOVAL.value(), SOAK_REMOVAL.value());
+			case "BLANCH" -> removePrecursors(surface, BLANCH_REMOVAL.value(), BLANCH_REMOVAL.value());
+			case "ASPARAGINASE" -> removePrecursors(surface, 0, ASPARAGINASE_REMOVAL.value());
+			case "ACID_DIP" -> surface.withAcidGPerKg(Math.min(50, surface.acidGPerKg() + ACID_DIP_UPTAKE.value()));
+			default -> throw new InvalidInputException("change", "'" + code + "' is not a change of the food");
+		};
+	}
+
 	private static Mitigation lowerTemperature(Baseline b) {
 		HeatSetup setup = b.setup();
 		double t = setup.temperatureC();
-		double lower;
-		Parameter step;
-		if (setup instanceof DeepFryer) {
-			step = FRYER_STEP_C;
-			lower = Math.min(t - step.value(), 170);
-		}
-		else if (setup instanceof RadiantGrill) {
-			step = GRILL_STEP_C;
-			lower = t - step.value();
-		}
-		else {
-			step = OVEN_PAN_STEP_C;
-			lower = t - step.value();
-		}
+		double lower = lowerTemperatureC(setup);
+		Parameter step = step(setup);
 		Message title = Message.of("mitigation.lower-temperature.title");
 		Message change = Message.of("mitigation.lower-temperature.change", Temperature.celsius(lower),
 				Temperature.celsius(t));
@@ -172,11 +233,14 @@ public final class Mitigations {
 				Message.of("mitigation.lower-temperature.not-reached", Temperature.celsius(lower)));
 		if (m.applicable() && m.effectUgPerKg() >= 0) {
 			// an honest null result: the slower formation is offset by a longer cook that
-			// dries more of the piece
-			return new Mitigation(m.code(), m.title(), m.change(), m.source(), m.evidence(), true,
-					Message.of("mitigation.lower-temperature.no-gain",
-							Temperature.celsius(AcrylamideWarnings.MAX_FRYING_C.value())),
-					m.basis(), m.beforeUgPerKg(), m.afterUgPerKg(), m.beforeMinutes(), m.afterMinutes(),
+			// dries more of the piece; the frying rule is said only where it belongs
+			boolean fried = setup instanceof DeepFryer && b.surface().category() == FoodCategory.POTATO;
+			Message note = fried
+					? Message.of("mitigation.lower-temperature.no-gain",
+							Temperature.celsius(AcrylamideWarnings.MAX_FRYING_C.value()))
+					: Message.of("mitigation.lower-temperature.no-gain-here");
+			return new Mitigation(m.code(), m.title(), m.change(), m.source(), m.evidence(), true, note, m.basis(),
+					m.beforeUgPerKg(), m.afterUgPerKg(), m.beforeMinutes(), m.afterMinutes(),
 					m.afterAtSameColourUgPerKg());
 		}
 		return m;
@@ -184,11 +248,7 @@ public final class Mitigations {
 
 	private static Mitigation lighterTarget(Baseline b) {
 		FoodCategory category = b.surface().category();
-		double extent = b.target().extentFor(category);
-		Optional<BrowningStage> lighter = category.stages()
-			.stream()
-			.filter(s -> s.extentOn(category.colourPath()) < extent - 1e-6)
-			.max(Comparator.comparingDouble(s -> s.extentOn(category.colourPath())));
+		Optional<BrowningStage> lighter = lighterStage(category, b.target());
 		if (lighter.isEmpty()) {
 			return Mitigation.notApplicable("LIGHTER_TARGET", Message.of("mitigation.lighter-target.title"),
 					Message.of("mitigation.lighter-target.one-stage"), LIGHTER_SOURCE, Evidence.PUBLISHED,
@@ -239,10 +299,12 @@ public final class Mitigations {
 				Quantity.of(cold.reducingSugarPct(), "%", 1), Quantity.of(c.reducingSugarPct(), "%", 1));
 		double coldAtSameTime = portionAfter(coldStored, b.setup(), b.settings(), b.result().timeToTargetS());
 		CookResult coldToColour = AcrylamideCook.run(coldStored, b.setup(), b.target(), b.settings());
-		// before: cold-stored tubers cooked as planned; after: the potatoes as entered
+		// before: the potatoes as entered, cooked as planned; after: what cold storage
+		// would have made of them, the level the warm storage keeps away
 		return new Mitigation("WARM_STORAGE", title, change, COLD_STORAGE_SUGAR.source(), COLD_STORAGE_SUGAR.evidence(),
-				true, null, Mitigation.Basis.SAME_TIME, coldAtSameTime, b.ug(),
-				coldToColour.reached() ? coldToColour.timeToTargetS() / 60 : Double.NaN, b.minutes(), b.ug());
+				true, null, Mitigation.Basis.AVOIDED, b.ug(), coldAtSameTime, b.minutes(),
+				coldToColour.reached() ? coldToColour.timeToTargetS() / 60 : Double.NaN,
+				coldToColour.reached() ? coldToColour.portionAcrylamideAtTargetUgPerKg() : Double.NaN);
 	}
 
 	/** Portion acrylamide after exactly {@code timeS} of cooking, whatever the colour. */

@@ -41,7 +41,7 @@ final class CookSummary {
 			return outcome.explanation();
 		}
 		return Message.of("outcome.explained", outcome.explanation(), Temperature.kelvin(maxSurfaceK),
-				PlainNumber.of(extent, 2), new Duration(timeS, true));
+				Quantity.of(extent * 100, "%", 0), new Duration(timeS, true));
 	}
 
 	static List<Message> surfaceAssumptions(Surface surface) {
