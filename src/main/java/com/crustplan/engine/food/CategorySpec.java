@@ -36,6 +36,8 @@ final class CategorySpec {
 
 	Parameter initialPorosity;
 
+	Parameter shrinkage;
+
 	GabIsotherm isotherm;
 
 	BrowningKinetics browning;
@@ -97,6 +99,11 @@ final class CategorySpec {
 		return this;
 	}
 
+	CategorySpec shrinkage(Parameter p) {
+		this.shrinkage = p;
+		return this;
+	}
+
 	CategorySpec isotherm(GabIsotherm g) {
 		this.isotherm = g;
 		return this;
@@ -123,8 +130,8 @@ final class CategorySpec {
 	 * loading.
 	 */
 	CategorySpec complete() {
-		if (parts == null || bufferCapacity == null || initialPorosity == null || isotherm == null || browning == null
-				|| colourPath == null || stages == null) {
+		if (parts == null || bufferCapacity == null || initialPorosity == null || shrinkage == null || isotherm == null
+				|| browning == null || colourPath == null || stages == null) {
 			throw new IllegalStateException("food category " + key + ": every part must be given");
 		}
 		SurfaceField.PH.check(ph);
