@@ -85,12 +85,59 @@ final class LocalBoiling {
 							-state.availableWater(i) * WaterVapour.latentHeat(pinnedTemperature[i]) / dt);
 					changed = true;
 				}
+				else if (holdAtEndOfStepBoilingPoint(i, surplus, dt)) {
+					changed = true;
+				}
 			}
 			if (!changed) {
 				break;
 			}
 		}
 	}
+
+	/**
+	 * A drying (hygroscopic) layer's boiling point rises as it boils: pinned at the
+	 * boiling point of its moisture at the start of the step, it boils too much in one
+	 * step and too little in the next, and face temperature and water activity saw-tooth
+	 * from step to step. Pinning it instead at the boiling point of the moisture it will
+	 * have at the end of the step (backward Euler in the sorption equilibrium, as in the
+	 * rest of the step) solves T = T_b(X − S(T)·Δt/(h_fg·m)), with the surplus S falling
+	 * by the assembled diagonal per kelvin, by bisection. True when the pin moved.
+	 */
+	private boolean holdAtEndOfStepBoilingPoint(int i, double surplus, double dt) {
+		int face = state.faceOf(i);
+		if (surplus <= 0 || (face >= 0 && state.face(face).standingWater > 0)) {
+			return false;
+		}
+		double x = state.moisture[i];
+		double t0 = pinnedTemperature[i];
+		if (state.isotherm().waterActivity(x) >= 1) {
+			return false;
+		}
+		double slope = conduction.diagonal(i);
+		double perKelvinOfSurplus = dt / (WaterVapour.latentHeat(t0) * state.dryMass[i]);
+		double lo = t0;
+		double hi = t0 + surplus / slope;
+		for (int k = 0; k < 30 && hi - lo > PIN_TOLERANCE_K; k++) {
+			double mid = 0.5 * (lo + hi);
+			double xEnd = Math.max(CookState.MIN_MOISTURE, x - (surplus - slope * (mid - t0)) * perKelvinOfSurplus);
+			if (mid < WaterVapour.boilingTemperatureKFast(state.isotherm().waterActivity(xEnd))) {
+				lo = mid;
+			}
+			else {
+				hi = mid;
+			}
+		}
+		double t = 0.5 * (lo + hi);
+		if (Math.abs(t - t0) <= PIN_TOLERANCE_K) {
+			return false;
+		}
+		pinnedTemperature[i] = t;
+		return true;
+	}
+
+	/** A pin is moved only when it moves more than this. */
+	private static final double PIN_TOLERANCE_K = 1e-3;
 
 	/**
 	 * Takes the solved temperatures into the state and boils off what the pinned and
