@@ -123,7 +123,7 @@ final class LocalBoiling {
 			return gLo >= 0 ? lo : hi;
 		}
 		int side = 0;
-		for (int k = 0; k < 40 && hi - lo > PIN_TOLERANCE_K; k++) {
+		for (int k = 0; k < MAX_PIN_ITERATIONS && hi - lo > PIN_TOLERANCE_K; k++) {
 			double t = (lo * gHi - hi * gLo) / (gHi - gLo);
 			double g = t - boilingPointAtEnd(x, surplus, slope, tb, t, perWatt);
 			if (Math.abs(g) < PIN_TOLERANCE_K) {
@@ -155,8 +155,14 @@ final class LocalBoiling {
 		return WaterVapour.boilingTemperatureKFast(state.isotherm().waterActivity(xEnd));
 	}
 
+	/**
+	 * Regula falsi steps at most: the boiling-point curve is smooth, a few steps reach
+	 * the tolerance.
+	 */
+	private static final int MAX_PIN_ITERATIONS = 8;
+
 	/** Tolerance of the end-of-step boiling point, K. */
-	private static final double PIN_TOLERANCE_K = 0.01;
+	private static final double PIN_TOLERANCE_K = 0.02;
 
 	/**
 	 * Takes the solved temperatures into the state and boils off what the pinned and
