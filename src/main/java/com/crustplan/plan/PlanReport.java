@@ -9,6 +9,7 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.message.Message;
+import com.crustplan.engine.message.PlainNumber;
 
 /**
  * Everything a plan page or the API shows, computed once by {@link PlanService}. A plan
@@ -98,6 +99,24 @@ public record PlanReport(Surface surface, HeatSetup setup, Message targetLabel, 
 
 	public Double coreTemperatureAtTargetC() {
 		return finite(result.coreTemperatureAtTargetC());
+	}
+
+	/**
+	 * Water in the whole piece at the target, worded; null where the target was not
+	 * reached.
+	 */
+	public Message waterAtTarget() {
+		Double pct = finite(result.waterAtTargetPct());
+		return pct == null ? null : Message.of("report.water-at-target", PlainNumber.of(pct, 0));
+	}
+
+	/**
+	 * Frying oil the piece has taken up by the target, worded; null where it took up none
+	 * (not fried) or the target was not reached.
+	 */
+	public Message oilAtTarget() {
+		Double pct = finite(result.oilAtTargetPct());
+		return pct == null || pct < 0.05 ? null : Message.of("report.oil-at-target", PlainNumber.of(pct, 1));
 	}
 
 	public String targetHex() {

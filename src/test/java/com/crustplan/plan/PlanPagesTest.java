@@ -118,6 +118,16 @@ class PlanPagesTest {
 	}
 
 	@Test
+	void shouldShowTheWaterAndTheFryingOilInTheChipsAtTheTarget() throws Exception {
+		// oil follows the water a fry loses (Gamble, Rice & Selman 1987): a fried chip
+		// reports both, g per 100 g
+		mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetStage", "golden"))
+			.andExpect(content().string(containsString("id=\"water-at-target\"")))
+			.andExpect(content().string(containsString("Water in the whole piece at the target:")))
+			.andExpect(content().string(containsString("Frying oil taken up by the target:")));
+	}
+
+	@Test
 	void shouldLinkThePlanToItsRiskMap() throws Exception {
 		mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetStage", "golden"))
 			.andExpect(content().string(containsString("/plan/risk-map?surfaceId=")));

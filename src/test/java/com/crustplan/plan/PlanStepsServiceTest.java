@@ -87,7 +87,10 @@ class PlanStepsServiceTest {
 
 	@Test
 	void shouldSayWhichTargetCameFirstAndByHowMuch() {
-		PlanReport r = searOvenRest(Target.stage("light-sear"));
+		// grey: 90 s a side at 240 °C no longer reaches a light sear once the drying
+		// crust
+		// shrinks instead of insulating (the face cools faster between flips)
+		PlanReport r = searOvenRest(Target.stage("grey"));
 		StepsReport s = r.steps();
 		assertThat(s.coreTargetReachedS()).isNotNull();
 		assertThat(r.reached()).isTrue();

@@ -111,6 +111,8 @@ class MessageCatalogueTest {
 		sample("outcome.too-cool");
 		sample("outcome.too-slow");
 		sample("outcome.surface-limit");
+		sample("report.water-at-target", PlainNumber.of(41, 0));
+		sample("report.oil-at-target", PlainNumber.of(12.5, 1));
 		sample("outcome.explained", m("outcome.too-cool"), c(128), Quantity.of(42, "%", 0), Duration.minutes(9));
 		sample("target.stage", Text.of("Golden"));
 		sample("target.lightness", PlainNumber.of(62, 0));

@@ -36,12 +36,12 @@ public final class AcrylamideModel {
 	public static final double ELIMINATION_REFERENCE_K = 453.15;
 
 	public static final Parameter FORMATION_RATE = Parameter.derived("k_f,ref",
-			"acrylamide formation rate constant at 170 °C, per mmol/kg d.m. of each precursor", 2.1905e-7,
+			"acrylamide formation rate constant at 170 °C, per mmol/kg d.m. of each precursor", 2.3283e-7,
 			"kg d.m./(mmol·s)",
 			"fitted to Pedreschi, Kaack & Granby 2006 (150 and 190 °C), blanched strips fried to 40 % moisture");
 
 	public static final Parameter FORMATION_EA = Parameter.derived("Ea,f", "activation energy of acrylamide formation",
-			1.2300e5, "J/mol", "fitted to Pedreschi, Kaack & Granby 2006 (150 and 190 °C)");
+			1.2068e5, "J/mol", "fitted to Pedreschi, Kaack & Granby 2006 (150 and 190 °C)");
 
 	public static final Parameter ELIMINATION_RATE = Parameter.fromMemory("k_e,ref",
 			"acrylamide elimination rate constant at 180 °C", 3.0e-4, "1/s",

@@ -12,6 +12,7 @@ import com.crustplan.engine.browning.BrowningKinetics;
 import com.crustplan.engine.browning.Caramelisation;
 import com.crustplan.engine.browning.WaterActivityFactor;
 import com.crustplan.engine.cook.CookSettings;
+import com.crustplan.engine.cook.OilUptake;
 import com.crustplan.engine.doneness.DonenessChapter;
 import com.crustplan.engine.food.DefaultMakeUp;
 import com.crustplan.engine.myoglobin.InteriorChapter;
@@ -27,6 +28,7 @@ import com.crustplan.engine.properties.FoodComponent;
 import com.crustplan.engine.properties.ThermalProperties;
 import com.crustplan.engine.water.Atmosphere;
 import com.crustplan.engine.water.MoistureDiffusivity;
+import com.crustplan.engine.water.PoreVapourConductivity;
 import com.crustplan.engine.water.WaterVapour;
 
 /**
@@ -82,14 +84,39 @@ public final class ModelCatalogue {
 					"T in °C; k in W/(m·K), ρ in kg/m³, cp in kJ/(kg·K); valid −40…150 °C (held at the end values beyond).",
 					List.of()));
 		}
-		eq.add(new Equation("Porous foods", "k = k_matrix^(1−ε) · k_gas^ε;  ε = 1 − m·v_matrix / V",
-				"Gas fraction ε from the volume the matrix leaves empty in each control volume: it starts at the category's value and grows as water leaves.",
+		eq.add(new Equation("Porous foods",
+				"k = k_matrix^(1−ε) · k_gas^ε;  ε = 1 − (m·v_matrix) / (V − s·V_water lost)",
+				"Gas fraction ε from the volume the matrix (with any frying oil, counted as fat) leaves empty in each control volume. "
+						+ "A share s of the volume of the water a layer loses is given up by shrinking: muscle stays a saturated gel (s = 1) "
+						+ "and its drying crust keeps the conductivity of the drier solid; baked crumb is rigid (s = 0) and opens pores.",
 				List.of(Parameter.secondary("k_gas", "conductivity of the gas in pores",
 						ThermalProperties.AIR_CONDUCTIVITY, "W/(m·K)",
 						"still air near 100 °C (Incropera, Table A.4)"))));
+		List<Parameter> shrinkage = new ArrayList<>();
+		for (FoodCategory c : FoodCategory.values()) {
+			shrinkage.add(c.shrinkage());
+		}
+		eq.add(new Equation("Shrinkage as a layer dries", "V = V₀ − s·(X₀ − X)·m_dry/ρ_water",
+				"Per category, in the order of the category list (meat, poultry skin, fish, potato, bread, sweet dough, vegetable). "
+						+ "The grid keeps its geometry: shrinkage acts on what fills the layer, not on the distances heat travels.",
+				shrinkage));
+		eq.add(new Equation("Evaporation–condensation in crumb",
+				"k += 1/((1−ε_c)/k_m + ε_c/(k_gas + k_v)) − 1/((1−ε_c)/k_m + ε_c/k_gas);  k_v = f_wet·D_va·S(y)·h_fg·aw·(dp_sat/dT)/(R_v·T)",
+				"Across the raw food's own closed gas cells ε_c (proofed dough), water evaporates at the warm wall, diffuses and "
+						+ "condenses at the cold one (de Vries 1958; the mechanism of bread-baking models, e.g. Thorvaldsson & Janestad 1999, "
+						+ "Purlis & Salvadori 2009). Cells in series with their walls; dp_sat/dT by Clausius–Clapeyron; S(y) = 1/(1 − y) the "
+						+ "Stefan factor up to y_v,max, then tapered to 0 for pure steam; f_wet rises from 0 at aw,wet to 1 at aw = 1. "
+						+ "Pores opened by drying vent and get none.",
+				List.of(PoreVapourConductivity.VAPOUR_DIFFUSIVITY_298K, PoreVapourConductivity.MAX_VAPOUR_SHARE,
+						PoreVapourConductivity.WET_WALL_ACTIVITY)));
+		eq.add(new Equation("Frying oil in the pores",
+				"m_oil,i = r_oil·(X₀ − X_i)·m_dry,i  (never decreasing, while a face is in oil)",
+				"Oil uptake follows the water lost (Gamble, Rice & Selman 1987: both linear in √t, oil where water left); the oil is "
+						+ "counted as Choi–Okos fat in the layer. Reported with the moisture at the target as g per 100 g of the piece.",
+				List.of(OilUptake.OIL_PER_WATER_LOST)));
 		return new ModelSection("Thermal properties from composition", eq, List.of(
 				"Choi–Okos fits end at 150 °C; hotter crusts use the 150 °C values.",
-				"Oil taken up in frying and fat rendering out of skin are not modelled.",
+				"Fat rendering out of skin is not modelled; oil that enters a fry as it leaves the fryer is taken in during frying.",
 				"The whole thickness has one composition (a surface layer of different make-up is not resolved)."));
 	}
 
@@ -120,7 +147,7 @@ public final class ModelCatalogue {
 		return new ModelSection("Water: vapour, sorption, drying and boiling", eq, List.of(
 				"Isotherms measured at 40–50 °C are used at all temperatures (at crust temperatures they overstate how tightly water is held).",
 				"Vapour formed inside the food is taken to leave at once; pressure build-up and puffing are not modelled.",
-				"No shrinkage: each layer keeps its volume as it dries."));
+				"Shrinkage changes what fills a layer, not the grid: a shrinking piece's thickness is not updated."));
 	}
 
 	private static ModelSection heat() {

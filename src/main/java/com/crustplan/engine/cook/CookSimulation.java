@@ -55,7 +55,8 @@ public final class CookSimulation {
 		Grid grid = new Grid(surface.shape().gridLengthM(surface.thicknessMm()), settings.nodes(),
 				Grid.DEFAULT_CLUSTERING, surface.shape().factor());
 		double x0 = surface.composition().moistureDryBasis();
-		MatrixProperties properties = new MatrixProperties(surface.composition().dryMatterFractions(), grid.size());
+		MatrixProperties properties = new MatrixProperties(surface.composition().dryMatterFractions(),
+				surface.category().shrinkage().value(), surface.category().initialPorosity().value(), grid.size());
 		double matrixVolume = ThermalProperties.specificVolume(properties.massFractions(x0),
 				surface.initialTemperatureC());
 		double bulkDensity = (1 - surface.category().initialPorosity().value()) / matrixVolume;
@@ -312,7 +313,7 @@ public final class CookSimulation {
 				noColourTarget ? null : surface.category().colourPath().colourAt(targetExtent), surface.ph(),
 				target.coreK() - 273.15, target.crustLevel(), target.portionLevel(), watch.maxSurfaceK() - 273.15,
 				state.browningExtent(0), state.time, recorder == null ? List.of() : recorder.series(), assumptions,
-				account.ledger(), state.finalState());
+				account.ledger(), state.finalState(), target.waterPct(), target.oilPct());
 	}
 
 	private double nextCheckpoint() {

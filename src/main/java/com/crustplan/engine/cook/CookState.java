@@ -31,6 +31,12 @@ public final class CookState implements Layers {
 
 	final double[] volume;
 
+	/** Frying oil taken up by each control volume, kg per m² of face. */
+	final double[] oil;
+
+	/** Moisture at the start, kg/kg d.b. (uniform). */
+	final double initialMoisture;
+
 	/**
 	 * Face 0 (the node at x = 0) and face 1 (the last node). A radial grid (strip, cube,
 	 * ball) has only face 0, its outer surface; its last node is the centre, and face 1
@@ -53,6 +59,8 @@ public final class CookState implements Layers {
 		moisture = new double[n];
 		dryMass = new double[n];
 		volume = new double[n];
+		oil = new double[n];
+		initialMoisture = moistureDryBasis;
 		for (int i = 0; i < n; i++) {
 			temperature[i] = temperatureK;
 			moisture[i] = moistureDryBasis;
@@ -123,6 +131,28 @@ public final class CookState implements Layers {
 		return m;
 	}
 
+	/** Water share of the whole piece (oil counted in its mass), %. */
+	public double waterSharePct() {
+		double water = 0;
+		double mass = 0;
+		for (int i = 0; i < n; i++) {
+			water += dryMass[i] * moisture[i];
+			mass += dryMass[i] * (1 + moisture[i]) + oil[i];
+		}
+		return 100 * water / mass;
+	}
+
+	/** Oil taken up, g per 100 g of the piece as it is now. */
+	public double oilSharePct() {
+		double o = 0;
+		double mass = 0;
+		for (int i = 0; i < n; i++) {
+			o += oil[i];
+			mass += dryMass[i] * (1 + moisture[i]) + oil[i];
+		}
+		return 100 * o / mass;
+	}
+
 	/**
 	 * Centre temperature, K: the mid-thickness of a slab (interpolated), the centre node
 	 * of a strip, cube or ball.
@@ -159,7 +189,7 @@ public final class CookState implements Layers {
 			p[i] = grid.position(i);
 		}
 		return new CookResult.FinalState(p, temperature, moisture, dryMass,
-				new double[] { faces[0].standingWater, faces[1].standingWater });
+				new double[] { faces[0].standingWater, faces[1].standingWater }, oil);
 	}
 
 	// ---------------------------------------------------------------- Layers view

@@ -14,6 +14,13 @@ final class EnergyAccount {
 
 	private double evaporated;
 
+	private double oilIn;
+
+	/** Frying oil entering the food, with its enthalpy relative to 0 °C. */
+	void oilIn(double joulesPerM2) {
+		oilIn += joulesPerM2;
+	}
+
 	void heatIn(double joulesPerM2) {
 		heatIn += joulesPerM2;
 	}
@@ -25,7 +32,7 @@ final class EnergyAccount {
 	}
 
 	EnergyLedger ledger() {
-		return new EnergyLedger(heatIn, vapourOut, evaporated);
+		return new EnergyLedger(heatIn, vapourOut, evaporated, oilIn);
 	}
 
 }

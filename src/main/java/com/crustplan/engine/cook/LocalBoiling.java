@@ -58,7 +58,8 @@ final class LocalBoiling {
 				double tb = boilingPointOf(i);
 				if (solution[i] > tb) {
 					pinned[i] = true;
-					pinnedTemperature[i] = tb;
+					pinnedTemperature[i] = endOfStepBoilingPoint(i, tb, conduction.diagonal(i) * (solution[i] - tb),
+							dt);
 					any = true;
 				}
 			}
@@ -94,6 +95,77 @@ final class LocalBoiling {
 			}
 		}
 	}
+
+	/**
+	 * A drying (hygroscopic) layer's boiling point rises as it boils: pinned at the
+	 * boiling point of its moisture at the start of the step, it boils too much in one
+	 * step and too little in the next, and face temperature and water activity saw-tooth
+	 * from step to step. It is pinned instead at the boiling point of the moisture it
+	 * will have at the end of the step (backward Euler in the sorption equilibrium, as in
+	 * the rest of the step): T = T_b(X − S(T)·Δt/(h_fg·m)), solved by regula falsi, where
+	 * the surplus S(T) = S₀ − a·(T − T_b) falls by the assembled diagonal a per kelvin
+	 * from S₀ = a·(T_free − T_b), what the unpinned solve put above the boiling point
+	 * (its neighbours held).
+	 */
+	private double endOfStepBoilingPoint(int i, double tb, double surplus, double dt) {
+		int face = state.faceOf(i);
+		double x = state.moisture[i];
+		if (surplus <= 0 || (face >= 0 && state.face(face).standingWater > 0)
+				|| state.isotherm().waterActivity(x) >= 1) {
+			return tb;
+		}
+		double slope = conduction.diagonal(i);
+		double perWatt = dt / (WaterVapour.latentHeat(tb) * state.dryMass[i]);
+		// g(T) = T − T_b(X_end(T)) rises with T: negative at T_b, positive where the
+		// surplus is spent; regula falsi with the Illinois modification
+		double lo = tb;
+		double hi = tb + surplus / slope;
+		double gLo = lo - boilingPointAtEnd(x, surplus, slope, tb, lo, perWatt);
+		double gHi = hi - boilingPointAtEnd(x, surplus, slope, tb, hi, perWatt);
+		if (gLo >= 0 || gHi <= 0) {
+			return gLo >= 0 ? lo : hi;
+		}
+		int side = 0;
+		for (int k = 0; k < MAX_PIN_ITERATIONS && hi - lo > PIN_TOLERANCE_K; k++) {
+			double t = (lo * gHi - hi * gLo) / (gHi - gLo);
+			double g = t - boilingPointAtEnd(x, surplus, slope, tb, t, perWatt);
+			if (Math.abs(g) < PIN_TOLERANCE_K) {
+				return t;
+			}
+			if (g < 0) {
+				lo = t;
+				gLo = g;
+				if (side == -1) {
+					gHi *= 0.5;
+				}
+				side = -1;
+			}
+			else {
+				hi = t;
+				gHi = g;
+				if (side == 1) {
+					gLo *= 0.5;
+				}
+				side = 1;
+			}
+		}
+		return 0.5 * (lo + hi);
+	}
+
+	/** The boiling point of the moisture left after the surplus at t is spent, K. */
+	private double boilingPointAtEnd(double x, double surplus, double slope, double tb, double t, double perWatt) {
+		double xEnd = Math.max(CookState.MIN_MOISTURE, x - (surplus - slope * (t - tb)) * perWatt);
+		return WaterVapour.boilingTemperatureKFast(state.isotherm().waterActivity(xEnd));
+	}
+
+	/**
+	 * Regula falsi steps at most: the boiling-point curve is smooth, a few steps reach
+	 * the tolerance.
+	 */
+	private static final int MAX_PIN_ITERATIONS = 8;
+
+	/** Tolerance of the end-of-step boiling point, K. */
+	private static final double PIN_TOLERANCE_K = 0.02;
 
 	/**
 	 * Takes the solved temperatures into the state and boils off what the pinned and

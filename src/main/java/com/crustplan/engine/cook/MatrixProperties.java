@@ -2,22 +2,37 @@ package com.crustplan.engine.cook;
 
 import com.crustplan.engine.properties.FoodComponent;
 import com.crustplan.engine.properties.ThermalProperties;
+import com.crustplan.engine.water.PoreVapourConductivity;
 
 /**
  * Step (1): each control volume's heat capacity and conductivity from its composition,
- * temperature and moisture (Choi &amp; Okos 1986), with the gas that fills what the food
- * no longer occupies mixed in by the geometric-mean rule; a face's standing water adds
- * its own heat capacity.
+ * temperature and moisture (Choi &amp; Okos 1986), frying oil it has taken up counted as
+ * fat, and the pores mixed in by the geometric-mean rule k_m^(1−ε)·k_pore^ε. What a layer
+ * does with the volume of the water it loses is the category's: a share s closes by
+ * shrinkage (muscle, s = 1, stays a saturated gel), the rest opens pores, which frying
+ * oil partly fills ({@link OilUptake}); pores hold still gas. Across the raw food's own
+ * closed gas cells (proofed dough), where their walls are wet, evaporation–condensation
+ * ({@link PoreVapourConductivity}) adds to that, as the cells in series with their walls:
+ * it carries heat through humid crumb (at most k_m/(1 − ε)) but not through a dry crust.
+ * A face's standing water adds its own heat capacity.
  */
 final class MatrixProperties {
 
-	private static final double LOG_GAS_CONDUCTIVITY = Math.log(ThermalProperties.AIR_CONDUCTIVITY);
+	private static final int FAT = FoodComponent.FAT.ordinal();
 
 	/**
 	 * Dry-matter mass fractions of the composition, in {@link FoodComponent} order after
 	 * water.
 	 */
 	private final double[] dryFractions;
+
+	/** Share of a lost water's volume that the layer gives up by shrinking. */
+	private final double shrinkage;
+
+	/** Gas fraction of the raw food: closed, humid cells (dough crumb). */
+	private final double cellPorosity;
+
+	private static final double LOG_AIR = Math.log(ThermalProperties.AIR_CONDUCTIVITY);
 
 	private final double[] massFractions = new double[FoodComponent.values().length];
 
@@ -30,33 +45,73 @@ final class MatrixProperties {
 	/** W/(m·K). */
 	final double[] conductivity;
 
-	MatrixProperties(double[] dryFractions, int n) {
+	MatrixProperties(double[] dryFractions, double shrinkage, double cellPorosity, int n) {
 		this.dryFractions = dryFractions;
+		this.shrinkage = shrinkage;
+		this.cellPorosity = cellPorosity;
 		this.capacity = new double[n];
 		this.conductivity = new double[n];
 	}
 
 	/** Mass fractions of a matrix holding x kg water per kg dry matter. */
 	double[] massFractions(double x) {
-		double dry = 1 / (1 + x);
-		massFractions[0] = x * dry;
+		return massFractions(x, 0);
+	}
+
+	/**
+	 * Mass fractions of a matrix holding x kg water and {@code oilPerDry} kg oil per kg
+	 * dry matter, the oil counted as fat.
+	 */
+	double[] massFractions(double x, double oilPerDry) {
+		double share = 1 / (1 + x + oilPerDry);
+		massFractions[0] = x * share;
 		for (int j = 0; j < dryFractions.length; j++) {
-			massFractions[j + 1] = dryFractions[j] * dry;
+			massFractions[j + 1] = dryFractions[j] * share;
 		}
+		massFractions[FAT] += oilPerDry * share;
 		return massFractions;
+	}
+
+	/**
+	 * What evaporation–condensation adds across the raw food's closed, humid cells: the
+	 * cells in series with their walls (heat must cross each wall; a closed-cell foam),
+	 * with and without the vapour conductivity k_v in the cell gas. Pores opened by
+	 * drying vent to the outside (vapour leaves rather than condenses) and get none.
+	 */
+	private static double evaporationCondensationGain(double km, double cells, double kv) {
+		if (!(kv > 0)) {
+			return 0;
+		}
+		double wall = (1 - cells) / km;
+		return 1 / (wall + cells / (ThermalProperties.AIR_CONDUCTIVITY + kv))
+				- 1 / (wall + cells / ThermalProperties.AIR_CONDUCTIVITY);
 	}
 
 	void evaluate(CookState s) {
 		int n = s.size();
 		for (int i = 0; i < n; i++) {
 			double tc = s.temperature[i] - 273.15;
-			ThermalProperties.evaluate(massFractions(s.moisture[i]), tc, props);
-			double mass = s.dryMass[i] * (1 + s.moisture[i]);
-			double porosity = Math.max(0, Math.min(0.95, 1 - mass * props[2] / s.volume[i]));
+			double x = s.moisture[i];
+			double dry = s.dryMass[i];
+			ThermalProperties.evaluate(massFractions(x, s.oil[i] / dry), tc, props);
+			double mass = dry * (1 + x) + s.oil[i];
+			double lostWater = Math.max(0, (s.initialMoisture - x) * dry) / FoodComponent.WATER.density(tc);
+			double volume = s.volume[i] - shrinkage * lostWater;
+			double porosity = Math.max(0, Math.min(0.95, 1 - mass * props[2] / volume));
 			capacity[i] = mass * props[0];
-			// geometric-mean rule k_m^(1−ε)·k_gas^ε, written with one exp
-			conductivity[i] = porosity > 0
-					? Math.exp((1 - porosity) * Math.log(props[1]) + porosity * LOG_GAS_CONDUCTIVITY) : props[1];
+			if (porosity > 0) {
+				// geometric-mean rule over matrix and pore gas, written with one exp
+				double km = props[1];
+				conductivity[i] = Math.exp((1 - porosity) * Math.log(km) + porosity * LOG_AIR);
+				double cells = Math.min(porosity, cellPorosity);
+				if (cells > 0) {
+					conductivity[i] += evaporationCondensationGain(km, cells,
+							PoreVapourConductivity.at(s.temperature[i], s.waterActivity(i)));
+				}
+			}
+			else {
+				conductivity[i] = props[1];
+			}
 		}
 		for (int face = 0; face < 2; face++) {
 			int i = s.faceNode(face);

@@ -98,6 +98,9 @@ final class MoistureStep {
 				moisture[i] = CookState.MIN_MOISTURE;
 			}
 		}
+		if (schedule.at(0, state.time).inOil() || schedule.at(1, state.time).inOil()) {
+			OilUptake.step(state, account);
+		}
 	}
 
 	/**

@@ -23,6 +23,10 @@ public final class Moment {
 
 	double heatSourceK = Double.NaN;
 
+	double waterPct;
+
+	double oilPct;
+
 	void fill(CookState state, LayerReaction reaction, ActiveHeat heat) {
 		timeS = state.time;
 		surfaceK = state.surfaceK();
@@ -31,6 +35,8 @@ public final class Moment {
 		surfaceWaterActivity = state.faceWaterActivity(0);
 		crustLevel = reaction.crustLevel();
 		portionLevel = reaction.portionLevel();
+		waterPct = state.waterSharePct();
+		oilPct = state.oilSharePct();
 		heatSourceK = heat.body() == null ? Double.NaN : heat.body().temperatureK();
 	}
 
@@ -69,6 +75,16 @@ public final class Moment {
 	/** The layer reaction's level in the outer crust (µg/kg for acrylamide). */
 	public double crustLevel() {
 		return crustLevel;
+	}
+
+	/** Water share of the whole piece, %. */
+	public double waterPct() {
+		return waterPct;
+	}
+
+	/** Oil taken up, g per 100 g of the piece. */
+	public double oilPct() {
+		return oilPct;
 	}
 
 	/** The layer reaction's level in the whole portion. */

@@ -19,6 +19,10 @@ final class TargetRecord implements EventHandler {
 
 	private double surfaceExtent = Double.NaN;
 
+	private double waterPct = Double.NaN;
+
+	private double oilPct = Double.NaN;
+
 	/**
 	 * @param settings the run-past share and horizon, or null to go on as before
 	 */
@@ -35,6 +39,8 @@ final class TargetRecord implements EventHandler {
 		crustLevel = StepInterpolator.between(before.crustLevel(), after.crustLevel(), f);
 		portionLevel = StepInterpolator.between(before.portionLevel(), after.portionLevel(), f);
 		surfaceExtent = StepInterpolator.between(before.surfaceExtent(), after.surfaceExtent(), f);
+		waterPct = StepInterpolator.between(before.waterPct(), after.waterPct(), f);
+		oilPct = StepInterpolator.between(before.oilPct(), after.oilPct(), f);
 		if (settings == null) {
 			return Double.POSITIVE_INFINITY;
 		}
@@ -64,6 +70,14 @@ final class TargetRecord implements EventHandler {
 
 	double surfaceExtent() {
 		return surfaceExtent;
+	}
+
+	double waterPct() {
+		return waterPct;
+	}
+
+	double oilPct() {
+		return oilPct;
 	}
 
 }

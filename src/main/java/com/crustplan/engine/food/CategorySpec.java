@@ -38,6 +38,8 @@ final class CategorySpec {
 
 	Parameter initialPorosity;
 
+	Parameter shrinkage;
+
 	GabIsotherm isotherm;
 
 	BrowningKinetics browning;
@@ -105,6 +107,11 @@ final class CategorySpec {
 		return this;
 	}
 
+	CategorySpec shrinkage(Parameter p) {
+		this.shrinkage = p;
+		return this;
+	}
+
 	CategorySpec isotherm(GabIsotherm g) {
 		this.isotherm = g;
 		return this;
@@ -131,7 +138,8 @@ final class CategorySpec {
 	 * loading.
 	 */
 	CategorySpec complete() {
-		if (parts == null || shape == null || bufferCapacity == null || initialPorosity == null || isotherm == null
+		if (parts == null || shape == null || bufferCapacity == null || initialPorosity == null || shrinkage == null
+				|| isotherm == null
 				|| browning == null || colourPath == null || stages == null) {
 			throw new IllegalStateException("food category " + key + ": every part must be given");
 		}

@@ -24,4 +24,9 @@ public interface FaceExchange {
 		return null;
 	}
 
+	/** True where the face is under frying oil, which can enter the pores it opens. */
+	default boolean inOil() {
+		return false;
+	}
+
 }

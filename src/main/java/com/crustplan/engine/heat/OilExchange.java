@@ -68,4 +68,9 @@ final class OilExchange implements FaceExchange {
 		return body;
 	}
 
+	@Override
+	public boolean inOil() {
+		return true;
+	}
+
 }

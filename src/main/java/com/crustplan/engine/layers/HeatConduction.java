@@ -115,6 +115,14 @@ public final class HeatConduction {
 	}
 
 	/**
+	 * How fast node i's surplus falls per kelvin it is held hotter, its neighbours held:
+	 * the assembled diagonal, W/(m²·K).
+	 */
+	public double diagonal(int i) {
+		return diag[i];
+	}
+
+	/**
 	 * Power (W/m²) that node i's own energy balance leaves over at temperatures
 	 * {@code t}: positive for a pinned node that receives more heat than it stores.
 	 */

@@ -62,7 +62,12 @@ class CookConvergenceTest {
 						dt);
 				if (!Double.isNaN(previous)) {
 					double change = Math.abs(t - previous);
-					assertTrue(change < previousChange, c[1] + ": change " + change + " s at Δt " + dt);
+					// or converged: below 0.1 % of the answer, where two first-order
+					// error
+					// terms of opposite sign (face linearisation, end-of-step boiling
+					// point) can trade places
+					assertTrue(change < previousChange || change < 1e-3 * t,
+							c[1] + ": change " + change + " s at Δt " + dt);
 					previousChange = change;
 				}
 				previous = t;

@@ -36,7 +36,7 @@ class EnergyBalanceTest {
 	 * Enthalpy of the food and the water standing on it relative to 0 °C, J/m² of face.
 	 */
 	static double foodEnthalpy(Surface surface, double[] temperatureK, double[] moisture, double[] dryMass,
-			double[] standingWater) {
+			double[] standingWater, double[] oil) {
 		double[] dry = surface.composition().dryMatterFractions();
 		double[] fractions = new double[FoodComponent.values().length];
 		double h = 0;
@@ -49,6 +49,10 @@ class EnergyBalanceTest {
 			h += dryMass[i] * (1 + moisture[i]) * ThermalProperties.enthalpy(fractions, temperatureK[i] - 273.15);
 		}
 		int last = temperatureK.length - 1;
+		for (int i = 0; oil != null && i < temperatureK.length; i++) {
+			// frying oil taken up, as Choi–Okos fat
+			h += oil[i] * FoodComponent.FAT.enthalpy(temperatureK[i] - 273.15);
+		}
 		h += standingWater[0] * FoodComponent.WATER.enthalpy(temperatureK[0] - 273.15);
 		h += standingWater[1] * FoodComponent.WATER.enthalpy(temperatureK[last] - 273.15);
 		return h;
@@ -71,9 +75,9 @@ class EnergyBalanceTest {
 		double[] x0 = new double[n];
 		Arrays.fill(x0, surface.composition().moistureDryBasis());
 		double film0 = surface.surfaceWaterGPerM2() / 1000;
-		double before = foodEnthalpy(surface, t0, x0, end.dryMassKgPerM2(), new double[] { film0, film0 });
+		double before = foodEnthalpy(surface, t0, x0, end.dryMassKgPerM2(), new double[] { film0, film0 }, null);
 		double after = foodEnthalpy(surface, end.temperatureK(), end.moistureDryBasis(), end.dryMassKgPerM2(),
-				end.standingWaterKgPerM2());
+				end.standingWaterKgPerM2(), end.oilKgPerM2());
 		EnergyLedger ledger = result.energy();
 		assertTrue(ledger.heatInJPerM2() > 0, "heat must flow in");
 		assertEquals(horizonS, result.simulatedS(), 1e-6, "the run must cover the horizon");

@@ -116,7 +116,7 @@ class ShapedCookTest {
 	}
 
 	private static double diffusivity(Composition c, double temperatureC) {
-		MatrixProperties p = new MatrixProperties(c.dryMatterFractions(), 1);
+		MatrixProperties p = new MatrixProperties(c.dryMatterFractions(), 0, 0, 1);
 		double[] f = p.massFractions(c.moistureDryBasis());
 		return ThermalProperties.conductivity(f, temperatureC) / ThermalProperties.density(f, temperatureC)
 				/ ThermalProperties.specificHeat(f, temperatureC);

@@ -40,6 +40,12 @@ class DonenessJudgeTest {
 
 	static final Surface CHICKEN = Surface.defaults(FoodCategory.POULTRY_SKIN);
 
+	/**
+	 * A thick breast, 27 mm: heat now reaches the centre of a 20 mm piece past the Food
+	 * Code before its skin is golden, so the pan cases below need a thicker one.
+	 */
+	static final Surface THICK_CHICKEN = CHICKEN.withThicknessMm(27);
+
 	static final Surface STEAK = Surface.defaults(FoodCategory.MEAT);
 
 	static final Surface FISH = Surface.defaults(FoodCategory.FISH);
@@ -110,7 +116,7 @@ class DonenessJudgeTest {
 		void shouldBringTheChickenCoreIntoTheJuicyRangeWhenBrownedFirstAndFinishedToTheFoodCode() {
 			// the suggestion as a forward run: golden in a 200 °C pan, then a 180 °C oven
 			// until the centre reads 74 °C
-			StepsResult r = steps(CHICKEN, Target.stage("golden"), 74.0,
+			StepsResult r = steps(THICK_CHICKEN, Target.stage("golden"), 74.0,
 					CookStep.toColour(new PanContact(200, true, 60), Target.stage("golden"), 3600),
 					CookStep.toCore(new Oven(180, true, DRY), 74.0, 3600));
 			assertThat(r.colourReached()).isTrue();
@@ -118,8 +124,8 @@ class DonenessJudgeTest {
 			// FDA Food Code 2022 74 °C reached, under the 80 °C juiciness limit (common
 			// practice)
 			assertThat(DonenessJudge.peakCoreC(r.cook(), r.cook().simulatedS(), Double.NaN)).isBetween(74.0, 80.0);
-			assertThat(codes(DonenessJudge.judge(CHICKEN, List.of(CookStep.timed(new PanContact(200, true, 60), 1)), r,
-					Cut.WHOLE)))
+			assertThat(codes(DonenessJudge.judge(THICK_CHICKEN,
+					List.of(CookStep.timed(new PanContact(200, true, 60), 1)), r, Cut.WHOLE)))
 				.isEmpty();
 		}
 
@@ -153,7 +159,7 @@ class DonenessJudgeTest {
 
 		@Test
 		void shouldWarnForChickenGoldenInAPanBeforeItsCoreReachesTheFoodCode() {
-			List<DonenessWarning> w = judge(CHICKEN, new PanContact(200, true, 60), Target.stage("golden"));
+			List<DonenessWarning> w = judge(THICK_CHICKEN, new PanContact(200, true, 60), Target.stage("golden"));
 			DonenessWarning food = only(w, "core-below-food-code");
 			assertThat(reason(food).code()).isEqualTo("warning.food-code.poultry");
 			// FDA Food Code 2022, 3-401.11(A)(3): 74 °C (165 °F)
@@ -165,14 +171,14 @@ class DonenessJudgeTest {
 		@Test
 		void shouldReachTheFoodCodeWithoutDryingWhenThePanIsTwentyDegreesLower() {
 			// the suggestion's first half as a forward run: 200 → 180 °C
-			CookResult hot = AcrylamideCook.run(CHICKEN, new PanContact(200, true, 60), Target.stage("golden"));
-			CookResult lower = AcrylamideCook.run(CHICKEN, new PanContact(180, true, 60), Target.stage("golden"));
+			CookResult hot = AcrylamideCook.run(THICK_CHICKEN, new PanContact(200, true, 60), Target.stage("golden"));
+			CookResult lower = AcrylamideCook.run(THICK_CHICKEN, new PanContact(180, true, 60), Target.stage("golden"));
 			assertThat(lower.reached()).isTrue();
 			// FDA Food Code 2022 poultry 74 °C reached at golden, under the 80 °C
 			// juiciness limit
 			assertThat(lower.coreTemperatureAtTargetC()).isBetween(74.0, 80.0);
 			assertThat(lower.timeToTargetS()).isGreaterThan(hot.timeToTargetS());
-			assertThat(DonenessJudge.judge(CHICKEN, new PanContact(180, true, 60), lower, Cut.WHOLE)).isEmpty();
+			assertThat(DonenessJudge.judge(THICK_CHICKEN, new PanContact(180, true, 60), lower, Cut.WHOLE)).isEmpty();
 		}
 
 		@Test
@@ -196,7 +202,9 @@ class DonenessJudgeTest {
 		void shouldHoldMincedMeatToTheComminutedFigure() {
 			// the same run judged as a whole cut and as a burger patty (FDA Food Code
 			// 2022: 63 °C whole, 68 °C minced)
-			Surface patty = STEAK.withThicknessMm(13);
+			// a thick patty, 19 mm: through the shrinking crust a 13 mm one passes 68 °C
+			// before it is browned
+			Surface patty = STEAK.withThicknessMm(19);
 			HeatSetup pan = new PanContact(220, true, 60);
 			CookResult r = AcrylamideCook.run(patty, pan, Target.stage("browned"));
 			assertThat(r.coreTemperatureAtTargetC()).isBetween(63.0, 68.0);
@@ -216,7 +224,9 @@ class DonenessJudgeTest {
 			HeatSetup oven = new Oven(230, false, DRY);
 			CookResult r = AcrylamideCook.run(BAGUETTE, oven, Target.stage("golden"));
 			assertThat(r.reached()).isTrue();
-			assertThat(r.coreTemperatureAtTargetC()).isLessThan(30);
+			// golden with the crumb far from baked (evaporation–condensation now warms it
+			// to about 70 °C by then)
+			assertThat(r.coreTemperatureAtTargetC()).isLessThan(85);
 			DonenessWarning w = only(DonenessJudge.judge(BAGUETTE, oven, r, Cut.WHOLE), "crumb-not-baked");
 			// lean bread is baked at a crumb of 96–99 °C (bakers' probe, common practice)
 			assertThat(celsius(reason(w).args().get(2))).isEqualTo(96);
@@ -242,14 +252,17 @@ class DonenessJudgeTest {
 
 		@Test
 		void shouldCallAFryColouredBeforeItsCentreBoilsSoftAndFixItAtOneSeventyFive() {
-			List<DonenessWarning> w = judge(FRIES, new DeepFryer(190), Target.stage("golden"));
+			// a 14 mm strip: with pores that fill with oil and a shrinking crust a 10 mm
+			// one is cooked through when golden even at 190 °C
+			Surface chunky = FRIES.withThicknessMm(14);
+			List<DonenessWarning> w = judge(chunky, new DeepFryer(190), Target.stage("golden"));
 			DonenessWarning soft = only(w, "centre-not-cooked");
 			// a cooked centre sits at its boiling point, ≈ 100 °C (taken as 98 °C at the
 			// centre node)
 			assertThat(celsius(reason(soft).args().get(2))).isEqualTo(98);
 			// Regulation (EU) 2017/2158, Annex II: fry potato products below 175 °C
 			assertThat(suggestion(soft).args().get(0)).isEqualTo(Temperature.celsius(175));
-			assertThat(codes(judge(FRIES, new DeepFryer(175), Target.stage("golden")))).isEmpty();
+			assertThat(codes(judge(chunky, new DeepFryer(175), Target.stage("golden")))).isEmpty();
 		}
 
 		@Test
@@ -282,7 +295,8 @@ class DonenessJudgeTest {
 			double gapCool = r.timeToTargetS() - DonenessJudge.firstReachedS(r.series(), 96, r.timeToTargetS());
 			double gapHot = hotter.timeToTargetS()
 					- DonenessJudge.firstReachedS(hotter.series(), 96, hotter.timeToTargetS());
-			assertThat(gapHot).isLessThan(gapCool / 2);
+			// closer by a clear margin (a third or more of the gap)
+			assertThat(gapHot).isLessThan(gapCool * 2 / 3);
 		}
 
 	}

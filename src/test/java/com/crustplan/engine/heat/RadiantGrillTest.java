@@ -86,7 +86,9 @@ class RadiantGrillTest {
 		// elements)
 		CookResult hot = CookSimulation.run(toast, RadiantGrill.fromHeatFlux(40, 0), Target.stage("dark"));
 		assertThat(hot.outcome()).isEqualTo(Outcome.SURFACE_LIMIT);
-		assertThat(hot.maxSurfaceTemperatureC()).isLessThan(RadiantGrill.CHAR_SURFACE.value() + 15);
+		// the cook stops at the end of the step that crosses the limit: at 40 kW/m² a dry
+		// crust climbs up to about 16 K in one 0.5 s step
+		assertThat(hot.maxSurfaceTemperatureC()).isLessThan(RadiantGrill.CHAR_SURFACE.value() + 20);
 		// the default salamander browns toast golden without passing the limit
 		CookResult usual = CookSimulation.run(toast, new RadiantGrill(800, 0), Target.stage("golden"));
 		assertThat(usual.reached()).isTrue();
