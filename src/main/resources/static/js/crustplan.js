@@ -65,6 +65,7 @@
         if (k === 'phPlaceholder') { return form.elements.ph.value.trim() !== ''; }
         var el = form.elements[k];
         if (!el || el.value.trim() === '') { return false; }
+        if (typeof d[k] !== 'number') { return el.value !== String(d[k]); }
         return parseFloat(String(el.value).replace(',', '.')) !== Number(d[k]);
       });
     }

@@ -49,9 +49,10 @@ import com.crustplan.setup.SetupForm;
  * ({@link PlanReport#acrylamideMatters()}), else null
  */
 public record StationCard(long planId, String planName, String surfaceName, FoodCategory category, double thicknessMm,
-		Shape shape,		Message target, Double coreTargetC, boolean reached, Double offHeatS, Double readyS, List<Equipment> equipment,
-		List<Checkpoint> timeline, List<Colour> colours, Double coreAtPullC, boolean stepped, FoodCode code,
-		Double doneAtC, Double dryAboveC, AcrylamideView acrylamide, boolean hotOil, boolean hotPan, boolean hotOven) {
+		Shape shape, Message target, Double coreTargetC, boolean reached, Double offHeatS, Double readyS,
+		List<Equipment> equipment, List<Checkpoint> timeline, List<Colour> colours, Double coreAtPullC, boolean stepped,
+		FoodCode code, Double doneAtC, Double dryAboveC, AcrylamideView acrylamide, boolean hotOil, boolean hotPan,
+		boolean hotOven) {
 
 	public StationCard {
 		equipment = List.copyOf(equipment);

@@ -110,8 +110,7 @@ class SurfaceApiController {
 			double fatPct, double reducingSugarPct, double sucrosePct, double starchPct, double fibrePct, double ashPct,
 			double asparagineMgPerKg, double surfaceWaterGPerM2, double thicknessMm, @JsonProperty("pH") Double ph,
 			double bicarbonateGPerKg, double acidGPerKg, double initialTemperatureC, String shape, String notes,
-			String pretreatment,
-			Instant updatedAt) {
+			String pretreatment, Instant updatedAt) {
 
 		static SurfaceJson of(SavedSurface s) {
 			return new SurfaceJson(s.getId(), s.getName(), s.getCategory(), s.getProduct(), s.getWaterPct(),

@@ -43,7 +43,9 @@ public record SurfaceForm(
 		@Size(max = 16, message = "choose from the list") String shape,
 		@Size(max = 16, message = "choose from the list") String pretreatment) {
 
-	/** A surface with nothing done to it before cooking, in its category's usual shape. */
+	/**
+	 * A surface with nothing done to it before cooking, in its category's usual shape.
+	 */
 	public SurfaceForm(String name, String category, String product, Double waterPct, Double proteinPct, Double fatPct,
 			Double reducingSugarPct, Double sucrosePct, Double starchPct, Double fibrePct, Double ashPct,
 			Double asparagineMgPerKg, Double surfaceWaterGPerM2, Double thicknessMm, Double ph,

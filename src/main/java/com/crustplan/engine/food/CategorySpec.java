@@ -139,8 +139,7 @@ final class CategorySpec {
 	 */
 	CategorySpec complete() {
 		if (parts == null || shape == null || bufferCapacity == null || initialPorosity == null || shrinkage == null
-				|| isotherm == null
-				|| browning == null || colourPath == null || stages == null) {
+				|| isotherm == null || browning == null || colourPath == null || stages == null) {
 			throw new IllegalStateException("food category " + key + ": every part must be given");
 		}
 		SurfaceField.PH.check(ph);
