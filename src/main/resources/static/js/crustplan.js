@@ -360,7 +360,7 @@
         options: { responsive: true, maintainAspectRatio: false, animation: false,
           interaction: { mode: 'nearest', axis: 'x', intersect: false },
           plugins: { legend: { position: 'bottom', labels: { boxWidth: 14, color: INK } } },
-          scales: { x: axis('Time (min)', { type: 'linear', min: 0, max: end || undefined }), y: axis(title + ' (' + d.unit + ')') } }
+          scales: { x: axis('Time (min)', { type: 'linear', min: 0, max: end ? Math.ceil(end) : undefined }), y: axis(title + ' (' + d.unit + ')') } }
       });
     }
     chart('chart-compare-surface', 'surface', 'Surface');
