@@ -10,7 +10,22 @@ import com.crustplan.engine.model.Parameter;
  * relative to the conditions under which k was measured or calibrated.
  */
 public record BrowningKinetics(ArrheniusRate rate, Parameter referenceWaterActivity, Parameter referencePh,
-		Parameter referenceReducingSugarPct, Parameter referenceProteinPct) {
+		Parameter referenceReducingSugarPct, Parameter referenceProteinPct, Parameter reducingSugarOrder) {
+
+	/**
+	 * First order in reducing sugar: the default where no category-specific order was
+	 * measured.
+	 */
+	public static final Parameter FIRST_ORDER_IN_SUGAR = Parameter.assumption("n_RS",
+			"order of the browning rate in reducing sugar", 1.0, "–",
+			"first order, the textbook elementary step (assumption where no order was measured)");
+
+	/** Kinetics first order in reducing sugar. */
+	public BrowningKinetics(ArrheniusRate rate, Parameter referenceWaterActivity, Parameter referencePh,
+			Parameter referenceReducingSugarPct, Parameter referenceProteinPct) {
+		this(rate, referenceWaterActivity, referencePh, referenceReducingSugarPct, referenceProteinPct,
+				FIRST_ORDER_IN_SUGAR);
+	}
 
 	/**
 	 * pH sensitivity β of log10 k: factor 10^(β(pH − pH_ref)). Martins &amp; van Boekel
@@ -33,11 +48,11 @@ public record BrowningKinetics(ArrheniusRate rate, Parameter referenceWaterActiv
 	}
 
 	/**
-	 * First order in reducing sugar and in amino groups (protein as their proxy),
-	 * relative to the reference composition; zero without either reactant.
+	 * Order n_RS in reducing sugar and first order in amino groups (protein as their
+	 * proxy), relative to the reference composition; zero without either reactant.
 	 */
 	public double reactantFactor(double reducingSugarPct, double proteinPct) {
-		double sugar = reducingSugarPct / referenceReducingSugarPct.value();
+		double sugar = Math.pow(reducingSugarPct / referenceReducingSugarPct.value(), reducingSugarOrder.value());
 		double amino = proteinPct / referenceProteinPct.value();
 		return Math.min(REACTANT_FACTOR_CAP.value(), sugar * amino);
 	}

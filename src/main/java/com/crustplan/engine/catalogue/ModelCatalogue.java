@@ -218,10 +218,12 @@ public final class ModelCatalogue {
 				List.of(WaterActivityFactor.PEAK, WaterActivityFactor.DRY_EXPONENT)));
 		eq.add(new Equation("pH factor", "f_pH = 10^(β·(pH − pH_ref))", "Log k rises roughly linearly with pH.",
 				List.of(BrowningKinetics.PH_SENSITIVITY)));
-		eq.add(new Equation("Reactant factor", "f_r = min(f_max, (RS/RS_ref)·(P/P_ref))",
-				"First order in reducing sugar (glucose, fructose, lactose, maltose) and in amino groups, protein as their proxy. "
-						+ "Sucrose is not a reducing sugar and takes no part.",
-				List.of(BrowningKinetics.REACTANT_FACTOR_CAP)));
+		eq.add(new Equation("Reactant factor", "f_r = min(f_max, (RS/RS_ref)^n_RS·(P/P_ref))",
+				"Order n_RS in reducing sugar (glucose, fructose, lactose, maltose), first order where no other order is known, "
+						+ "and first order in amino groups, protein as their proxy. Potato fry colour takes an apparent order well "
+						+ "below 1: colour also comes from other constituents, while acrylamide stays first order in the sugar that "
+						+ "limits it. Sucrose is not a reducing sugar and takes no part.",
+				List.of(BrowningKinetics.REACTANT_FACTOR_CAP, BrowningKinetics.FIRST_ORDER_IN_SUGAR)));
 		eq.add(new Equation("Caramelisation", "k_C = k0,c·exp(−Ea,c/(R·T));  f_s = min(f_max, S/S_ref)",
 				"Sucrose browns by caramelisation alone, significant above about 160 °C.",
 				List.of(Caramelisation.PRE_EXPONENTIAL, Caramelisation.ACTIVATION_ENERGY,
@@ -231,7 +233,8 @@ public final class ModelCatalogue {
 			eq.add(new Equation("Maillard rate: " + c.label(), "k_M = k0·exp(−Ea/(R·T))",
 					"Parameters and the reference conditions of the fit.",
 					List.of(k.rate().preExponential(), k.rate().activationEnergy(), k.referenceWaterActivity(),
-							k.referencePh(), k.referenceReducingSugarPct(), k.referenceProteinPct())));
+							k.referencePh(), k.referenceReducingSugarPct(), k.referenceProteinPct(),
+							k.reducingSugarOrder())));
 		}
 		return new ModelSection("Browning kinetics", eq, List.of(
 				"Reported Maillard activation energies scatter from about 30 to 180 kJ/mol (van Boekel 2001, Nahrung 45:150): "

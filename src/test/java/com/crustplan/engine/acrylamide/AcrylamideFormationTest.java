@@ -102,11 +102,12 @@ class AcrylamideFormationTest {
 		// above 120 °C.
 		// The initial rate (a 5 s hold, precursors barely used) of a dry layer at 110 °C
 		// is under 1 % of that
-		// at 170 °C, and at 120 °C under 2 %.
+		// at 170 °C, and at 120 °C under 3 % (2.3 % with Ea,f = 109 kJ/mol from the fit
+		// on whole strips; it was under 2 % with the 121 kJ/mol of the earlier slab fit).
 		double cool = heldAt(POTATO, AcrylamideKinetics.DEFAULT, 110, 5, 0.1).acrylamide(2);
 		double warm = heldAt(POTATO, AcrylamideKinetics.DEFAULT, 120, 5, 0.1).acrylamide(2);
 		double hot = heldAt(POTATO, AcrylamideKinetics.DEFAULT, 170, 5, 0.1).acrylamide(2);
-		assertTrue(warm < 0.02 * hot, () -> "120 °C: " + warm + ", 170 °C: " + hot);
+		assertTrue(warm < 0.03 * hot, () -> "120 °C: " + warm + ", 170 °C: " + hot);
 		assertTrue(cool < 0.01 * hot, () -> "110 °C: " + cool + ", 170 °C: " + hot);
 	}
 

@@ -48,8 +48,11 @@ class AcrylamidePedreschiTest {
 	void heldOutPointAt170CWithinFactor1point5() {
 		// 327 µg/kg at 170 °C was not used in the fit. Factor 1.5: replicate and
 		// between-laboratory spread of
-		// acrylamide in fries is commonly 10–30 %, and the strip is modelled as a slab.
-		// PedreschiFit prints the current error.
+		// acrylamide in fries is commonly 10–30 %, and the square strip is modelled as
+		// the
+		// cylinder of equal surface-to-volume ratio. PedreschiFit prints the current
+		// error
+		// (−14 % at the last fit).
 		double predicted = PedreschiFit.portionAtFinalMoisture(fries[1], AcrylamideKinetics.DEFAULT);
 		double ratio = predicted / PedreschiFit.MEASURED_UG_PER_KG[1];
 		assertTrue(ratio > 1 / 1.5 && ratio < 1.5, () -> "170 °C: predicted " + predicted + " µg/kg");

@@ -4,6 +4,7 @@ import com.crustplan.engine.cook.CookSettings;
 import com.crustplan.engine.cook.CookSimulation;
 import com.crustplan.engine.food.Composition;
 import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.Shape;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.DeepFryer;
 import com.crustplan.engine.cook.Target;
@@ -18,12 +19,13 @@ import com.crustplan.engine.cook.Target;
  * the project directory: {@code mvn -o -q test-compile} then
  * {@code java -cp target/classes:target/test-classes com.crustplan.engine.acrylamide.PedreschiFit}.
  * <p>
- * The strip is run as an 8 mm slab, the convention a cook uses when entering chips by
- * their thickness. Blanched composition: the category's frying potato (0.40 % reducing
- * sugar, 3000 mg/kg asparagine) with half of both leached out by the long warm blanch —
- * an assumption; the short hot blanch of Pedreschi et al. 2005 removes about 40 % by our
- * reading of its −64 % (see {@code Mitigations}), and 80 min at 50 °C leaches at least as
- * much. Hence 0.20 % and 1500 mg/kg.
+ * The strip is run as an 8 mm square strip (the cylinder of equal surface-to-volume
+ * ratio, see {@link Shape}): the whole-strip figure follows the strip's real
+ * crust-to-volume ratio. Blanched composition: the category's frying potato (0.40 %
+ * reducing sugar, 3000 mg/kg asparagine) with half of both leached out by the long warm
+ * blanch — an assumption; the short hot blanch of Pedreschi et al. 2005 removes about 40
+ * % by our reading of its −64 % (see {@code Mitigations}), and 80 min at 50 °C leaches at
+ * least as much. Hence 0.20 % and 1500 mg/kg.
  */
 public final class PedreschiFit {
 
@@ -50,6 +52,7 @@ public final class PedreschiFit {
 		return Surface.defaults(FoodCategory.POTATO)
 			.withComposition(raw.withReducingSugarPct(BLANCHED_REDUCING_SUGAR_PCT))
 			.withAsparagineMgPerKg(BLANCHED_ASPARAGINE_MG_PER_KG)
+			.withShape(Shape.STRIP)
 			.withThicknessMm(THICKNESS_MM)
 			.withSurfaceWaterGPerM2(0);
 	}

@@ -71,11 +71,13 @@ class AcrylamideMitigationsTest {
 	}
 
 	@Test
-	void lowerTemperatureHelpsThickChipsFriedHot() {
-		// Annex II: fry below 175 °C. For thick-cut chips (14 mm) fried golden at 190 °C
-		// the model finds less
-		// acrylamide at 170 °C for the same colour (for thinner fries it finds about
-		// none: see the note)
+	void lowerTemperatureForThickChipsIsWeighedAtTheSameColour() {
+		// Annex II of Regulation (EU) 2017/2158: fry below 175 °C. For thick-cut chips
+		// (14 mm) fried golden at 190 °C the model weighs 170 °C at the same colour.
+		// Since
+		// formation was refitted on whole strips (Ea,f 109 kJ/mol, was 121) the longer,
+		// drier cook offsets the slower formation (142 → 161 µg/kg): the mitigation must
+		// then say so with the frying rule rather than claim a gain.
 		Mitigation m = Mitigations
 			.compute(Surface.defaults(FoodCategory.POTATO).withThicknessMm(14), Product.FRENCH_FRIES,
 					new DeepFryer(190), Target.stage("golden"), CookSettings.defaults())
@@ -83,7 +85,10 @@ class AcrylamideMitigationsTest {
 			.filter(x -> x.code().equals("LOWER_TEMPERATURE"))
 			.findFirst()
 			.orElseThrow();
-		assertTrue(m.effectUgPerKg() < 0, () -> m.beforeUgPerKg() + " → " + m.afterUgPerKg());
+		assertTrue(m.applicable(), () -> String.valueOf(m.reason()));
+		if (m.effectUgPerKg() >= 0) {
+			assertEquals("mitigation.lower-temperature.no-gain", m.reason().code());
+		}
 	}
 
 	@Test
