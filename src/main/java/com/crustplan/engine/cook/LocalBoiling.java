@@ -55,11 +55,12 @@ final class LocalBoiling {
 			pinned[i] = false;
 			ranDry[i] = false;
 			if (solution[i] > FREE_WATER_BOILING_K - 0.5 && state.hasWater(i)) {
-				double tb = boilingPointOf(i);
+				double aw = waterActivityOf(i);
+				double tb = aw >= 1 ? FREE_WATER_BOILING_K : WaterVapour.boilingTemperatureKFast(aw);
 				if (solution[i] > tb) {
 					pinned[i] = true;
-					pinnedTemperature[i] = endOfStepBoilingPoint(i, tb, conduction.diagonal(i) * (solution[i] - tb),
-							dt);
+					pinnedTemperature[i] = aw >= 1 ? tb
+							: endOfStepBoilingPoint(i, tb, conduction.diagonal(i) * (solution[i] - tb), dt);
 					any = true;
 				}
 			}
@@ -108,22 +109,29 @@ final class LocalBoiling {
 	 * (its neighbours held).
 	 */
 	private double endOfStepBoilingPoint(int i, double tb, double surplus, double dt) {
-		int face = state.faceOf(i);
-		double x = state.moisture[i];
-		if (surplus <= 0 || (face >= 0 && state.face(face).standingWater > 0)
-				|| state.isotherm().waterActivity(x) >= 1) {
+		if (surplus <= 0) {
 			return tb;
 		}
+		double x = state.moisture[i];
 		double slope = conduction.diagonal(i);
 		double perWatt = dt / (WaterVapour.latentHeat(tb) * state.dryMass[i]);
 		// g(T) = T − T_b(X_end(T)) rises with T: negative at T_b, positive where the
-		// surplus is spent; regula falsi with the Illinois modification
+		// surplus is spent; regula falsi with the Illinois modification. Where it is
+		// spent the layer keeps its moisture X, whose boiling point is tb: g = hi − tb
+		// there without evaluating it.
 		double lo = tb;
 		double hi = tb + surplus / slope;
 		double gLo = lo - boilingPointAtEnd(x, surplus, slope, tb, lo, perWatt);
-		double gHi = hi - boilingPointAtEnd(x, surplus, slope, tb, hi, perWatt);
+		double gHi = hi - tb;
 		if (gLo >= 0 || gHi <= 0) {
 			return gLo >= 0 ? lo : hi;
+		}
+		if (-gLo < PIN_TOLERANCE_K && hi - lo > PIN_TOLERANCE_K) {
+			// g rises at least as fast as T (the more the layer keeps, the lower its
+			// boiling point): the root lies within −g(T_b) of T_b, and so does the first
+			// regula falsi point, which is taken without checking it (a layer whose
+			// boiling point hardly moves: the wet interior)
+			return (lo * gHi - hi * gLo) / (gHi - gLo);
 		}
 		int side = 0;
 		for (int k = 0; k < MAX_PIN_ITERATIONS && hi - lo > PIN_TOLERANCE_K; k++) {
@@ -190,12 +198,13 @@ final class LocalBoiling {
 		state.face(1).boilingFlux = boiled[1] / dt;
 	}
 
-	private double boilingPointOf(int i) {
+	/** Water activity of layer i: 1 under standing water, else from its moisture. */
+	private double waterActivityOf(int i) {
 		int face = state.faceOf(i);
 		if (face >= 0 && state.face(face).standingWater > 0) {
-			return FREE_WATER_BOILING_K;
+			return 1;
 		}
-		return WaterVapour.boilingTemperatureKFast(state.isotherm().waterActivity(state.moisture[i]));
+		return state.isotherm().waterActivity(state.moisture[i]);
 	}
 
 	/**

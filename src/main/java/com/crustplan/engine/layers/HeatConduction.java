@@ -33,6 +33,9 @@ public final class HeatConduction {
 
 	private final Tridiagonal solver;
 
+	/** 1/k at each node, m·K/W (one division per node, not two per interface). */
+	private final double[] resistivity;
+
 	public HeatConduction(Grid grid) {
 		this.grid = grid;
 		int n = grid.size();
@@ -45,6 +48,7 @@ public final class HeatConduction {
 		pinnedUpper = new double[n];
 		pinnedRhs = new double[n];
 		solver = new Tridiagonal(n);
+		resistivity = new double[n];
 	}
 
 	/**
@@ -64,15 +68,17 @@ public final class HeatConduction {
 	public void assemble(double[] temperature, double[] capacity, double[] conductivity, double dt, double face0Slope,
 			double face0Source, double face1Slope, double face1Source) {
 		int n = grid.size();
+		double perSecond = 1 / dt;
 		for (int i = 0; i < n; i++) {
 			lower[i] = 0;
 			upper[i] = 0;
-			diag[i] = capacity[i] / dt;
-			rhs[i] = capacity[i] / dt * temperature[i];
+			diag[i] = capacity[i] * perSecond;
+			rhs[i] = diag[i] * temperature[i];
+			resistivity[i] = 1 / conductivity[i];
 		}
 		for (int i = 0; i < n - 1; i++) {
 			double d = grid.spacing(i);
-			double g = grid.faceArea(i) / (0.5 * d / conductivity[i] + 0.5 * d / conductivity[i + 1]);
+			double g = grid.faceArea(i) / (0.5 * d * (resistivity[i] + resistivity[i + 1]));
 			diag[i] += g;
 			diag[i + 1] += g;
 			upper[i] = -g;

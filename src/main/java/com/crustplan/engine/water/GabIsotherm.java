@@ -33,16 +33,18 @@ public record GabIsotherm(Parameter monolayer, Parameter c, Parameter k) {
 		double cc = c.value();
 		double a = x * (cc - 1);
 		double b = xm * cc - x * (cc - 2);
-		double y;
+		double kk = k.value();
+		double aw;
 		if (Math.abs(a) < 1e-12) {
-			y = x / b;
+			aw = x / (b * kk);
 		}
 		else {
-			// x(C−1)y² + (Xm·C − x(C−2))y − x = 0; the root is written to avoid
-			// cancellation
-			y = 2 * x / (b + Math.sqrt(b * b + 4 * a * x));
+			// x(C−1)y² + (Xm·C − x(C−2))y − x = 0 with y = K·aw; the root is written to
+			// avoid cancellation, and with one division (the stepper's boiling-point
+			// search waits on this)
+			aw = 2 * x / ((b + Math.sqrt(b * b + 4 * a * x)) * kk);
 		}
-		return Math.min(1.0, y / k.value());
+		return Math.min(1.0, aw);
 	}
 
 }

@@ -86,6 +86,12 @@ public final class WaterVapour {
 
 	private static final double[] BOILING_TABLE = new double[TABLE_SIZE];
 
+	/**
+	 * Table intervals per unit of water activity (a multiply in the lookup, not a
+	 * divide).
+	 */
+	private static final double TABLE_STEPS_PER_AW = (TABLE_SIZE - 1) / (1 - MIN_BOILING_AW);
+
 	static {
 		for (int i = 0; i < TABLE_SIZE; i++) {
 			BOILING_TABLE[i] = boilingTemperatureK(MIN_BOILING_AW + (1 - MIN_BOILING_AW) * i / (TABLE_SIZE - 1));
@@ -98,8 +104,7 @@ public final class WaterVapour {
 	 * times a step.
 	 */
 	public static double boilingTemperatureKFast(double waterActivity) {
-		double u = (Math.max(MIN_BOILING_AW, Math.min(1, waterActivity)) - MIN_BOILING_AW) / (1 - MIN_BOILING_AW)
-				* (TABLE_SIZE - 1);
+		double u = (Math.max(MIN_BOILING_AW, Math.min(1, waterActivity)) - MIN_BOILING_AW) * TABLE_STEPS_PER_AW;
 		int i = Math.min((int) u, TABLE_SIZE - 2);
 		double f = u - i;
 		return BOILING_TABLE[i] + f * (BOILING_TABLE[i + 1] - BOILING_TABLE[i]);
