@@ -75,6 +75,11 @@ public class PlanBenchmark {
 		return Plans.chips(DEFAULTS);
 	}
 
+	@Benchmark
+	public CookResult chipsStripFryer175Golden() {
+		return Plans.chipsStrip(DEFAULTS);
+	}
+
 	/**
 	 * A 30 mm steak: sear 3 min in a 240 °C pan, fan oven at 180 °C to 52 °C core, rest 5
 	 * min (series recorded).

@@ -28,6 +28,12 @@ final class Plans {
 	/** 10 mm chips (the potato defaults) in oil at 175 °C, to golden. */
 	static final Surface CHIPS = Surface.defaults(FoodCategory.POTATO);
 
+	/**
+	 * Chips as the app cooks them: 10 mm square strips (the slab above keeps the old
+	 * case).
+	 */
+	static final Surface CHIPS_STRIP = Surface.typical(FoodCategory.POTATO);
+
 	static final HeatSetup FRYER_175 = new DeepFryer(175);
 
 	static final Target GOLDEN = Target.stage("golden");
@@ -48,6 +54,10 @@ final class Plans {
 
 	static CookResult chips(CookSettings settings) {
 		return AcrylamideCook.run(CHIPS, FRYER_175, GOLDEN, settings);
+	}
+
+	static CookResult chipsStrip(CookSettings settings) {
+		return AcrylamideCook.run(CHIPS_STRIP, FRYER_175, GOLDEN, settings);
 	}
 
 	static double mapTemperatureC(int i) {
