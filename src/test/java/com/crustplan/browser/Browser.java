@@ -7,12 +7,14 @@ import java.nio.file.Path;
 import java.time.Duration;
 
 import org.junit.jupiter.api.Assumptions;
+import org.openqa.selenium.By;
 import org.openqa.selenium.OutputType;
 import org.openqa.selenium.TakesScreenshot;
 import org.openqa.selenium.WebDriver;
 import org.openqa.selenium.chrome.ChromeDriver;
 import org.openqa.selenium.chrome.ChromeDriverService;
 import org.openqa.selenium.chrome.ChromeOptions;
+import org.openqa.selenium.support.ui.WebDriverWait;
 
 /**
  * Headless Debian Chromium for the browser tests. Where Chromium or its driver is missing
@@ -41,6 +43,15 @@ final class Browser {
 		WebDriver driver = new ChromeDriver(service, options);
 		driver.manage().timeouts().implicitlyWait(Duration.ofSeconds(2));
 		return driver;
+	}
+
+	/** Signs in through the sign-in page and waits until it has been left. */
+	static void signIn(WebDriver driver, String baseUrl, String user, String password) {
+		driver.get(baseUrl + "/signin");
+		driver.findElement(By.id("username")).sendKeys(user);
+		driver.findElement(By.id("password")).sendKeys(password);
+		driver.findElement(By.cssSelector("form.stack button[type=submit]")).click();
+		new WebDriverWait(driver, Duration.ofSeconds(10)).until(d -> !d.getCurrentUrl().contains("/signin"));
 	}
 
 	/** A full-page PNG under target/screenshots/, for a person to look at. */

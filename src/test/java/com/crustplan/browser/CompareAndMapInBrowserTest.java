@@ -54,11 +54,7 @@ class CompareAndMapInBrowserTest {
 	}
 
 	void signIn() {
-		driver.get(url("/signin"));
-		driver.findElement(By.id("username")).sendKeys("chef");
-		driver.findElement(By.id("password")).sendKeys("chef-demo");
-		driver.findElement(By.cssSelector("form.stack button[type=submit]")).click();
-		new WebDriverWait(driver, Duration.ofSeconds(10)).until(d -> !d.getCurrentUrl().contains("/signin"));
+		Browser.signIn(driver, url(""), "chef", "chef-demo");
 	}
 
 	double js(String script, Object... args) {

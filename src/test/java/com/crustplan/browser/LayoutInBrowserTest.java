@@ -84,11 +84,7 @@ class LayoutInBrowserTest {
 			""";
 
 	void signIn() {
-		driver.get(url("/signin"));
-		driver.findElement(By.id("username")).sendKeys("chef");
-		driver.findElement(By.id("password")).sendKeys("chef-demo");
-		driver.findElement(By.cssSelector("form.stack button[type=submit]")).click();
-		new WebDriverWait(driver, Duration.ofSeconds(10)).until(d -> !d.getCurrentUrl().contains("/signin"));
+		Browser.signIn(driver, url(""), "chef", "chef-demo");
 	}
 
 	void unit(String code) {

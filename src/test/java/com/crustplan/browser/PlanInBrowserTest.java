@@ -53,11 +53,7 @@ class PlanInBrowserTest {
 	}
 
 	void signIn(String user, String password) {
-		driver.get(url("/signin"));
-		driver.findElement(By.id("username")).sendKeys(user);
-		driver.findElement(By.id("password")).sendKeys(password);
-		driver.findElement(By.cssSelector("form.stack button[type=submit]")).click();
-		new WebDriverWait(driver, Duration.ofSeconds(10)).until(d -> !d.getCurrentUrl().contains("/signin"));
+		Browser.signIn(driver, url(""), user, password);
 	}
 
 	@Test

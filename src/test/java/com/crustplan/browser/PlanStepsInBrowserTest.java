@@ -53,11 +53,7 @@ class PlanStepsInBrowserTest {
 	}
 
 	void signIn() {
-		driver.get(url("/signin"));
-		driver.findElement(By.id("username")).sendKeys("chef");
-		driver.findElement(By.id("password")).sendKeys("chef-demo");
-		driver.findElement(By.cssSelector("form.stack button[type=submit]")).click();
-		new WebDriverWait(driver, Duration.ofSeconds(10)).until(d -> !d.getCurrentUrl().contains("/signin"));
+		Browser.signIn(driver, url(""), "chef", "chef-demo");
 	}
 
 	void step(int i, String setup, String minutes, String core) {

@@ -119,11 +119,7 @@ class StationCardInBrowserTest {
 	}
 
 	void signIn() {
-		driver.get(url("/signin"));
-		driver.findElement(By.id("username")).sendKeys("chef");
-		driver.findElement(By.id("password")).sendKeys("chef-demo");
-		driver.findElement(By.cssSelector("form.stack button[type=submit]")).click();
-		new WebDriverWait(driver, Duration.ofSeconds(10)).until(d -> !d.getCurrentUrl().contains("/signin"));
+		Browser.signIn(driver, url(""), "chef", "chef-demo");
 	}
 
 	/** The open page printed as the browser's print command would, backgrounds off. */

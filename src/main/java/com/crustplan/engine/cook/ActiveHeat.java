@@ -35,7 +35,9 @@ final class ActiveHeat {
 
 		@Override
 		public Message describe() {
-			throw new UnsupportedOperationException("the centre of a piece is not a face");
+			// the no-flux centre of a strip, cube or ball is never described as a heat:
+			// no caller reaches it
+			throw new IllegalStateException("the centre of a piece is not a face");
 		}
 	};
 

@@ -5,6 +5,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import java.util.function.ToDoubleFunction;
 import java.util.stream.IntStream;
 
 import org.springframework.stereotype.Service;
@@ -199,7 +200,7 @@ public class SettingSearch {
 		return s.stream().filter(x -> x.timeS() >= t - 1e-6).findFirst().orElse(s.get(s.size() - 1));
 	}
 
-	private static double interpolate(List<Sample> s, double t, java.util.function.ToDoubleFunction<Sample> f) {
+	private static double interpolate(List<Sample> s, double t, ToDoubleFunction<Sample> f) {
 		for (int i = 1; i < s.size(); i++) {
 			Sample a = s.get(i - 1);
 			Sample b = s.get(i);
