@@ -101,14 +101,20 @@ public final class ModelCatalogue {
 						+ "The grid keeps its geometry: shrinkage acts on what fills the layer, not on the distances heat travels.",
 				shrinkage));
 		eq.add(new Equation("Evaporation–condensation in crumb",
-				"k += 1/((1−ε_c)/k_m + ε_c/(k_gas + k_v)) − 1/((1−ε_c)/k_m + ε_c/k_gas);  k_v = f_wet·D_va·S(y)·h_fg·aw·(dp_sat/dT)/(R_v·T)",
+				"closed: k = k_geo + 1/((1−ε_c)/k_m + ε_c/(k_gas + k_v)) − 1/((1−ε_c)/k_m + ε_c/k_gas);  "
+						+ "open: k = k_m^(1−ε)·k_gas^(ε−ε_c)·(k_gas + k_v)^ε_c;  k = k_closed + φ·max(0, k_open − k_closed), "
+						+ "φ = (T_peak − T_open,0)/(T_open,1 − T_open,0) in [0, 1];  k_v = f_wet·D_va·S(y)·h_fg·aw·(dp_sat/dT)/(R_v·T)",
 				"Across the raw food's own closed gas cells ε_c (proofed dough), water evaporates at the warm wall, diffuses and "
 						+ "condenses at the cold one (de Vries 1958; the mechanism of bread-baking models, e.g. Thorvaldsson & Janestad 1999, "
 						+ "Purlis & Salvadori 2009). Cells in series with their walls; dp_sat/dT by Clausius–Clapeyron; S(y) = 1/(1 − y) the "
 						+ "Stefan factor up to y_v,max, then tapered to 0 for pure steam; f_wet rises from 0 at aw,wet to 1 at aw = 1. "
+						+ "As the crumb sets its cells open into one connected pore space (71–81 °C, Zhang et al. 2025; "
+						+ "Wang, Austin & Bell 2011), and the vapour term joins the pore gas in the geometric-mean rule "
+						+ "(de Vries 1963); T_peak is the highest temperature the layer has reached. "
 						+ "Pores opened by drying vent and get none.",
 				List.of(PoreVapourConductivity.VAPOUR_DIFFUSIVITY_298K, PoreVapourConductivity.MAX_VAPOUR_SHARE,
-						PoreVapourConductivity.WET_WALL_ACTIVITY)));
+						PoreVapourConductivity.WET_WALL_ACTIVITY, PoreVapourConductivity.CELL_OPENING_START,
+						PoreVapourConductivity.CELL_OPENING_END)));
 		eq.add(new Equation("Frying oil in the pores",
 				"m_oil,i = r_oil·(X₀ − X_i)·m_dry,i  (never decreasing, while a face is in oil)",
 				"Oil uptake follows the water lost (Gamble, Rice & Selman 1987: both linear in √t, oil where water left); the oil is "

@@ -20,7 +20,9 @@ import com.crustplan.engine.model.Parameter;
  * to local boiling). It is small in cold dough, rises steeply towards 100 °C while the
  * pore walls are wet, and vanishes in a dry crust (aw → 0), as the measured rise of crumb
  * conductivity with temperature and moisture shows. It needs liquid on the walls to
- * return what condenses, so it fades out below aw,wet.
+ * return what condenses, so it fades out below aw,wet. Dough's gas cells are closed until
+ * the crumb sets and they open into one connected pore ({@link #openCellShare}); how the
+ * term is mixed into a layer's conductivity, closed or open, is the cook's.
  */
 public final class PoreVapourConductivity {
 
@@ -38,13 +40,37 @@ public final class PoreVapourConductivity {
 			"our choice: de Vries (1958) ties the enhancement to liquid on the pore walls; a hygroscopic crust "
 					+ "only sorbs, so the term rises linearly from 0 at this activity to full at aw = 1");
 
+	public static final Parameter CELL_OPENING_START = Parameter.published("T_open,0",
+			"crumb temperature at which the dough's closed gas cells begin to open", 71, "°C",
+			"Zhang, Yang, Xu, Long & Ye 2025, Foods 14:1649 (pore-opening function calibrated on baking experiments: "
+					+ "opening mainly at 71–81 °C; abstract seen); a structural change near 70 °C after which vapour "
+					+ "reaches the loaf centre is also reported by Thorvaldsson & Skjöldebrand 1998, LWT 31:658 (from memory)");
+
+	public static final Parameter CELL_OPENING_END = Parameter.published("T_open,1",
+			"crumb temperature by which the gas cells are open", 81, "°C",
+			"Zhang et al. 2025, Foods 14:1649 (71–81 °C, abstract seen); set crumb is one interconnected open cell holding "
+					+ "about 99 % of its porosity (Wang, Austin & Bell 2011, J Cereal Sci 54:203; abstract seen). "
+					+ "A linear rise between the two temperatures is our assumption");
+
 	private static final double WET_WALL = WET_WALL_ACTIVITY.value();
+
+	private static final double OPEN_FROM_K = CELL_OPENING_START.value() + 273.15;
+
+	private static final double OPEN_SPAN_K = CELL_OPENING_END.value() - CELL_OPENING_START.value();
 
 	private static final double D_298 = VAPOUR_DIFFUSIVITY_298K.value();
 
 	private static final double MAX_SHARE = MAX_VAPOUR_SHARE.value();
 
 	private PoreVapourConductivity() {
+	}
+
+	/**
+	 * Share of the dough's gas cells that have opened into one connected pore space, from
+	 * the highest temperature the layer has reached (set crumb does not close again).
+	 */
+	public static double openCellShare(double peakTemperatureK) {
+		return Math.max(0, Math.min(1, (peakTemperatureK - OPEN_FROM_K) / OPEN_SPAN_K));
 	}
 
 	/**

@@ -50,4 +50,19 @@ class PoreVapourConductivityTest {
 		assertEquals(0, PoreVapourConductivity.at(373.15 + 0.5, 1));
 	}
 
+	@Test
+	void shouldOpenTheCellsOverThePublishedSettingRange() {
+		// pore opening mainly at 71–81 °C (Zhang, Yang, Xu, Long & Ye 2025, Foods
+		// 14:1649):
+		// dough cells closed below, set crumb one connected pore above (Wang, Austin &
+		// Bell
+		// 2011, J Cereal Sci 54:203: about 99 % of crumb porosity in one open cell)
+		assertEquals(0, PoreVapourConductivity.openCellShare(273.15 + 65));
+		assertEquals(0, PoreVapourConductivity.openCellShare(273.15 + 70.9));
+		assertTrue(PoreVapourConductivity.openCellShare(273.15 + 76) > 0.3);
+		assertTrue(PoreVapourConductivity.openCellShare(273.15 + 76) < 0.7);
+		assertEquals(1, PoreVapourConductivity.openCellShare(273.15 + 81.1));
+		assertEquals(1, PoreVapourConductivity.openCellShare(273.15 + 99));
+	}
+
 }
