@@ -27,10 +27,9 @@ class BreadCrumbBakeTest {
 	@Test
 	void shouldBakeTheCrumbBeforeTheCrustIsGolden() {
 		// common practice: a loaf is done, crumb 96–99 °C, in roughly 25–45 min at
-		// 200 °C with a golden crust; the crumb reaches its ≈100 °C plateau before the
-		// crust is finished (the evaporation front of Zanoni, Peri & Pierucci 1993, J
-		// Food
-		// Eng 19:389, behind which the crumb tends to 100 °C)
+		// 200 °C with a golden crust; the crumb reaches its ≈100 °C plateau before
+		// the crust is finished (the evaporation front of Zanoni, Peri & Pierucci
+		// 1993, J Food Eng 19:389, behind which the crumb tends to 100 °C)
 		CookResult golden = CookSimulation.run(loaf, oven, Target.stage("golden"), SETTINGS);
 		assertTrue(golden.reached(), String.valueOf(golden.explanation()));
 		double goldenMin = golden.timeToTargetS() / 60;
@@ -44,10 +43,9 @@ class BreadCrumbBakeTest {
 
 	@Test
 	void shouldHoldTheWetCrumbAtItsBoilingPoint() {
-		// Zanoni, Peri & Pierucci 1993: the crumb's moisture stays near its initial value
-		// and its temperature tends to 100 °C, however long the bake (crumb ≈ 99–100 °C
-		// in
-		// bread-baking measurements)
+		// Zanoni, Peri & Pierucci 1993: the crumb's moisture stays near its
+		// initial value and its temperature tends to 100 °C, however long the bake
+		// (crumb ≈ 99–100 °C in bread-baking measurements)
 		CookResult dark = CookSimulation.run(loaf, oven, Target.stage("dark"), SETTINGS);
 		double hottestCore = dark.series().stream().mapToDouble(Sample::coreTemperatureC).max().orElseThrow();
 		assertTrue(hottestCore > 98 && hottestCore < 101, "hottest crumb " + hottestCore + " °C");

@@ -41,15 +41,12 @@ class CrumbConductivityTest {
 
 	@Test
 	void shouldMatchTheApparentDiffusivityOfBakedCrumb() {
-		// Zanoni, Peri & Gianotti 1995, J Food Eng 26:497: crumb of baked bread heated in
-		// an
-		// oven at 100 °C, α = exp(0.01·ε[%] − 15.25) m²/s, 4.3e-7 at 60 % porosity. The
-		// engine's open crumb as one equivalent diffusivity over the same rise, 25 → 99
-		// °C:
-		// the Kirchhoff mean ∫k dT / ∫ρc dT (exact for steady conduction with k(T)). ±30
-		// %:
-		// their α absorbs how they set the surface, ours the vapour form's
-		// approximations.
+		// Zanoni, Peri & Gianotti 1995, J Food Eng 26:497: crumb of baked bread
+		// heated in an oven at 100 °C, α = exp(0.01·ε[%] − 15.25) m²/s, 4.3e-7 at
+		// 60 % porosity. The engine's open crumb as one equivalent diffusivity
+		// over the same rise, 25 → 99 °C: the Kirchhoff mean ∫k dT / ∫ρc dT (exact
+		// for steady conduction with k(T)). ±30 %: their α absorbs how they set
+		// the surface, ours the vapour form's approximations.
 		double published = Math.exp(0.01 * 100 * POROSITY - 15.25);
 		double k = 0;
 		double heat = 0;
@@ -65,11 +62,10 @@ class CrumbConductivityTest {
 
 	@Test
 	void shouldCarryMostOfTheHeatOfUnsetDoughByEvaporationCondensation() {
-		// Zhang, Yang, Xu, Long & Ye 2025, Foods 14:1649 (model calibrated on baking
-		// experiments): in closed pores evaporation–diffusion–condensation gives about 60
-		// %
-		// of the effective conductivity. Ours, averaged over unset dough (25–70 °C): ±15
-		// points, a model's figure, not a measurement
+		// Zhang, Yang, Xu, Long & Ye 2025, Foods 14:1649 (model calibrated on
+		// baking experiments): in closed pores evaporation–diffusion–condensation
+		// gives about 60 % of the effective conductivity. Ours, averaged over
+		// unset dough (25–70 °C): ±15 points, a model's figure, not a measurement
 		double share = 0;
 		int n = 0;
 		for (double c = 25; c <= 70; c += 1) {
@@ -85,10 +81,10 @@ class CrumbConductivityTest {
 
 	@Test
 	void shouldNeverConductLessOnceOpenAndRiseSteeplyTowardsBoiling() {
-		// opening takes the walls out of the vapour's path; the open crumb's k rises
-		// several-fold from 60 to 95 °C, the steep rise bread-baking models carry (de
-		// Vries
-		// 1958 form; Thorvaldsson & Janestad 1999, J Food Eng 40:167)
+		// opening takes the walls out of the vapour's path; the open crumb's k
+		// rises several-fold from 60 to 95 °C, the steep rise bread-baking models
+		// carry (de Vries 1958 form; Thorvaldsson & Janestad 1999, J Food Eng
+		// 40:167)
 		for (double c = 25; c <= 99; c += 2) {
 			double km = matrixConductivity(c);
 			double kv = PoreVapourConductivity.at(c + 273.15, CRUMB_ACTIVITY);
