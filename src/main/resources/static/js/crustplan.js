@@ -253,7 +253,9 @@
     Chart.defaults.color = INK;
     var common = { responsive: true, maintainAspectRatio: false, animation: false, interaction: { mode: 'nearest', axis: 'x', intersect: false },
       plugins: { legend: { position: 'bottom', labels: { boxWidth: 14, color: INK } } } };
-    var x = axis('Time (min)', { type: 'linear', min: 0, max: t.length ? t[t.length - 1] : undefined });
+    // the axis ends where the cook ends; its end label to a tenth of a minute, not 50.008
+    var x = axis('Time (min)', { type: 'linear', min: 0, max: t.length ? t[t.length - 1] : undefined,
+      ticks: { color: INK, callback: function (v) { return String(Math.round(v * 10) / 10); } } });
     var targetX = d.targetTimeMin;
     var plugins = d.steps ? [bandsPlugin(d.steps)] : [];
     var marker = function (ys, label) {

@@ -141,6 +141,35 @@ public record CutFace(InteriorProfile profile, double widthMm, double heightMm, 
 		return profile.crustMm()[0];
 	}
 
+	/** Crust of face 1, mm (null for a round body). */
+	public Double lowerCrustMm() {
+		return round() ? null : PlanReport.finite(profile.crustMm()[1]);
+	}
+
+	/** The colour of face 0's crust, or null where it formed none. */
+	public String crustHex() {
+		return profile.crustMm()[0] > 0 ? profile.crustColour()[0].hex() : null;
+	}
+
+	/**
+	 * The colour halfway through face 0's cooked band, or null where there is none (the
+	 * key beside the drawing).
+	 */
+	public String bandHex() {
+		double band = profile.bandMm()[0];
+		if (!(band > 0)) {
+			return null;
+		}
+		double depth = profile.crustMm()[0] + band / 2;
+		Layer best = profile.layers().get(0);
+		for (Layer l : profile.layers()) {
+			if (Math.abs(l.depthMm() - depth) < Math.abs(best.depthMm() - depth)) {
+				best = l;
+			}
+		}
+		return best.colour().hex();
+	}
+
 	/** Thickness of the piece as drawn (a round body's diameter), mm. */
 	public double sizeMm() {
 		return round() ? 2 * profile.lengthMm() : profile.lengthMm();
