@@ -264,11 +264,12 @@
         borderColor: INK, backgroundColor: '#ffffff', borderWidth: 2 }];
     };
 
-    var temperatures = [
-      line('Surface (' + d.unit + ')', t, d.surfaceTemperature, '#b42318'),
-      line('Far side, away from the heat (' + d.unit + ')', t, d.otherFaceTemperature, '#b7791f', { borderDash: [6, 4], borderWidth: 2 }),
-      line('Core (' + d.unit + ')', t, d.coreTemperature, '#1d4ed8')
-    ];
+    // the far side only where the plan has one (a slab heated from one face)
+    var temperatures = [line('Surface (' + d.unit + ')', t, d.surfaceTemperature, '#b42318')];
+    if (d.otherFaceTemperature) {
+      temperatures.push(line('Far side, away from the heat (' + d.unit + ')', t, d.otherFaceTemperature, '#b7791f', { borderDash: [6, 4], borderWidth: 2 }));
+    }
+    temperatures.push(line('Core (' + d.unit + ')', t, d.coreTemperature, '#1d4ed8'));
     if (d.heatSourceTemperature) {
       // the pan or the oil, drawn down by the load and brought back by its heat
       temperatures.push(line(d.heatSourceLabel + ' (' + d.unit + ')', t, d.heatSourceTemperature, '#4b5563',

@@ -52,7 +52,7 @@ public record CutFace(InteriorProfile profile, double widthMm, double heightMm, 
 
 	/** The SVG view box: the section and a strip below it for the scale bar, mm. */
 	public String viewBox() {
-		return "0 0 " + svg(widthMm) + " " + svg(heightMm + SCALE_STRIP_MM);
+		return "0 0 " + svg(widthMm) + " " + svg(heightMm + strip());
 	}
 
 	public String width() {
@@ -65,18 +65,35 @@ public record CutFace(InteriorProfile profile, double widthMm, double heightMm, 
 
 	/** Top of the scale bar, mm. */
 	public String scaleY() {
-		return svg(heightMm + SCALE_STRIP_MM / 2);
+		return svg(heightMm + strip() / 2);
 	}
 
 	public String scaleTextY() {
-		return svg(heightMm + SCALE_STRIP_MM - 0.5);
+		return svg(heightMm + strip() * (1 - 0.5 / SCALE_STRIP_MM));
+	}
+
+	/** Size of the scale's label, mm in the drawing: the same on the page at every size. */
+	public String scaleFontSize() {
+		return svg(strip() * 2.6 / SCALE_STRIP_MM);
+	}
+
+	public String scaleStroke() {
+		return svg(strip() * 0.4 / SCALE_STRIP_MM);
+	}
+
+	/**
+	 * Room under the section for the scale bar, mm: a tenth of the drawing's width, so that
+	 * the bar's label reads the same on a small ball as on a wide steak.
+	 */
+	private double strip() {
+		return SCALE_STRIP_MM * widthMm / SLAB_WIDTH_MM;
 	}
 
 	public String scaleBar() {
 		return svg(scaleBarMm());
 	}
 
-	/** Room under the section for the scale bar, mm. */
+	/** Room under the section for the scale bar of a drawing {@link #SLAB_WIDTH_MM} wide, mm. */
 	static final double SCALE_STRIP_MM = 6;
 
 	public CutFace {
@@ -203,7 +220,7 @@ public record CutFace(InteriorProfile profile, double widthMm, double heightMm, 
 
 	/** A 10 mm scale bar, or 5 mm on small pieces. */
 	public double scaleBarMm() {
-		return heightMm < 12 && !round() ? 5 : 10;
+		return round() ? (widthMm < 16 ? 5 : 10) : heightMm < 12 ? 5 : 10;
 	}
 
 }
