@@ -72,7 +72,9 @@ public record CutFace(InteriorProfile profile, double widthMm, double heightMm, 
 		return svg(heightMm + strip() * (1 - 0.5 / SCALE_STRIP_MM));
 	}
 
-	/** Size of the scale's label, mm in the drawing: the same on the page at every size. */
+	/**
+	 * Size of the scale's label, mm in the drawing: the same on the page at every size.
+	 */
 	public String scaleFontSize() {
 		return svg(strip() * 2.6 / SCALE_STRIP_MM);
 	}
@@ -82,8 +84,8 @@ public record CutFace(InteriorProfile profile, double widthMm, double heightMm, 
 	}
 
 	/**
-	 * Room under the section for the scale bar, mm: a tenth of the drawing's width, so that
-	 * the bar's label reads the same on a small ball as on a wide steak.
+	 * Room under the section for the scale bar, mm: a tenth of the drawing's width, so
+	 * that the bar's label reads the same on a small ball as on a wide steak.
 	 */
 	private double strip() {
 		return SCALE_STRIP_MM * widthMm / SLAB_WIDTH_MM;
@@ -93,7 +95,10 @@ public record CutFace(InteriorProfile profile, double widthMm, double heightMm, 
 		return svg(scaleBarMm());
 	}
 
-	/** Room under the section for the scale bar of a drawing {@link #SLAB_WIDTH_MM} wide, mm. */
+	/**
+	 * Room under the section for the scale bar of a drawing {@link #SLAB_WIDTH_MM} wide,
+	 * mm.
+	 */
 	static final double SCALE_STRIP_MM = 6;
 
 	public CutFace {

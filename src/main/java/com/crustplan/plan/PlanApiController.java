@@ -186,13 +186,14 @@ class PlanApiController {
 
 	/**
 	 * The answer; a plan in steps adds its steps, core target, target order and timeline
-	 * (absent otherwise). Water and oil at the target are g per 100 g of the whole piece as
-	 * it comes off (null where the target was not reached).
+	 * (absent otherwise). Water and oil at the target are g per 100 g of the whole piece
+	 * as it is when it reaches the colour target, its frying oil included (null where
+	 * that target was not reached).
 	 */
 	record PlanResponse(boolean reached, String outcome, Double timeToTargetS, @JsonProperty("pH") double ph,
-			Double coreTemperatureAtTargetC, Double waterAtTargetPct, Double oilAtTargetPct, String target, String targetColorHex, Acrylamide acrylamide, Series series,
-			List<Warning> warnings, List<String> cautions, List<String> assumptions,
-			@JsonInclude(JsonInclude.Include.NON_EMPTY) List<String> deprecations,
+			Double coreTemperatureAtTargetC, Double waterAtTargetPct, Double oilAtTargetPct, String target,
+			String targetColorHex, Acrylamide acrylamide, Series series, List<Warning> warnings, List<String> cautions,
+			List<String> assumptions, @JsonInclude(JsonInclude.Include.NON_EMPTY) List<String> deprecations,
 			@JsonInclude(JsonInclude.Include.NON_NULL) List<StepOut> steps,
 			@JsonInclude(JsonInclude.Include.NON_NULL) Double coreTargetC,
 			@JsonInclude(JsonInclude.Include.NON_NULL) Double coreTargetReachedS,

@@ -133,10 +133,10 @@ class PlanApiTest {
 	}
 
 	/**
-	 * Water and frying oil in the whole piece at the target, g per 100 g. Common practice:
-	 * a finished fry holds about 40 % water and 10–15 % oil; the bounds are wide on
-	 * purpose (this checks that the API reports the engine's figures in their unit, the
-	 * engine's own tests hold the physics).
+	 * Water and frying oil in the whole piece at the target, g per 100 g. Common
+	 * practice: a finished fry holds about 40 % water and 10–15 % oil; the bounds are
+	 * wide on purpose (this checks that the API reports the engine's figures in their
+	 * unit, the engine's own tests hold the physics).
 	 */
 	@Nested
 	class WaterAndOilAtTheTarget {
@@ -164,8 +164,7 @@ class PlanApiTest {
 					    { "heat": { "mode": "fryer", "temperatureC": 140 }, "minutes": 5 },
 					    { "heat": { "mode": "rest" }, "minutes": 10 },
 					    { "heat": { "mode": "fryer", "temperatureC": 180 }, "stage": "golden", "minutes": 10 } ],
-					  "target": { "stage": "golden" } }""")
-				.andExpect(status().isOk())
+					  "target": { "stage": "golden" } }""").andExpect(status().isOk())
 				.andExpect(jsonPath("$.steps", hasSize(3)))
 				.andExpect(jsonPath("$.waterAtTargetPct").value(both(greaterThan(20.0)).and(lessThan(60.0))))
 				.andExpect(jsonPath("$.oilAtTargetPct").value(both(greaterThan(5.0)).and(lessThan(25.0))));
@@ -178,8 +177,7 @@ class PlanApiTest {
 			plan("""
 					{ "surface": { "category": "meat", "thicknessMm": 25 },
 					  "heat": { "mode": "pan", "temperatureC": 230, "flipEverySeconds": 60 },
-					  "target": { "stage": "browned" } }""")
-				.andExpect(status().isOk())
+					  "target": { "stage": "browned" } }""").andExpect(status().isOk())
 				.andExpect(jsonPath("$.oilAtTargetPct").value(anyOf(nullValue(), closeTo(0.0, 1e-9))))
 				.andExpect(jsonPath("$.waterAtTargetPct").value(both(greaterThan(55.0)).and(lessThan(76.0))));
 		}
