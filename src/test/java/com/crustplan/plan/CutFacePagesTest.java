@@ -59,6 +59,23 @@ class CutFacePagesTest {
 			.andExpect(content().string(not(containsString("cut-face-drawing"))));
 	}
 
+	/**
+	 * A cook compares the drawing with a cut steak: the drawing has a key to its three
+	 * colours, and a slab's crust and band are given per face, each named.
+	 */
+	@Test
+	void shouldKeyTheDrawingAndNameTheFacesOfASlab() throws Exception {
+		mvc.perform(get("/plan").param("surfaceId", String.valueOf(demo.surface("Sirloin steak, 30 mm, patted dry")))
+			.param("setupId", String.valueOf(demo.setup("Plancha, high")))
+			.param("targetStage", "browned"))
+			.andExpect(status().isOk())
+			.andExpect(content().string(containsString("id=\"cut-face-key\"")))
+			.andExpect(content().string(containsString("> centre</li>")))
+			.andExpect(content().string(containsString("Crust (upper / lower face)")))
+			.andExpect(content().string(containsString("Cooked band (upper / lower face)")))
+			.andExpect(content().string(containsString("slab, 30 mm thick")));
+	}
+
 	@Test
 	void shouldCarryTheInteriorInTheApiAnswerForASteamedSteak() throws Exception {
 		String steamed = """

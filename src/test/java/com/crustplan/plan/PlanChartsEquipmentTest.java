@@ -66,6 +66,16 @@ class PlanChartsEquipmentTest {
 	}
 
 	@Test
+	void shouldDrawAFarSideOnlyForASlabHeatedFromOneFace() throws Exception {
+		// a steak on a plancha: the face up is far cooler than the face down
+		assertThat(chartJson("Sirloin steak, 30 mm, patted dry", "Plancha, high", "browned"))
+			.contains("otherFaceTemperature");
+		// a strip in a fryer is heated all round: no far side to draw
+		assertThat(chartJson("Chips, 10 mm, blanched", "Fryer, chips", "golden"))
+			.doesNotContain("otherFaceTemperature");
+	}
+
+	@Test
 	void shouldDrawNoHeatSourceLineForAnOven() throws Exception {
 		String d = chartJson("Chips, 10 mm, blanched", "Combi oven, dry fan", "golden");
 		assertThat(d).doesNotContain("heatSourceTemperature");

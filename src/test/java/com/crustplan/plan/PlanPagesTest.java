@@ -124,7 +124,20 @@ class PlanPagesTest {
 		mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetStage", "golden"))
 			.andExpect(content().string(containsString("id=\"water-at-target\"")))
 			.andExpect(content().string(containsString("Water in the whole piece at the target:")))
-			.andExpect(content().string(containsString("Frying oil taken up by the target:")));
+			.andExpect(content().string(containsString("Frying oil taken up by the target:")))
+			// the basis of both figures: the piece's shape and size, and the fried piece
+			.andExpect(content().string(containsString("g per 100 g of the fried piece")))
+			.andExpect(content().string(containsString("strip, 10 mm wide")))
+			// the fryer's assumptions no longer say oil uptake is not modelled
+			.andExpect(content().string(not(containsString("Oil taken up by the crust is not modelled"))));
+	}
+
+	@Test
+	void shouldSayARoastPotatoIsACube() throws Exception {
+		mvc.perform(get("/plan")
+			.param("surfaceId", String.valueOf(demo.surface("Roast potatoes, parboiled with bicarbonate")))
+			.param("setupId", String.valueOf(demo.setup("Combi oven, dry fan")))
+			.param("targetStage", "golden")).andExpect(content().string(containsString("cube, 35 mm edge")));
 	}
 
 	@Test
