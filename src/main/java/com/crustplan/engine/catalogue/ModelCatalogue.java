@@ -89,9 +89,9 @@ public final class ModelCatalogue {
 				"Gas fraction ε from the volume the matrix (with any frying oil, counted as fat) leaves empty in each control volume. "
 						+ "A share s of the volume of the water a layer loses is given up by shrinking: muscle stays a saturated gel (s = 1) "
 						+ "and its drying crust keeps the conductivity of the drier solid; baked crumb is rigid (s = 0) and opens pores.",
-				List.of(Parameter.secondary("k_gas", "conductivity of the gas in pores",
+				List.of(Parameter.fromMemory("k_gas", "conductivity of the gas in pores",
 						ThermalProperties.AIR_CONDUCTIVITY, "W/(m·K)",
-						"still air near 100 °C (Incropera, Table A.4)"))));
+						"still air, 0.0263 and 0.0300 W/(m·K) at 300 and 350 K (Incropera, Table A.4; values from memory): air near 50 °C, about 10 % below air at 100 °C"))));
 		List<Parameter> shrinkage = new ArrayList<>();
 		for (FoodCategory c : FoodCategory.values()) {
 			shrinkage.add(c.shrinkage());
