@@ -1,5 +1,6 @@
 package com.crustplan.engine.heat;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
@@ -78,6 +79,21 @@ public sealed interface HeatSetup permits PanContact, Oven, RadiantGrill, DeepFr
 	 */
 	default double surfaceLimitC() {
 		return Double.POSITIVE_INFINITY;
+	}
+
+	/**
+	 * The pan's and fryer's defaults and the materials a pan can be made of, for the
+	 * model catalogue.
+	 */
+	static List<Parameter> equipmentParameters() {
+		List<Parameter> p = new ArrayList<>(PanBody.parameters());
+		for (PanMaterial m : PanMaterial.values()) {
+			p.add(m.specificHeat());
+			p.add(m.emissivity());
+		}
+		p.addAll(FryerBody.parameters());
+		p.add(HeatedBody.THERMOSTAT_BAND);
+		return List.copyOf(p);
 	}
 
 	static List<Parameter> parameters() {

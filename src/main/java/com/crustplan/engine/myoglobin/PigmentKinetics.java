@@ -179,10 +179,10 @@ public enum PigmentKinetics {
 		/** Temperature at which fish is taken to turn opaque in about a minute. */
 		static final double FISH_OPAQUE_K = 55 + 273.15;
 
-		static final Parameter FISH_K0 = Parameter.fromMemory("k0,opaque",
+		static final Parameter FISH_K0 = Parameter.calibrated("k0,opaque",
 				"pre-exponential factor, fish translucent → opaque",
 				Math.exp(FISH_EA.value() / (ArrheniusRate.GAS_CONSTANT * FISH_OPAQUE_K)) / 60, "1/s",
-				"calibrated to k(55 °C) = 1 /min: white fish turns opaque and flakes at 55–60 °C within about a minute (from memory)");
+				"calibrated to k(55 °C) = 1 /min: white fish turns opaque and flakes at 55–60 °C within about a minute (a claim from memory; PracticeClaimsTest)");
 
 		static final Parameter NEGLIGIBLE_PER_HOUR = Parameter.assumption("x_skip",
 				"share denatured in an hour below which a layer is not stepped", 1, "%",
