@@ -89,9 +89,9 @@ public final class ModelCatalogue {
 				"Gas fraction ε from the volume the matrix (with any frying oil, counted as fat) leaves empty in each control volume. "
 						+ "A share s of the volume of the water a layer loses is given up by shrinking: muscle stays a saturated gel (s = 1) "
 						+ "and its drying crust keeps the conductivity of the drier solid; baked crumb is rigid (s = 0) and opens pores.",
-				List.of(Parameter.secondary("k_gas", "conductivity of the gas in pores",
+				List.of(Parameter.fromMemory("k_gas", "conductivity of the gas in pores",
 						ThermalProperties.AIR_CONDUCTIVITY, "W/(m·K)",
-						"still air near 100 °C (Incropera, Table A.4)"))));
+						"still air, 0.0263 and 0.0300 W/(m·K) at 300 and 350 K (Incropera, Table A.4; values from memory): air near 50 °C, about 10 % below air at 100 °C"))));
 		List<Parameter> shrinkage = new ArrayList<>();
 		for (FoodCategory c : FoodCategory.values()) {
 			shrinkage.add(c.shrinkage());
@@ -187,10 +187,17 @@ public final class ModelCatalogue {
 		eq.add(new Equation("Deep fryer", "q = h·(T_oil − Ts);  h = h_oil + (h_oil,boil − h_oil)·min(1, J_boil/J_full)",
 				"Bubbling stirs the oil in proportion to the vapour leaving; J_full = h_oil,boil·(T_oil − 100 °C)/h_fg. h falls back as the crust dries.",
 				List.of(HeatSetup.OIL_QUIET, HeatSetup.OIL_BUBBLING)));
-		return new ModelSection("Heat at the faces", eq,
-				List.of("The pan, oven air, element and oil hold their set temperature (no recovery after loading).",
-						"Pan contact is uniform; real items curl, shrink and touch the pan unevenly.",
-						"Both oven faces see the same heat (on a rack, not on a tray)."));
+		eq.add(new Equation("Pan or fryer with a body",
+				"m·c·dT/dt = P(T) − Q_food − h·A·(T − T_room) − ε·σ·A·(T⁴ − T_room⁴)",
+				"Where the cook gives a pan or fryer as equipment, its metal or oil is one lumped mass that the food's load pulls down "
+						+ "and the burner, hob or heater brings back (a thermostat tapers its power across a proportional band; a flame "
+						+ "left where it was set gives the power that held the empty pan). The defaults are what a cook who gives "
+						+ "no figures gets; a pan's specific heat and emissivity follow its material.",
+				HeatSetup.equipmentParameters()));
+		return new ModelSection("Heat at the faces", eq, List.of(
+				"Oven air and grill elements hold their set temperature; a pan or fryer does too unless it is given as equipment with a body.",
+				"Pan contact is uniform; real items curl, shrink and touch the pan unevenly.",
+				"Both oven faces see the same heat (on a rack, not on a tray)."));
 	}
 
 	private static ModelSection numerics() {
