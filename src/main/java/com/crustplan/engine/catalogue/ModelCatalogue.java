@@ -145,6 +145,16 @@ public final class ModelCatalogue {
 				List.of(MoistureDiffusivity.REFERENCE, MoistureDiffusivity.ACTIVATION_ENERGY,
 						MoistureDiffusivity.CRUST_MOISTURE)));
 		for (FoodCategory c : FoodCategory.values()) {
+			MoistureDiffusivity d = c.moistureDiffusivity();
+			if (d != MoistureDiffusivity.DEFAULT) {
+				eq.add(new Equation("Moisture diffusion: " + c.label(),
+						String.format(java.util.Locale.ROOT, "D = D_ref·exp(−Ea/R·(1/T − 1/%.2f K))·X²/(X² + X_c²)",
+								d.referenceK()),
+						"The category's own diffusivity, in place of the default above.",
+						List.of(d.reference(), d.activationEnergy(), d.crustMoisture())));
+			}
+		}
+		for (FoodCategory c : FoodCategory.values()) {
 			eq.add(new Equation("Sorption isotherm: " + c.label(),
 					"X = Xm·C·K·aw / ((1 − K·aw)(1 − K·aw + C·K·aw))  (GAB)",
 					"Water activity of each layer from its moisture, inverted by the positive root of the GAB quadratic; above X(aw = 1) the water is free.",

@@ -74,10 +74,10 @@ class AcrylamideMitigationsTest {
 	void lowerTemperatureForThickChipsIsWeighedAtTheSameColour() {
 		// Annex II of Regulation (EU) 2017/2158: fry below 175 °C. For thick-cut chips
 		// (14 mm) fried golden at 190 °C the model weighs 170 °C at the same colour.
-		// Since
-		// formation was refitted on whole strips (Ea,f 109 kJ/mol, was 121) the longer,
-		// drier cook offsets the slower formation (142 → 161 µg/kg): the mitigation must
-		// then say so with the frying rule rather than claim a gain.
+		// Formation refitted on whole strips with the potato moisture diffusivity (Ea,f
+		// 110 kJ/mol) is steeper than browning (64 kJ/mol) but the longer, drier cook to
+		// the same colour more than offsets it: the mitigation must then say so with the
+		// frying rule rather than claim a gain.
 		Mitigation m = Mitigations
 			.compute(Surface.defaults(FoodCategory.POTATO).withThicknessMm(14), Product.FRENCH_FRIES,
 					new DeepFryer(190), Target.stage("golden"), CookSettings.defaults())
