@@ -28,6 +28,7 @@ import com.crustplan.engine.properties.FoodComponent;
 import com.crustplan.engine.properties.ThermalProperties;
 import com.crustplan.engine.water.Atmosphere;
 import com.crustplan.engine.water.MoistureDiffusivity;
+import com.crustplan.engine.water.GabIsotherm;
 import com.crustplan.engine.water.PoreVapourConductivity;
 import com.crustplan.engine.water.WaterVapour;
 
@@ -158,12 +159,21 @@ public final class ModelCatalogue {
 			eq.add(new Equation("Sorption isotherm: " + c.label(),
 					"X = Xm·C·K·aw / ((1 − K·aw)(1 − K·aw + C·K·aw))  (GAB)",
 					"Water activity of each layer from its moisture, inverted by the positive root of the GAB quadratic; above X(aw = 1) the water is free.",
-					List.of(c.isotherm().monolayer(), c.isotherm().c(), c.isotherm().k())));
+					isothermParameters(c.isotherm())));
 		}
 		return new ModelSection("Water: vapour, sorption, drying and boiling", eq, List.of(
 				"Isotherms measured at 40–50 °C are used at all temperatures (at crust temperatures they overstate how tightly water is held).",
 				"Vapour formed inside the food is taken to leave at once; pressure build-up and puffing are not modelled.",
 				"Shrinkage changes what fills a layer, not the grid: a shrinking piece's thickness is not updated."));
+	}
+
+	/** A syrup-holding food also lists its solution's activity and how it was had. */
+	private static List<Parameter> isothermParameters(GabIsotherm g) {
+		List<Parameter> p = new ArrayList<>(List.of(g.monolayer(), g.c(), g.k()));
+		if (g.solution().value() < 1) {
+			p.addAll(List.of(g.solution(), GabIsotherm.NORRISH_SUCROSE, GabIsotherm.NORRISH_GLUCOSE));
+		}
+		return p;
 	}
 
 	private static ModelSection heat() {

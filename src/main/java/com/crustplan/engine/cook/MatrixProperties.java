@@ -150,7 +150,9 @@ final class MatrixProperties {
 				// geometric-mean rule over matrix and pore gas, written with one exp
 				double km = props[1];
 				double cells = Math.min(porosity, cellPorosity);
-				double kv = cells > 0 ? PoreVapourConductivity.at(s.temperature[i], s.waterActivity(i)) : 0;
+				double aw = cells > 0 ? s.waterActivity(i) : 0;
+				double kv = cells > 0 ? PoreVapourConductivity.at(s.temperature[i], aw, s.isotherm().matrixActivity(aw))
+						: 0;
 				conductivity[i] = conductivity(km, porosity, cells, kv, PoreVapourConductivity.openCellShare(peakK[i]));
 			}
 			else {

@@ -260,7 +260,7 @@ public enum FoodCategory {
 		.initialPorosity(Parameter.fromMemory("ε0", "gas fraction of sweet dough", 0.4, "–",
 				"denser than bread dough (from memory)"))
 		.shrinkage(Parameter.assumption("s", "shrinkage share of baked sweet dough", 0, "–", "as bread"))
-		.isotherm(Isotherms.BREAD)
+		.isotherm(Isotherms.SWEET_DOUGH)
 		.browning(new BrowningKinetics(
 				new ArrheniusRate(Parameter.published("k0", "pre-exponential factor, crust ΔE (bread kinetics)", 42_000,
 						"1/s", "Zanoni, Peri & Bruno 1995, LWT 28:604–609"), Isotherms.ZANONI_EA),
@@ -444,6 +444,25 @@ public enum FoodCategory {
 						"from memory, low confidence"),
 				Parameter.fromMemory("C", "GAB constant C, bread crust", 10, "–", "from memory, low confidence"),
 				Parameter.fromMemory("K", "GAB constant K, bread crust", 0.9, "–", "from memory, low confidence"));
+
+		/**
+		 * Sweet dough's typical composition (the SWEET_DOUGH entry; a test holds the two
+		 * together): fat and dissolved sugar sorb no water, so the bread matrix holds the
+		 * water per kg of its protein, starch, fibre and ash, and the water itself is a
+		 * syrup. The isotherm is the category's, taken at its typical composition.
+		 */
+		static final double SWEET_WATER_PCT = 25;
+
+		static final double SWEET_SUCROSE_PCT = 15;
+
+		static final double SWEET_REDUCING_SUGAR_PCT = 2;
+
+		static final double SWEET_SORBING_PCT = 7 + 33 + 1.5 + 1;
+
+		static final GabIsotherm SWEET_DOUGH = BREAD.withDissolvedSugar(SWEET_SORBING_PCT / (100 - SWEET_WATER_PCT),
+				GabIsotherm.sugarSolutionActivity(SWEET_WATER_PCT, SWEET_SUCROSE_PCT, SWEET_REDUCING_SUGAR_PCT),
+				"sweet dough",
+				"typical sweet dough, 25 % water, 15 % sucrose, 2 % reducing sugar; protein, starch, fibre and ash (42.5 %) sorb, fat and sugar do not");
 
 		private Isotherms() {
 		}

@@ -20,9 +20,10 @@ import com.crustplan.engine.model.Parameter;
  * to local boiling). It is small in cold dough, rises steeply towards 100 °C while the
  * pore walls are wet, and vanishes in a dry crust (aw → 0), as the measured rise of crumb
  * conductivity with temperature and moisture shows. It needs liquid on the walls to
- * return what condenses, so it fades out below aw,wet. Dough's gas cells are closed until
- * the crumb sets and they open into one connected pore ({@link #openCellShare}); how the
- * term is mixed into a layer's conductivity, closed or open, is the cook's.
+ * return what condenses, so it fades out below aw,wet (on the matrix's share of aw where
+ * the water is a syrup: {@link GabIsotherm#matrixActivity}). Dough's gas cells are closed
+ * until the crumb sets and they open into one connected pore ({@link #openCellShare});
+ * how the term is mixed into a layer's conductivity, closed or open, is the cook's.
  */
 public final class PoreVapourConductivity {
 
@@ -38,7 +39,8 @@ public final class PoreVapourConductivity {
 	public static final Parameter WET_WALL_ACTIVITY = Parameter.assumption("aw,wet",
 			"water activity below which pore walls hold no liquid to return condensed water", 0.9, "–",
 			"our choice: de Vries (1958) ties the enhancement to liquid on the pore walls; a hygroscopic crust "
-					+ "only sorbs, so the term rises linearly from 0 at this activity to full at aw = 1");
+					+ "only sorbs, so the term rises linearly from 0 at this activity to full at aw = 1; where the water is a "
+					+ "sugar solution the matrix's share of aw is judged (Ross's rule), since a syrup is liquid below it");
 
 	public static final Parameter CELL_OPENING_START = Parameter.published("T_open,0",
 			"crumb temperature at which the dough's closed gas cells begin to open", 71, "°C",
@@ -78,10 +80,19 @@ public final class PoreVapourConductivity {
 	 * aw, W/(m·K), at 1 atm.
 	 */
 	public static double at(double temperatureK, double waterActivity) {
-		if (!(waterActivity > WET_WALL)) {
+		return at(temperatureK, waterActivity, waterActivity);
+	}
+
+	/**
+	 * The same where the walls' water is a sugar solution: whether the walls are wet is
+	 * judged on the matrix's own activity (aw divided by the solution's, Ross's rule; see
+	 * {@link GabIsotherm#matrixActivity}), the vapour pressure on aw itself.
+	 */
+	public static double at(double temperatureK, double waterActivity, double matrixActivity) {
+		if (!(matrixActivity > WET_WALL)) {
 			return 0;
 		}
-		double wet = Math.min(1, (waterActivity - WET_WALL) / (1 - WET_WALL));
+		double wet = Math.min(1, (matrixActivity - WET_WALL) / (1 - WET_WALL));
 		double t = Math.max(SaturationPressure.MIN_TEMPERATURE_K, temperatureK);
 		double rv = WaterVapour.GAS_CONSTANT.value();
 		double latent = WaterVapour.latentHeat(t);
