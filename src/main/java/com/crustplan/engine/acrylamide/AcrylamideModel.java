@@ -79,7 +79,7 @@ public final class AcrylamideModel {
 
 	public static final Parameter SKIP_BELOW = Parameter.assumption("T_min",
 			"layers cooler than this are not integrated", 378.15, "K",
-			"at 105 °C formation is about 500 times slower than at 170 °C with the fitted Ea (derived); skipping the wet interior, which boils at 100–103 °C, saves most of the work");
+			"at 105 °C formation is about 150 times slower than at 170 °C with the fitted Ea (derived); skipping the wet interior, which boils at 100–103 °C, saves most of the work");
 
 	public static final Parameter CRUST_DEPTH = Parameter.commonPractice("d_crust", "depth of the crust layer reported",
 			1.0e-3, "m",

@@ -9,6 +9,7 @@ import com.crustplan.engine.cook.CookSettings;
 import com.crustplan.engine.cook.CookSimulation;
 import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.Shape;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.DeepFryer;
 
@@ -22,7 +23,7 @@ class GoldenFriesLevelTest {
 	private static final CookSettings SETTINGS = CookSettings.defaults().withHorizonS(3600).withRecordSeries(false);
 
 	private static double goldenPortion(double widthMm) {
-		Surface fries = Surface.defaults(FoodCategory.POTATO).withThicknessMm(widthMm);
+		Surface fries = Surface.defaults(FoodCategory.POTATO).withShape(Shape.STRIP).withThicknessMm(widthMm);
 		CookResult r = CookSimulation.run(fries, new DeepFryer(175), Target.stage("golden"), SETTINGS,
 				AcrylamideFormation.REACTION);
 		assertTrue(r.reached(), String.valueOf(r.explanation()));
