@@ -180,7 +180,7 @@ public enum FoodCategory {
 				Parameter.published("pH,ref", "typical pH of potato", 5.8, "–",
 						"potato 5.4–6.1 (FDA, approximate pH of foods)"),
 				Parameter.fromMemory("RS,ref", "reducing sugar of a frying potato", 0.4, "%",
-						"glucose + fructose 2.8–69 mmol/kg in retail potatoes (Vivanti et al. 2006); 0.4 % typical of frying varieties"),
+						"glucose + fructose 2.8–69 mmol/kg in retail potatoes (Vivanti et al. 2006); French-fry potatoes up to 0.5 % of fresh weight (ICAR-Central Potato Research Institute, quality requirements for processing); 0.4 % from memory"),
 				Parameter.fromMemory("P,ref", "protein of potato", 2, "%", "from memory"),
 				// below first order: fry colour also comes from reactions other than the
 				// sugar–asparagine condensation that limits acrylamide
