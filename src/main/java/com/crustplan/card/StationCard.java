@@ -124,6 +124,14 @@ public record StationCard(long planId, String planName, String surfaceName, Food
 		return finite(report.cutFace().profile().centrePeakC());
 	}
 
+	/**
+	 * Whether the centre's own figure adds anything to the core figure beside it (the
+	 * centre coasts on after the pull or a rest; equal when both read the same).
+	 */
+	public boolean centreFigureDiffers() {
+		return centreC != null && (coreAtPullC == null || Math.round(centreC) != Math.round(coreAtPullC));
+	}
+
 	/** The trade's word for the centre, as the line says it. */
 	public String donenessWord() {
 		if (doneness == null) {

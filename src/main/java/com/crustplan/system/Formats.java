@@ -18,6 +18,18 @@ public class Formats {
 	/** A no-break space: a figure never parts from its unit at a line end. */
 	static final String NBSP = "\u00a0";
 
+	/**
+	 * Text for the JSON API: the pages' no-break spaces as plain spaces, so the API's
+	 * wording stays as it was.
+	 */
+	public static String apiText(String pageText) {
+		return pageText == null ? null : pageText.replace(NBSP, " ");
+	}
+
+	public static java.util.List<String> apiText(java.util.List<String> pageTexts) {
+		return pageTexts.stream().map(Formats::apiText).toList();
+	}
+
 	/** "230 °C / 446 °F", for pages read in either scale (the station card). */
 	public String tempBoth(Double celsius) {
 		return celsius == null ? "–" : bothScales(celsius);
