@@ -61,8 +61,8 @@ class PlanChartsEquipmentTest {
 			.getResponse()
 			.getContentAsString();
 		assertThat(page).contains("of food per batch drawing it down")
-			.contains("8.0 L of oil, a 3.2 kW heater")
-			.contains("0.50 kg of food per batch");
+			.contains("8.0\u00a0L of oil, a 3.2\u00a0kW heater")
+			.contains("0.50\u00a0kg of food per batch");
 	}
 
 	@Test
