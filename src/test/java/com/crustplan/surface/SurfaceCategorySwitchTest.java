@@ -63,7 +63,7 @@ class SurfaceCategorySwitchTest {
 		mvc.perform(SurfacePagesTest.potato("/surfaces/new", "asparagineMgPerKg", "50", "name", ""))
 			.andExpect(status().isOk())
 			.andExpect(content().string(containsString("id=\"atypical\"")))
-			.andExpect(content().string(containsString("Free asparagine 50 mg/kg is far below")));
+			.andExpect(content().string(containsString("Free asparagine 50\u00a0mg/kg is far below")));
 	}
 
 	@Test

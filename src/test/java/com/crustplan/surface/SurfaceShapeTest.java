@@ -64,7 +64,7 @@ class SurfaceShapeTest {
 				.andExpect(status().isOk())
 				.andExpect(content().string(containsString("Chunk or cube (roast potatoes)")))
 				.andExpect(content().string(containsString("<dt>Edge</dt>")));
-			mvc.perform(get("/surfaces")).andExpect(content().string(containsString("35 mm cube")));
+			mvc.perform(get("/surfaces")).andExpect(content().string(containsString("35\u00a0mm cube")));
 			mvc.perform(get(location + "/edit"))
 				.andExpect(status().isOk())
 				.andExpect(content()
