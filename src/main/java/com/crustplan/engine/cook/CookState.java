@@ -42,6 +42,14 @@ public final class CookState implements Layers {
 	 */
 	final double[] boiledOff;
 
+	/**
+	 * The moisture conductance between layer i and i + 1 of the last moisture step,
+	 * kg/(m²·s) per unit of moisture (valid once {@link #hasMoistureConductance}).
+	 */
+	final double[] moistureConductance;
+
+	boolean hasMoistureConductance;
+
 	/** Moisture at the start, kg/kg d.b. (uniform). */
 	final double initialMoisture;
 
@@ -69,6 +77,7 @@ public final class CookState implements Layers {
 		volume = new double[n];
 		oil = new double[n];
 		boiledOff = new double[n];
+		moistureConductance = new double[n];
 		initialMoisture = moistureDryBasis;
 		for (int i = 0; i < n; i++) {
 			temperature[i] = temperatureK;
@@ -131,6 +140,10 @@ public final class CookState implements Layers {
 	 * clears it.
 	 */
 	void takeBoiledOff(MoistureDiffusion diffusion, double dt) {
+		for (int i = 0; i < n - 1; i++) {
+			moistureConductance[i] = diffusion.conductance(i);
+		}
+		hasMoistureConductance = true;
 		for (int i = 0; i < n; i++) {
 			if (boiledOff[i] > 0) {
 				diffusion.addSink(i, boiledOff[i] / dt);

@@ -91,6 +91,7 @@ final class HeatStep {
 
 	void step(double dt) {
 		double now = state.time;
+		boiling.startStep();
 		double[] temperature = state.temperature;
 		for (int face = 0; face < 2; face++) {
 			linearisedAt[face] = temperature[state.faceNode(face)];

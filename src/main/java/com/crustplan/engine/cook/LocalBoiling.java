@@ -1,5 +1,7 @@
 package com.crustplan.engine.cook;
 
+import java.util.Arrays;
+
 import com.crustplan.engine.layers.HeatConduction;
 import com.crustplan.engine.layers.MoistureDiffusion;
 import com.crustplan.engine.water.MoistureDiffusivity;
@@ -50,6 +52,14 @@ final class LocalBoiling {
 		diffusion = new MoistureDiffusion(state.grid(), MoistureDiffusivity::at);
 		holdingMass = new double[n];
 		boilable = new double[n];
+		refilledAt = new long[n];
+		refilledMoisture = new double[n];
+		conductanceAt = new long[n];
+		conductance = new double[n];
+		lastRoot = new double[n];
+		Arrays.fill(lastRoot, Double.NaN);
+		Arrays.fill(refilledAt, -1);
+		Arrays.fill(conductanceAt, -1);
 	}
 
 	/**
@@ -63,11 +73,12 @@ final class LocalBoiling {
 			pinned[i] = false;
 			ranDry[i] = false;
 			if (solution[i] > FREE_WATER_BOILING_K - 0.5 && state.hasWater(i)) {
-				double aw = waterActivityOf(i);
+				// under standing water it boils at 100 °C; else at the boiling point of
+				// the
+				// moisture diffusion leaves it with
 				double x = refilled(i, dt);
-				if (aw < 1) {
-					aw = state.isotherm().waterActivity(x);
-				}
+				int face = state.faceOf(i);
+				double aw = face >= 0 && state.face(face).standingWater > 0 ? 1 : state.isotherm().waterActivity(x);
 				double tb = aw >= 1 ? FREE_WATER_BOILING_K : WaterVapour.boilingTemperatureKFast(aw);
 				if (solution[i] > tb) {
 					pinned[i] = true;
@@ -123,6 +134,12 @@ final class LocalBoiling {
 		if (surplus <= 0) {
 			return tb;
 		}
+		double t = boilingPointBetween(x, i, tb, surplus, dt);
+		lastRoot[i] = t;
+		return t;
+	}
+
+	private double boilingPointBetween(double x, int i, double tb, double surplus, double dt) {
 		double slope = conduction.diagonal(i);
 		double perWatt = dt / (WaterVapour.latentHeat(tb) * holdingMass[i]);
 		// g(T) = T − T_b(X_end(T)) rises with T: negative at T_b, positive where the
@@ -131,17 +148,38 @@ final class LocalBoiling {
 		// there without evaluating it.
 		double lo = tb;
 		double hi = tb + surplus / slope;
-		double gLo = lo - boilingPointAtEnd(x, surplus, slope, tb, lo, perWatt);
 		double gHi = hi - tb;
-		if (gLo >= 0 || gHi <= 0) {
-			return gLo >= 0 ? lo : hi;
+		double gLo = Double.NaN;
+		double guess = lastRoot[i];
+		if (guess > lo + PIN_TOLERANCE_K && guess < hi - PIN_TOLERANCE_K) {
+			// warm start: the layer's root in the last solve (the face pass before, or
+			// the step before) moves a fraction of a kelvin; it either is the root to the
+			// tolerance or narrows the bracket from one side
+			double g = guess - boilingPointAtEnd(x, surplus, slope, tb, guess, perWatt);
+			if (Math.abs(g) < PIN_TOLERANCE_K) {
+				return guess;
+			}
+			if (g < 0) {
+				lo = guess;
+				gLo = g;
+			}
+			else {
+				hi = guess;
+				gHi = g;
+			}
 		}
-		if (-gLo < PIN_TOLERANCE_K && hi - lo > PIN_TOLERANCE_K) {
-			// g rises at least as fast as T (the more the layer keeps, the lower its
-			// boiling point): the root lies within −g(T_b) of T_b, and so does the first
-			// regula falsi point, which is taken without checking it (a layer whose
-			// boiling point hardly moves: the wet interior)
-			return (lo * gHi - hi * gLo) / (gHi - gLo);
+		if (Double.isNaN(gLo)) {
+			gLo = lo - boilingPointAtEnd(x, surplus, slope, tb, lo, perWatt);
+			if (gLo >= 0 || gHi <= 0) {
+				return gLo >= 0 ? lo : hi;
+			}
+			if (-gLo < PIN_TOLERANCE_K && hi - lo > PIN_TOLERANCE_K) {
+				// g rises at least as fast as T (the more the layer keeps, the lower its
+				// boiling point): the root lies within −g(T_b) of T_b, and so does the
+				// first regula falsi point, which is taken without checking it (a layer
+				// whose boiling point hardly moves: the wet interior)
+				return (lo * gHi - hi * gLo) / (gHi - gLo);
+			}
 		}
 		int side = 0;
 		for (int k = 0; k < MAX_PIN_ITERATIONS && hi - lo > PIN_TOLERANCE_K; k++) {
@@ -169,6 +207,9 @@ final class LocalBoiling {
 		}
 		return 0.5 * (lo + hi);
 	}
+
+	/** Each layer's end-of-step boiling point as last solved, K (NaN before any). */
+	private final double[] lastRoot;
 
 	/** The boiling point of the moisture left after the surplus at t is spent, K. */
 	private double boilingPointAtEnd(double x, double surplus, double slope, double tb, double t, double perWatt) {
@@ -206,17 +247,20 @@ final class LocalBoiling {
 	 * Δt·ΣG), at its boiling point, and a short step no longer jumps.
 	 */
 	private double refilled(int i, double dt) {
+		if (refilledAt[i] == stepCount) {
+			return refilledMoisture[i];
+		}
 		double m = state.dryMass[i];
 		double[] x = state.moisture;
 		double gIn = 0;
 		double inflow = 0;
 		if (i > 0) {
-			double g = diffusion.conductance(i - 1, state.dryMass, state.volume, state.temperature, x);
+			double g = conductance(i - 1);
 			gIn += g;
 			inflow += g * x[i - 1];
 		}
 		if (i < n - 1) {
-			double g = diffusion.conductance(i, state.dryMass, state.volume, state.temperature, x);
+			double g = conductance(i);
 			gIn += g;
 			inflow += g * x[i + 1];
 		}
@@ -225,8 +269,41 @@ final class LocalBoiling {
 		holdingMass[i] = held;
 		int face = state.faceOf(i);
 		boilable[i] = held * (xEq - CookState.MIN_MOISTURE) + (face >= 0 ? state.face(face).standingWater : 0);
+		refilledMoisture[i] = xEq;
+		refilledAt[i] = stepCount;
 		return xEq;
 	}
+
+	/**
+	 * The moisture conductance between layer k and k + 1: the last moisture step's (a
+	 * coefficient lagged by one step, as in a linearised implicit scheme: it moves by a
+	 * per cent or so a step), or before the first, at the start of the step.
+	 */
+	private double conductance(int k) {
+		if (state.hasMoistureConductance) {
+			return state.moistureConductance[k];
+		}
+		if (conductanceAt[k] != stepCount) {
+			conductance[k] = diffusion.conductance(k, state.dryMass, state.volume, state.temperature, state.moisture);
+			conductanceAt[k] = stepCount;
+		}
+		return conductance[k];
+	}
+
+	/** Starts a step: what was computed from the last step's start is stale. */
+	void startStep() {
+		stepCount++;
+	}
+
+	private long stepCount;
+
+	private final long[] refilledAt;
+
+	private final double[] refilledMoisture;
+
+	private final long[] conductanceAt;
+
+	private final double[] conductance;
 
 	/**
 	 * Regula falsi steps at most: the boiling-point curve is smooth, a few steps reach
@@ -258,15 +335,6 @@ final class LocalBoiling {
 	void recordBoilingFlux(double dt) {
 		state.face(0).boilingFlux = boiled[0] / dt;
 		state.face(1).boilingFlux = boiled[1] / dt;
-	}
-
-	/** Water activity of layer i: 1 under standing water, else from its moisture. */
-	private double waterActivityOf(int i) {
-		int face = state.faceOf(i);
-		if (face >= 0 && state.face(face).standingWater > 0) {
-			return 1;
-		}
-		return state.isotherm().waterActivity(state.moisture[i]);
 	}
 
 	/**
