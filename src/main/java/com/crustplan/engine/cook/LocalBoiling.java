@@ -32,6 +32,8 @@ final class LocalBoiling {
 
 	private final double[] pinnedTemperature;
 
+	private final BoilingPointTable boilingPoints;
+
 	/** The moisture step's law, for a boiling layer's exchange with its neighbours. */
 	private final MoistureDiffusion diffusion;
 
@@ -50,6 +52,7 @@ final class LocalBoiling {
 		ranDry = new boolean[n];
 		pinnedTemperature = new double[n];
 		diffusion = new MoistureDiffusion(state.grid(), MoistureDiffusivity::at);
+		boilingPoints = BoilingPointTable.of(state.isotherm());
 		holdingMass = new double[n];
 		boilable = new double[n];
 		refilledAt = new long[n];
@@ -73,16 +76,15 @@ final class LocalBoiling {
 			pinned[i] = false;
 			ranDry[i] = false;
 			if (solution[i] > FREE_WATER_BOILING_K - 0.5 && state.hasWater(i)) {
-				// under standing water it boils at 100 °C; else at the boiling point of
-				// the
-				// moisture diffusion leaves it with
+				// under standing water it boils at 100 °C; else at the boiling point
+				// of the moisture diffusion leaves it with
 				double x = refilled(i, dt);
 				int face = state.faceOf(i);
-				double aw = face >= 0 && state.face(face).standingWater > 0 ? 1 : state.isotherm().waterActivity(x);
-				double tb = aw >= 1 ? FREE_WATER_BOILING_K : WaterVapour.boilingTemperatureKFast(aw);
+				double tb = face >= 0 && state.face(face).standingWater > 0 ? FREE_WATER_BOILING_K
+						: boilingPoints.at(x);
 				if (solution[i] > tb) {
 					pinned[i] = true;
-					pinnedTemperature[i] = aw >= 1 ? tb
+					pinnedTemperature[i] = tb <= FREE_WATER_BOILING_K ? tb
 							: endOfStepBoilingPoint(x, i, tb, conduction.diagonal(i) * (solution[i] - tb), dt);
 					any = true;
 				}
@@ -214,7 +216,7 @@ final class LocalBoiling {
 	/** The boiling point of the moisture left after the surplus at t is spent, K. */
 	private double boilingPointAtEnd(double x, double surplus, double slope, double tb, double t, double perWatt) {
 		double xEnd = Math.max(CookState.MIN_MOISTURE, x - (surplus - slope * (t - tb)) * perWatt);
-		return WaterVapour.boilingTemperatureKFast(state.isotherm().waterActivity(xEnd));
+		return boilingPoints.at(xEnd);
 	}
 
 	/**
