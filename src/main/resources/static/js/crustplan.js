@@ -253,7 +253,9 @@
     Chart.defaults.color = INK;
     var common = { responsive: true, maintainAspectRatio: false, animation: false, interaction: { mode: 'nearest', axis: 'x', intersect: false },
       plugins: { legend: { position: 'bottom', labels: { boxWidth: 14, color: INK } } } };
-    var x = axis('Time (min)', { type: 'linear', min: 0, max: t.length ? t[t.length - 1] : undefined });
+    // the axis ends where the cook ends; its end label to a tenth of a minute, not 50.008
+    var x = axis('Time (min)', { type: 'linear', min: 0, max: t.length ? t[t.length - 1] : undefined,
+      ticks: { color: INK, callback: function (v) { return String(Math.round(v * 10) / 10); } } });
     var targetX = d.targetTimeMin;
     var plugins = d.steps ? [bandsPlugin(d.steps)] : [];
     var marker = function (ys, label) {
@@ -262,11 +264,12 @@
         borderColor: INK, backgroundColor: '#ffffff', borderWidth: 2 }];
     };
 
-    var temperatures = [
-      line('Surface (' + d.unit + ')', t, d.surfaceTemperature, '#b42318'),
-      line('Far side, away from the heat (' + d.unit + ')', t, d.otherFaceTemperature, '#b7791f', { borderDash: [6, 4], borderWidth: 2 }),
-      line('Core (' + d.unit + ')', t, d.coreTemperature, '#1d4ed8')
-    ];
+    // the far side only where the plan has one (a slab heated from one face)
+    var temperatures = [line('Surface (' + d.unit + ')', t, d.surfaceTemperature, '#b42318')];
+    if (d.otherFaceTemperature) {
+      temperatures.push(line('Far side, away from the heat (' + d.unit + ')', t, d.otherFaceTemperature, '#b7791f', { borderDash: [6, 4], borderWidth: 2 }));
+    }
+    temperatures.push(line('Core (' + d.unit + ')', t, d.coreTemperature, '#1d4ed8'));
     if (d.heatSourceTemperature) {
       // the pan or the oil, drawn down by the load and brought back by its heat
       temperatures.push(line(d.heatSourceLabel + ' (' + d.unit + ')', t, d.heatSourceTemperature, '#4b5563',

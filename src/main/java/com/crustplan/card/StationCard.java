@@ -14,6 +14,7 @@ import com.crustplan.engine.food.FoodCategory;
 import com.crustplan.engine.food.Shape;
 import com.crustplan.engine.heat.Rest;
 import com.crustplan.engine.message.Message;
+import com.crustplan.engine.myoglobin.CentreDoneness;
 import com.crustplan.plan.AcrylamideView;
 import com.crustplan.plan.LineTimeline;
 import com.crustplan.plan.PlanInputs;
@@ -47,12 +48,15 @@ import com.crustplan.setup.SetupForm;
  * {@link DonenessLimits}); null where none is set
  * @param acrylamide the estimate, only where acrylamide matters
  * ({@link PlanReport#acrylamideMatters()}), else null
+ * @param doneness red meat with a cut face: the centre in the trade's words, else null
+ * @param centreC the centre's hottest predicted temperature behind that word, °C (null
+ * with no word)
  */
 public record StationCard(long planId, String planName, String surfaceName, FoodCategory category, double thicknessMm,
 		Shape shape, Message target, Double coreTargetC, boolean reached, Double offHeatS, Double readyS,
 		List<Equipment> equipment, List<Checkpoint> timeline, List<Colour> colours, Double coreAtPullC, boolean stepped,
 		FoodCode code, Double doneAtC, Double dryAboveC, AcrylamideView acrylamide, boolean hotOil, boolean hotPan,
-		boolean hotOven) {
+		boolean hotOven, CentreDoneness doneness, Double centreC) {
 
 	public StationCard {
 		equipment = List.copyOf(equipment);
@@ -100,7 +104,47 @@ public record StationCard(long planId, String planName, String surfaceName, Food
 				readyS(report), equipment, LineTimeline.of(report, inputs.colourTarget()),
 				colours(report, offHeatS(report)), LineTimeline.coreAtPullC(report), report.stepped(), code,
 				code == null && Double.isFinite(done) ? done : null, finite(DonenessLimits.dryAboveC(category)),
-				report.acrylamideMatters() ? report.acrylamide() : null, oil, pan, oven);
+				report.acrylamideMatters() ? report.acrylamide() : null, oil, pan, oven, doneness(report),
+				centreC(report));
+	}
+
+	/**
+	 * Red meat is served by its centre's doneness; poultry and fish by the food code,
+	 * which the card states already.
+	 */
+	private static CentreDoneness doneness(PlanReport report) {
+		Double c = centreC(report);
+		return c == null ? null : CentreDoneness.ofMeat(c);
+	}
+
+	private static Double centreC(PlanReport report) {
+		if (report.category() != FoodCategory.MEAT || !report.hasCutFace()) {
+			return null;
+		}
+		return finite(report.cutFace().profile().centrePeakC());
+	}
+
+	/**
+	 * Whether the centre's own figure adds anything to the core figure beside it (the
+	 * centre coasts on after the pull or a rest; equal when both read the same).
+	 */
+	public boolean centreFigureDiffers() {
+		return centreC != null && (coreAtPullC == null || Math.round(centreC) != Math.round(coreAtPullC));
+	}
+
+	/** The trade's word for the centre, as the line says it. */
+	public String donenessWord() {
+		if (doneness == null) {
+			return null;
+		}
+		return switch (doneness) {
+			case RAW -> "blue (raw)";
+			case RARE -> "rare";
+			case MEDIUM_RARE -> "medium-rare";
+			case MEDIUM -> "medium";
+			case MEDIUM_WELL -> "medium-well";
+			case WELL -> "well done";
+		};
 	}
 
 	private static Double offHeatS(PlanReport report) {
@@ -176,25 +220,25 @@ public record StationCard(long planId, String planName, String surfaceName, Food
 			details.add(Boolean.TRUE.equals(f.fan()) ? "fan on" : "fan off");
 		}
 		if (mode.usesSteam() && f.steamPct() != null && f.steamPct() >= 5) {
-			details.add(Math.round(f.steamPct()) + " % steam");
+			details.add(Math.round(f.steamPct()) + "\u00a0% steam");
 		}
 		if (mode.usesFatFilm()) {
 			details.add(Boolean.FALSE.equals(f.fatFilm()) ? "dry pan" : "thin film of fat");
 		}
 		if (mode == HeatMode.GRILL && f.heatFluxKwPerM2() != null) {
 			// the temperature shown is the element's, worked out from the measured flux
-			details
-				.add(Math.round(f.heatFluxKwPerM2()) + " kW/m² at the food (element temperature worked out from it)");
+			details.add(Math.round(f.heatFluxKwPerM2())
+					+ "\u00a0kW/m² at the food (element temperature worked out from it)");
 		}
 		if (mode == HeatMode.GRILL && f.distanceMm() != null) {
-			details.add(Math.round(f.distanceMm()) + " mm below the element");
+			details.add(Math.round(f.distanceMm()) + "\u00a0mm below the element");
 		}
 		return new Equipment(name, mode.label(), f.toHeatSetup().temperatureC(), details);
 	}
 
 	private static String seconds(double s) {
 		long r = Math.round(s);
-		return r % 60 == 0 ? (r / 60) + " min" : r + " s";
+		return r % 60 == 0 ? (r / 60) + "\u00a0min" : r + "\u00a0s";
 	}
 
 	/**

@@ -52,7 +52,7 @@ public record CutFace(InteriorProfile profile, double widthMm, double heightMm, 
 
 	/** The SVG view box: the section and a strip below it for the scale bar, mm. */
 	public String viewBox() {
-		return "0 0 " + svg(widthMm) + " " + svg(heightMm + SCALE_STRIP_MM);
+		return "0 0 " + svg(widthMm) + " " + svg(heightMm + strip());
 	}
 
 	public String width() {
@@ -65,18 +65,40 @@ public record CutFace(InteriorProfile profile, double widthMm, double heightMm, 
 
 	/** Top of the scale bar, mm. */
 	public String scaleY() {
-		return svg(heightMm + SCALE_STRIP_MM / 2);
+		return svg(heightMm + strip() / 2);
 	}
 
 	public String scaleTextY() {
-		return svg(heightMm + SCALE_STRIP_MM - 0.5);
+		return svg(heightMm + strip() * (1 - 0.5 / SCALE_STRIP_MM));
+	}
+
+	/**
+	 * Size of the scale's label, mm in the drawing: the same on the page at every size.
+	 */
+	public String scaleFontSize() {
+		return svg(strip() * 2.6 / SCALE_STRIP_MM);
+	}
+
+	public String scaleStroke() {
+		return svg(strip() * 0.4 / SCALE_STRIP_MM);
+	}
+
+	/**
+	 * Room under the section for the scale bar, mm: a tenth of the drawing's width, so
+	 * that the bar's label reads the same on a small ball as on a wide steak.
+	 */
+	private double strip() {
+		return SCALE_STRIP_MM * widthMm / SLAB_WIDTH_MM;
 	}
 
 	public String scaleBar() {
 		return svg(scaleBarMm());
 	}
 
-	/** Room under the section for the scale bar, mm. */
+	/**
+	 * Room under the section for the scale bar of a drawing {@link #SLAB_WIDTH_MM} wide,
+	 * mm.
+	 */
 	static final double SCALE_STRIP_MM = 6;
 
 	public CutFace {
@@ -141,6 +163,35 @@ public record CutFace(InteriorProfile profile, double widthMm, double heightMm, 
 		return profile.crustMm()[0];
 	}
 
+	/** Crust of face 1, mm (null for a round body). */
+	public Double lowerCrustMm() {
+		return round() ? null : PlanReport.finite(profile.crustMm()[1]);
+	}
+
+	/** The colour of face 0's crust, or null where it formed none. */
+	public String crustHex() {
+		return profile.crustMm()[0] > 0 ? profile.crustColour()[0].hex() : null;
+	}
+
+	/**
+	 * The colour halfway through face 0's cooked band, or null where there is none (the
+	 * key beside the drawing).
+	 */
+	public String bandHex() {
+		double band = profile.bandMm()[0];
+		if (!(band > 0)) {
+			return null;
+		}
+		double depth = profile.crustMm()[0] + band / 2;
+		Layer best = profile.layers().get(0);
+		for (Layer l : profile.layers()) {
+			if (Math.abs(l.depthMm() - depth) < Math.abs(best.depthMm() - depth)) {
+				best = l;
+			}
+		}
+		return best.colour().hex();
+	}
+
 	/** Thickness of the piece as drawn (a round body's diameter), mm. */
 	public double sizeMm() {
 		return round() ? 2 * profile.lengthMm() : profile.lengthMm();
@@ -174,7 +225,7 @@ public record CutFace(InteriorProfile profile, double widthMm, double heightMm, 
 
 	/** A 10 mm scale bar, or 5 mm on small pieces. */
 	public double scaleBarMm() {
-		return heightMm < 12 && !round() ? 5 : 10;
+		return round() ? (widthMm < 16 ? 5 : 10) : heightMm < 12 ? 5 : 10;
 	}
 
 }

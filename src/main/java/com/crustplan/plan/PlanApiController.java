@@ -186,12 +186,14 @@ class PlanApiController {
 
 	/**
 	 * The answer; a plan in steps adds its steps, core target, target order and timeline
-	 * (absent otherwise).
+	 * (absent otherwise). Water and oil at the target are g per 100 g of the whole piece
+	 * as it is when it reaches the colour target, its frying oil included (null where
+	 * that target was not reached).
 	 */
 	record PlanResponse(boolean reached, String outcome, Double timeToTargetS, @JsonProperty("pH") double ph,
-			Double coreTemperatureAtTargetC, String target, String targetColorHex, Acrylamide acrylamide, Series series,
-			List<Warning> warnings, List<String> cautions, List<String> assumptions,
-			@JsonInclude(JsonInclude.Include.NON_EMPTY) List<String> deprecations,
+			Double coreTemperatureAtTargetC, Double waterAtTargetPct, Double oilAtTargetPct, String target,
+			String targetColorHex, Acrylamide acrylamide, Series series, List<Warning> warnings, List<String> cautions,
+			List<String> assumptions, @JsonInclude(JsonInclude.Include.NON_EMPTY) List<String> deprecations,
 			@JsonInclude(JsonInclude.Include.NON_NULL) List<StepOut> steps,
 			@JsonInclude(JsonInclude.Include.NON_NULL) Double coreTargetC,
 			@JsonInclude(JsonInclude.Include.NON_NULL) Double coreTargetReachedS,
@@ -238,7 +240,8 @@ class PlanApiController {
 						st.targetOrder() == null ? null : text.celsius(st.targetOrder()));
 			}
 			return new PlanResponse(r.reached(), text.celsius(r.result().explanation()), r.timeToTargetS(),
-					r.surface().ph(), r.coreTemperatureAtTargetC(), text.celsius(r.targetLabel()), r.targetHex(),
+					r.surface().ph(), r.coreTemperatureAtTargetC(), r.waterAtTargetPct(), r.oilAtTargetPct(),
+					text.celsius(r.targetLabel()), r.targetHex(),
 					new Acrylamide(a.crustUgPerKg(), a.portionUgPerKg(), a.benchmarkUgPerKg(), a.zone(), a.product(),
 							text.celsius(a.basis()), a.mitigations().stream().map(m -> Change.of(m, text)).toList()),
 					new Series(t, surface, core, aw, lightness, hex, hasBody ? source : null),

@@ -8,6 +8,7 @@ import java.util.Map;
 import com.crustplan.engine.cook.CookStep;
 import com.crustplan.engine.cook.Sample;
 import com.crustplan.engine.food.BrowningStage;
+import com.crustplan.engine.food.Shape;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.system.TemperatureUnit;
 
@@ -30,7 +31,11 @@ final class PlanCharts {
 		List<Double> lightness = new ArrayList<>();
 		List<Double> source = new ArrayList<>();
 		boolean hasBody = false;
+		// a far side only where there is one that differs: a slab heated from one face
+		// (pan, grill), not a strip, cube or ball, nor a slab with the same heat on both
+		boolean farSide = false;
 		for (Sample s : report.result().series()) {
+			farSide |= Math.abs(s.otherFaceTemperatureC() - s.surfaceTemperatureC()) > 0.5;
 			source.add(round(unit.fromCelsius(s.heatSourceTemperatureC()), 1));
 			hasBody |= Double.isFinite(s.heatSourceTemperatureC());
 			t.add(round(s.timeS() / 60, 3));
@@ -45,7 +50,9 @@ final class PlanCharts {
 		d.put("unit", unit.symbol());
 		d.put("timeMin", t);
 		d.put("surfaceTemperature", surface);
-		d.put("otherFaceTemperature", other);
+		if (farSide && report.surface().shape() == Shape.SLAB) {
+			d.put("otherFaceTemperature", other);
+		}
 		d.put("coreTemperature", core);
 		d.put("surfaceWaterActivity", aw);
 		d.put("browningPct", browning);

@@ -102,6 +102,21 @@ public record PlanReport(Surface surface, HeatSetup setup, Message targetLabel, 
 	}
 
 	/**
+	 * Water in the whole piece at the target, g per 100 g, or null where not recorded.
+	 */
+	public Double waterAtTargetPct() {
+		return finite(result.waterAtTargetPct());
+	}
+
+	/**
+	 * Frying oil in the whole piece at the target, g per 100 g (0 where nothing was
+	 * fried), or null where not recorded.
+	 */
+	public Double oilAtTargetPct() {
+		return finite(result.oilAtTargetPct());
+	}
+
+	/**
 	 * Water in the whole piece at the target, worded; null where the target was not
 	 * reached.
 	 */

@@ -133,7 +133,7 @@ public class PlanService {
 					Message.of("warning.with-basis", a.message(), Text.of(a.basis()))));
 		}
 		return new PlanReport(surface, setup, target.describe(surface.category()), horizonMinutes, result, warnings,
-				cautions(surface, setup), AcrylamideView.of(estimate, mitigations),
+				cautions(surface, product, setup), AcrylamideView.of(estimate, mitigations),
 				swatches(result, surface.category(), inside.face()), null, CutFace.of(inside.interior()));
 	}
 
@@ -179,14 +179,29 @@ public class PlanService {
 		return w;
 	}
 
-	static List<Message> cautions(Surface surface, HeatSetup setup) {
+	/**
+	 * The cautions that apply to this food on this heat: acrylamide where it forms
+	 * (starchy foods, or a product with an EU benchmark), the food code's core
+	 * temperatures where the code sets them (meat, poultry, fish), and the hot-oil and
+	 * hot-pan cautions for those setups. The probe and the deference to the local food
+	 * code and licensed practice always.
+	 */
+	static List<Message> cautions(Surface surface, Product product, HeatSetup setup) {
 		List<Message> c = new ArrayList<>();
-		c.add(Message.of("caution.joined", AcrylamideCautions.CARCINOGEN, AcrylamideCautions.ESTIMATE));
+		if (PlanReport.acrylamideMatters(surface.category(), product.benchmark().isPresent())) {
+			c.add(Message.of("caution.joined", AcrylamideCautions.CARCINOGEN, AcrylamideCautions.ESTIMATE));
+		}
 		c.add(Message.of("caution.probe"));
-		// the code's own figures in both scales: a °F page shows 155 °F, not 154 °F
-		// converted from 68 °C
-		c.add(Message.of("caution.food-code", FoodCode.WHOLE_CUT.withFahrenheit(), FoodCode.COMMINUTED.withFahrenheit(),
-				FoodCode.POULTRY.withFahrenheit()));
+		if (FoodCode.forCategory(surface.category(), Cut.WHOLE) != null) {
+			// the code's own figures in both scales: a °F page shows 155 °F, not 154 °F
+			// converted from 68 °C
+			c.add(Message.of("caution.food-code", FoodCode.WHOLE_CUT.withFahrenheit(),
+					FoodCode.COMMINUTED.withFahrenheit(), FoodCode.POULTRY.withFahrenheit()));
+		}
+		else {
+			// no FDA core figure for chips or bread: the local code still decides
+			c.add(Message.of("caution.local-code"));
+		}
 		if (setup instanceof DeepFryer) {
 			c.add(Message.of("caution.hot-oil"));
 		}

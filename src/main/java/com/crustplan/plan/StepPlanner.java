@@ -113,7 +113,7 @@ final class StepPlanner {
 		}
 		List<Message> cautions = new ArrayList<>();
 		for (CookStep s : steps) {
-			for (Message c : PlanService.cautions(surface, s.setup())) {
+			for (Message c : PlanService.cautions(surface, product, s.setup())) {
 				if (!cautions.contains(c)) {
 					cautions.add(c);
 				}

@@ -106,6 +106,8 @@ public final class EquipmentSettings {
 	 * The body in a line for the setup list: "cast iron, 2.3 kg, 28 cm, 2.5 kW, heat kept
 	 * up, 50 % covered".
 	 */
+	private static final String NBSP = "\u00a0";
+
 	static String summary(SavedSetup s) {
 		if (s.getHeatMode() == HeatMode.PAN && s.getPanMassKg() != null) {
 			String material = Arrays.stream(PanMaterial.values())
@@ -117,12 +119,14 @@ public final class EquipmentSettings {
 					: Control.byKey(s.getPanControl())
 						.map(c -> c == Control.KEPT_UP ? "heat kept up" : "flame left as set")
 						.orElse(s.getPanControl());
-			return material + ", " + plain(s.getPanMassKg()) + " kg, " + plain(s.getPanDiameterCm()) + " cm, "
-					+ plain(s.getPanPowerKw()) + " kW, " + control + ", " + plain(s.getPanCoverPct()) + " % covered";
+			// no-break spaces: a figure keeps its unit on its line
+			return material + ", " + plain(s.getPanMassKg()) + NBSP + "kg, " + plain(s.getPanDiameterCm()) + NBSP
+					+ "cm, " + plain(s.getPanPowerKw()) + NBSP + "kW, " + control + ", " + plain(s.getPanCoverPct())
+					+ NBSP + "% covered";
 		}
 		if (s.getHeatMode() == HeatMode.FRYER && s.getFryerOilLitres() != null) {
-			return plain(s.getFryerOilLitres()) + " L oil, " + plain(s.getFryerHeaterKw()) + " kW heater, "
-					+ plain(s.getFryerLoadKg()) + " kg per batch";
+			return plain(s.getFryerOilLitres()) + NBSP + "L oil, " + plain(s.getFryerHeaterKw()) + NBSP + "kW heater, "
+					+ plain(s.getFryerLoadKg()) + NBSP + "kg per batch";
 		}
 		return null;
 	}

@@ -18,6 +18,18 @@ public class Formats {
 	/** A no-break space: a figure never parts from its unit at a line end. */
 	static final String NBSP = "\u00a0";
 
+	/**
+	 * Text for the JSON API: the pages' no-break spaces as plain spaces, so the API's
+	 * wording stays as it was.
+	 */
+	public static String apiText(String pageText) {
+		return pageText == null ? null : pageText.replace(NBSP, " ");
+	}
+
+	public static java.util.List<String> apiText(java.util.List<String> pageTexts) {
+		return pageTexts.stream().map(Formats::apiText).toList();
+	}
+
 	/** "230 °C / 446 °F", for pages read in either scale (the station card). */
 	public String tempBoth(Double celsius) {
 		return celsius == null ? "–" : bothScales(celsius);
@@ -39,31 +51,43 @@ public class Formats {
 				TemperatureUnit.FAHRENHEIT.fromCelsius(celsius), NBSP);
 	}
 
+	/**
+	 * Whole seconds of a time, the one rule for every time on a page: floored, as a
+	 * kitchen timer counts (26:12.7 shows 26:12 at the top and in the steps table alike).
+	 * A hair under a whole second (floating point) counts as that second.
+	 */
+	public static long wholeSeconds(double seconds) {
+		return (long) Math.floor(seconds + 1e-6);
+	}
+
 	/** Minutes and seconds the way a kitchen timer shows them. */
 	public static String duration(double seconds) {
 		if (!Double.isFinite(seconds)) {
 			return "–";
 		}
-		long s = Math.round(seconds);
+		long s = wholeSeconds(seconds);
 		long h = s / 3600;
 		long m = (s % 3600) / 60;
 		long r = s % 60;
 		if (h > 0) {
-			return String.format(Locale.ROOT, "%d h %02d min", h, m);
+			return String.format(Locale.ROOT, "%d%sh%s%02d%smin", h, NBSP, NBSP, m, NBSP);
 		}
 		if (m > 0) {
-			return String.format(Locale.ROOT, "%d min %02d s", m, r);
+			return String.format(Locale.ROOT, "%d%smin%s%02d%ss", m, NBSP, NBSP, r, NBSP);
 		}
-		return r + " s";
+		return r + NBSP + "s";
 	}
 
 	public String time(Double seconds) {
 		return seconds == null ? "–" : duration(seconds);
 	}
 
-	/** mm:ss labels under the colour swatches. */
+	/** mm:ss labels under the colour swatches and in the steps table. */
 	public String clock(double seconds) {
-		long s = Math.round(seconds);
+		if (!Double.isFinite(seconds)) {
+			return "–";
+		}
+		long s = wholeSeconds(seconds);
 		return String.format(Locale.ROOT, "%d:%02d", s / 60, s % 60);
 	}
 
@@ -120,7 +144,7 @@ public class Formats {
 			return "–";
 		}
 		long p = Math.round(relative * 100);
-		return (p > 0 ? "+" : p < 0 ? "−" : "") + Math.abs(p) + " %";
+		return (p > 0 ? "+" : p < 0 ? "−" : "") + Math.abs(p) + NBSP + "%";
 	}
 
 	public String num(Double v, int digits) {

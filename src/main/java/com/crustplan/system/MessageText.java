@@ -59,13 +59,16 @@ public class MessageText {
 		return messages.stream().map(m -> render(m, unit)).toList();
 	}
 
-	/** As the JSON API answers: °C. */
+	/**
+	 * As the JSON API answers: °C, with plain spaces (the no-break spaces are for pages,
+	 * where a line may end between a figure and its unit).
+	 */
 	public String celsius(Message message) {
-		return render(message, TemperatureUnit.CELSIUS);
+		return render(message, TemperatureUnit.CELSIUS).replace(Formats.NBSP, " ");
 	}
 
 	public List<String> celsius(List<Message> messages) {
-		return render(messages, TemperatureUnit.CELSIUS);
+		return messages.stream().map(this::celsius).toList();
 	}
 
 	/**
@@ -93,8 +96,8 @@ public class MessageText {
 					+ "°F";
 		}
 		if (a instanceof TemperatureDifference d) {
-			return whole(d.kelvin()) + " K / " + whole(TemperatureUnit.FAHRENHEIT.differenceFromCelsius(d.kelvin()))
-					+ " °F";
+			return TemperatureUnit.CELSIUS.formatDifference(d.kelvin()) + Formats.NBSP + "/ "
+					+ TemperatureUnit.FAHRENHEIT.formatDifference(d.kelvin());
 		}
 		return argument(a, TemperatureUnit.CELSIUS);
 	}
@@ -110,18 +113,21 @@ public class MessageText {
 			// the code's own figure in each scale; in °C the °F figure may follow, never
 			// the other way round
 			if (unit == TemperatureUnit.FAHRENHEIT) {
-				return whole(s.fahrenheit()) + " °F";
+				return whole(s.fahrenheit()) + NBSP + "°F";
 			}
-			return whole(s.celsius()) + " °C" + (s.withFahrenheit() ? " (" + whole(s.fahrenheit()) + " °F)" : "");
+			return whole(s.celsius()) + NBSP + "°C"
+					+ (s.withFahrenheit() ? " (" + whole(s.fahrenheit()) + NBSP + "°F)" : "");
 		}
 		if (a instanceof TemperatureDifference d) {
-			return whole(unit.differenceFromCelsius(d.kelvin())) + (unit == TemperatureUnit.FAHRENHEIT ? " °F" : " K");
+			// a cook reads "40 °C cooler", not kelvin (the API too: its temperatures are
+			// °C)
+			return unit.formatDifference(d.kelvin());
 		}
 		if (a instanceof Quantity q) {
-			return fixed(q.value(), q.decimals()) + " " + q.unit();
+			return fixed(q.value(), q.decimals()) + NBSP + q.unit();
 		}
 		if (a instanceof Duration d) {
-			return d.inMinutes() ? whole(d.seconds() / 60) + " min" : whole(d.seconds()) + " s";
+			return d.inMinutes() ? whole(d.seconds() / 60) + NBSP + "min" : whole(d.seconds()) + NBSP + "s";
 		}
 		if (a instanceof PlainNumber n) {
 			return fixed(n.value(), n.decimals());
@@ -131,6 +137,8 @@ public class MessageText {
 		}
 		throw new IllegalArgumentException("no rendering for " + a);
 	}
+
+	private static final String NBSP = Formats.NBSP;
 
 	private static String whole(double v) {
 		return fixed(v, 0);

@@ -55,6 +55,17 @@ public enum TemperatureUnit {
 		return t == null ? null : toCelsius(t.doubleValue());
 	}
 
+	/**
+	 * A temperature difference in this unit as a cook reads it: "40 °C" cooler on a °C
+	 * page, "72 °F" on a °F page (a difference of 1 K is 1 °C, 1.8 °F; NIST SP 811 §B.9).
+	 */
+	public String formatDifference(double kelvin) {
+		if (!Double.isFinite(kelvin)) {
+			return "–";
+		}
+		return String.format(Locale.ROOT, "%.0f\u00a0%s", differenceFromCelsius(kelvin), symbol);
+	}
+
 	/** A temperature difference in this unit (1 °C of difference is 1.8 °F). */
 	public double differenceFromCelsius(double dc) {
 		return this == CELSIUS ? dc : dc * 9 / 5;
@@ -64,7 +75,8 @@ public enum TemperatureUnit {
 		if (!Double.isFinite(c)) {
 			return "–";
 		}
-		return String.format(Locale.ROOT, "%.0f %s", fromCelsius(c), symbol);
+		// a no-break space: the figure never parts from its unit at a line end
+		return String.format(Locale.ROOT, "%.0f\u00a0%s", fromCelsius(c), symbol);
 	}
 
 }

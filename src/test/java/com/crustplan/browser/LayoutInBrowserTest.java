@@ -174,6 +174,42 @@ class LayoutInBrowserTest {
 		assertThat(problems).as("elements past the right edge").isEmpty();
 	}
 
+	/**
+	 * A native select cannot wrap: every option's text, measured in the select's own
+	 * font, fits inside the box less its padding and the drop-down arrow (20 px, an
+	 * allowance for Chromium's arrow).
+	 */
+	static final String SELECT_CUTS = """
+			var out = [];
+			document.querySelectorAll('form select').forEach(function (s) {
+			  var cs = getComputedStyle(s), c = document.createElement('canvas').getContext('2d');
+			  c.font = cs.font;
+			  var room = s.clientWidth - parseFloat(cs.paddingLeft) - parseFloat(cs.paddingRight) - 20;
+			  for (var i = 0; i < s.options.length; i++) {
+			    var w = c.measureText(s.options[i].text).width;
+			    if (w > room) { out.push('#' + s.id + ' "' + s.options[i].text + '" ' + Math.round(w) + ' > ' + Math.round(room) + ' px'); }
+			  }
+			});
+			return out;
+			""";
+
+	@Test
+	void shouldShowTheWholeTextOfEveryOptionOnTheSurfaceFormAtTabletAndDesktopWidth() {
+		signIn();
+		List<String> problems = new ArrayList<>();
+		for (int width : new int[] { 800, 1280 }) {
+			driver.manage().window().setSize(new Dimension(width, 1000));
+			for (String page : List.of("/surfaces/new",
+					"/surfaces/" + demo.surface("Roast potatoes, parboiled with bicarbonate") + "/edit")) {
+				driver.get(url(page));
+				@SuppressWarnings("unchecked")
+				List<String> out = (List<String>) ((JavascriptExecutor) driver).executeScript(SELECT_CUTS);
+				out.forEach(o -> problems.add(width + " px, " + page + ": " + o));
+			}
+		}
+		assertThat(problems).as("option text cut off").isEmpty();
+	}
+
 	int fullHeight() {
 		Object h = ((JavascriptExecutor) driver).executeScript("return document.documentElement.scrollHeight");
 		return (int) Math.min(6000, ((Number) h).longValue() + 40);

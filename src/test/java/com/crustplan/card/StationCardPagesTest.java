@@ -94,7 +94,7 @@ class StationCardPagesTest {
 			.andExpect(status().isOk())
 			.andExpect(view().name("card/card"))
 			.andExpect(content().string(containsString("Sirloin steak, 30 mm, patted dry")))
-			.andExpect(content().string(containsString("Thickness 30 mm")))
+			.andExpect(content().string(containsString("Thickness 30\u00a0mm")))
 			// the setups' dials, each in both scales (°F = °C × 9/5 + 32)
 			.andExpect(content().string(containsString(both(230, 446))))
 			.andExpect(content().string(containsString(both(180, 356))))
@@ -119,6 +119,21 @@ class StationCardPagesTest {
 	}
 
 	@Test
+	void shouldNameTheCentresDonenessInTheTradesWordsWithItsCore() throws Exception {
+		// pulled at 52 °C and rested, the centre coasts on: rare to medium by the kitchen
+		// probe bands (common practice, CentreDoneness), with its figure in both scales
+		mvc.perform(get("/plans/{id}/card", steak()))
+			.andExpect(status().isOk())
+			.andExpect(content().string(containsString("id=\"card-doneness\"")))
+			.andExpect(content().string(org.hamcrest.Matchers.matchesPattern(
+					"(?s).*; centre <strong>(rare|medium-rare|medium)</strong>(<span class=\"doneness-at\">, \\d+\u00a0°C\u00a0/ \\d+\u00a0°F at its hottest</span>)?</span></p>.*")));
+		// chips have no cut face and no doneness word
+		mvc.perform(get("/plans/{id}/card", demo.plan("Chips: blanch, rest, finish")))
+			.andExpect(status().isOk())
+			.andExpect(content().string(not(containsString("card-doneness"))));
+	}
+
+	@Test
 	void shouldShowBothScalesWhateverTheCooksUnit() throws Exception {
 		mvc.perform(get("/plans/{id}/card", steak()).cookie(new Cookie("crustplan-units", "F")))
 			.andExpect(status().isOk())
@@ -132,7 +147,7 @@ class StationCardPagesTest {
 			.andExpect(status().isOk())
 			.andExpect(content().string(containsString("id=\"card-acrylamide\"")))
 			// French fries: benchmark level 500 µg/kg, Regulation (EU) 2017/2158 Annex IV
-			.andExpect(content().string(containsString("EU benchmark 500 µg/kg")))
+			.andExpect(content().string(containsString("EU benchmark 500\u00a0µg/kg")))
 			.andExpect(content().string(containsString("Hot oil")))
 			.andExpect(content().string(containsString("Into the oil at " + both(140, 284))))
 			// potato has no food-code minimum: the card says when a fry is cooked through

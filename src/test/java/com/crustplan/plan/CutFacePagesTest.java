@@ -59,6 +59,39 @@ class CutFacePagesTest {
 			.andExpect(content().string(not(containsString("cut-face-drawing"))));
 	}
 
+	/**
+	 * A cook compares the drawing with a cut steak: the drawing has a key to its three
+	 * colours, and a slab's crust and band are given per face, each named.
+	 */
+	@Test
+	void shouldKeyTheDrawingAndNameTheFacesOfASlab() throws Exception {
+		mvc.perform(get("/plan").param("surfaceId", String.valueOf(demo.surface("Sirloin steak, 30 mm, patted dry")))
+			.param("setupId", String.valueOf(demo.setup("Plancha, high")))
+			.param("targetStage", "browned"))
+			.andExpect(status().isOk())
+			.andExpect(content().string(containsString("id=\"cut-face-key\"")))
+			.andExpect(content().string(containsString("> centre</li>")))
+			.andExpect(content().string(containsString("Crust (upper / lower face)")))
+			.andExpect(content().string(containsString("Cooked band (upper / lower face)")))
+			.andExpect(content().string(containsString("slab, 30\u00a0mm thick")));
+	}
+
+	/**
+	 * The demo skillet never turns the food: the face up meets only kitchen air and has
+	 * no band, which the sentence and the figures say rather than "0.0 mm".
+	 */
+	@Test
+	void shouldSayTheFaceThatNeverSawTheHeatHasNoBand() throws Exception {
+		mvc.perform(get("/plan").param("surfaceId", String.valueOf(demo.surface("Sirloin steak, 30 mm, patted dry")))
+			.param("setupId", String.valueOf(demo.setup("Cast-iron skillet, medium-high")))
+			.param("targetStage", "browned"))
+			.andExpect(status().isOk())
+			.andExpect(content().string(containsString("deep under the seared face; none under the other face")))
+			.andExpect(content().string(not(containsString("0.0\u00a0mm under"))))
+			.andExpect(content().string(
+					org.hamcrest.Matchers.matchesPattern("(?s).*id=\"cut-face-band\">[0-9.]+\u00a0mm / none</dd>.*")));
+	}
+
 	@Test
 	void shouldCarryTheInteriorInTheApiAnswerForASteamedSteak() throws Exception {
 		String steamed = """

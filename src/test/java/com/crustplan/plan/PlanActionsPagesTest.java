@@ -169,7 +169,8 @@ class PlanActionsPagesTest {
 		// the demo chips are blanched: blanching and soaking are not offered again
 		assertThat(page).doesNotContain("data-code=\"BLANCH\"").doesNotContain("data-code=\"SOAK\"");
 		// times as the headline words them, never decimal minutes
-		assertThat(page).containsPattern("\\d+ min \\d\\d s</span> → <span class=\"nowrap\">\\d+ min \\d\\d s");
+		assertThat(page).containsPattern(
+				"\\d+\u00a0min\u00a0\\d\\d\u00a0s</span> → <span class=\"nowrap\">\\d+\u00a0min\u00a0\\d\\d\u00a0s");
 		mvc.perform(get("/plan").param("surfaceId", chips())
 			.param("setupId", fryer())
 			.param("targetStage", "golden")

@@ -1,9 +1,13 @@
 package com.crustplan.plan;
 
+import static org.hamcrest.Matchers.anyOf;
+import static org.hamcrest.Matchers.both;
+import static org.hamcrest.Matchers.closeTo;
 import static org.hamcrest.Matchers.containsString;
 import static org.hamcrest.Matchers.greaterThan;
 import static org.hamcrest.Matchers.hasItem;
 import static org.hamcrest.Matchers.hasSize;
+import static org.hamcrest.Matchers.lessThan;
 import static org.hamcrest.Matchers.nullValue;
 import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.anonymous;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
@@ -126,6 +130,66 @@ class PlanApiTest {
 			.andExpect(jsonPath("$.acrylamide.benchmarkUgPerKg").value(nullValue()))
 			.andExpect(jsonPath("$.acrylamide.zone").value(nullValue()))
 			.andExpect(jsonPath("$.acrylamide.mitigations.length()").value(0));
+	}
+
+	/**
+	 * Water and frying oil in the whole piece at the target, g per 100 g. Common
+	 * practice: a finished fry holds about 40 % water and 10–15 % oil; the bounds are
+	 * wide on purpose (this checks that the API reports the engine's figures in their
+	 * unit, the engine's own tests hold the physics).
+	 */
+	@Nested
+	class WaterAndOilAtTheTarget {
+
+		static final String FRIES = """
+				{ "surface": { "category": "potato", "product": "french-fries", "thicknessMm": 10 },
+				  "heat": { "mode": "fryer", "temperatureC": 175 },
+				  "target": { "stage": "golden" } }""";
+
+		@Test
+		void shouldReportWaterAndOilOfAGoldenFry() throws Exception {
+			plan(FRIES).andExpect(status().isOk())
+				.andExpect(jsonPath("$.reached").value(true))
+				.andExpect(jsonPath("$.waterAtTargetPct").value(both(greaterThan(20.0)).and(lessThan(60.0))))
+				.andExpect(jsonPath("$.oilAtTargetPct").value(both(greaterThan(5.0)).and(lessThan(25.0))));
+		}
+
+		@Test
+		void shouldReportThemForAFryInSteps() throws Exception {
+			// blanch at 140 °C, rest, finish at 180 °C to golden (the two-stage fry of
+			// common practice)
+			plan("""
+					{ "surface": { "category": "potato", "product": "french-fries", "thicknessMm": 10 },
+					  "steps": [
+					    { "heat": { "mode": "fryer", "temperatureC": 140 }, "minutes": 5 },
+					    { "heat": { "mode": "rest" }, "minutes": 10 },
+					    { "heat": { "mode": "fryer", "temperatureC": 180 }, "stage": "golden", "minutes": 10 } ],
+					  "target": { "stage": "golden" } }""").andExpect(status().isOk())
+				.andExpect(jsonPath("$.steps", hasSize(3)))
+				.andExpect(jsonPath("$.waterAtTargetPct").value(both(greaterThan(20.0)).and(lessThan(60.0))))
+				.andExpect(jsonPath("$.oilAtTargetPct").value(both(greaterThan(5.0)).and(lessThan(25.0))));
+		}
+
+		@Test
+		void shouldReportNoOilForASearedSteak() throws Exception {
+			// a pan sear takes up no frying oil; raw beef is about 70-75 % water (food
+			// composition tables) and a seared steak keeps most of it
+			plan("""
+					{ "surface": { "category": "meat", "thicknessMm": 25 },
+					  "heat": { "mode": "pan", "temperatureC": 230, "flipEverySeconds": 60 },
+					  "target": { "stage": "browned" } }""").andExpect(status().isOk())
+				.andExpect(jsonPath("$.oilAtTargetPct").value(anyOf(nullValue(), closeTo(0.0, 1e-9))))
+				.andExpect(jsonPath("$.waterAtTargetPct").value(both(greaterThan(55.0)).and(lessThan(76.0))));
+		}
+
+		@Test
+		void shouldGiveNullWhereTheTargetIsNotReached() throws Exception {
+			plan(CHIPS.replace("\"horizonMinutes\": 30", "\"horizonMinutes\": 1")).andExpect(status().isOk())
+				.andExpect(jsonPath("$.reached").value(false))
+				.andExpect(jsonPath("$.waterAtTargetPct").value(nullValue()))
+				.andExpect(jsonPath("$.oilAtTargetPct").value(nullValue()));
+		}
+
 	}
 
 	static String oven(String heatFields) {

@@ -61,8 +61,18 @@ class PlanChartsEquipmentTest {
 			.getResponse()
 			.getContentAsString();
 		assertThat(page).contains("of food per batch drawing it down")
-			.contains("8.0 L of oil, a 3.2 kW heater")
-			.contains("0.50 kg of food per batch");
+			.contains("8.0\u00a0L of oil, a 3.2\u00a0kW heater")
+			.contains("0.50\u00a0kg of food per batch");
+	}
+
+	@Test
+	void shouldDrawAFarSideOnlyForASlabHeatedFromOneFace() throws Exception {
+		// a steak on a plancha: the face up is far cooler than the face down
+		assertThat(chartJson("Sirloin steak, 30 mm, patted dry", "Plancha, high", "browned"))
+			.contains("otherFaceTemperature");
+		// a strip in a fryer is heated all round: no far side to draw
+		assertThat(chartJson("Chips, 10 mm, blanched", "Fryer, chips", "golden"))
+			.doesNotContain("otherFaceTemperature");
 	}
 
 	@Test

@@ -64,9 +64,12 @@ class PlanPagesTest {
 			.andExpect(content().string(containsString("id=\"time-to-target\"")))
 			.andExpect(content().string(containsString("data-plan=")))
 			.andExpect(content().string(containsString("class=\"swatch\"")))
-			// cautions a kitchen expects (IARC group, the FDA Food Code edition, hot oil)
+			// the cautions that apply to chips: IARC group and hot oil; the FDA Food Code
+			// 2022 core figures (3-401.11) are for meat, poultry and fish, so chips defer
+			// to the local code without them (they were shown on every plan before)
 			.andExpect(content().string(containsString("Group 2A")))
-			.andExpect(content().string(containsString("FDA Food Code 2022")))
+			.andExpect(content().string(not(containsString("FDA Food Code 2022"))))
+			.andExpect(content().string(containsString("local food code and licensed practice")))
 			.andExpect(content().string(containsString("Hot oil")))
 			// the acrylamide section: the estimate where the engine gives one, otherwise
 			// it says so
@@ -88,9 +91,30 @@ class PlanPagesTest {
 			.andExpect(status().isOk())
 			.andReturn()
 			.getResponse()
-			.getContentAsString();
+			.getContentAsString()
+			.replace('\u00a0', ' ');
 		String report = page.substring(page.indexOf("id=\"report\""));
-		assertThat(report).contains("°F", "145 °F for 15 s", "155 °F for 17 s").doesNotContain("°C", "154 °F");
+		assertThat(report).contains("°F", "347 °F").doesNotContain("°C");
+	}
+
+	@Test
+	void shouldShowTheFoodCodeCautionForSteakInItsOwnFahrenheitFiguresWithoutAnAcrylamideCaution() throws Exception {
+		// FDA Food Code 2022, 3-401.11: the code's own °F figures (155 °F for minced, not
+		// 154 °F converted from 68 °C); acrylamide forms in starchy foods (EFSA CONTAM
+		// Panel 2015), not in a steak
+		String page = mvc
+			.perform(get("/plan").param("surfaceId", String.valueOf(demo.surface("Sirloin steak, 30 mm, patted dry")))
+				.param("setupId", String.valueOf(demo.setup("Plancha, high")))
+				.param("targetStage", "browned")
+				.cookie(new Cookie("crustplan-units", "F")))
+			.andExpect(status().isOk())
+			.andReturn()
+			.getResponse()
+			.getContentAsString()
+			.replace('\u00a0', ' ');
+		String report = page.substring(page.indexOf("id=\"report\""));
+		assertThat(report).contains("145 °F for 15 s", "155 °F for 17 s", "FDA Food Code 2022", "Hot pan")
+			.doesNotContain("°C", "154 °F", "Group 2A", "Hot oil");
 	}
 
 	@Test
@@ -104,7 +128,7 @@ class PlanPagesTest {
 			.andExpect(status().isOk())
 			.andExpect(view().name("plan/risk"))
 			// Commission Regulation (EU) 2017/2158, Annex IV: French fries 500 µg/kg
-			.andExpect(content().string(containsString("500 µg/kg")))
+			.andExpect(content().string(containsString("500\u00a0µg/kg")))
 			.andExpect(content().string(containsString("risk-target")))
 			.andExpect(content().string(containsString("IARC")))
 			.andReturn()
@@ -124,7 +148,20 @@ class PlanPagesTest {
 		mvc.perform(get("/plan").param("surfaceId", chips()).param("setupId", fryer()).param("targetStage", "golden"))
 			.andExpect(content().string(containsString("id=\"water-at-target\"")))
 			.andExpect(content().string(containsString("Water in the whole piece at the target:")))
-			.andExpect(content().string(containsString("Frying oil taken up by the target:")));
+			.andExpect(content().string(containsString("Frying oil taken up by the target:")))
+			// the basis of both figures: the piece's shape and size, and the fried piece
+			.andExpect(content().string(containsString("g per 100 g of the fried piece")))
+			.andExpect(content().string(containsString("strip, 10\u00a0mm wide")))
+			// the fryer's assumptions no longer say oil uptake is not modelled
+			.andExpect(content().string(not(containsString("Oil taken up by the crust is not modelled"))));
+	}
+
+	@Test
+	void shouldSayARoastPotatoIsACube() throws Exception {
+		mvc.perform(get("/plan")
+			.param("surfaceId", String.valueOf(demo.surface("Roast potatoes, parboiled with bicarbonate")))
+			.param("setupId", String.valueOf(demo.setup("Combi oven, dry fan")))
+			.param("targetStage", "golden")).andExpect(content().string(containsString("cube, 35\u00a0mm edge")));
 	}
 
 	@Test
@@ -151,7 +188,7 @@ class PlanPagesTest {
 			.param("targetStage", "golden"))
 			.andExpect(status().isOk())
 			.andExpect(content().string(containsString("data-code=\"core-past-juiciness\"")))
-			.andExpect(content().string(containsString("poultry breast dries past about 80 °C")));
+			.andExpect(content().string(containsString("poultry breast dries past about 80\u00a0°C")));
 	}
 
 	@Test

@@ -27,7 +27,16 @@ class PlanServiceTest {
 	final PlanService planner = new PlanService();
 
 	/** The report speaks in codes; a page renders them in the cook's unit. */
-	final MessageText text = new MessageText();
+	/**
+	 * The page's wording read with its no-break spaces as spaces (they only keep a figure
+	 * on the line of its unit).
+	 */
+	final MessageText text = new MessageText() {
+		@Override
+		public String render(com.crustplan.engine.message.Message message, TemperatureUnit unit) {
+			return super.render(message, unit).replace('\u00a0', ' ');
+		}
+	};
 
 	/**
 	 * A 60 mm skin-on piece in a 240 °C pan: the skin colours long before the core is
@@ -61,9 +70,11 @@ class PlanServiceTest {
 	}
 
 	@Test
-	void shouldAlwaysCarryTheUsualCautions() {
+	void shouldCarryTheCautionsThatApplyToTheFood() {
 		List<String> c = text.render(thickChicken().cautions(), TemperatureUnit.CELSIUS);
-		assertThat(c).anySatisfy(x -> assertThat(x).contains("Group 2A"));
+		// acrylamide forms from asparagine and sugars in starchy foods (EFSA CONTAM Panel
+		// 2015): no acrylamide caution on chicken
+		assertThat(c).noneSatisfy(x -> assertThat(x).contains("Group 2A"));
 		assertThat(c).anySatisfy(x -> assertThat(x).contains("probe"));
 		// FDA Food Code 2022 3-401.11: 63 °C 15 s whole cuts, 68 °C 17 s minced, 74 °C <
 		// 1 s poultry
@@ -72,6 +83,31 @@ class PlanServiceTest {
 			.contains("68 °C (155 °F) for 17 s")
 			.contains("74 °C (165 °F) for under 1 s"));
 		assertThat(c).anySatisfy(x -> assertThat(x).contains("Hot pan"));
+		// chips: IARC Group 2A caution, no FDA Food Code 3-401.11 core figures (it sets
+		// none for potatoes), the local food code still deferred to
+		List<String> chips = text.render(planner
+			.plan(Surface.defaults(FoodCategory.POTATO), new DeepFryer(170), Target.stage("light-golden"), 20)
+			.cautions(), TemperatureUnit.CELSIUS);
+		assertThat(chips).anySatisfy(x -> assertThat(x).contains("Group 2A"));
+		assertThat(chips).anySatisfy(x -> assertThat(x).contains("probe"));
+		assertThat(chips).noneSatisfy(x -> assertThat(x).contains("FDA Food Code"));
+		assertThat(chips).anySatisfy(x -> assertThat(x).contains("local food code and licensed practice"));
+		assertThat(chips).noneSatisfy(x -> assertThat(x).contains("Hot pan"));
+	}
+
+	@Test
+	void shouldNotGiveAZeroBandToTheFaceOfAnUnturnedSteakThatNeverSawTheHeat() {
+		// a steak never turned in the pan: the face up meets only kitchen air, so it has
+		// no grey band; the sentence says so instead of "0.0 mm under the lower one"
+		PlanReport r = planner.plan(Surface.defaults(FoodCategory.MEAT), new PanContact(220, true, 0),
+				Target.stage("browned"), 30);
+		assertThat(r.cutFace().profile().band().code()).isEqualTo("interior.band.meat.one-face");
+		assertThat(text.celsius(r.cutFace().profile().band())).doesNotContain("0.0 mm")
+			.contains("none under the other face");
+		// turned every minute, both faces have one
+		PlanReport turned = planner.plan(Surface.defaults(FoodCategory.MEAT), new PanContact(220, true, 60),
+				Target.stage("browned"), 30);
+		assertThat(turned.cutFace().profile().band().code()).isIn("interior.band.meat", "interior.band.meat.even");
 	}
 
 	@Test
@@ -143,8 +179,12 @@ class PlanServiceTest {
 		PlanReport r = planner.plan(Surface.defaults(FoodCategory.BREAD).withThicknessMm(60), new Oven(230, false, 1.6),
 				Target.stage("golden"), 60);
 		PlanWarning w = r.warnings().stream().filter(x -> x.code().equals("crumb-not-baked")).findFirst().orElseThrow();
+		// a difference worded in the page's scale, as a baker reads it (40 K of
+		// difference is 40 °C and 72 °F, NIST SP 811 §B.9), not in kelvin
 		assertThat(text.render(w.message(), TemperatureUnit.CELSIUS)).contains("96 °C")
-			.contains("Bake about 40 K cooler");
+			.contains("Bake about 40 °C cooler")
+			.doesNotContain(" K ");
+		assertThat(text.render(w.message(), TemperatureUnit.FAHRENHEIT)).contains("Bake about 72 °F cooler");
 	}
 
 }

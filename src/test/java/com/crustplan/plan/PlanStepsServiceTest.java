@@ -27,7 +27,16 @@ class PlanStepsServiceTest {
 
 	final PlanService planner = new PlanService();
 
-	final MessageText text = new MessageText();
+	/**
+	 * The page's wording read with its no-break spaces as spaces (they only keep a figure
+	 * on the line of its unit).
+	 */
+	final MessageText text = new MessageText() {
+		@Override
+		public String render(com.crustplan.engine.message.Message message, TemperatureUnit unit) {
+			return super.render(message, unit).replace('\u00a0', ' ');
+		}
+	};
 
 	static final Surface STEAK = Surface.defaults(FoodCategory.MEAT).withThicknessMm(30).withInitialTemperatureC(5);
 

@@ -68,14 +68,14 @@ class SetupPagesTest {
 			.andExpect(view().name("setup/list"))
 			.andExpect(model().attribute("setups", hasSize(greaterThanOrEqualTo(4))))
 			.andExpect(content().string(containsString("Deep fryer (oil)")))
-			.andExpect(content().string(containsString("175 °C")));
+			.andExpect(content().string(containsString("175\u00a0°C")));
 	}
 
 	@Test
 	void shouldShowTemperaturesInFahrenheitWhenChosen() throws Exception {
 		// 175 °C = 347 °F (°F = °C × 9/5 + 32)
 		mvc.perform(get("/setups").cookie(new Cookie("crustplan-units", "F")))
-			.andExpect(content().string(containsString("347 °F")));
+			.andExpect(content().string(containsString("347\u00a0°F")));
 	}
 
 	@Test
@@ -123,9 +123,10 @@ class SetupPagesTest {
 		// and 57.87 kPa at
 		// 85 °C, so about 81.6 °C: 82 °C, and 81.6 × 9/5 + 32 = 178.9, 179 °F
 		mvc.perform(oven("/setups/new", "name", "Half steam", "steamPct", "50")).andExpect(status().is3xxRedirection());
-		mvc.perform(get("/setups")).andExpect(content().string(containsString("50 % steam, dew point 82 °C")));
+		mvc.perform(get("/setups"))
+			.andExpect(content().string(containsString("50\u00a0% steam, dew point 82\u00a0°C")));
 		mvc.perform(get("/setups").cookie(new Cookie("crustplan-units", "F")))
-			.andExpect(content().string(containsString("50 % steam, dew point 179 °F")));
+			.andExpect(content().string(containsString("50\u00a0% steam, dew point 179\u00a0°F")));
 		SavedSetup s = setups.findAll()
 			.stream()
 			.filter(x -> x.getName().equals("Half steam"))
@@ -134,7 +135,7 @@ class SetupPagesTest {
 		mvc.perform(get("/setups/{id}/edit", s.getId()))
 			.andExpect(content().string(containsString("Steam in the oven air")))
 			.andExpect(content().string(containsString("0 = dry (kitchen air is about 1.6 %), 100 = pure steam")))
-			.andExpect(content().string(containsString("82 °C")));
+			.andExpect(content().string(containsString("82\u00a0°C")));
 	}
 
 	@Test
@@ -178,8 +179,8 @@ class SetupPagesTest {
 		assertThat(coals.getDistanceMm()).isEqualTo(100.0);
 		assertThat(coals.getFluxAtFoodKwPerM2()).isBetween(15.0, 30.0);
 		mvc.perform(get("/setups"))
-			.andExpect(content().string(containsString("14 kW/m² at the food")))
-			.andExpect(content().string(containsString("food 100 mm below")));
+			.andExpect(content().string(containsString("14\u00a0kW/m² at the food")))
+			.andExpect(content().string(containsString("food 100\u00a0mm below")));
 		mvc.perform(get("/setups/{id}/edit", flux.getId()))
 			.andExpect(content().string(containsString("Heat flux at the food")));
 	}

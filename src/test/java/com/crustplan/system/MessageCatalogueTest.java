@@ -82,6 +82,11 @@ class MessageCatalogueTest {
 		p.stringPropertyNames().stream().filter(k -> !bindingCode(k)).forEach(k -> patterns.put(k, p.getProperty(k)));
 	}
 
+	/** A page's rendering with its no-break spaces read as spaces. */
+	static String page(Message message, TemperatureUnit unit) {
+		return TEXT.render(message, unit).replace('\u00a0', ' ');
+	}
+
 	static Temperature c(double v) {
 		return Temperature.celsius(v);
 	}
@@ -235,12 +240,18 @@ class MessageCatalogueTest {
 		sample("interior.centre.fish.under", c(52), StatedTemperature.of(63, 145));
 		sample("interior.band.meat", Quantity.of(3.4, "mm", 1), Quantity.of(2.6, "mm", 1));
 		sample("interior.band.meat.even", Quantity.of(3.4, "mm", 1));
+		sample("interior.band.meat.one-face", Quantity.of(2.8, "mm", 1));
+		sample("interior.band.meat.none");
 		sample("interior.through.meat");
 		sample("interior.band.poultry", Quantity.of(6.2, "mm", 1), Quantity.of(4.1, "mm", 1));
 		sample("interior.band.poultry.even", Quantity.of(6.2, "mm", 1));
+		sample("interior.band.poultry.one-face", Quantity.of(4.7, "mm", 1));
+		sample("interior.band.poultry.none");
 		sample("interior.through.poultry");
 		sample("interior.band.fish", Quantity.of(5.5, "mm", 1), Quantity.of(3.9, "mm", 1));
 		sample("interior.band.fish.even", Quantity.of(5.5, "mm", 1));
+		sample("interior.band.fish.one-face", Quantity.of(3.6, "mm", 1));
+		sample("interior.band.fish.none");
 		sample("interior.through.fish");
 		sample("warning.food-code.poultry", m("doneness.moment.colour"), c(52), StatedTemperature.of(74, 165));
 		sample("warning.food-code.whole-cut", m("doneness.moment.colour"), c(48), StatedTemperature.of(63, 145),
@@ -265,6 +276,7 @@ class MessageCatalogueTest {
 		sample("warning.alkaline-surface", PlainNumber.of(7.6, 1));
 		sample("caution.joined", m("caution.acrylamide.carcinogen"), m("caution.acrylamide.estimate"));
 		sample("caution.probe");
+		sample("caution.local-code");
 		sample("caution.food-code", StatedTemperature.withFahrenheit(63, 145),
 				StatedTemperature.withFahrenheit(68, 155), StatedTemperature.withFahrenheit(74, 165));
 		sample("caution.hot-oil");
@@ -358,9 +370,9 @@ class MessageCatalogueTest {
 		// today's API wording, byte for byte, and the conversions of NIST SP 811 §B.9
 		assertThat(TEXT.celsius(m("warning.acrylamide.frying-too-hot", c(190), c(175))))
 			.startsWith("Oil at 190 °C: fry potato products below 175 °C, and as low as food safety allows.");
-		assertThat(TEXT.render(m("warning.acrylamide.frying-too-hot", c(190), c(175)), TemperatureUnit.FAHRENHEIT))
+		assertThat(page(m("warning.acrylamide.frying-too-hot", c(190), c(175)), TemperatureUnit.FAHRENHEIT))
 			.startsWith("Oil at 374 °F: fry potato products below 347 °F,");
-		assertThat(TEXT.render(m("assumption.pan.upper-face", c(25)), TemperatureUnit.FAHRENHEIT))
+		assertThat(page(m("assumption.pan.upper-face", c(25)), TemperatureUnit.FAHRENHEIT))
 			.isEqualTo("The upper face loses heat and water to kitchen air at 77 °F.");
 		assertThat(TEXT.celsius(m("assumption.grill.element", c(815), q(50, "%"), q(37, "kW/m²"))))
 			.isEqualTo("Element at 815 °C filling 50 % of the food's view: 37 kW/m² on a cold surface.");
@@ -370,7 +382,7 @@ class MessageCatalogueTest {
 				StatedTemperature.withFahrenheit(68, 155), StatedTemperature.withFahrenheit(74, 165));
 		assertThat(TEXT.celsius(foodCode)).contains("63 °C (145 °F) for 15 s", "68 °C (155 °F) for 17 s",
 				"74 °C (165 °F) for under 1 s");
-		assertThat(TEXT.render(foodCode, TemperatureUnit.FAHRENHEIT))
+		assertThat(page(foodCode, TemperatureUnit.FAHRENHEIT))
 			.contains("145 °F for 15 s", "155 °F for 17 s", "165 °F for under 1 s")
 			.doesNotContain("154");
 		assertThat(TEXT.celsius((Message) null)).isEmpty();
@@ -378,11 +390,22 @@ class MessageCatalogueTest {
 
 	@Test
 	void shouldShowDifferencesAndDurationsInTheirOwnUnits() {
-		assertThat(TEXT.argument(TemperatureDifference.kelvin(10), TemperatureUnit.CELSIUS)).isEqualTo("10 K");
-		assertThat(TEXT.argument(TemperatureDifference.kelvin(10), TemperatureUnit.FAHRENHEIT)).isEqualTo("18 °F");
-		assertThat(TEXT.argument(Temperature.kelvin(373.15), TemperatureUnit.FAHRENHEIT)).isEqualTo("212 °F");
-		assertThat(TEXT.argument(Duration.minutes(12), TemperatureUnit.CELSIUS)).isEqualTo("12 min");
-		assertThat(TEXT.argument(Duration.seconds(90), TemperatureUnit.CELSIUS)).isEqualTo("90 s");
+		// a difference in the page's scale, as a cook reads it ("10 °C cooler", not
+		// "10 K"): 1 K = 1 °C = 1.8 °F of difference (NIST SP 811 §B.9); figure and unit
+		// joined by a no-break space (U+00A0) so a line never ends between them
+		assertThat(TEXT.argument(TemperatureDifference.kelvin(10), TemperatureUnit.CELSIUS)).isEqualTo("10\u00a0°C");
+		assertThat(TEXT.argument(TemperatureDifference.kelvin(10), TemperatureUnit.FAHRENHEIT)).isEqualTo("18\u00a0°F");
+		assertThat(TEXT.argument(Temperature.kelvin(373.15), TemperatureUnit.FAHRENHEIT)).isEqualTo("212\u00a0°F");
+		assertThat(TEXT.argument(Duration.minutes(12), TemperatureUnit.CELSIUS)).isEqualTo("12\u00a0min");
+		assertThat(TEXT.argument(Duration.seconds(90), TemperatureUnit.CELSIUS)).isEqualTo("90\u00a0s");
+		assertThat(TEXT.argument(Quantity.of(3.4, "mm", 1), TemperatureUnit.CELSIUS)).isEqualTo("3.4\u00a0mm");
+		// the API keeps plain spaces, its wording unchanged but for the °C of a
+		// difference
+		assertThat(TEXT.celsius(m("suggestion.bake-lower", TemperatureDifference.kelvin(40))))
+			.startsWith("Bake about 40 °C cooler");
+		assertThat(
+				TEXT.render(m("suggestion.bake-lower", TemperatureDifference.kelvin(40)), TemperatureUnit.FAHRENHEIT))
+			.startsWith("Bake about 72\u00a0°F cooler");
 		assertThat(TEXT.argument(Temperature.celsius(Double.NaN), TemperatureUnit.CELSIUS)).isEqualTo("–");
 	}
 

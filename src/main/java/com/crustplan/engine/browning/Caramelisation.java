@@ -20,10 +20,10 @@ public final class Caramelisation {
 	 * k0 chosen so that k(180 °C) = 1.2e-3 s⁻¹: a dry, sucrose-rich (15 %) surface is
 	 * visibly caramelised in about 5 min.
 	 */
-	public static final Parameter PRE_EXPONENTIAL = Parameter.commonPractice("k0,c",
+	public static final Parameter PRE_EXPONENTIAL = Parameter.calibrated("k0,c",
 			"pre-exponential factor of caramelisation",
 			1.2e-3 * Math.exp(130e3 / (ArrheniusRate.GAS_CONSTANT * 453.15)), "1/s",
-			"set so a dry surface with 15 % sucrose visibly caramelises in about 5 min at 180 °C (common practice)");
+			"set so a dry surface with 15 % sucrose visibly caramelises in about 5 min at 180 °C (common practice; PracticeClaimsTest)");
 
 	public static final Parameter REFERENCE_SUCROSE_PCT = Parameter.commonPractice("S_ref",
 			"sucrose share of the reference sweet dough", 15, "%",

@@ -28,6 +28,7 @@ import com.crustplan.engine.properties.FoodComponent;
 import com.crustplan.engine.properties.ThermalProperties;
 import com.crustplan.engine.water.Atmosphere;
 import com.crustplan.engine.water.MoistureDiffusivity;
+import com.crustplan.engine.water.GabIsotherm;
 import com.crustplan.engine.water.PoreVapourConductivity;
 import com.crustplan.engine.water.WaterVapour;
 
@@ -89,9 +90,9 @@ public final class ModelCatalogue {
 				"Gas fraction ε from the volume the matrix (with any frying oil, counted as fat) leaves empty in each control volume. "
 						+ "A share s of the volume of the water a layer loses is given up by shrinking: muscle stays a saturated gel (s = 1) "
 						+ "and its drying crust keeps the conductivity of the drier solid; baked crumb is rigid (s = 0) and opens pores.",
-				List.of(Parameter.secondary("k_gas", "conductivity of the gas in pores",
+				List.of(Parameter.fromMemory("k_gas", "conductivity of the gas in pores",
 						ThermalProperties.AIR_CONDUCTIVITY, "W/(m·K)",
-						"still air near 100 °C (Incropera, Table A.4)"))));
+						"still air, 0.0263 and 0.0300 W/(m·K) at 300 and 350 K (Incropera, Table A.4; values from memory): air near 50 °C, about 10 % below air at 100 °C"))));
 		List<Parameter> shrinkage = new ArrayList<>();
 		for (FoodCategory c : FoodCategory.values()) {
 			shrinkage.add(c.shrinkage());
@@ -101,14 +102,20 @@ public final class ModelCatalogue {
 						+ "The grid keeps its geometry: shrinkage acts on what fills the layer, not on the distances heat travels.",
 				shrinkage));
 		eq.add(new Equation("Evaporation–condensation in crumb",
-				"k += 1/((1−ε_c)/k_m + ε_c/(k_gas + k_v)) − 1/((1−ε_c)/k_m + ε_c/k_gas);  k_v = f_wet·D_va·S(y)·h_fg·aw·(dp_sat/dT)/(R_v·T)",
+				"closed: k = k_geo + 1/((1−ε_c)/k_m + ε_c/(k_gas + k_v)) − 1/((1−ε_c)/k_m + ε_c/k_gas);  "
+						+ "open: k = k_m^(1−ε)·k_gas^(ε−ε_c)·(k_gas + k_v)^ε_c;  k = k_closed + φ·max(0, k_open − k_closed), "
+						+ "φ = (T_peak − T_open,0)/(T_open,1 − T_open,0) in [0, 1];  k_v = f_wet·D_va·S(y)·h_fg·aw·(dp_sat/dT)/(R_v·T)",
 				"Across the raw food's own closed gas cells ε_c (proofed dough), water evaporates at the warm wall, diffuses and "
 						+ "condenses at the cold one (de Vries 1958; the mechanism of bread-baking models, e.g. Thorvaldsson & Janestad 1999, "
 						+ "Purlis & Salvadori 2009). Cells in series with their walls; dp_sat/dT by Clausius–Clapeyron; S(y) = 1/(1 − y) the "
 						+ "Stefan factor up to y_v,max, then tapered to 0 for pure steam; f_wet rises from 0 at aw,wet to 1 at aw = 1. "
+						+ "As the crumb sets its cells open into one connected pore space (71–81 °C, Zhang et al. 2025; "
+						+ "Wang, Austin & Bell 2011), and the vapour term joins the pore gas in the geometric-mean rule "
+						+ "(de Vries 1963); T_peak is the highest temperature the layer has reached. "
 						+ "Pores opened by drying vent and get none.",
 				List.of(PoreVapourConductivity.VAPOUR_DIFFUSIVITY_298K, PoreVapourConductivity.MAX_VAPOUR_SHARE,
-						PoreVapourConductivity.WET_WALL_ACTIVITY)));
+						PoreVapourConductivity.WET_WALL_ACTIVITY, PoreVapourConductivity.CELL_OPENING_START,
+						PoreVapourConductivity.CELL_OPENING_END)));
 		eq.add(new Equation("Frying oil in the pores",
 				"m_oil,i = r_oil·(X₀ − X_i)·m_dry,i  (never decreasing, while a face is in oil)",
 				"Oil uptake follows the water lost (Gamble, Rice & Selman 1987: both linear in √t, oil where water left); the oil is "
@@ -139,15 +146,34 @@ public final class ModelCatalogue {
 				List.of(MoistureDiffusivity.REFERENCE, MoistureDiffusivity.ACTIVATION_ENERGY,
 						MoistureDiffusivity.CRUST_MOISTURE)));
 		for (FoodCategory c : FoodCategory.values()) {
+			MoistureDiffusivity d = c.moistureDiffusivity();
+			if (d != MoistureDiffusivity.DEFAULT) {
+				eq.add(new Equation("Moisture diffusion: " + c.label(),
+						String.format(java.util.Locale.ROOT, "D = D_ref·exp(−Ea/R·(1/T − 1/%.2f K))·X²/(X² + X_c²)",
+								d.referenceK()),
+						"The category's own diffusivity, in place of the default above.",
+						List.of(d.reference(), d.activationEnergy(), d.crustMoisture())));
+			}
+		}
+		for (FoodCategory c : FoodCategory.values()) {
 			eq.add(new Equation("Sorption isotherm: " + c.label(),
 					"X = Xm·C·K·aw / ((1 − K·aw)(1 − K·aw + C·K·aw))  (GAB)",
 					"Water activity of each layer from its moisture, inverted by the positive root of the GAB quadratic; above X(aw = 1) the water is free.",
-					List.of(c.isotherm().monolayer(), c.isotherm().c(), c.isotherm().k())));
+					isothermParameters(c.isotherm())));
 		}
 		return new ModelSection("Water: vapour, sorption, drying and boiling", eq, List.of(
 				"Isotherms measured at 40–50 °C are used at all temperatures (at crust temperatures they overstate how tightly water is held).",
 				"Vapour formed inside the food is taken to leave at once; pressure build-up and puffing are not modelled.",
 				"Shrinkage changes what fills a layer, not the grid: a shrinking piece's thickness is not updated."));
+	}
+
+	/** A syrup-holding food also lists its solution's activity and how it was had. */
+	private static List<Parameter> isothermParameters(GabIsotherm g) {
+		List<Parameter> p = new ArrayList<>(List.of(g.monolayer(), g.c(), g.k()));
+		if (g.solution().value() < 1) {
+			p.addAll(List.of(g.solution(), GabIsotherm.NORRISH_SUCROSE, GabIsotherm.NORRISH_GLUCOSE));
+		}
+		return p;
 	}
 
 	private static ModelSection heat() {
@@ -181,10 +207,17 @@ public final class ModelCatalogue {
 		eq.add(new Equation("Deep fryer", "q = h·(T_oil − Ts);  h = h_oil + (h_oil,boil − h_oil)·min(1, J_boil/J_full)",
 				"Bubbling stirs the oil in proportion to the vapour leaving; J_full = h_oil,boil·(T_oil − 100 °C)/h_fg. h falls back as the crust dries.",
 				List.of(HeatSetup.OIL_QUIET, HeatSetup.OIL_BUBBLING)));
-		return new ModelSection("Heat at the faces", eq,
-				List.of("The pan, oven air, element and oil hold their set temperature (no recovery after loading).",
-						"Pan contact is uniform; real items curl, shrink and touch the pan unevenly.",
-						"Both oven faces see the same heat (on a rack, not on a tray)."));
+		eq.add(new Equation("Pan or fryer with a body",
+				"m·c·dT/dt = P(T) − Q_food − h·A·(T − T_room) − ε·σ·A·(T⁴ − T_room⁴)",
+				"Where the cook gives a pan or fryer as equipment, its metal or oil is one lumped mass that the food's load pulls down "
+						+ "and the burner, hob or heater brings back (a thermostat tapers its power across a proportional band; a flame "
+						+ "left where it was set gives the power that held the empty pan). The defaults are what a cook who gives "
+						+ "no figures gets; a pan's specific heat and emissivity follow its material.",
+				HeatSetup.equipmentParameters()));
+		return new ModelSection("Heat at the faces", eq, List.of(
+				"Oven air and grill elements hold their set temperature; a pan or fryer does too unless it is given as equipment with a body.",
+				"Pan contact is uniform; real items curl, shrink and touch the pan unevenly.",
+				"Both oven faces see the same heat (on a rack, not on a tray)."));
 	}
 
 	private static ModelSection numerics() {

@@ -32,7 +32,8 @@ final class BackwardEulerStep {
 		this.state = state;
 		this.properties = properties;
 		this.heat = new HeatStep(state, schedule, properties, new HeatConduction(state.grid()), account);
-		this.moisture = new MoistureStep(state, schedule, properties, heat, account);
+		this.moisture = new MoistureStep(state, schedule, properties, heat, account,
+				surface.category().moistureDiffusivity());
 		this.browning = new SurfaceBrowning(surface.category().browning(), surface.composition(), surface.ph());
 		this.reaction = reaction;
 		this.schedule = schedule;

@@ -1,5 +1,7 @@
 package com.crustplan.engine.cook;
 
+import java.util.Arrays;
+
 import com.crustplan.engine.properties.FoodComponent;
 import com.crustplan.engine.properties.ThermalProperties;
 import com.crustplan.engine.water.PoreVapourConductivity;
@@ -13,8 +15,12 @@ import com.crustplan.engine.water.PoreVapourConductivity;
  * oil partly fills ({@link OilUptake}); pores hold still gas. Across the raw food's own
  * closed gas cells (proofed dough), where their walls are wet, evaporation–condensation
  * ({@link PoreVapourConductivity}) adds to that, as the cells in series with their walls:
- * it carries heat through humid crumb (at most k_m/(1 − ε)) but not through a dry crust.
- * A face's standing water adds its own heat capacity.
+ * it carries heat through humid dough (at most k_m/(1 − ε)) but not through a dry crust.
+ * As the crumb sets (71–81 °C) the cells open into one connected pore space, and the
+ * vapour term then joins the pore gas in the mixing rule itself, free of the walls: the
+ * steep rise of crumb conductivity towards 100 °C. A layer keeps the highest temperature
+ * it has reached, since set crumb does not close again. A face's standing water adds its
+ * own heat capacity.
  */
 final class MatrixProperties {
 
@@ -39,6 +45,11 @@ final class MatrixProperties {
 	/** cp, k, specific volume from {@link ThermalProperties#evaluate}. */
 	private final double[] props = new double[3];
 
+	/**
+	 * Highest temperature each layer has reached, K (NaN before the first evaluation).
+	 */
+	private final double[] peakK;
+
 	/** Heat capacity per m² of face, J/(m²·K). */
 	final double[] capacity;
 
@@ -49,6 +60,8 @@ final class MatrixProperties {
 		this.dryFractions = dryFractions;
 		this.shrinkage = shrinkage;
 		this.cellPorosity = cellPorosity;
+		this.peakK = new double[n];
+		Arrays.fill(this.peakK, Double.NaN);
 		this.capacity = new double[n];
 		this.conductivity = new double[n];
 	}
@@ -87,9 +100,43 @@ final class MatrixProperties {
 				- 1 / (wall + cells / ThermalProperties.AIR_CONDUCTIVITY);
 	}
 
+	/**
+	 * Open cells: the gas space is one connected pore, so the vapour term joins the pore
+	 * gas in the engine's geometric-mean rule with the matrix (de Vries 1963, in Physics
+	 * of Plant Environment: the apparent conductivity k_gas + k_v of humid pore air in a
+	 * moist porous medium), the pores vented by drying keeping still gas.
+	 */
+	static double openCellConductivity(double km, double porosity, double cells, double kv) {
+		return Math.exp((1 - porosity) * Math.log(km) + (porosity - cells) * LOG_AIR
+				+ cells * Math.log(ThermalProperties.AIR_CONDUCTIVITY + kv));
+	}
+
+	/**
+	 * Closed cells: the geometric-mean rule with still gas, plus what
+	 * evaporation–condensation adds across the cells in series with their walls.
+	 */
+	static double closedCellConductivity(double km, double porosity, double cells, double kv) {
+		return Math.exp((1 - porosity) * Math.log(km) + porosity * LOG_AIR)
+				+ evaporationCondensationGain(km, cells, kv);
+	}
+
+	/**
+	 * A layer's conductivity with a share of the raw food's humid gas cells opened.
+	 * Opening takes the walls out of the vapour's path, so it never lowers k: below about
+	 * 75 °C, where the two rules differ by under a tenth, the closed-cell value stands.
+	 */
+	static double conductivity(double km, double porosity, double cells, double kv, double openShare) {
+		double closed = closedCellConductivity(km, porosity, cells, kv);
+		if (!(openShare > 0) || !(kv > 0)) {
+			return closed;
+		}
+		return closed + openShare * Math.max(0, openCellConductivity(km, porosity, cells, kv) - closed);
+	}
+
 	void evaluate(CookState s) {
 		int n = s.size();
 		for (int i = 0; i < n; i++) {
+			peakK[i] = Double.isNaN(peakK[i]) ? s.temperature[i] : Math.max(peakK[i], s.temperature[i]);
 			double tc = s.temperature[i] - 273.15;
 			double x = s.moisture[i];
 			double dry = s.dryMass[i];
@@ -102,12 +149,11 @@ final class MatrixProperties {
 			if (porosity > 0) {
 				// geometric-mean rule over matrix and pore gas, written with one exp
 				double km = props[1];
-				conductivity[i] = Math.exp((1 - porosity) * Math.log(km) + porosity * LOG_AIR);
 				double cells = Math.min(porosity, cellPorosity);
-				if (cells > 0) {
-					conductivity[i] += evaporationCondensationGain(km, cells,
-							PoreVapourConductivity.at(s.temperature[i], s.waterActivity(i)));
-				}
+				double aw = cells > 0 ? s.waterActivity(i) : 0;
+				double kv = cells > 0 ? PoreVapourConductivity.at(s.temperature[i], aw, s.isotherm().matrixActivity(aw))
+						: 0;
+				conductivity[i] = conductivity(km, porosity, cells, kv, PoreVapourConductivity.openCellShare(peakK[i]));
 			}
 			else {
 				conductivity[i] = props[1];

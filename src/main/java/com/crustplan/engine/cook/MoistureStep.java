@@ -40,14 +40,14 @@ final class MoistureStep {
 	private final FaceFlux flux = new FaceFlux();
 
 	MoistureStep(CookState state, ActiveHeat schedule, MatrixProperties properties, HeatStep heat,
-			EnergyAccount account) {
+			EnergyAccount account, MoistureDiffusivity diffusivity) {
 		this.state = state;
 		this.schedule = schedule;
 		this.properties = properties;
 		this.heat = heat;
 		this.account = account;
 		this.n = state.size();
-		this.diffusion = new MoistureDiffusion(state.grid(), MoistureDiffusivity::at);
+		this.diffusion = new MoistureDiffusion(state.grid(), diffusivity::at);
 		this.solution = new double[n];
 		this.before = new double[n];
 		this.heatGain = new double[n];

@@ -67,10 +67,10 @@ public final class DonenessLimits {
 			"oven to finish a seared piece in", 180, "°C",
 			"a moderate oven for finishing after a sear (common practice)");
 
-	public static final Parameter THINNER_SHARE = Parameter.derived("f_thin", "share of the thickness to cut to", 0.5,
-			"–",
-			"a slab's heating time goes with the square of its thickness (Fourier number): half as thick heats about four times"
-					+ " sooner");
+	public static final Parameter THINNER_SHARE = Parameter.assumption("f_thin", "share of the thickness to cut to",
+			0.5, "–",
+			"half is our choice of advice; what it buys is derived: a slab's heating time goes with the square of its thickness"
+					+ " (Fourier number), so half as thick heats about four times sooner");
 
 	public static List<Parameter> parameters() {
 		return List.of(MEAT_DRY_C, POULTRY_DRY_C, FISH_DRY_C, BREAD_BAKED_C, SWEET_DOUGH_BAKED_C, FRY_CENTRE_C,

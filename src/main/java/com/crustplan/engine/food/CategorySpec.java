@@ -6,6 +6,7 @@ import com.crustplan.engine.browning.BrowningKinetics;
 import com.crustplan.engine.colour.ColourPath;
 import com.crustplan.engine.model.Parameter;
 import com.crustplan.engine.water.GabIsotherm;
+import com.crustplan.engine.water.MoistureDiffusivity;
 
 /**
  * A food category as named parts, so each value reads beside its name and its source
@@ -41,6 +42,8 @@ final class CategorySpec {
 	Parameter shrinkage;
 
 	GabIsotherm isotherm;
+
+	MoistureDiffusivity moistureDiffusivity = MoistureDiffusivity.DEFAULT;
 
 	BrowningKinetics browning;
 
@@ -114,6 +117,15 @@ final class CategorySpec {
 
 	CategorySpec isotherm(GabIsotherm g) {
 		this.isotherm = g;
+		return this;
+	}
+
+	/**
+	 * The category's own moisture diffusivity; without one it takes
+	 * {@link MoistureDiffusivity#DEFAULT}.
+	 */
+	CategorySpec moistureDiffusivity(MoistureDiffusivity d) {
+		this.moistureDiffusivity = d;
 		return this;
 	}
 

@@ -27,7 +27,12 @@ public final class DefaultMakeUp {
 			case POULTRY_SKIN ->
 				new Source("chicken with its skin, typical values (from memory)", Evidence.FROM_MEMORY);
 			case FISH -> new Source("lean white fish, typical values (from memory)", Evidence.FROM_MEMORY);
-			case POTATO -> new Source("raw frying potato, typical values (from memory)", Evidence.FROM_MEMORY);
+			case POTATO -> new Source(
+					"raw frying potato, typical values (from memory); its 21 % dry matter and 0.4 % reducing sugar meet the"
+							+ " requirements for French-fry potatoes, dry matter above 20 % and reducing sugar up to 0.5 % of"
+							+ " fresh weight (ICAR-Central Potato Research Institute, quality requirements of potatoes for"
+							+ " processing), and lie within the retail range (Vivanti, Finotti & Friedman 2006, J Food Sci)",
+					Evidence.FROM_MEMORY);
 			case BREAD -> new Source("lean wheat dough, typical values (from memory)", Evidence.FROM_MEMORY);
 			case SWEET_DOUGH -> new Source("enriched sweet dough, typical values (from memory)", Evidence.FROM_MEMORY);
 			case VEGETABLE -> new Source("onion, typical values (from memory)", Evidence.FROM_MEMORY);

@@ -14,6 +14,16 @@ import java.util.Optional;
  * taken as the cylinder with the same surface-to-volume ratio (4/a, so radius a/2), and a
  * cube of edge a as the sphere with the same surface-to-volume ratio (6/a, so radius
  * a/2). A round strip or a ball of diameter d is radius d/2 exactly.
+ * <p>
+ * What the mapping costs: equal surface-to-volume is exact for the heat a piece takes in
+ * while its inside is still even (low Biot number), and it keeps the crust's share of the
+ * piece; but the inscribed round body heats its centre sooner than the square one around
+ * it. At a fixed surface temperature (Bi → ∞) a square strip's centre reaches 75 °C from
+ * 20 °C in 100 °C surroundings 1.7× sooner than a slab's of the same thickness and a
+ * cube's 2.2× sooner (product solutions of the plane wall), where the mapped cylinder and
+ * sphere give 2.0× and 3.0× (Incropera, Table 5.1; ShapeHeatingRatioTest): the strip's
+ * centre about 18 % and the cube's about 35 % early, less at a still oven's low Biot
+ * numbers.
  */
 public enum Shape {
 

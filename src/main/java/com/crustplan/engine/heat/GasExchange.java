@@ -16,7 +16,8 @@ import com.crustplan.engine.water.WaterVapour;
 public final class GasExchange implements FaceExchange {
 
 	public static final Parameter LEWIS_NUMBER = Parameter.derived("Le", "Lewis number of water vapour in air", 0.85,
-			"–", "α/D_AB with D_AB = 0.26e-4 m²/s at 298 K (Incropera, Table A.8)");
+			"–",
+			"α/D_AB with α ≈ 22e-6 m²/s for air and D_AB = 0.26e-4 m²/s for water vapour in air near 298 K (Incropera, Tables A.4 and A.8; values from memory)");
 
 	private final Atmosphere gas;
 

@@ -1,5 +1,6 @@
 package com.crustplan.engine.heat;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
@@ -46,7 +47,8 @@ public sealed interface HeatSetup permits PanContact, Oven, RadiantGrill, DeepFr
 			"W/(m²·K)", "800–1100 W/m²K, peaks to 2000 (Hubbard & Farkas 1999; Mir-Bel, Oria & Salvador 2012)");
 
 	Parameter OVEN_WALL_EMISSIVITY = Parameter.secondary("ε_wall", "oven walls radiate at the air temperature", 0.9,
-			"–", "75–80 % of an industrial oven's flux is radiant (Baik et al. 1999, J Food Sci 64:688)");
+			"–",
+			"ε ≈ 0.9 for oven walls as quoted in oven heat-transfer studies; why it matters: 75–80 % of an industrial oven's flux is radiant (Baik et al. 1999, J Food Sci 64:688)");
 
 	/**
 	 * An oven with no steam given holds kitchen air drawn in: the food's own vapour,
@@ -77,6 +79,21 @@ public sealed interface HeatSetup permits PanContact, Oven, RadiantGrill, DeepFr
 	 */
 	default double surfaceLimitC() {
 		return Double.POSITIVE_INFINITY;
+	}
+
+	/**
+	 * The pan's and fryer's defaults and the materials a pan can be made of, for the
+	 * model catalogue.
+	 */
+	static List<Parameter> equipmentParameters() {
+		List<Parameter> p = new ArrayList<>(PanBody.parameters());
+		for (PanMaterial m : PanMaterial.values()) {
+			p.add(m.specificHeat());
+			p.add(m.emissivity());
+		}
+		p.addAll(FryerBody.parameters());
+		p.add(HeatedBody.THERMOSTAT_BAND);
+		return List.copyOf(p);
 	}
 
 	static List<Parameter> parameters() {

@@ -1,5 +1,7 @@
 package com.crustplan.engine.heat;
 
+import com.crustplan.engine.model.Parameter;
+
 /**
  * A pan, griddle plate or fryer's oil as one lumped mass (its Biot number is small: metal
  * or stirred oil), with a heat input and losses to the kitchen: m·c·dT/dt = P(T) − Q_food
@@ -27,10 +29,14 @@ public final class HeatedBody {
 	}
 
 	/**
-	 * A thermostat's proportional band, K: a few kelvin in catering fryers and induction
-	 * hobs (assumption; the recovery after a load barely depends on it).
+	 * A thermostat's proportional band: a few kelvin in catering fryers and induction
+	 * hobs; the recovery after a load barely depends on it.
 	 */
-	static final double THERMOSTAT_BAND_K = 5;
+	public static final Parameter THERMOSTAT_BAND = Parameter.assumption("ΔT_band",
+			"proportional band of a fryer's or hob's thermostat", 5, "K",
+			"a few kelvin in catering fryers and induction hobs (assumption); the recovery after a load barely depends on it");
+
+	static final double THERMOSTAT_BAND_K = THERMOSTAT_BAND.value();
 
 	private final double heatCapacity;
 

@@ -8,8 +8,8 @@ import com.crustplan.engine.model.Parameter;
  */
 public enum PanMaterial {
 
-	CAST_IRON("cast iron", Parameter.published("cp,ci", "specific heat of cast iron", 420, "J/(kg·K)",
-			"cast iron (< 4 % C): ρ 7272 kg/m³, cp 420 J/kg·K, k 52 W/m·K (heat and mass transfer data books, property values of metals at 20 °C)"),
+	CAST_IRON("cast iron", Parameter.fromMemory("cp,ci", "specific heat of cast iron", 420, "J/(kg·K)",
+			"cast iron (≈ 4 % C): ρ 7272 kg/m³, cp 420 J/kg·K, k 52 W/m·K (property tables of metals at 20 °C in heat-transfer data books; values from memory, no table named)"),
 			Parameter.fromMemory("ε,ci", "emissivity of a seasoned cast-iron pan", 0.8, "–",
 					"oxidised or seasoned iron 0.6–0.9 (radiation tables of heat-transfer handbooks; value from memory)")),
 	CARBON_STEEL("carbon steel", Parameter.published("cp,cs", "specific heat of plain carbon steel", 434, "J/(kg·K)",

@@ -43,6 +43,14 @@ public record Parameter(String symbol, String description, double value, String 
 		return new Parameter(symbol, description, value, unit, source, Evidence.DERIVED);
 	}
 
+	/**
+	 * Set so the model reproduces the claim named in the source (say how well the claim
+	 * itself is known); a named test re-runs it.
+	 */
+	public static Parameter calibrated(String symbol, String description, double value, String unit, String source) {
+		return new Parameter(symbol, description, value, unit, source, Evidence.CALIBRATED);
+	}
+
 	/** A copy with another value, for calibration and uncertainty runs. */
 	public Parameter withValue(double newValue) {
 		return new Parameter(symbol, description, newValue, unit, source, evidence);

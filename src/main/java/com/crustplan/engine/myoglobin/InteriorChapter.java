@@ -18,7 +18,7 @@ public final class InteriorChapter {
 		for (PigmentKinetics k : PigmentKinetics.values()) {
 			List<Parameter> p = new ArrayList<>(k.parameters());
 			if (k == PigmentKinetics.MEAT) {
-				p.add(PigmentKinetics.SKIP_BELOW);
+				p.add(PigmentKinetics.NEGLIGIBLE_PER_HOUR);
 			}
 			eq.add(new Equation("Pigment denaturation: " + k.name().toLowerCase().replace('_', ' '),
 					"dN/dt = −f·k0·exp(−Ea/(R·T))·N per layer, N native share (1 raw)",

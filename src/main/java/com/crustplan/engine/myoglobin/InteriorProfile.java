@@ -142,6 +142,26 @@ public record InteriorProfile(FoodCategory category, int shape, double lengthMm,
 				default -> Message.of("interior.through.meat");
 			};
 		}
+		// a band the page would show as 0.0 mm is no band: an unturned steak's upper face
+		// was never seared, and a face just laid in has none yet
+		boolean upperBand = Math.round(band[0] * 10) > 0;
+		boolean lowerBand = slab && Math.round(band[1] * 10) > 0;
+		if (!upperBand && !lowerBand) {
+			return switch (kind) {
+				case "fish" -> Message.of("interior.band.fish.none");
+				case "poultry" -> Message.of("interior.band.poultry.none");
+				default -> Message.of("interior.band.meat.none");
+			};
+		}
+		if (slab && upperBand != lowerBand) {
+			// not named upper or lower: in a pan the face first down is face 0
+			Quantity only = Quantity.of(upperBand ? band[0] : band[1], "mm", 1);
+			return switch (kind) {
+				case "fish" -> Message.of("interior.band.fish.one-face", only);
+				case "poultry" -> Message.of("interior.band.poultry.one-face", only);
+				default -> Message.of("interior.band.meat.one-face", only);
+			};
+		}
 		Quantity upper = Quantity.of(band[0], "mm", 1);
 		if (!slab || Math.round(band[0] * 10) == Math.round(band[1] * 10)) {
 			return switch (kind) {

@@ -63,7 +63,7 @@ public final class MyoglobinDenaturation implements LayerReaction {
 		Arrays.fill(peakK, surface.initialTemperatureC() + 273.15);
 		waterActivity = new double[n];
 		Arrays.fill(waterActivity, 1);
-		skipBelowK = PigmentKinetics.SKIP_BELOW.value() + 273.15;
+		skipBelowK = kinetics.skipBelow().value() + 273.15;
 	}
 
 	@Override

@@ -38,23 +38,24 @@ public enum PigmentKinetics {
 	/**
 	 * Share of the pigment denatured at which a layer reads as cooked (grey-brown
 	 * through): prediction equations from cooked ground-beef patties put a well-done
-	 * appearance at 80 % myoglobin denatured (Journal of Food Science study of cooking
-	 * rate, endpoint temperature and myoglobin redox state, read in its abstract; authors
-	 * from memory: Sepe et al. 2005). Taken for the white of poultry and the opacity of
-	 * fish too (assumption).
+	 * appearance at 80 % myoglobin denatured (J Food Sci, "Influence of cooking rate,
+	 * endpoint temperature, post-cook hold time, and myoglobin redox state on internal
+	 * color development of cooked ground beef patties", read in its abstract; the authors
+	 * are not named here because they were not checked). Taken for the white of poultry
+	 * and the opacity of fish too (assumption).
 	 */
-	public static final Parameter COOKED_LOOK = Parameter.secondary("f_cooked",
+	public static final Parameter COOKED_LOOK = Parameter.published("f_cooked",
 			"share of the pigment denatured at which a layer looks cooked", 0.8, "–",
-			"80 % myoglobin denatured for a well-done look of ground beef (abstract of a J Food Sci patty study, authors from memory:"
-					+ " Sepe et al. 2005); used for poultry white and fish opacity too (assumption)");
+			"80 % myoglobin denatured for a well-done look of ground beef (J Food Sci study of cooking rate, endpoint temperature,"
+					+ " post-cook hold time and myoglobin redox state in cooked ground beef patties; read in its abstract, authors not checked);"
+					+ " used for poultry white and fish opacity too (assumption)");
 
 	/**
-	 * Below this the rate is negligible over any cook: k(40 °C) of beef is about 10⁻⁴ per
-	 * minute, so a layer is not stepped there.
+	 * A layer is not stepped where its pigment would lose less than this in an hour: each
+	 * kinetics' own temperature for it follows (see {@link #skipBelow()}), about 43 °C
+	 * for steak and poultry and 26 °C for fish, whose opacity starts far lower.
 	 */
-	public static final Parameter SKIP_BELOW = Parameter.derived("T_skip,Mb",
-			"layer temperature below which denaturation is not stepped", 40, "°C",
-			"k(40 °C) ≈ 10⁻⁴ /min with the beef kinetics: under 1 % denatured in an hour");
+	public static final Parameter NEGLIGIBLE_PER_HOUR = Parameters.NEGLIGIBLE_PER_HOUR;
 
 	private final ArrheniusRate rate;
 
@@ -62,10 +63,20 @@ public enum PigmentKinetics {
 
 	private final ColourPath colour;
 
+	private final Parameter skipBelow;
+
 	PigmentKinetics(ArrheniusRate rate, Parameter factor, ColourPath colour) {
 		this.rate = rate;
 		this.factor = factor;
 		this.colour = colour;
+		// k(T)·1 h = −ln(1 − x): T = Ea / (R·ln(f·k0·1 h / −ln(1 − x)))
+		double x = Parameters.NEGLIGIBLE_PER_HOUR.value();
+		double k = -Math.log(1 - x / 100) / 3600;
+		double t = rate.activationEnergy().value()
+				/ (ArrheniusRate.GAS_CONSTANT * Math.log(factor.value() * rate.preExponential().value() / k));
+		this.skipBelow = Parameter.derived("T_skip", "layer temperature below which this pigment is not stepped",
+				Math.round((t - 273.15) * 10) / 10.0, "°C",
+				"from the kinetics above: under " + Math.round(x) + " % denatured in an hour below it");
 	}
 
 	/**
@@ -109,7 +120,15 @@ public enum PigmentKinetics {
 	}
 
 	public List<Parameter> parameters() {
-		return List.of(rate.preExponential(), rate.activationEnergy(), factor);
+		return List.of(rate.preExponential(), rate.activationEnergy(), factor, skipBelow);
+	}
+
+	/**
+	 * The layer temperature below which this pigment is not stepped, °C: where it would
+	 * lose under {@link #NEGLIGIBLE_PER_HOUR} in an hour.
+	 */
+	public Parameter skipBelow() {
+		return skipBelow;
 	}
 
 	/** Kept apart so the enum constants can refer to them. */
@@ -160,13 +179,17 @@ public enum PigmentKinetics {
 		/** Temperature at which fish is taken to turn opaque in about a minute. */
 		static final double FISH_OPAQUE_K = 55 + 273.15;
 
-		static final Parameter FISH_K0 = Parameter.fromMemory("k0,opaque",
+		static final Parameter FISH_K0 = Parameter.calibrated("k0,opaque",
 				"pre-exponential factor, fish translucent → opaque",
 				Math.exp(FISH_EA.value() / (ArrheniusRate.GAS_CONSTANT * FISH_OPAQUE_K)) / 60, "1/s",
-				"calibrated to k(55 °C) = 1 /min: white fish turns opaque and flakes at 55–60 °C within about a minute (from memory)");
+				"calibrated to k(55 °C) = 1 /min: white fish turns opaque and flakes at 55–60 °C within about a minute (a claim from memory; PracticeClaimsTest)");
 
-		static final Parameter FISH_FACTOR = Parameter.derived("f_fish", "rate factor for fish", 1, "–",
-				"the fish rate is calibrated directly");
+		static final Parameter NEGLIGIBLE_PER_HOUR = Parameter.assumption("x_skip",
+				"share denatured in an hour below which a layer is not stepped", 1, "%",
+				"negligible beside the 80 % that looks cooked (our choice)");
+
+		static final Parameter FISH_FACTOR = Parameter.assumption("f_fish", "rate factor for fish", 1, "–",
+				"no separate factor: the fish rate is set directly by its k(55 °C) (our choice)");
 
 		private Parameters() {
 		}

@@ -20,7 +20,10 @@ import com.crustplan.engine.model.Parameter;
  * to local boiling). It is small in cold dough, rises steeply towards 100 °C while the
  * pore walls are wet, and vanishes in a dry crust (aw → 0), as the measured rise of crumb
  * conductivity with temperature and moisture shows. It needs liquid on the walls to
- * return what condenses, so it fades out below aw,wet.
+ * return what condenses, so it fades out below aw,wet (on the matrix's share of aw where
+ * the water is a syrup: {@link GabIsotherm#matrixActivity}). Dough's gas cells are closed
+ * until the crumb sets and they open into one connected pore ({@link #openCellShare});
+ * how the term is mixed into a layer's conductivity, closed or open, is the cook's.
  */
 public final class PoreVapourConductivity {
 
@@ -36,9 +39,26 @@ public final class PoreVapourConductivity {
 	public static final Parameter WET_WALL_ACTIVITY = Parameter.assumption("aw,wet",
 			"water activity below which pore walls hold no liquid to return condensed water", 0.9, "–",
 			"our choice: de Vries (1958) ties the enhancement to liquid on the pore walls; a hygroscopic crust "
-					+ "only sorbs, so the term rises linearly from 0 at this activity to full at aw = 1");
+					+ "only sorbs, so the term rises linearly from 0 at this activity to full at aw = 1; where the water is a "
+					+ "sugar solution the matrix's share of aw is judged (Ross's rule), since a syrup is liquid below it");
+
+	public static final Parameter CELL_OPENING_START = Parameter.published("T_open,0",
+			"crumb temperature at which the dough's closed gas cells begin to open", 71, "°C",
+			"Zhang, Yang, Xu, Long & Ye 2025, Foods 14:1649 (pore-opening function calibrated on baking experiments: "
+					+ "opening mainly at 71–81 °C; abstract seen); a structural change near 70 °C after which vapour "
+					+ "reaches the loaf centre is also reported by Thorvaldsson & Skjöldebrand 1998, LWT 31:658 (from memory)");
+
+	public static final Parameter CELL_OPENING_END = Parameter.published("T_open,1",
+			"crumb temperature by which the gas cells are open", 81, "°C",
+			"Zhang et al. 2025, Foods 14:1649 (71–81 °C, abstract seen); set crumb is one interconnected open cell holding "
+					+ "about 99 % of its porosity (Wang, Austin & Bell 2011, J Cereal Sci 54:203; abstract seen). "
+					+ "A linear rise between the two temperatures is our assumption");
 
 	private static final double WET_WALL = WET_WALL_ACTIVITY.value();
+
+	private static final double OPEN_FROM_K = CELL_OPENING_START.value() + 273.15;
+
+	private static final double OPEN_SPAN_K = CELL_OPENING_END.value() - CELL_OPENING_START.value();
 
 	private static final double D_298 = VAPOUR_DIFFUSIVITY_298K.value();
 
@@ -48,14 +68,31 @@ public final class PoreVapourConductivity {
 	}
 
 	/**
+	 * Share of the dough's gas cells that have opened into one connected pore space, from
+	 * the highest temperature the layer has reached (set crumb does not close again).
+	 */
+	public static double openCellShare(double peakTemperatureK) {
+		return Math.max(0, Math.min(1, (peakTemperatureK - OPEN_FROM_K) / OPEN_SPAN_K));
+	}
+
+	/**
 	 * Evaporation–condensation conductivity of a pore whose walls hold water at activity
 	 * aw, W/(m·K), at 1 atm.
 	 */
 	public static double at(double temperatureK, double waterActivity) {
-		if (!(waterActivity > WET_WALL)) {
+		return at(temperatureK, waterActivity, waterActivity);
+	}
+
+	/**
+	 * The same where the walls' water is a sugar solution: whether the walls are wet is
+	 * judged on the matrix's own activity (aw divided by the solution's, Ross's rule; see
+	 * {@link GabIsotherm#matrixActivity}), the vapour pressure on aw itself.
+	 */
+	public static double at(double temperatureK, double waterActivity, double matrixActivity) {
+		if (!(matrixActivity > WET_WALL)) {
 			return 0;
 		}
-		double wet = Math.min(1, (waterActivity - WET_WALL) / (1 - WET_WALL));
+		double wet = Math.min(1, (matrixActivity - WET_WALL) / (1 - WET_WALL));
 		double t = Math.max(SaturationPressure.MIN_TEMPERATURE_K, temperatureK);
 		double rv = WaterVapour.GAS_CONSTANT.value();
 		double latent = WaterVapour.latentHeat(t);

@@ -21,6 +21,7 @@ import com.crustplan.engine.cook.Target;
 import com.crustplan.engine.heat.HeatSetup;
 import com.crustplan.engine.heat.Oven;
 import com.crustplan.engine.input.InvalidInputException;
+import com.crustplan.system.Formats;
 import com.crustplan.system.TemperatureUnit;
 
 import com.fasterxml.jackson.annotation.JsonInclude;
@@ -89,8 +90,8 @@ class SearchApiController {
 			@JsonInclude(JsonInclude.Include.NON_NULL) Double steamPct) {
 
 		static Setting of(HeatSetup h) {
-			return new Setting(SettingSearch.label(h, TemperatureUnit.CELSIUS), h.mode(), h.temperatureC(),
-					h instanceof Oven o ? o.steamPct() : null);
+			return new Setting(Formats.apiText(SettingSearch.label(h, TemperatureUnit.CELSIUS)), h.mode(),
+					h.temperatureC(), h instanceof Oven o ? o.steamPct() : null);
 		}
 
 	}
@@ -138,13 +139,13 @@ class SearchApiController {
 					a.verified() == null ? null
 							: new Verified(finite(a.verified().timeS()), finite(a.verified().coreC()),
 									finite(a.verified().portionUgPerKg())),
-					tried, a.why(),
+					tried, Formats.apiText(a.why()),
 					a.alternatives()
 						.stream()
-						.map(x -> new Alternative(x.code(), x.change(), x.works(),
-								x.best() == null ? null : Tried.of(x.best(), g, false), x.outcome()))
+						.map(x -> new Alternative(x.code(), Formats.apiText(x.change()), x.works(),
+								x.best() == null ? null : Tried.of(x.best(), g, false), Formats.apiText(x.outcome())))
 						.toList(),
-					a.notes(), SearchCautions.ALL);
+					Formats.apiText(a.notes()), SearchCautions.ALL);
 		}
 
 	}

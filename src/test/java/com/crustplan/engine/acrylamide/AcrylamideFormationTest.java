@@ -101,14 +101,16 @@ class AcrylamideFormationTest {
 		// Regulation (EU) 2017/2158 recital 3: acrylamide forms at temperatures typically
 		// above 120 °C.
 		// The initial rate (a 5 s hold, precursors barely used) of a dry layer at 110 °C
-		// is under 1 % of that
-		// at 170 °C, and at 120 °C under 3 % (2.3 % with Ea,f = 109 kJ/mol from the fit
-		// on whole strips; it was under 2 % with the 121 kJ/mol of the earlier slab fit).
+		// is about 1 % of that at 170 °C, and at 120 °C under 3 %: the Arrhenius ratio
+		// with Ea,f = 107 kJ/mol from the refit on whole strips gives 1.04 % and 2.45 %
+		// (with the 110 kJ/mol of the previous fit 0.90 % and 2.2 %; the 110 °C bound was
+		// 1 %, raised to 1.5 % when the blanched strips' precursors were taken from
+		// published leaching and the fitted Ea fell).
 		double cool = heldAt(POTATO, AcrylamideKinetics.DEFAULT, 110, 5, 0.1).acrylamide(2);
 		double warm = heldAt(POTATO, AcrylamideKinetics.DEFAULT, 120, 5, 0.1).acrylamide(2);
 		double hot = heldAt(POTATO, AcrylamideKinetics.DEFAULT, 170, 5, 0.1).acrylamide(2);
 		assertTrue(warm < 0.03 * hot, () -> "120 °C: " + warm + ", 170 °C: " + hot);
-		assertTrue(cool < 0.01 * hot, () -> "110 °C: " + cool + ", 170 °C: " + hot);
+		assertTrue(cool < 0.015 * hot, () -> "110 °C: " + cool + ", 170 °C: " + hot);
 	}
 
 	@Test

@@ -43,6 +43,8 @@ class KitchenCases {
 		return List.of(
 				new Case("bread 80 mm, still oven 200 °C", bread.withThicknessMm(80), new Oven(200, false, 1.6),
 						"golden", 96),
+				new Case("loaf 80 mm strip (a bâtard), still oven 200 °C",
+						bread.withShape(Shape.STRIP).withThicknessMm(80), new Oven(200, false, 1.6), "golden", 96),
 				new Case("bread 40 mm, still oven 200 °C", bread.withThicknessMm(40), new Oven(200, false, 1.6),
 						"golden", 96),
 				new Case("steak 25 mm, pan 230 °C turned 60 s", meat.withThicknessMm(25), new PanContact(230, true, 60),
@@ -65,6 +67,9 @@ class KitchenCases {
 						new DeepFryer(190), "golden", 95),
 				new Case("roast potato 35 mm cube, fan oven 200 °C", potato.withShape(Shape.CUBE).withThicknessMm(35),
 						new Oven(200, true, 1.6), "golden", 95),
+				new Case("sponge cake 50 mm, still oven 180 °C",
+						Surface.typical(FoodCategory.SWEET_DOUGH).withThicknessMm(50), new Oven(180, false, 1.6),
+						"golden", 96),
 				new Case("chicken skin-on 20 mm, pan 200 °C turned 90 s",
 						Surface.typical(FoodCategory.POULTRY_SKIN).withThicknessMm(20), new PanContact(200, true, 90),
 						"deep-golden", 74),

@@ -8,6 +8,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 
 import com.crustplan.engine.food.FoodCategory;
+import com.crustplan.engine.food.Shape;
 import com.crustplan.engine.food.Surface;
 import com.crustplan.engine.heat.DeepFryer;
 import com.crustplan.engine.heat.Oven;
@@ -121,6 +122,23 @@ class DryingCrustTest {
 		CookResult steak = CookSimulation.run(Surface.defaults(FoodCategory.MEAT), new PanContact(220, true, 60),
 				Target.stage("browned"), SETTINGS);
 		assertEquals(0, steak.oilAtTargetPct(), 1e-12);
+	}
+
+	@Test
+	void shouldBringGoldenFriesOutNearFortyPerCentWaterAndTenToFifteenPerCentOil() {
+		// a finished fry holds about 40 % water and 10–15 % oil (common practice; McGee,
+		// On Food and Cooking); Pedreschi, Kaack & Granby 2006 fried strips to 40 %
+		// moisture. Round one's rigid air-filled crust kept 68–73 %.
+		Surface strip = Surface.defaults(FoodCategory.POTATO).withShape(Shape.STRIP).withThicknessMm(10);
+		CookResult r = CookSimulation.run(strip, new DeepFryer(175), Target.stage("golden"), SETTINGS);
+		assertTrue(r.reached(), String.valueOf(r.explanation()));
+		assertEquals(40, r.waterAtTargetPct(), 5, "water at golden");
+		assertTrue(r.oilAtTargetPct() >= 10 && r.oilAtTargetPct() <= 15, "oil at golden " + r.oilAtTargetPct());
+		// a thinner strip dries further by the same colour, the core never boiled dry
+		CookResult thin = CookSimulation.run(strip.withThicknessMm(7), new DeepFryer(175), Target.stage("golden"),
+				SETTINGS);
+		assertTrue(thin.waterAtTargetPct() < r.waterAtTargetPct() && thin.waterAtTargetPct() > 10,
+				"7 mm water at golden " + thin.waterAtTargetPct());
 	}
 
 }

@@ -62,6 +62,21 @@ class MyoglobinDenaturationTest {
 	}
 
 	@Test
+	@DisplayName("T_skip: below each pigment's skip temperature an hour denatures under 1 %; steak near 43 °C (Geileskey et al. 1998 kinetics, loin), fish far lower")
+	void shouldDenatureNegligiblyBelowTheSkipTemperature() {
+		for (PigmentKinetics k : PigmentKinetics.values()) {
+			double skipK = k.skipBelow().value() + 273.15;
+			assertThat(1 - k.nativeAfter(skipK - 0.1, 3600)).as(k.name()).isLessThan(0.01);
+			assertThat(1 - k.nativeAfter(skipK + 1, 3600)).as(k.name()).isGreaterThan(0.01);
+		}
+		assertThat(PigmentKinetics.MEAT.skipBelow().value()).isBetween(40.0, 45.0);
+		// fish opacity starts low: k(55 °C) = 1 /min with Ea 241 kJ/mol is 1 % an hour
+		// near
+		// 26 °C, so a 40 °C skip would have dropped about 14 % per 10 min
+		assertThat(PigmentKinetics.FISH.skipBelow().value()).isBetween(20.0, 30.0);
+	}
+
+	@Test
 	@DisplayName("Cooked look at 80 % denatured (J Food Sci patty study): the colour path is grey-brown from there on")
 	void shouldLookGreyBrownFromEightyPercent() {
 		double cooked = PigmentKinetics.COOKED_LOOK.value();

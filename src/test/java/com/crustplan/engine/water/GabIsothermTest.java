@@ -74,4 +74,18 @@ class GabIsothermTest {
 		assertEquals(120.21 + 273.15, SaturationPressure.saturationTemperatureK(200_000), 0.05);
 	}
 
+	@Test
+	void shouldKeepRossProductInTheRebasedIsotherm() {
+		// Ross 1975 (Food Technol 29(3):26): aw of the mixture = aw of the matrix at its
+		// own moisture × aw of the sugar solution; the rebased GAB must give exactly that
+		GabIsotherm syrup = POTATO.withDissolvedSugar(0.6, 0.98, "test", "test");
+		for (double x = 0.05; x < 1.2; x += 0.05) {
+			double matrix = POTATO.waterActivity(x / 0.6);
+			assertEquals(Math.min(1, matrix * 0.98), syrup.waterActivity(x), 1e-9, "X " + x);
+		}
+		assertEquals(POTATO.waterActivity(0.3), POTATO.withDissolvedSugar(1, 1, "same", "same").waterActivity(0.3),
+				1e-15);
+		assertEquals(0.5 / 0.98, syrup.matrixActivity(0.5), 1e-15);
+	}
+
 }
