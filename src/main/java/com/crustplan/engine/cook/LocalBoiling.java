@@ -43,7 +43,7 @@ final class LocalBoiling {
 	 */
 	private final double[] boiled = new double[2];
 
-	LocalBoiling(CookState state, HeatConduction conduction, EnergyAccount account) {
+	LocalBoiling(CookState state, HeatConduction conduction, EnergyAccount account, MoistureDiffusivity diffusivity) {
 		this.state = state;
 		this.conduction = conduction;
 		this.account = account;
@@ -51,7 +51,7 @@ final class LocalBoiling {
 		pinned = new boolean[n];
 		ranDry = new boolean[n];
 		pinnedTemperature = new double[n];
-		diffusion = new MoistureDiffusion(state.grid(), MoistureDiffusivity::at);
+		diffusion = new MoistureDiffusion(state.grid(), diffusivity::at);
 		boilingPoints = BoilingPointTable.of(state.isotherm());
 		holdingMass = new double[n];
 		boilable = new double[n];
