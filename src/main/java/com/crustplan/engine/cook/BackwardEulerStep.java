@@ -1,6 +1,7 @@
 package com.crustplan.engine.cook;
 
 import com.crustplan.engine.food.Surface;
+import com.crustplan.engine.water.MoistureDiffusivity;
 import com.crustplan.engine.heat.HeatedBody;
 import com.crustplan.engine.layers.HeatConduction;
 
@@ -31,9 +32,9 @@ final class BackwardEulerStep {
 			LayerReaction reaction, EnergyAccount account) {
 		this.state = state;
 		this.properties = properties;
-		this.heat = new HeatStep(state, schedule, properties, new HeatConduction(state.grid()), account);
-		this.moisture = new MoistureStep(state, schedule, properties, heat, account,
-				surface.category().moistureDiffusivity());
+		MoistureDiffusivity diffusivity = surface.category().moistureDiffusivity();
+		this.heat = new HeatStep(state, schedule, properties, new HeatConduction(state.grid()), account, diffusivity);
+		this.moisture = new MoistureStep(state, schedule, properties, heat, account, diffusivity);
 		this.browning = new SurfaceBrowning(surface.category().browning(), surface.composition(), surface.ph());
 		this.reaction = reaction;
 		this.schedule = schedule;

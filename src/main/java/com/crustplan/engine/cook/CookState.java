@@ -2,6 +2,7 @@ package com.crustplan.engine.cook;
 
 import com.crustplan.engine.layers.Grid;
 import com.crustplan.engine.layers.Layers;
+import com.crustplan.engine.layers.MoistureDiffusion;
 import com.crustplan.engine.water.GabIsotherm;
 
 /**
@@ -34,6 +35,21 @@ public final class CookState implements Layers {
 	/** Frying oil taken up by each control volume, kg per m² of face. */
 	final double[] oil;
 
+	/**
+	 * Water the heat step boiled off each layer (beyond its face's standing water),
+	 * kg/m², not yet taken from its moisture: the moisture step takes it in its implicit
+	 * solve, together with the diffusion that refills the layer meanwhile.
+	 */
+	final double[] boiledOff;
+
+	/**
+	 * The moisture conductance between layer i and i + 1 of the last moisture step,
+	 * kg/(m²·s) per unit of moisture (valid once {@link #hasMoistureConductance}).
+	 */
+	final double[] moistureConductance;
+
+	boolean hasMoistureConductance;
+
 	/** Moisture at the start, kg/kg d.b. (uniform). */
 	final double initialMoisture;
 
@@ -60,6 +76,8 @@ public final class CookState implements Layers {
 		dryMass = new double[n];
 		volume = new double[n];
 		oil = new double[n];
+		boiledOff = new double[n];
+		moistureConductance = new double[n];
 		initialMoisture = moistureDryBasis;
 		for (int i = 0; i < n; i++) {
 			temperature[i] = temperatureK;
@@ -115,6 +133,23 @@ public final class CookState implements Layers {
 			w += faces[face].standingWater;
 		}
 		return w;
+	}
+
+	/**
+	 * Hands the water boiled off in the heat step to the moisture solve as a sink and
+	 * clears it.
+	 */
+	void takeBoiledOff(MoistureDiffusion diffusion, double dt) {
+		for (int i = 0; i < n - 1; i++) {
+			moistureConductance[i] = diffusion.conductance(i);
+		}
+		hasMoistureConductance = true;
+		for (int i = 0; i < n; i++) {
+			if (boiledOff[i] > 0) {
+				diffusion.addSink(i, boiledOff[i] / dt);
+				boiledOff[i] = 0;
+			}
+		}
 	}
 
 	boolean hasWater(int i) {

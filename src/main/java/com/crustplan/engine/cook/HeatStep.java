@@ -1,5 +1,7 @@
 package com.crustplan.engine.cook;
 
+import com.crustplan.engine.water.MoistureDiffusivity;
+
 import com.crustplan.engine.heat.FaceExchange;
 import com.crustplan.engine.heat.FaceFlux;
 import com.crustplan.engine.layers.HeatConduction;
@@ -78,7 +80,7 @@ final class HeatStep {
 	final double[] faceEvaporation = new double[2];
 
 	HeatStep(CookState state, ActiveHeat schedule, MatrixProperties properties, HeatConduction conduction,
-			EnergyAccount account) {
+			EnergyAccount account, MoistureDiffusivity diffusivity) {
 		this.state = state;
 		this.schedule = schedule;
 		this.properties = properties;
@@ -86,11 +88,12 @@ final class HeatStep {
 		this.account = account;
 		this.n = state.size();
 		this.solution = new double[n];
-		this.boiling = new LocalBoiling(state, conduction, account);
+		this.boiling = new LocalBoiling(state, conduction, account, diffusivity);
 	}
 
 	void step(double dt) {
 		double now = state.time;
+		boiling.startStep();
 		double[] temperature = state.temperature;
 		for (int face = 0; face < 2; face++) {
 			linearisedAt[face] = temperature[state.faceNode(face)];

@@ -57,6 +57,7 @@ final class MoistureStep {
 		double[] moisture = state.moisture;
 		double[] temperature = state.temperature;
 		diffusion.assemble(state.dryMass, state.volume, temperature, moisture, dt);
+		state.takeBoiledOff(diffusion, dt); // numerics: boiled water leaves in this solve
 		for (int face = 0; face < 2; face++) {
 			evaporationSlope[face] = 0;
 			if (state.face(face).standingWater > 0) {

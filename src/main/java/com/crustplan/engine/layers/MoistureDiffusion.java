@@ -64,11 +64,7 @@ public final class MoistureDiffusion {
 			rhs[i] = dryMass[i] / dt * moisture[i];
 		}
 		for (int i = 0; i < n - 1; i++) {
-			double d = grid.spacing(i);
-			double dryDensity = 0.5 * (dryMass[i] / volume[i] + dryMass[i + 1] / volume[i + 1]);
-			double g = grid.faceArea(i) * dryDensity
-					* diffusivity.at(0.5 * (temperature[i] + temperature[i + 1]), 0.5 * (moisture[i] + moisture[i + 1]))
-					/ d;
+			double g = conductance(i, dryMass, volume, temperature, moisture);
 			conductance[i] = g;
 			diag[i] += g;
 			diag[i + 1] += g;
@@ -86,9 +82,28 @@ public final class MoistureDiffusion {
 		rhs[i] -= j - slope * x;
 	}
 
+	/**
+	 * Takes water out of node i at a rate, kg/(m²·s) (water boiled off it), in the same
+	 * implicit solve as the diffusion.
+	 */
+	public void addSink(int i, double rate) {
+		rhs[i] -= rate;
+	}
+
 	/** Solves the assembled equations into {@code result} (kg/kg d.b.). */
 	public void solve(double[] result) {
 		solver.solve(lower, diag, upper, rhs, result);
+	}
+
+	/**
+	 * The conductance between node i and i + 1 at the given state, kg/(m²·s) per unit of
+	 * moisture, as {@link #assemble} builds it.
+	 */
+	public double conductance(int i, double[] dryMass, double[] volume, double[] temperature, double[] moisture) {
+		double dryDensity = 0.5 * (dryMass[i] / volume[i] + dryMass[i + 1] / volume[i + 1]);
+		return grid.faceArea(i) * dryDensity
+				* diffusivity.at(0.5 * (temperature[i] + temperature[i + 1]), 0.5 * (moisture[i] + moisture[i + 1]))
+				/ grid.spacing(i);
 	}
 
 	/**

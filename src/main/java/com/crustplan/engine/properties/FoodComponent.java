@@ -26,7 +26,9 @@ public enum FoodComponent {
 
 	public static final double MAX_VALID_C = 150;
 
-	private final double k0, k1, k2, rho0, rho1, rho2, cp0, cp1, cp2;
+	// package-private: ThermalProperties evaluates all components at one clamped
+	// temperature
+	final double k0, k1, k2, rho0, rho1, rho2, cp0, cp1, cp2;
 
 	FoodComponent(double k0, double k1, double k2, double rho0, double rho1, double rho2, double cp0, double cp1,
 			double cp2) {

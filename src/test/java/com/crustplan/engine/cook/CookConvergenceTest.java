@@ -62,11 +62,11 @@ class CookConvergenceTest {
 						dt);
 				if (!Double.isNaN(previous)) {
 					double change = Math.abs(t - previous);
-					// or converged: below 0.1 % of the answer, where two first-order
-					// error
+					// or converged: below 0.25 % of the answer, where first-order error
 					// terms of opposite sign (face linearisation, end-of-step boiling
-					// point) can trade places
-					assertTrue(change < previousChange || change < 1e-3 * t,
+					// point) can trade places; since boiling is coupled to the moisture
+					// solve the 10 mm fry moves by about 1 s in 580 s per halving
+					assertTrue(change < previousChange || change < 2.5e-3 * t,
 							c[1] + ": change " + change + " s at Δt " + dt);
 					previousChange = change;
 				}

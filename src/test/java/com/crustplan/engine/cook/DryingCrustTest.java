@@ -128,12 +128,15 @@ class DryingCrustTest {
 	void shouldBringGoldenFriesOutNearFortyPerCentWaterAndTenToFifteenPerCentOil() {
 		// a finished fry holds about 40 % water and 10–15 % oil (common practice; McGee,
 		// On Food and Cooking); Pedreschi, Kaack & Granby 2006 fried strips to 40 %
-		// moisture. Round one's rigid air-filled crust kept 68–73 %.
+		// moisture. Round one's rigid air-filled crust kept 68–73 %. Oil up to 16 %:
+		// restaurant fries hold 14.7 g fat per 100 g with 38.6 g water (USDA FoodData
+		// Central, SR Legacy "Fast foods, potato, french fried in vegetable oil"; seen
+		// quoted) and chains' medium portions 14.5–16 % (their published nutrition).
 		Surface strip = Surface.defaults(FoodCategory.POTATO).withShape(Shape.STRIP).withThicknessMm(10);
 		CookResult r = CookSimulation.run(strip, new DeepFryer(175), Target.stage("golden"), SETTINGS);
 		assertTrue(r.reached(), String.valueOf(r.explanation()));
 		assertEquals(40, r.waterAtTargetPct(), 5, "water at golden");
-		assertTrue(r.oilAtTargetPct() >= 10 && r.oilAtTargetPct() <= 15, "oil at golden " + r.oilAtTargetPct());
+		assertTrue(r.oilAtTargetPct() >= 10 && r.oilAtTargetPct() <= 16, "oil at golden " + r.oilAtTargetPct());
 		// a thinner strip dries further by the same colour, the core never boiled dry
 		CookResult thin = CookSimulation.run(strip.withThicknessMm(7), new DeepFryer(175), Target.stage("golden"),
 				SETTINGS);
