@@ -44,13 +44,14 @@ public final class AcrylamideModel {
 	/** Reference temperature of the elimination rate, K (180 °C). */
 	public static final double ELIMINATION_REFERENCE_K = 453.15;
 
-	public static final Parameter FORMATION_RATE = Parameter.derived("k_f,ref",
+	public static final Parameter FORMATION_RATE = Parameter.calibrated("k_f,ref",
 			"acrylamide formation rate constant at 170 °C, per mmol/kg d.m. of each precursor", 3.0316e-7,
 			"kg d.m./(mmol·s)",
 			"fitted to Pedreschi, Kaack & Granby 2006 (150 and 190 °C), blanched 8 mm strips run as strips with the potato moisture diffusivity, fried to 40 % moisture; 170 °C held out (−16 %); the blanched strips keep 60 % of the sugar and 65 % of the asparagine, the slice leaching of Pedreschi, Kaack & Granby 2008 (Agro Food Ind Hi-Tech 19(2):32) carried to the strip by Crank's diffusion series");
 
-	public static final Parameter FORMATION_EA = Parameter.derived("Ea,f", "activation energy of acrylamide formation",
-			1.0977e5, "J/mol", "fitted to Pedreschi, Kaack & Granby 2006 (150 and 190 °C), whole 8 mm strips");
+	public static final Parameter FORMATION_EA = Parameter.calibrated("Ea,f",
+			"activation energy of acrylamide formation", 1.0977e5, "J/mol",
+			"fitted to Pedreschi, Kaack & Granby 2006 (150 and 190 °C), whole 8 mm strips");
 
 	public static final Parameter ELIMINATION_RATE = Parameter.fromMemory("k_e,ref",
 			"acrylamide elimination rate constant at 180 °C", 3.0e-4, "1/s",
@@ -68,7 +69,7 @@ public final class AcrylamideModel {
 			"decade change of the formation rate per pH unit", 0.35, "1/pH",
 			"lowering pH by citric acid dips cut fries' acrylamide by roughly 70 % (Jung, Choi & Ju 2003, J Food Sci 68:1287) and pH 4 vs 6 cut it strongly in potato systems (Rydberg et al. 2003, J Agric Food Chem 51:7012); slope from memory");
 
-	public static final Parameter PH_REFERENCE = Parameter.published("pH_ref",
+	public static final Parameter PH_REFERENCE = Parameter.assumption("pH_ref",
 			"pH of the potatoes the formation was fitted on", 5.8, "–",
 			"typical potato pH 5.4–6.1 (FDA, approximate pH of foods); the fit data give no pH, mid-range taken");
 

@@ -15,7 +15,7 @@ import com.crustplan.engine.properties.FoodComponent;
  */
 public final class OilUptake {
 
-	public static final Parameter OIL_PER_WATER_LOST = Parameter.derived("r_oil",
+	public static final Parameter OIL_PER_WATER_LOST = Parameter.calibrated("r_oil",
 			"frying oil taken up per kg of water lost", 0.1, "kg/kg",
 			"a finished fry of about 40 % water and 10–15 % oil (common practice; McGee, On Food and Cooking) "
 					+ "made from a raw potato of 79 % water: 0.28 kg oil per 2.9 kg water lost per kg of dry matter");

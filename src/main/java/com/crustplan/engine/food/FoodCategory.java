@@ -33,10 +33,10 @@ public enum FoodCategory {
 				"Puolanne & Kivikari 2000, Meat Sci 56:7 (beef longissimus)"))
 		.initialPorosity(
 				Parameter.assumption("ε0", "initial gas fraction of whole muscle", 0, "–", "whole muscle has no pores"))
-		.shrinkage(Parameter.published("s", "shrinkage share of red meat muscle", 1, "–",
-				"van der Sman 2007, AIChE J 53: cooking muscle is a saturated protein gel that shrinks as it loses water, opening no air pores"))
+		.shrinkage(Parameter.assumption("s", "shrinkage share of red meat muscle", 1, "–",
+				"our reading of van der Sman 2007, AIChE J 53, a qualitative statement: cooking muscle is a saturated protein gel that shrinks as it loses water, opening no air pores"))
 		.isotherm(Isotherms.MEAT)
-		.browning(new BrowningKinetics(new ArrheniusRate(Parameter.commonPractice("k0",
+		.browning(new BrowningKinetics(new ArrheniusRate(Parameter.calibrated("k0",
 				"pre-exponential factor, meat surface browning", 3.2e5, "1/s",
 				"calibrated so a patted-dry 25 mm steak in a 220 °C oiled pan is browned in 3–4 min per side (common practice; 3.5 min with the shrinking crust, CategoryCalibrationTest)"),
 				Isotherms.BORROWED_EA),
@@ -46,8 +46,8 @@ public enum FoodCategory {
 						"beef 5.5–5.8 (quoted in food pH tables)"),
 				Parameter.fromMemory("RS,ref", "reducing sugar of the reference meat", 0.1, "%",
 						"glucose and ribose in post-rigor muscle ≈ 0.1 % (from memory)"),
-				Parameter.commonPractice("P,ref", "protein of the reference meat", 21, "%",
-						"lean beef (common practice)")))
+				Parameter.fromMemory("P,ref", "protein of the reference meat", 21, "%",
+						"lean beef, about 21 % (from memory, as in the default make-up)")))
 		.colourPath(ColourPath.of(Evidence.FROM_MEMORY,
 				"raw red → grey → brown → dark crust; L*a*b* anchors from memory of published meat colour ranges",
 				new double[][] { { 0, 40, 22, 12 }, { 0.08, 50, 10, 14 }, { 0.45, 38, 12, 20 }, { 1, 22, 6, 9 } }))
@@ -74,7 +74,7 @@ public enum FoodCategory {
 				"as muscle (van der Sman 2007): a protein gel that stays saturated as it dries"))
 		.isotherm(Isotherms.MEAT)
 		.browning(new BrowningKinetics(new ArrheniusRate(
-				Parameter.commonPractice("k0", "pre-exponential factor, poultry skin browning", 1.5e5, "1/s",
+				Parameter.calibrated("k0", "pre-exponential factor, poultry skin browning", 1.5e5, "1/s",
 						"calibrated so skin-on chicken in a 200 °C fan oven is golden in 20–30 min (common practice)"),
 				Isotherms.BORROWED_EA),
 				Parameter.assumption("aw,ref", "water activity at which the rate is referenced", 0.4, "–", "dry crust"),
@@ -156,7 +156,7 @@ public enum FoodCategory {
 		// liquid water in the tissue feeds the evaporation front; the constants are the
 		// frying literature's for potato and sweet-potato sticks, the shape the category
 		// is fried in
-		.moistureDiffusivity(new MoistureDiffusivity(Parameter.derived("D_ref",
+		.moistureDiffusivity(new MoistureDiffusivity(Parameter.calibrated("D_ref",
 				"effective diffusivity of water in potato tissue at 100 °C", 1.06e-8, "m²/s",
 				"fitted (1.1e-8 before boiling was coupled to the moisture solve) so that a 10 mm strip in 175 °C oil, its moisture read by the method of slopes as the frying "
 						+ "studies read theirs, shows 1.8e-8 m²/s: sweet-potato sticks 10 × 10 × 50 mm fried at 160–180 °C "
@@ -171,7 +171,7 @@ public enum FoodCategory {
 				Parameter.assumption("X_c", "moisture at which the potato diffusivity has fallen to half", 0.3,
 						"kg/kg d.b.",
 						"as the default: a dry crust seals (drying studies report D_eff falling with moisture, from memory)")))
-		.browning(new BrowningKinetics(new ArrheniusRate(Parameter.commonPractice("k0",
+		.browning(new BrowningKinetics(new ArrheniusRate(Parameter.calibrated("k0",
 				"pre-exponential factor, potato surface browning", 0.97e5, "1/s",
 				"calibrated so 10 mm square strips (fries) in 175 °C oil are golden in the middle of the 6–8 min of common practice: 7.1 min; 0.9e5 gave 6.8 min while the boiling and moisture steps were split, an error of about 9 % in the fry time, and 7.4 min once they were coupled"),
 				Isotherms.BORROWED_EA),
@@ -261,11 +261,12 @@ public enum FoodCategory {
 				"denser than bread dough (from memory)"))
 		.shrinkage(Parameter.assumption("s", "shrinkage share of baked sweet dough", 0, "–", "as bread"))
 		.isotherm(Isotherms.SWEET_DOUGH)
-		.browning(new BrowningKinetics(
-				new ArrheniusRate(Parameter.published("k0", "pre-exponential factor, crust ΔE (bread kinetics)", 42_000,
-						"1/s", "Zanoni, Peri & Bruno 1995, LWT 28:604–609"), Isotherms.ZANONI_EA),
+		.browning(new BrowningKinetics(new ArrheniusRate(Parameter.assumption("k0",
+				"pre-exponential factor, crust ΔE (bread kinetics)", 42_000, "1/s",
+				"the bread crust fit of Zanoni, Peri & Bruno 1995 (LWT 28:604–609) borrowed: never measured on sweet dough"),
+				Isotherms.BORROWED_EA),
 				Parameter.assumption("aw,ref", "water activity of a dry crust", 0.4, "–", "as bread"),
-				Parameter.published("pH,ref", "pH of the bread the rate was measured on", 5.4, "–",
+				Parameter.published("pH,ref", "typical pH of bread, whose crust kinetics are borrowed", 5.4, "–",
 						"FDA, approximate pH of foods"),
 				Parameter.fromMemory("RS,ref", "reducing sugar of lean bread dough", 1.5, "%", "from memory"),
 				Parameter.fromMemory("P,ref", "protein of bread dough", 9, "%", "from memory")))
