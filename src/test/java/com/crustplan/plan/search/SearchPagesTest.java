@@ -17,6 +17,7 @@ import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.security.test.context.support.WithMockUser;
 import org.springframework.test.web.servlet.MockMvc;
 import org.springframework.test.web.servlet.MvcResult;
+import org.springframework.test.web.servlet.request.MockHttpServletRequestBuilder;
 
 import com.crustplan.CrustplanTest;
 import com.crustplan.DemoData;
@@ -57,6 +58,18 @@ class SearchPagesTest {
 		return String.valueOf(demo.setup("Fryer, chips"));
 	}
 
+	/** The demo chips golden within 12 min, oil 160–180 °C in steps of 10 K. */
+	MockHttpServletRequestBuilder chipsInTheFryerFrom160To180(boolean underBenchmark) {
+		return get("/plans/search").param("surfaceId", chips())
+			.param("setupId", fryer())
+			.param("targetStage", "golden")
+			.param("withinMinutes", "12")
+			.param("underBenchmark", String.valueOf(underBenchmark))
+			.param("fromT", "160")
+			.param("toT", "180")
+			.param("stepT", "10");
+	}
+
 	@Test
 	void shouldOpenTheFormFromASurfaceLinkWithoutErrors() throws Exception {
 		mvc.perform(get("/plans/search").param("surfaceId", chips()))
@@ -68,14 +81,7 @@ class SearchPagesTest {
 
 	@Test
 	void shouldMarkTheSettingAndReplanItThePlanPagesWay() throws Exception {
-		MvcResult r = mvc
-			.perform(get("/plans/search").param("surfaceId", chips())
-				.param("setupId", fryer())
-				.param("targetStage", "golden")
-				.param("withinMinutes", "12")
-				.param("fromT", "160")
-				.param("toT", "180")
-				.param("stepT", "10"))
+		MvcResult r = mvc.perform(chipsInTheFryerFrom160To180(false))
 			.andExpect(status().isOk())
 			.andExpect(content().string(containsString("id=\"best-setting\"")))
 			.andExpect(content().string(containsString("Least acrylamide")))
@@ -101,14 +107,7 @@ class SearchPagesTest {
 		// one go at 160–180 °C stays above the 500 µg/kg of French fries (Reg. (EU)
 		// 2017/2158, Annex IV) in the model: the page must say so and offer the changes
 		// that do get there, each re-run, rather than mark a setting
-		mvc.perform(get("/plans/search").param("surfaceId", chips())
-			.param("setupId", fryer())
-			.param("targetStage", "golden")
-			.param("withinMinutes", "12")
-			.param("underBenchmark", "true")
-			.param("fromT", "160")
-			.param("toT", "180")
-			.param("stepT", "10"))
+		mvc.perform(chipsInTheFryerFrom160To180(true))
 			.andExpect(status().isOk())
 			.andExpect(content().string(not(containsString("id=\"best-setting\""))))
 			.andExpect(content().string(containsString("id=\"search-why\"")))
